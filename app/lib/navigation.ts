@@ -1,0 +1,16 @@
+import { hasRole, type Role } from "./roles";
+
+export interface NavItem {
+  to: string;
+  label: string;
+  minRole: Role;
+}
+
+/** The app's sections, each shown from the role that may use it upward. */
+export const NAV_ITEMS: NavItem[] = [
+  { to: "/", label: "Start a fix", minRole: "crew" },
+  { to: "/rigs", label: "Rigs", minRole: "crew" },
+  { to: "/rigs/new", label: "Add a rig", minRole: "admin" },
+];
+
+export const navFor = (role: Role) => NAV_ITEMS.filter((item) => hasRole(role, item.minRole));

@@ -1,0 +1,14 @@
+import { type RouteConfig, index, layout, route } from "@react-router/dev/routes";
+
+export default [
+  route("login", "routes/login.tsx"),
+  route("logout", "routes/logout.tsx"),
+  route("healthz", "routes/healthz.ts"),
+  layout("routes/shell.tsx", [
+    index("routes/home.tsx"),
+    route("rigs", "routes/rigs.tsx"),
+    route("rigs/new", "routes/rigs.new.tsx"),
+    route("rigs/:code", "routes/rigs.$code.tsx"),
+    route("rigs/:code/edit", "routes/rigs.$code.edit.tsx"),
+  ]),
+] satisfies RouteConfig;

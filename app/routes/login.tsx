@@ -1,0 +1,119 @@
+import { data, Form, redirect, useNavigation } from "react-router";
+import { DEMO_PASSWORD, DEMO_PEOPLE } from "../../seeds/demo-people";
+import { authenticator, SignInError } from "~/services/auth.server";
+import { env } from "~/services/env.server";
+import { getUser } from "~/services/guards.server";
+import { getSession, sessionStorage } from "~/services/session.server";
+import type { Route } from "./+types/login";
+
+/** Only same-site paths: never send a person to another host after sign-in. */
+function safeRedirect(to: FormDataEntryValue | string | null): string {
+  return typeof to === "string" && to.startsWith("/") && !to.startsWith("//") ? to : "/";
+}
+
+export async function loader({ request }: Route.LoaderArgs) {
+  if (await getUser(request)) throw redirect("/");
+  const e = env();
+  const showDemo = e.SHOW_DEMO_SIGNINS === "1" || (e.NODE_ENV !== "production" && e.SHOW_DEMO_SIGNINS !== "0");
+  return {
+    redirectTo: safeRedirect(new URL(request.url).searchParams.get("redirectTo")),
+    demo: showDemo ? { password: DEMO_PASSWORD, people: DEMO_PEOPLE.map(({ email, role }) => ({ email, role })) } : null,
+  };
+}
+
+export async function action({ request }: Route.ActionArgs) {
+  const form = await request.clone().formData();
+  try {
+    const userId = await authenticator.authenticate("form", request);
+    const session = await getSession(request);
+    session.set("userId", userId);
+    return redirect(safeRedirect(form.get("redirectTo")), {
+      headers: { "Set-Cookie": await sessionStorage.commitSession(session) },
+    });
+  } catch (error) {
+    if (error instanceof SignInError) {
+      return data({ error: error.message, fields: error.fields, email: String(form.get("email") ?? "") }, { status: error.status });
+    }
+    throw error;
+  }
+}
+
+export default function Login({ loaderData, actionData }: Route.ComponentProps) {
+  const busy = useNavigation().state !== "idle";
+  const fields = actionData?.fields ?? {};
+  return (
+    <main className="mx-auto max-w-md px-4 py-8">
+      <h1 className="text-3xl font-bold">Tankside</h1>
+      <p className="mt-1 text-lg">Sign in to troubleshoot your rigs.</p>
+      <Form method="post" className="mt-6 space-y-4 rounded-lg border-2 border-ink bg-paper p-5" noValidate>
+        <input type="hidden" name="redirectTo" value={loaderData.redirectTo} />
+        {actionData?.error ? (
+          <p role="alert" className="rounded-md border-2 border-stop bg-paper p-3 font-bold text-stop">
+            {actionData.error}
+          </p>
+        ) : null}
+        <div>
+          <label htmlFor="email" className="block font-bold">
+            E-mail
+          </label>
+          <input
+            id="email"
+            name="email"
+            type="email"
+            autoComplete="username"
+            defaultValue={actionData?.email}
+            aria-invalid={fields.email ? true : undefined}
+            aria-describedby={fields.email ? "email-error" : undefined}
+            className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink px-3 text-lg"
+          />
+          {fields.email ? (
+            <p id="email-error" className="mt-1 font-bold text-stop">
+              {fields.email}
+            </p>
+          ) : null}
+        </div>
+        <div>
+          <label htmlFor="password" className="block font-bold">
+            Password
+          </label>
+          <input
+            id="password"
+            name="password"
+            type="password"
+            autoComplete="current-password"
+            aria-invalid={fields.password ? true : undefined}
+            aria-describedby={fields.password ? "password-error" : undefined}
+            className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink px-3 text-lg"
+          />
+          {fields.password ? (
+            <p id="password-error" className="mt-1 font-bold text-stop">
+              {fields.password}
+            </p>
+          ) : null}
+        </div>
+        <button type="submit" disabled={busy} className="min-h-14 w-full rounded-md bg-go text-lg font-bold text-white">
+          {busy ? "Signing in…" : "Sign in"}
+        </button>
+      </Form>
+      {loaderData.demo ? (
+        <section aria-labelledby="demo-heading" className="mt-6 rounded-lg border-2 border-dashed border-rule bg-paper p-4">
+          <h2 id="demo-heading" className="font-bold">
+            Demo sign-ins (development only)
+          </h2>
+          <p className="mt-1">
+            Password for all: <code className="font-bold">{loaderData.demo.password}</code>
+          </p>
+          <ul className="mt-2 space-y-1">
+            {loaderData.demo.people.map((p) => (
+              <li key={p.email}>
+                <code>{p.email}</code> — {p.role}
+              </li>
+            ))}
+          </ul>
+        </section>
+      ) : null}
+    </main>
+  );
+}
+
+export const meta: Route.MetaFunction = () => [{ title: "Sign in · Tankside" }];

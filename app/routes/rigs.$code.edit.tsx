@@ -1,0 +1,39 @@
+import { parseWithZod } from "@conform-to/zod/v4";
+import { data, redirect } from "react-router";
+import { RigForm } from "~/components/rig-form";
+import { PageTitle } from "~/components/ui/page-title";
+import { toFieldErrors } from "~/lib/form-errors";
+import { rigInputSchema } from "~/lib/rig-schema";
+import { requireRole } from "~/services/guards.server";
+import { findRig, updateRig } from "~/services/rigs.server";
+import type { Route } from "./+types/rigs.$code.edit";
+
+export async function loader({ request, params }: Route.LoaderArgs) {
+  const user = await requireRole(request, "admin");
+  const rig = await findRig(user, params.code);
+  const { code, name, mount, tankGal, pumpKind, hasHourMeter, engineHours, hoseLengthFt, hoseDiameterIn, yardElevationFt, nozzleTips, notes } =
+    rig.get({ plain: true });
+  return {
+    rig: { code, name, mount, tankGal, pumpKind, hasHourMeter, engineHours, hoseLengthFt, hoseDiameterIn, yardElevationFt, nozzleTips, notes: notes ?? undefined },
+  };
+}
+
+export async function action({ request, params }: Route.ActionArgs) {
+  const user = await requireRole(request, "admin");
+  const submission = parseWithZod(await request.formData(), { schema: rigInputSchema });
+  if (submission.status !== "success") return data(submission.reply(), { status: 400 });
+  const saved = await updateRig(user, params.code, submission.value);
+  if (!saved.ok) return data(submission.reply({ fieldErrors: toFieldErrors(saved.fieldErrors) }), { status: 400 });
+  return redirect(`/rigs/${saved.code}`);
+}
+
+export default function EditRig({ loaderData, actionData }: Route.ComponentProps) {
+  return (
+    <>
+      <PageTitle lead={loaderData.rig.name}>Edit {loaderData.rig.code}</PageTitle>
+      <RigForm defaultValue={loaderData.rig} lastResult={actionData} submitLabel="Save changes" />
+    </>
+  );
+}
+
+export const meta: Route.MetaFunction = () => [{ title: "Edit rig · Tankside" }];

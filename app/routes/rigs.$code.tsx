@@ -1,0 +1,102 @@
+import { Form, Link } from "react-router";
+import { PageTitle } from "~/components/ui/page-title";
+import { fmt, ftToM, galToL, inToMm } from "~/lib/calc/units";
+import { requireRole, requireUser } from "~/services/guards.server";
+import { findRig, setRigRetired } from "~/services/rigs.server";
+import type { Route } from "./+types/rigs.$code";
+
+export async function loader({ request, params }: Route.LoaderArgs) {
+  const user = await requireUser(request);
+  const rig = await findRig(user, params.code);
+  return { rig: rig.get({ plain: true }), canEdit: user.role === "admin" };
+}
+
+export async function action({ request, params }: Route.ActionArgs) {
+  const user = await requireRole(request, "admin");
+  const form = await request.formData();
+  const intent = form.get("intent");
+  if (intent !== "retire" && intent !== "reinstate") {
+    return new Response("Unknown action.", { status: 400 });
+  }
+  await setRigRetired(user, params.code, intent === "retire");
+  return { ok: true };
+}
+
+export default function RigPage({ loaderData }: Route.ComponentProps) {
+  const { rig, canEdit } = loaderData;
+  const specs: [string, string][] = [
+    ["Mount", rig.mount],
+    ["Tank", `${fmt(rig.tankGal)} gal (${fmt(galToL(rig.tankGal))} L)`],
+    ["Pump", rig.pumpKind],
+    ["Engine hours", rig.hasHourMeter ? `${fmt(rig.engineHours, 1)} h` : "no hour meter"],
+    ["Hose", `${fmt(rig.hoseLengthFt)} ft (${fmt(ftToM(rig.hoseLengthFt))} m) of ${rig.hoseDiameterIn} in (${fmt(inToMm(rig.hoseDiameterIn))} mm)`],
+    ["Yard elevation", `${fmt(rig.yardElevationFt)} ft (${fmt(ftToM(rig.yardElevationFt))} m)`],
+  ];
+  return (
+    <>
+      <PageTitle lead={rig.name}>
+        {rig.code}
+        {rig.retired ? <span className="ml-3 rounded bg-ink px-2 py-1 align-middle text-base text-white">retired</span> : null}
+      </PageTitle>
+      <section aria-labelledby="specs" className="rounded-lg border-2 border-ink bg-paper p-4">
+        <h2 id="specs" className="text-xl font-bold">
+          Specs
+        </h2>
+        <dl className="mt-2 grid grid-cols-[auto_1fr] gap-x-4 gap-y-2">
+          {specs.map(([k, v]) => (
+            <div key={k} className="contents">
+              <dt className="font-bold">{k}</dt>
+              <dd>{v}</dd>
+            </div>
+          ))}
+        </dl>
+        <h3 className="mt-4 font-bold">Nozzle tips</h3>
+        {rig.nozzleTips.length ? (
+          <table className="mt-1 w-full text-left">
+            <thead>
+              <tr>
+                <th scope="col">Tip</th>
+                <th scope="col">Rated reach</th>
+                <th scope="col">Pattern width</th>
+              </tr>
+            </thead>
+            <tbody>
+              {rig.nozzleTips.map((tip) => (
+                <tr key={tip.name}>
+                  <td>{tip.name}</td>
+                  <td>
+                    {fmt(tip.reachFt)} ft ({fmt(ftToM(tip.reachFt), 1)} m)
+                  </td>
+                  <td>
+                    {fmt(tip.widthFt)} ft ({fmt(ftToM(tip.widthFt), 1)} m)
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        ) : (
+          <p>No tips recorded.</p>
+        )}
+        {rig.notes ? <p className="mt-4 whitespace-pre-line">{rig.notes}</p> : null}
+      </section>
+      {canEdit ? (
+        <div className="mt-4 flex flex-wrap gap-3">
+          <Link to="edit" className="flex min-h-14 items-center rounded-md bg-go px-5 font-bold text-white no-underline">
+            Edit rig
+          </Link>
+          <Form method="post">
+            <button
+              name="intent"
+              value={rig.retired ? "reinstate" : "retire"}
+              className="min-h-14 rounded-md border-2 border-ink bg-paper px-5 font-bold"
+            >
+              {rig.retired ? "Put back in service" : "Retire rig"}
+            </button>
+          </Form>
+        </div>
+      ) : null}
+    </>
+  );
+}
+
+export const meta: Route.MetaFunction = ({ data }) => [{ title: `${data?.rig.code ?? "Rig"} · Tankside` }];

@@ -1,0 +1,34 @@
+import { parseWithZod } from "@conform-to/zod/v4";
+import { data, redirect } from "react-router";
+import { RigForm } from "~/components/rig-form";
+import { PageTitle } from "~/components/ui/page-title";
+import { toFieldErrors } from "~/lib/form-errors";
+import { rigInputSchema } from "~/lib/rig-schema";
+import { requireRole } from "~/services/guards.server";
+import { createRig } from "~/services/rigs.server";
+import type { Route } from "./+types/rigs.new";
+
+export async function loader({ request }: Route.LoaderArgs) {
+  await requireRole(request, "admin");
+  return null;
+}
+
+export async function action({ request }: Route.ActionArgs) {
+  const user = await requireRole(request, "admin");
+  const submission = parseWithZod(await request.formData(), { schema: rigInputSchema });
+  if (submission.status !== "success") return data(submission.reply(), { status: 400 });
+  const saved = await createRig(user, submission.value);
+  if (!saved.ok) return data(submission.reply({ fieldErrors: toFieldErrors(saved.fieldErrors) }), { status: 400 });
+  return redirect(`/rigs/${saved.code}`);
+}
+
+export default function NewRig({ actionData }: Route.ComponentProps) {
+  return (
+    <>
+      <PageTitle lead="Every field is checked before anything is saved.">Add a rig</PageTitle>
+      <RigForm lastResult={actionData} submitLabel="Save rig" />
+    </>
+  );
+}
+
+export const meta: Route.MetaFunction = () => [{ title: "Add a rig · Tankside" }];

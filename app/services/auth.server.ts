@@ -1,0 +1,70 @@
+import { Authenticator } from "remix-auth";
+import { FormStrategy } from "remix-auth-form";
+import { z } from "zod";
+import { checkPassword, hashPassword } from "~/lib/password";
+import { User } from "./db.server";
+
+export const MAX_FAILURES = 10;
+export const FAILURE_WINDOW_MS = 15 * 60_000;
+export const LOCK_MS = 15 * 60_000;
+
+/** A sign-in that did not succeed: the message is what the person sees. */
+export class SignInError extends Error {
+  constructor(
+    message: string,
+    readonly status: number,
+    readonly fields: { email?: string; password?: string } = {},
+  ) {
+    super(message);
+  }
+}
+
+const WRONG = "That e-mail and password do not match an account. Check both and try again.";
+
+// Compared against when no account matches, so timing does not tell which part was wrong.
+let dummyHash: Promise<string> | undefined;
+
+const credentials = z.object({
+  email: z.string().trim().toLowerCase().min(1, "Enter your e-mail.").email("Enter a whole e-mail address, like name@company.com."),
+  password: z.string().min(1, "Enter your password.").max(200, "That password is too long."),
+});
+
+async function verify(form: FormData): Promise<number> {
+  const parsed = credentials.safeParse({ email: form.get("email") ?? "", password: form.get("password") ?? "" });
+  if (!parsed.success) {
+    const fields = Object.fromEntries(parsed.error.issues.map((i) => [String(i.path[0]), i.message]));
+    throw new SignInError("Check the highlighted fields.", 400, fields);
+  }
+  const { email, password } = parsed.data;
+  const user = await User.findOne({ where: { email } });
+  const now = Date.now();
+  if (user?.lockedUntil && user.lockedUntil.getTime() > now) {
+    const minutes = Math.ceil((user.lockedUntil.getTime() - now) / 60_000);
+    throw new SignInError(
+      `This account is locked for ${minutes} more minute${minutes === 1 ? "" : "s"} after too many failed sign-ins. Ask your admin if you need in sooner.`,
+      423,
+    );
+  }
+  const ok = await checkPassword(password, user?.passwordHash ?? (await (dummyHash ??= hashPassword("no-such-account"))));
+  if (!user || !ok) {
+    if (user) await recordFailure(user, now);
+    throw new SignInError(WRONG, 401);
+  }
+  if (user.failedLogins > 0 || user.lockedUntil) {
+    await user.update({ failedLogins: 0, firstFailedAt: null, lockedUntil: null });
+  }
+  return user.id;
+}
+
+async function recordFailure(user: User, now: number) {
+  const windowOpen = user.firstFailedAt && now - user.firstFailedAt.getTime() < FAILURE_WINDOW_MS;
+  const failedLogins = windowOpen ? user.failedLogins + 1 : 1;
+  await user.update({
+    failedLogins,
+    firstFailedAt: windowOpen ? user.firstFailedAt : new Date(now),
+    lockedUntil: failedLogins >= MAX_FAILURES ? new Date(now + LOCK_MS) : null,
+  });
+}
+
+export const authenticator = new Authenticator<number>();
+authenticator.use(new FormStrategy(({ form }) => verify(form)), "form");

@@ -1,0 +1,56 @@
+import { data, redirect } from "react-router";
+import { hasRole, type Role } from "~/lib/roles";
+import { Company, User } from "./db.server";
+import { getSession } from "./session.server";
+
+export interface SessionUser {
+  id: number;
+  name: string;
+  email: string;
+  role: Role;
+  companyId: number;
+  companyName: string;
+}
+
+const isApi = (request: Request) => new URL(request.url).pathname.startsWith("/api/");
+
+export async function getUser(request: Request): Promise<SessionUser | null> {
+  const session = await getSession(request);
+  const userId = session.get("userId");
+  if (!userId) return null;
+  const user = await User.findByPk(userId, {
+    attributes: ["id", "name", "email", "role", "companyId"],
+    include: [{ model: Company, attributes: ["name"] }],
+  });
+  if (!user) return null;
+  const company = (user as User & { Company: Company }).Company;
+  return { id: user.id, name: user.name, email: user.email, role: user.role, companyId: user.companyId, companyName: company.name };
+}
+
+/** The signed-in person, or a redirect to sign-in (401 JSON for API routes). */
+export async function requireUser(request: Request): Promise<SessionUser> {
+  const user = await getUser(request);
+  if (user) return user;
+  if (isApi(request)) throw data({ error: "Sign in first." }, { status: 401 });
+  const url = new URL(request.url);
+  throw redirect(`/login?redirectTo=${encodeURIComponent(url.pathname + url.search)}`);
+}
+
+/** The signed-in person if their role reaches `role`; otherwise a 403. */
+export async function requireRole(request: Request, role: Role): Promise<SessionUser> {
+  const user = await requireUser(request);
+  if (!hasRole(user.role, role)) {
+    const message = `This needs the ${role} role or above.`;
+    throw data(isApi(request) ? { error: message } : message, { status: 403 });
+  }
+  return user;
+}
+
+/** Missing and foreign records look the same from outside: both are 404. */
+export function notFound(what = "That record"): never {
+  throw data(`${what} was not found.`, { status: 404 });
+}
+
+export function apiNotFound(what = "That record"): never {
+  throw data({ error: `${what} was not found.` }, { status: 404 });
+}

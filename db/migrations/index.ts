@@ -1,0 +1,11 @@
+import type { QueryInterface } from "sequelize";
+import * as m001 from "./001-companies-users-rigs";
+
+export interface Migration {
+  name: string;
+  up(qi: QueryInterface): Promise<void>;
+  down(qi: QueryInterface): Promise<void>;
+}
+
+/** Every migration, in the order it runs. Add new ones at the end; never edit a landed one. */
+export const migrations: Migration[] = [{ name: "001-companies-users-rigs", ...m001 }];

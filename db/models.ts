@@ -1,0 +1,119 @@
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
+
+import { ROLES, type Role } from "../app/lib/roles";
+
+export { ROLES, type Role };
+
+export interface NozzleTip {
+  name: string;
+  reachFt: number;
+  widthFt: number;
+}
+
+export class Company extends Model<InferAttributes<Company>, InferCreationAttributes<Company>> {
+  declare id: CreationOptional<number>;
+  declare name: string;
+  declare slug: string;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+export class User extends Model<InferAttributes<User>, InferCreationAttributes<User>> {
+  declare id: CreationOptional<number>;
+  declare companyId: ForeignKey<Company["id"]>;
+  declare email: string;
+  declare name: string;
+  declare passwordHash: string;
+  declare role: Role;
+  declare failedLogins: CreationOptional<number>;
+  declare firstFailedAt: Date | null;
+  declare lockedUntil: Date | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+export class Rig extends Model<InferAttributes<Rig>, InferCreationAttributes<Rig>> {
+  declare id: CreationOptional<number>;
+  declare companyId: ForeignKey<Company["id"]>;
+  declare code: string;
+  declare name: string;
+  declare mount: "truck" | "trailer";
+  declare tankGal: number;
+  declare pumpKind: string;
+  declare hasHourMeter: CreationOptional<boolean>;
+  declare engineHours: CreationOptional<number>;
+  declare hoseLengthFt: number;
+  declare hoseDiameterIn: number;
+  declare yardElevationFt: CreationOptional<number>;
+  declare nozzleTips: NozzleTip[];
+  declare notes: string | null;
+  declare retired: CreationOptional<boolean>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+const id = { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true };
+const timestamps = { createdAt: DataTypes.DATE, updatedAt: DataTypes.DATE };
+// DECIMAL columns arrive from the driver as strings; the app wants numbers.
+const decimal = (precision: number, scale: number, field: string) => ({
+  type: DataTypes.DECIMAL(precision, scale),
+  get(this: Model) {
+    const raw = this.getDataValue(field as never) as unknown;
+    return raw === null || raw === undefined ? raw : Number(raw);
+  },
+});
+
+/** Binds every model to the one Sequelize instance. Called once, by db/index.ts. */
+export function initModels(sequelize: Sequelize) {
+  Company.init(
+    { id, name: DataTypes.STRING(120), slug: DataTypes.STRING(60), ...timestamps },
+    { sequelize, tableName: "companies" },
+  );
+  User.init(
+    {
+      id,
+      email: DataTypes.STRING(254),
+      name: DataTypes.STRING(120),
+      passwordHash: DataTypes.STRING(100),
+      role: DataTypes.ENUM(...ROLES),
+      failedLogins: { type: DataTypes.INTEGER.UNSIGNED, defaultValue: 0 },
+      firstFailedAt: DataTypes.DATE,
+      lockedUntil: DataTypes.DATE,
+      ...timestamps,
+    },
+    { sequelize, tableName: "users" },
+  );
+  Rig.init(
+    {
+      id,
+      code: DataTypes.STRING(16),
+      name: DataTypes.STRING(120),
+      mount: DataTypes.ENUM("truck", "trailer"),
+      tankGal: DataTypes.INTEGER.UNSIGNED,
+      pumpKind: DataTypes.STRING(120),
+      hasHourMeter: { type: DataTypes.BOOLEAN, defaultValue: true },
+      engineHours: { ...decimal(8, 1, "engineHours"), defaultValue: 0 },
+      hoseLengthFt: DataTypes.INTEGER.UNSIGNED,
+      hoseDiameterIn: decimal(4, 2, "hoseDiameterIn"),
+      yardElevationFt: { type: DataTypes.INTEGER, defaultValue: 0 },
+      nozzleTips: DataTypes.JSON,
+      notes: DataTypes.TEXT,
+      retired: { type: DataTypes.BOOLEAN, defaultValue: false },
+      ...timestamps,
+    },
+    { sequelize, tableName: "rigs" },
+  );
+
+  Company.hasMany(User, { foreignKey: "companyId" });
+  User.belongsTo(Company, { foreignKey: "companyId" });
+  Company.hasMany(Rig, { foreignKey: "companyId" });
+  Rig.belongsTo(Company, { foreignKey: "companyId" });
+}
