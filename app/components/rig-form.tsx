@@ -18,7 +18,8 @@ export function RigForm({
     lastResult,
     defaultValue: defaultValue ?? { mount: "truck", hasHourMeter: true, engineHours: 0, yardElevationFt: 0, nozzleTips: [] },
     onValidate: ({ formData }) => parseWithZod(formData, { schema: rigInputSchema }),
-    shouldValidate: "onBlur",
+    // Not on blur: a message appearing as focus leaves would move the Save button under the thumb.
+    shouldValidate: "onSubmit",
     shouldRevalidate: "onInput",
   });
   const tips = fields.nozzleTips.getFieldList();

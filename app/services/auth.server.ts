@@ -32,7 +32,9 @@ const credentials = z.object({
 async function verify(form: FormData): Promise<number> {
   const parsed = credentials.safeParse({ email: form.get("email") ?? "", password: form.get("password") ?? "" });
   if (!parsed.success) {
-    const fields = Object.fromEntries(parsed.error.issues.map((i) => [String(i.path[0]), i.message]));
+    // The first problem per field is the one worth saying.
+    const fields: Record<string, string> = {};
+    for (const issue of parsed.error.issues) fields[String(issue.path[0])] ??= issue.message;
     throw new SignInError("Check the highlighted fields.", 400, fields);
   }
   const { email, password } = parsed.data;

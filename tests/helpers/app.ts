@@ -1,0 +1,117 @@
+/**
+ * The real built app for browser tests: its own database (seeded with the demo), served
+ * by react-router-serve on a free loopback port, and Debian's Chromium through playwright-core.
+ */
+import { spawn, type ChildProcess } from "node:child_process";
+import fs from "node:fs";
+import net from "node:net";
+import os from "node:os";
+import path from "node:path";
+import { chromium, type BrowserContext, type Page } from "playwright-core";
+import { buildIfStale } from "../../scripts/build-if-stale";
+import { resetDatabase } from "./db";
+
+const root = path.resolve(import.meta.dirname, "../..");
+
+export async function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const srv = net.createServer();
+    srv.listen(0, "127.0.0.1", () => {
+      const { port } = srv.address() as net.AddressInfo;
+      srv.close(() => resolve(port));
+    });
+    srv.on("error", reject);
+  });
+}
+
+export interface RunningApp {
+  url: string;
+  env: NodeJS.ProcessEnv;
+  stop(): Promise<void>;
+}
+
+/** Builds when stale, resets the test database to the demo, and serves the app. */
+export async function startApp(extraEnv: NodeJS.ProcessEnv = {}): Promise<RunningApp> {
+  buildIfStale(root, () => {});
+  await resetDatabase();
+  const port = await freePort();
+  const url = `http://127.0.0.1:${port}`;
+  const env: NodeJS.ProcessEnv = {
+    ...process.env,
+    NODE_ENV: "production",
+    HOST: "127.0.0.1",
+    PORT: String(port),
+    APP_URL: url,
+    SESSION_SECRET: "browser-test-secret-0123456789",
+    SHOW_DEMO_SIGNINS: "1",
+    ...extraEnv,
+  };
+  const child: ChildProcess = spawn(path.join(root, "node_modules/.bin/react-router-serve"), ["build/server/index.js"], {
+    cwd: root,
+    env,
+    stdio: ["ignore", "ignore", "pipe"],
+  });
+  let stderr = "";
+  child.stderr?.on("data", (chunk) => (stderr += chunk));
+  const deadline = Date.now() + 30_000;
+  while (Date.now() < deadline) {
+    if (child.exitCode !== null) throw new Error(`The app exited: ${stderr}`);
+    try {
+      if ((await fetch(`${url}/healthz`)).ok) break;
+    } catch {
+      /* not listening yet */
+    }
+    await new Promise((r) => setTimeout(r, 150));
+  }
+  return {
+    url,
+    env,
+    async stop() {
+      if (child.exitCode === null) {
+        child.kill("SIGTERM");
+        await new Promise((r) => child.once("exit", r));
+      }
+    },
+  };
+}
+
+export const PHONE = { width: 360, height: 640 };
+
+export async function launchBrowser(viewport = PHONE): Promise<{ context: BrowserContext; close(): Promise<void> }> {
+  const dir = fs.mkdtempSync(path.join(os.tmpdir(), "tankside-chromium-"));
+  const context = await chromium.launchPersistentContext(dir, {
+    executablePath: "/usr/bin/chromium",
+    headless: true,
+    viewport,
+    args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+  });
+  // Fail with the locator's name well inside the test's own timeout.
+  context.setDefaultTimeout(10_000);
+  return {
+    context,
+    async close() {
+      await context.close();
+      fs.rmSync(dir, { recursive: true, force: true });
+    },
+  };
+}
+
+/** Signs in through the real form; waits until the app has left the sign-in page. */
+export async function signIn(page: Page, appUrl: string, email: string, password = "field-demo-2026") {
+  await page.goto(`${appUrl}/login`);
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill(password);
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await page.waitForURL((url) => url.pathname !== "/login");
+}
+
+/** Submits the sign-in form and returns the status of the POST, staying on the page. */
+export async function failSignIn(page: Page, appUrl: string, email: string, password: string): Promise<number> {
+  await page.goto(`${appUrl}/login`);
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill(password);
+  const response = page.waitForResponse((r) => r.url().includes("/login") && r.request().method() === "POST");
+  await page.getByRole("button", { name: "Sign in" }).click();
+  return (await response).status();
+}
+

@@ -1,0 +1,28 @@
+import { afterAll, afterEach, beforeEach, inject } from "vitest";
+
+process.env.DATABASE_URL ??= inject("databaseUrl");
+
+// A test fails on an unexpected console.error; tests that expect one call expectConsoleError().
+const seen: unknown[][] = [];
+let allowed = 0;
+const original = console.error;
+console.error = (...args: unknown[]) => {
+  seen.push(args);
+  original(...args);
+};
+beforeEach(() => {
+  seen.length = 0;
+  allowed = 0;
+});
+afterEach(() => {
+  if (seen.length > allowed) throw new Error(`Unexpected console.error: ${seen.map((a) => a.map(String).join(" ")).join("\n")}`);
+});
+afterAll(async () => {
+  // Each file gets its own process-wide Sequelize; close it so the pool does not linger.
+  const { closeDb } = await import("../db/index");
+  await closeDb();
+});
+
+export function expectConsoleError(count = 1) {
+  allowed += count;
+}
