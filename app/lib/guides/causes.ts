@@ -1,0 +1,22 @@
+import { z } from "zod";
+import { COMPONENTS } from "./schema";
+
+/** ISO 14224 Annex B failure-mode codes our causes map to, where one fits. */
+export const ISO_14224_MODES = ["FTS", "PLU", "LOO", "ELU", "ELP", "VIB", "NOI", "OHE"] as const;
+
+export const causeSchema = z.strictObject({
+  code: z.string().regex(/^[a-z][a-z0-9-]*$/),
+  name: z.string().min(1),
+  component: z.enum(COMPONENTS),
+  iso14224: z.enum(ISO_14224_MODES).nullable(),
+});
+
+export const causeListSchema = z.array(causeSchema).superRefine((list, ctx) => {
+  const seen = new Set<string>();
+  list.forEach((c, i) => {
+    if (seen.has(c.code)) ctx.addIssue({ code: "custom", path: [i, "code"], message: `duplicate cause code ${c.code}` });
+    seen.add(c.code);
+  });
+});
+
+export type Cause = z.infer<typeof causeSchema>;

@@ -1,0 +1,58 @@
+import { z } from "zod";
+
+/** The events each step kind answers with; final kinds answer nothing. */
+export const EVENTS_BY_KIND = {
+  check: ["YES", "NO"],
+  task: ["DONE", "CANT"],
+  safety: ["ACK"],
+  fixed: [],
+  handoff: [],
+} as const;
+
+export const STEP_KINDS = ["check", "task", "safety", "fixed", "handoff"] as const;
+export type StepKind = (typeof STEP_KINDS)[number];
+export const FINAL_KINDS: readonly StepKind[] = ["fixed", "handoff"];
+export const ANSWERS = ["YES", "NO", "DONE", "CANT", "ACK"] as const;
+export type Answer = (typeof ANSWERS)[number];
+
+/** Field-math widgets a step may show (built by the field-math screens). */
+export const CALC_WIDGETS = ["hose-friction", "suction-head", "load-sheet", "torque"] as const;
+
+export const COMPONENTS = [
+  "pump", "suction", "sump", "agitator", "hose", "nozzle", "valve", "engine", "tank", "lubrication", "material", "operation",
+] as const;
+
+const slug = z.string().regex(/^[a-z][a-z0-9]*(-[a-z0-9]+)*$/, "use lower-case words joined by dashes");
+
+export const stepMetaSchema = z.strictObject({
+  kind: z.enum(STEP_KINDS),
+  prompt: z.string().trim().min(1, "the prompt is empty").max(400, "keep the prompt under 400 characters; details go in help"),
+  help: z.string().max(4000).optional(),
+  handsOn: z.boolean().optional(),
+  minutes: z.number().min(0).max(240).optional(),
+  calc: z.enum(CALC_WIDGETS).optional(),
+  cause: z.string().optional(),
+  component: z.enum(COMPONENTS).optional(),
+});
+
+export const stepSchema = z.strictObject({
+  type: z.literal("final").optional(),
+  on: z.partialRecord(z.enum(ANSWERS), z.string()).optional(),
+  meta: stepMetaSchema,
+});
+
+/** The one definition of a guide file in content/guides (an XState machine config + our meta). */
+export const guideSchema = z.strictObject({
+  id: slug,
+  title: z.string().trim().min(1).max(120),
+  summary: z.string().trim().min(1).max(600),
+  symptoms: z.array(z.string().trim().min(2).max(120)).min(1, "list at least one symptom phrase"),
+  initial: z.string().min(1),
+  states: z.record(slug, stepSchema).refine((s) => Object.keys(s).length > 0, "a guide needs at least one step"),
+});
+
+export type Guide = z.infer<typeof guideSchema>;
+export type Step = z.infer<typeof stepSchema>;
+export type StepMeta = z.infer<typeof stepMetaSchema>;
+
+export const isFinalKind = (kind: StepKind) => FINAL_KINDS.includes(kind);

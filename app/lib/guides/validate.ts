@@ -1,0 +1,139 @@
+import type { Cause } from "./causes";
+import { findDuplicateKeys } from "./duplicate-keys";
+import { reachable, stepsToEnd } from "./graph";
+import { EVENTS_BY_KIND, guideSchema, isFinalKind, STEP_KINDS, type Guide, type StepKind } from "./schema";
+
+export interface GuideProblem {
+  guide: string;
+  step?: string;
+  message: string;
+}
+
+export interface ValidationResult {
+  guide: Guide | null;
+  problems: GuideProblem[];
+}
+
+export const describeProblem = (p: GuideProblem) => `${p.guide}${p.step ? ` › step "${p.step}"` : ""}: ${p.message}`;
+
+type Loose = Record<string, unknown>;
+const isObject = (v: unknown): v is Loose => typeof v === "object" && v !== null && !Array.isArray(v);
+
+/** Line and column for a character offset, for parser messages that give only a position. */
+function lineColumn(text: string, offset: number): string {
+  const before = text.slice(0, offset).split("\n");
+  return `line ${before.length}, column ${before[before.length - 1].length + 1}`;
+}
+
+/**
+ * Checks a guide file (its text or the parsed value) against the format and every
+ * structural rule, and returns all problems at once. Never throws.
+ */
+export function validateGuide(input: unknown, options: { causes: Cause[]; name?: string }): ValidationResult {
+  try {
+    return validate(input, options);
+  } catch (error) {
+    return { guide: null, problems: [{ guide: options.name ?? "guide", message: `could not be checked: ${String(error)}` }] };
+  }
+}
+
+function validate(input: unknown, { causes, name }: { causes: Cause[]; name?: string }): ValidationResult {
+  const problems: GuideProblem[] = [];
+  let raw: unknown = input;
+  if (typeof input === "string") {
+    try {
+      raw = JSON.parse(input);
+    } catch (error) {
+      const message = error instanceof Error ? error.message : String(error);
+      const at = /position (\d+)/.exec(message);
+      const where = at && !/line \d+/.test(message) ? ` (${lineColumn(input, Number(at[1]))})` : "";
+      return { guide: null, problems: [{ guide: name ?? "guide", message: `is not valid JSON: ${message}${where}` }] };
+    }
+  }
+  const guideName = (isObject(raw) && typeof raw.id === "string" && raw.id) || name || "guide";
+  const add = (message: string, step?: string) => problems.push({ guide: guideName, step, message });
+
+  if (!isObject(raw)) {
+    add("must be a JSON object with id, title, summary, symptoms, initial and states");
+    return { guide: null, problems };
+  }
+  if (typeof input === "string") {
+    for (const d of findDuplicateKeys(input)) {
+      if (d.path.length === 1 && d.path[0] === "states") add(`step id "${d.key}" is used twice`, d.key);
+      else add(`field "${d.key}" appears twice${d.path.length ? ` in ${d.path.join(" › ")}` : ""}`);
+    }
+  }
+
+  const parsed = guideSchema.safeParse(raw);
+  if (!parsed.success) {
+    for (const issue of parsed.error.issues) {
+      const [top, stepId, ...rest] = issue.path.map(String);
+      const inStep = top === "states" && stepId !== undefined;
+      const field = (inStep ? rest : [top, stepId, ...rest]).filter((x) => x !== undefined).join(".");
+      let message = issue.message;
+      if (issue.code === "unrecognized_keys") message = `unknown field${issue.keys.length > 1 ? "s" : ""} ${issue.keys.map((k) => `"${k}"`).join(", ")}${field ? ` in ${field}` : ""}`;
+      else if (/received undefined/.test(message)) message = `missing field "${field}"`;
+      else if (field) message = `${field}: ${message}`;
+      add(message, inStep ? stepId : undefined);
+    }
+  }
+
+  checkStructure(raw, causes, add);
+  return { guide: problems.length === 0 && parsed.success ? parsed.data : null, problems };
+}
+
+/** The graph rules, on whatever part of the file is shaped well enough to read. */
+function checkStructure(raw: Loose, causes: Cause[], add: (message: string, step?: string) => void) {
+  if (!isObject(raw.states)) return;
+  const steps: Guide["states"] = {};
+  for (const [id, s] of Object.entries(raw.states)) {
+    if (!isObject(s) || !isObject(s.meta) || !STEP_KINDS.includes(s.meta.kind as StepKind)) continue;
+    const on = isObject(s.on) ? (Object.fromEntries(Object.entries(s.on).filter(([, t]) => typeof t === "string")) as Record<string, string>) : undefined;
+    steps[id] = { type: s.type === "final" ? "final" : undefined, on, meta: s.meta as Guide["states"][string]["meta"] };
+  }
+  const initial = typeof raw.initial === "string" ? raw.initial : "";
+  const guide = { initial, states: steps } as Guide;
+  const causeCodes = new Set(causes.map((c) => c.code));
+
+  if (initial && !(initial in raw.states)) add(`initial step "${initial}" is not one of the steps`);
+
+  for (const [id, step] of Object.entries(steps)) {
+    const kind = step.meta.kind;
+    const needed: readonly string[] = EVENTS_BY_KIND[kind];
+    const given = Object.keys(step.on ?? {});
+    for (const event of needed) if (!given.includes(event)) add(`a ${kind} step needs a ${event} answer`, id);
+    for (const event of given) {
+      if (!needed.includes(event)) {
+        add(needed.length ? `a ${kind} step answers ${needed.join(" or ")}, not ${event}` : `a ${kind} step is an end and takes no answers (found ${event})`, id);
+      }
+    }
+    for (const [event, target] of Object.entries(step.on ?? {})) {
+      if (!(target in raw.states)) add(`answer ${event} points at "${target}", which is not a step`, id);
+    }
+    if (isFinalKind(kind) && step.type !== "final") add(`a ${kind} step is an end: give it "type": "final"`, id);
+    if (!isFinalKind(kind) && step.type === "final") add(`only fixed and handoff steps are ends; a ${kind} step cannot be "type": "final"`, id);
+    if (kind === "safety" && step.meta.handsOn) add("a safety step is the shut-down stop itself and cannot be hands-on", id);
+    if (kind === "fixed") {
+      if (!step.meta.cause) add("a fixed step needs a cause code", id);
+      else if (!causeCodes.has(step.meta.cause)) add(`cause "${step.meta.cause}" is not in the cause list`, id);
+      if (!step.meta.component) add("a fixed step needs a component", id);
+    } else if (step.meta.cause) {
+      add(`only fixed steps carry a cause (found "${step.meta.cause}" on a ${kind} step)`, id);
+    }
+  }
+
+  if (!Object.values(steps).some((s) => s.meta.kind === "fixed")) add("the guide has no fixed end");
+  if (!(initial in steps)) return;
+
+  const fromStart = reachable(guide, initial);
+  for (const id of Object.keys(raw.states)) if (id in steps && !fromStart.has(id)) add("cannot be reached from the first step", id);
+
+  const left = stepsToEnd(guide);
+  for (const id of fromStart) if (left[id] === Infinity) add("no fixed or handoff end can be reached from here", id);
+
+  // Walk from the start without passing any safety stop: a hands-on step found is unguarded.
+  const unguarded = reachable(guide, initial, { stopAt: (id) => steps[id]?.meta.kind === "safety" });
+  for (const id of unguarded) {
+    if (steps[id].meta.handsOn && steps[id].meta.kind !== "safety") add("is hands-on but can be reached without passing a safety step", id);
+  }
+}

@@ -1,0 +1,19 @@
+/** `npm run guides:check [files…]`: checks guide files (default: all of content/guides). Exit 1 on any problem. */
+import path from "node:path";
+import { checkGuideFiles, contentDir, guideFilesIn, loadCauses } from "../app/lib/guides/files";
+import { describeProblem } from "../app/lib/guides/validate";
+
+const args = process.argv.slice(2);
+const files = args.length ? args.map((f) => path.resolve(f)) : guideFilesIn(path.join(contentDir(), "guides"));
+const results = checkGuideFiles(files, loadCauses());
+let bad = 0;
+for (const r of results) {
+  if (r.problems.length === 0) {
+    console.log(`ok   ${path.relative(process.cwd(), r.file)}`);
+    continue;
+  }
+  bad++;
+  for (const p of r.problems) console.log(`FAIL ${path.relative(process.cwd(), r.file)}: ${describeProblem(p)}`);
+}
+console.log(`${results.length - bad} of ${results.length} guide files valid`);
+process.exit(bad ? 1 : 0);
