@@ -4,6 +4,7 @@ export default [
   route("login", "routes/login.tsx"),
   route("logout", "routes/logout.tsx"),
   route("healthz", "routes/healthz.ts"),
+  route("api/guides/search", "routes/api.guides.search.ts"),
   layout("routes/shell.tsx", [
     index("routes/home.tsx"),
     route("rigs", "routes/rigs.tsx"),

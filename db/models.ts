@@ -8,6 +8,7 @@ import {
   type Sequelize,
 } from "sequelize";
 
+import type { Guide } from "../app/lib/guides/schema";
 import { ROLES, type Role } from "../app/lib/roles";
 
 export { ROLES, type Role };
@@ -59,6 +60,41 @@ export class Rig extends Model<InferAttributes<Rig>, InferCreationAttributes<Rig
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
+
+export const GUIDE_STATUSES = ["draft", "in_review", "published", "retired"] as const;
+export type GuideStatus = (typeof GUIDE_STATUSES)[number];
+
+/** A guide's identity: built-in (companyId null) or a company's own. Its steps live in versions. */
+export class GuideRecord extends Model<InferAttributes<GuideRecord>, InferCreationAttributes<GuideRecord>> {
+  declare id: CreationOptional<number>;
+  declare companyId: number | null;
+  declare scope: string;
+  declare slug: string;
+  declare title: string;
+  declare publishedVersion: number | null;
+  declare basedOnGuideId: number | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+/** One numbered version of a guide; a published one is never changed, only retired. */
+export class GuideVersion extends Model<InferAttributes<GuideVersion>, InferCreationAttributes<GuideVersion>> {
+  declare id: CreationOptional<number>;
+  declare guideId: ForeignKey<GuideRecord["id"]>;
+  declare number: number;
+  declare status: GuideStatus;
+  declare definition: Guide;
+  declare sourceHash: string;
+  declare authorId: number | null;
+  declare reviewerId: number | null;
+  declare changeNote: string | null;
+  declare reviewComment: string | null;
+  declare publishedAt: Date | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+export const guideScope = (companyId: number | null) => (companyId === null ? "builtin" : `c${companyId}`);
 
 const id = { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true };
 const timestamps = { createdAt: DataTypes.DATE, updatedAt: DataTypes.DATE };
@@ -112,8 +148,40 @@ export function initModels(sequelize: Sequelize) {
     { sequelize, tableName: "rigs" },
   );
 
+  GuideRecord.init(
+    {
+      id,
+      companyId: DataTypes.INTEGER.UNSIGNED,
+      scope: DataTypes.STRING(20),
+      slug: DataTypes.STRING(80),
+      title: DataTypes.STRING(120),
+      publishedVersion: DataTypes.INTEGER.UNSIGNED,
+      basedOnGuideId: DataTypes.INTEGER.UNSIGNED,
+      ...timestamps,
+    },
+    { sequelize, tableName: "guides" },
+  );
+  GuideVersion.init(
+    {
+      id,
+      number: DataTypes.INTEGER.UNSIGNED,
+      status: DataTypes.ENUM(...GUIDE_STATUSES),
+      definition: DataTypes.JSON,
+      sourceHash: DataTypes.CHAR(64),
+      authorId: DataTypes.INTEGER.UNSIGNED,
+      reviewerId: DataTypes.INTEGER.UNSIGNED,
+      changeNote: DataTypes.TEXT,
+      reviewComment: DataTypes.TEXT,
+      publishedAt: DataTypes.DATE,
+      ...timestamps,
+    },
+    { sequelize, tableName: "guide_versions" },
+  );
+
   Company.hasMany(User, { foreignKey: "companyId" });
   User.belongsTo(Company, { foreignKey: "companyId" });
   Company.hasMany(Rig, { foreignKey: "companyId" });
   Rig.belongsTo(Company, { foreignKey: "companyId" });
+  GuideRecord.hasMany(GuideVersion, { foreignKey: "guideId", as: "versions" });
+  GuideVersion.belongsTo(GuideRecord, { foreignKey: "guideId", as: "guide" });
 }

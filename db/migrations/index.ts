@@ -1,5 +1,6 @@
 import type { QueryInterface } from "sequelize";
 import * as m001 from "./001-companies-users-rigs";
+import * as m002 from "./002-guides";
 
 export interface Migration {
   name: string;
@@ -8,4 +9,7 @@ export interface Migration {
 }
 
 /** Every migration, in the order it runs. Add new ones at the end; never edit a landed one. */
-export const migrations: Migration[] = [{ name: "001-companies-users-rigs", ...m001 }];
+export const migrations: Migration[] = [
+  { name: "001-companies-users-rigs", ...m001 },
+  { name: "002-guides", ...m002 },
+];

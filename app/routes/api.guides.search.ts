@@ -1,0 +1,20 @@
+import { z } from "zod";
+import { badRequestBody } from "~/lib/api";
+import { requireUser } from "~/services/guards.server";
+import { searchGuides } from "~/services/guides.server";
+import type { Route } from "./+types/api.guides.search";
+
+const query = z.object({
+  q: z
+    .string({ error: "Say what is wrong, like “pump lost prime”." })
+    .trim()
+    .min(1, "Say what is wrong, like “pump lost prime”.")
+    .max(120, "Keep it under 120 characters."),
+});
+
+export async function loader({ request }: Route.LoaderArgs) {
+  const user = await requireUser(request);
+  const parsed = query.safeParse(Object.fromEntries(new URL(request.url).searchParams));
+  if (!parsed.success) return Response.json(badRequestBody(parsed.error), { status: 400 });
+  return Response.json({ results: await searchGuides(user, parsed.data.q) });
+}

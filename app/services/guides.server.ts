@@ -1,0 +1,60 @@
+import { Op } from "sequelize";
+import { loadCauses } from "~/lib/guides/files";
+import type { Cause } from "~/lib/guides/causes";
+import type { Guide } from "~/lib/guides/schema";
+import { createGuideSearch, type SearchHit } from "~/lib/guides/search";
+import { GuideRecord, GuideVersion } from "./db.server";
+import type { SessionUser } from "./guards.server";
+
+let causes: Cause[] | undefined;
+/** The cause list from content/causes.json, read once per process. */
+export const causeList = () => (causes ??= loadCauses());
+
+export interface UsableGuide {
+  guideId: number;
+  slug: string;
+  title: string;
+  versionId: number;
+  version: number;
+  definition: Guide;
+}
+
+/**
+ * The published guides a company's crews get: its own, plus every built-in guide it has
+ * not replaced with its own copy.
+ */
+export async function usableGuides(user: SessionUser): Promise<UsableGuide[]> {
+  const records = await GuideRecord.findAll({
+    where: { [Op.or]: [{ companyId: null }, { companyId: user.companyId }], publishedVersion: { [Op.ne]: null } },
+    attributes: ["id", "companyId", "slug", "title", "publishedVersion", "basedOnGuideId"],
+  });
+  const replaced = new Set(records.filter((r) => r.companyId !== null).flatMap((r) => [r.basedOnGuideId, r.slug]));
+  const chosen = records.filter((r) => r.companyId !== null || !(replaced.has(r.id) || replaced.has(r.slug)));
+  const versions = await GuideVersion.findAll({
+    where: { [Op.or]: chosen.map((r) => ({ guideId: r.id, number: r.publishedVersion! })) },
+    attributes: ["id", "guideId", "number", "definition"],
+  });
+  const byGuide = new Map(versions.map((v) => [v.guideId, v]));
+  return chosen
+    .filter((r) => byGuide.has(r.id))
+    .map((r) => {
+      const v = byGuide.get(r.id)!;
+      return { guideId: r.id, slug: r.slug, title: r.title, versionId: v.id, version: v.number, definition: v.definition };
+    })
+    .sort((a, b) => a.title.localeCompare(b.title));
+}
+
+export async function searchGuides(user: SessionUser, query: string): Promise<SearchHit[]> {
+  const names = new Map(causeList().map((c) => [c.code, c.name]));
+  const guides = await usableGuides(user);
+  const search = createGuideSearch(
+    guides.map((g) => ({
+      slug: g.slug,
+      title: g.title,
+      summary: g.definition.summary,
+      symptoms: g.definition.symptoms,
+      causes: Object.values(g.definition.states).flatMap((s) => (s.meta.cause && names.has(s.meta.cause) ? [names.get(s.meta.cause)!] : [])),
+    })),
+  );
+  return search(query);
+}
