@@ -35,7 +35,8 @@ export function ErrorPanel({ error }: { error: unknown }) {
   let detail = "Try again. If it keeps happening, tell your supervisor.";
   if (isRouteErrorResponse(error)) {
     title = error.status === 404 ? "Not found" : error.status === 403 ? "Not allowed" : `Error ${error.status}`;
-    if (typeof error.data === "string" && error.data) detail = error.data;
+    const message = typeof error.data === "string" ? error.data : (error.data as { error?: unknown } | null)?.error;
+    if (typeof message === "string" && message) detail = message;
     else if (error.status === 404) detail = "There is nothing here, or it belongs to another company.";
   } else if (import.meta.env.DEV && error instanceof Error) {
     detail = error.message;

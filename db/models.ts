@@ -94,6 +94,54 @@ export class GuideVersion extends Model<InferAttributes<GuideVersion>, InferCrea
   declare updatedAt: CreationOptional<Date>;
 }
 
+export const CASE_OUTCOMES = ["open", "fixed", "handoff", "abandoned"] as const;
+export type CaseOutcome = (typeof CASE_OUTCOMES)[number];
+export const CASE_ANSWERS = ["YES", "NO", "DONE", "CANT", "ACK", "BACK"] as const;
+export type CaseAnswer = (typeof CASE_ANSWERS)[number];
+
+/** One walk-through on one rig; it keeps the guide version it started with. */
+export class Case extends Model<InferAttributes<Case>, InferCreationAttributes<Case>> {
+  declare id: string;
+  declare companyId: number;
+  declare rigId: number;
+  declare guideVersionId: number;
+  declare openedBy: number | null;
+  declare openedAt: Date;
+  declare closedAt: Date | null;
+  declare engineHours: number | null;
+  declare outcome: CreationOptional<CaseOutcome>;
+  declare finalStep: string | null;
+  declare causeCode: string | null;
+  declare safetyAckAt: Date | null;
+  declare note: string | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+/** One answer in a walk-through; `seq` orders them, the phone-made id makes resends harmless. */
+export class CaseEvent extends Model<InferAttributes<CaseEvent>, InferCreationAttributes<CaseEvent>> {
+  declare id: string;
+  declare caseId: string;
+  declare seq: number;
+  declare stepId: string;
+  declare answer: CaseAnswer;
+  declare at: Date;
+  declare note: string | null;
+  declare createdAt: CreationOptional<Date>;
+}
+
+export class CasePhoto extends Model<InferAttributes<CasePhoto>, InferCreationAttributes<CasePhoto>> {
+  declare id: CreationOptional<number>;
+  declare caseId: string;
+  declare stepId: string | null;
+  declare storageKey: string;
+  declare contentType: string;
+  declare bytes: number;
+  declare uploadedBy: number | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
 export const guideScope = (companyId: number | null) => (companyId === null ? "builtin" : `c${companyId}`);
 
 const id = { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true };
@@ -178,10 +226,61 @@ export function initModels(sequelize: Sequelize) {
     { sequelize, tableName: "guide_versions" },
   );
 
+  Case.init(
+    {
+      id: { type: DataTypes.CHAR(36), primaryKey: true },
+      companyId: DataTypes.INTEGER.UNSIGNED,
+      rigId: DataTypes.INTEGER.UNSIGNED,
+      guideVersionId: DataTypes.INTEGER.UNSIGNED,
+      openedBy: DataTypes.INTEGER.UNSIGNED,
+      openedAt: DataTypes.DATE(3),
+      closedAt: DataTypes.DATE(3),
+      engineHours: decimal(8, 1, "engineHours"),
+      outcome: { type: DataTypes.ENUM(...CASE_OUTCOMES), defaultValue: "open" },
+      finalStep: DataTypes.STRING(80),
+      causeCode: DataTypes.STRING(60),
+      safetyAckAt: DataTypes.DATE(3),
+      note: DataTypes.TEXT,
+      ...timestamps,
+    },
+    { sequelize, tableName: "cases" },
+  );
+  CaseEvent.init(
+    {
+      id: { type: DataTypes.CHAR(36), primaryKey: true },
+      caseId: DataTypes.CHAR(36),
+      seq: DataTypes.INTEGER.UNSIGNED,
+      stepId: DataTypes.STRING(80),
+      answer: DataTypes.ENUM(...CASE_ANSWERS),
+      at: DataTypes.DATE(3),
+      note: DataTypes.TEXT,
+      createdAt: DataTypes.DATE,
+    },
+    { sequelize, tableName: "case_events", updatedAt: false },
+  );
+  CasePhoto.init(
+    {
+      id,
+      caseId: DataTypes.CHAR(36),
+      stepId: DataTypes.STRING(80),
+      storageKey: DataTypes.STRING(255),
+      contentType: DataTypes.STRING(60),
+      bytes: DataTypes.INTEGER.UNSIGNED,
+      uploadedBy: DataTypes.INTEGER.UNSIGNED,
+      ...timestamps,
+    },
+    { sequelize, tableName: "case_photos" },
+  );
+
   Company.hasMany(User, { foreignKey: "companyId" });
   User.belongsTo(Company, { foreignKey: "companyId" });
   Company.hasMany(Rig, { foreignKey: "companyId" });
   Rig.belongsTo(Company, { foreignKey: "companyId" });
   GuideRecord.hasMany(GuideVersion, { foreignKey: "guideId", as: "versions" });
   GuideVersion.belongsTo(GuideRecord, { foreignKey: "guideId", as: "guide" });
+  Case.belongsTo(Rig, { foreignKey: "rigId", as: "rig" });
+  Case.belongsTo(GuideVersion, { foreignKey: "guideVersionId", as: "guideVersion" });
+  Case.belongsTo(User, { foreignKey: "openedBy", as: "opener" });
+  Case.hasMany(CaseEvent, { foreignKey: "caseId", as: "events" });
+  Case.hasMany(CasePhoto, { foreignKey: "caseId", as: "photos" });
 }

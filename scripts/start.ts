@@ -8,11 +8,11 @@ import { randomBytes } from "node:crypto";
 import fs from "node:fs";
 import path from "node:path";
 import { closeDb, db } from "../db/index";
-import { startLocalMariadb, type LocalMariadb } from "../db/local-mariadb";
 import { migrateUp } from "../db/migrate";
 import { DEMO_PASSWORD, DEMO_PEOPLE } from "../seeds/demo-people";
 import { seedAll } from "../seeds/seed-all";
 import { buildIfStale } from "./build-if-stale";
+import { startLocalServices } from "./local-services";
 
 const root = process.cwd();
 const dev = process.argv.includes("--dev");
@@ -26,15 +26,23 @@ function secretFile(name: string): string {
   return fs.readFileSync(file, "utf8").trim();
 }
 
+let services: Awaited<ReturnType<typeof startLocalServices>> | undefined;
+
 async function main() {
   fs.mkdirSync(dataDir, { recursive: true });
-  let mariadb: LocalMariadb | undefined;
-  const ownDatabase = !process.env.DATABASE_URL;
-  if (ownDatabase) {
-    mariadb = await startLocalMariadb({ dir: path.join(dataDir, "mariadb"), port: Number(process.env.DB_PORT ?? 3406), database: "tankside" });
-    process.env.DATABASE_URL = mariadb.url;
-    console.log("MariaDB is up on 127.0.0.1 (data in .data/mariadb).");
-  }
+  services = await startLocalServices({
+    dataDir,
+    database: "tankside",
+    dbPort: Number(process.env.DB_PORT ?? 3406),
+    smtpPort: Number(process.env.SMTP_PORT ?? 2525),
+    s3Port: Number(process.env.S3_PORT ?? 4569),
+    databaseUrl: process.env.DATABASE_URL,
+  });
+  const ownDatabase = services.ownDatabase;
+  // Real providers configured in the environment win over the local fakes.
+  for (const [key, value] of Object.entries(services.env)) process.env[key] ??= value;
+  if (ownDatabase) console.log("MariaDB is up on 127.0.0.1 (data in .data/mariadb).");
+  console.log("Local fake SMTP (mail kept in .data/outbox, shown at /admin/outbox) and fake S3 (.data/s3) are up.");
   const applied = await migrateUp(db());
   if (applied.length) console.log(`Applied migrations: ${applied.join(", ")}`);
   await seedAll();
@@ -70,7 +78,7 @@ async function main() {
       app.kill("SIGTERM");
       await new Promise((r) => app.once("exit", r));
     }
-    await mariadb?.stop();
+    await services?.stop();
     process.exit(code);
   };
   process.on("SIGINT", () => void stop(0));
@@ -78,7 +86,8 @@ async function main() {
   app.on("exit", (code) => void stop(code ?? 0));
 }
 
-main().catch((error) => {
+main().catch(async (error) => {
   console.error(error instanceof Error ? error.message : error);
+  await services?.stop();
   process.exit(1);
 });

@@ -1,14 +1,14 @@
 /**
- * Once per `npm test`: a private MariaDB for the tests (own data dir and port, never the
- * dev database), migrated; Chromium from Debian when missing (for the browser tests).
+ * Once per `npm test`: a private MariaDB, fake SMTP and fake S3 for the tests (own data dir
+ * and ports, never the dev ones); Chromium from Debian when missing (for the browser tests).
  */
 import { execFileSync } from "node:child_process";
 import fs from "node:fs";
 import path from "node:path";
 import type { TestProject } from "vitest/node";
-import { startLocalMariadb, type LocalMariadb } from "../db/local-mariadb";
+import { startLocalServices, type LocalServices } from "../scripts/local-services";
 
-let server: LocalMariadb | undefined;
+let services: LocalServices | undefined;
 
 function ensureChromium() {
   if (fs.existsSync("/usr/bin/chromium")) return;
@@ -21,21 +21,19 @@ function ensureChromium() {
 export async function setup(project: TestProject) {
   const root = path.resolve(import.meta.dirname, "..");
   ensureChromium();
-  server = await startLocalMariadb({
-    dir: path.join(root, ".data/test-mariadb"),
-    port: Number(process.env.TEST_DB_PORT ?? 3417),
-    database: "tankside_test",
-    log: () => {},
-  });
-  project.provide("databaseUrl", server.url);
+  const base = Number(process.env.TEST_DB_PORT ?? 3417);
+  const dataDir = path.join(root, ".data/test");
+  fs.rmSync(path.join(dataDir, "outbox"), { recursive: true, force: true });
+  services = await startLocalServices({ dataDir, database: "tankside_test", dbPort: base, smtpPort: base + 1, s3Port: base + 2, log: () => {} });
+  project.provide("serviceEnv", services.env);
 }
 
 export async function teardown() {
-  await server?.stop();
+  await services?.stop();
 }
 
 declare module "vitest" {
   export interface ProvidedContext {
-    databaseUrl: string;
+    serviceEnv: Record<string, string>;
   }
 }

@@ -1,6 +1,6 @@
 import { afterAll, afterEach, beforeEach, inject } from "vitest";
 
-process.env.DATABASE_URL ??= inject("databaseUrl");
+for (const [key, value] of Object.entries(inject("serviceEnv"))) process.env[key] = value;
 
 // A test fails on an unexpected console.error; tests that expect one call expectConsoleError().
 const seen: unknown[][] = [];

@@ -31,7 +31,7 @@ export async function getUser(request: Request): Promise<SessionUser | null> {
 export async function requireUser(request: Request): Promise<SessionUser> {
   const user = await getUser(request);
   if (user) return user;
-  if (isApi(request)) throw data({ error: "Sign in first." }, { status: 401 });
+  if (isApi(request)) fail(401, "Sign in first.");
   const url = new URL(request.url);
   throw redirect(`/login?redirectTo=${encodeURIComponent(url.pathname + url.search)}`);
 }
@@ -40,17 +40,17 @@ export async function requireUser(request: Request): Promise<SessionUser> {
 export async function requireRole(request: Request, role: Role): Promise<SessionUser> {
   const user = await requireUser(request);
   if (!hasRole(user.role, role)) {
-    const message = `This needs the ${role} role or above.`;
-    throw data(isApi(request) ? { error: message } : message, { status: 403 });
+    fail(403, `This needs the ${role} role or above.`);
   }
   return user;
 }
 
-/** Missing and foreign records look the same from outside: both are 404. */
-export function notFound(what = "That record"): never {
-  throw data(`${what} was not found.`, { status: 404 });
+/** Stops a loader or action with a status and a message the person can act on (`{ error }`, for pages and APIs alike). */
+export function fail(status: number, message: string, fields?: Record<string, string>): never {
+  throw data({ error: message, ...(fields ? { fields } : {}) }, { status });
 }
 
-export function apiNotFound(what = "That record"): never {
-  throw data({ error: `${what} was not found.` }, { status: 404 });
+/** Missing and foreign records look the same from outside: both are 404. */
+export function notFound(what = "That record"): never {
+  fail(404, `${what} was not found.`);
 }

@@ -1,6 +1,7 @@
 import type { QueryInterface } from "sequelize";
 import * as m001 from "./001-companies-users-rigs";
 import * as m002 from "./002-guides";
+import * as m003 from "./003-cases";
 
 export interface Migration {
   name: string;
@@ -12,4 +13,5 @@ export interface Migration {
 export const migrations: Migration[] = [
   { name: "001-companies-users-rigs", ...m001 },
   { name: "002-guides", ...m002 },
+  { name: "003-cases", ...m003 },
 ];

@@ -21,18 +21,27 @@ export async function requestAs(email: string | null, path: string, init: Reques
   return new Request(`http://127.0.0.1${path}`, { ...init, method: init.method ?? (body ? "POST" : "GET"), headers, body });
 }
 
-/** Calls a loader or action and returns what it threw or returned, as a Response-like result. */
-export async function run<T>(fn: () => Promise<T>): Promise<{ status: number; data: unknown; location?: string | null }> {
+export interface Outcome {
+  status: number;
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- tests read whatever the route answered
+  data: any;
+  location?: string | null;
+}
+
+/** Calls a loader or action and returns what it threw or returned: status, body (JSON parsed) and redirect. */
+export async function run<T>(fn: () => Promise<T>): Promise<Outcome> {
   try {
-    const value = await fn();
-    return describe(value);
+    return await describe(await fn());
   } catch (thrown) {
     return describe(thrown);
   }
 }
 
-function describe(value: unknown): { status: number; data: unknown; location?: string | null } {
-  if (value instanceof Response) return { status: value.status, data: undefined, location: value.headers.get("Location") };
+async function describe(value: unknown): Promise<Outcome> {
+  if (value instanceof Response) {
+    const type = value.headers.get("Content-Type") ?? "";
+    return { status: value.status, data: type.includes("json") ? await value.json() : undefined, location: value.headers.get("Location") };
+  }
   if (value && typeof value === "object" && "type" in value && (value as { type: string }).type === "DataWithResponseInit") {
     const d = value as unknown as { data: unknown; init: ResponseInit | null };
     return { status: d.init?.status ?? 200, data: d.data };

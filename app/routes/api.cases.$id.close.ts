@@ -1,0 +1,12 @@
+import { closeCaseSchema } from "~/lib/case-schema";
+import { closeCase } from "~/services/cases.server";
+import { requireUser } from "~/services/guards.server";
+import { readJson, requirePost } from "~/services/json-body.server";
+import type { Route } from "./+types/api.cases.$id.close";
+
+export async function action({ request, params }: Route.ActionArgs) {
+  const user = await requireUser(request);
+  requirePost(request);
+  const body = await readJson(request, closeCaseSchema);
+  return Response.json(await closeCase(user, params.id, body));
+}

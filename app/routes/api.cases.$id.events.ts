@@ -1,0 +1,12 @@
+import { eventBatchSchema } from "~/lib/case-schema";
+import { storeEvents } from "~/services/cases.server";
+import { requireUser } from "~/services/guards.server";
+import { readJson, requirePost } from "~/services/json-body.server";
+import type { Route } from "./+types/api.cases.$id.events";
+
+export async function action({ request, params }: Route.ActionArgs) {
+  const user = await requireUser(request);
+  requirePost(request);
+  const { events } = await readJson(request, eventBatchSchema);
+  return Response.json(await storeEvents(user, params.id, events));
+}

@@ -1,0 +1,10 @@
+import { caseDetail } from "~/services/cases.server";
+import { requireUser } from "~/services/guards.server";
+import type { Route } from "./+types/api.cases.$id";
+
+export async function loader({ request, params }: Route.LoaderArgs) {
+  const user = await requireUser(request);
+  const detail = await caseDetail(user, params.id);
+  const { guide, ...rest } = detail;
+  return Response.json({ ...rest, guide: { slug: guide.slug, title: guide.title, version: guide.version } });
+}

@@ -1,0 +1,13 @@
+import { startCaseSchema } from "~/lib/case-schema";
+import { startCase } from "~/services/cases.server";
+import { requireUser } from "~/services/guards.server";
+import { readJson, requirePost } from "~/services/json-body.server";
+import type { Route } from "./+types/api.cases";
+
+export async function action({ request }: Route.ActionArgs) {
+  const user = await requireUser(request);
+  requirePost(request);
+  const body = await readJson(request, startCaseSchema);
+  const { id, created } = await startCase(user, body);
+  return Response.json({ id }, { status: created ? 201 : 200 });
+}

@@ -1,0 +1,192 @@
+import { randomUUID } from "node:crypto";
+import { Op, UniqueConstraintError } from "sequelize";
+import type { CaseEventInput, CloseCaseInput } from "~/lib/case-schema";
+import { answerFits } from "~/lib/guides/walk";
+import { isFinalKind, type Guide } from "~/lib/guides/schema";
+import { Case, CaseEvent, CasePhoto, GuideRecord, GuideVersion, Rig, sequelize, User } from "./db.server";
+import { fail, notFound, type SessionUser } from "./guards.server";
+import { usableGuides } from "./guides.server";
+import { notifyHandoff } from "./handoff.server";
+
+/** Starts a case on one of the company's active rigs with the guide's newest published version. Resending the same id is harmless. */
+export async function startCase(user: SessionUser, input: { id?: string; rigCode: string; guideSlug: string }) {
+  const rig = await Rig.findOne({ where: { companyId: user.companyId, code: input.rigCode.toUpperCase(), retired: false }, attributes: ["id", "code"] });
+  if (!rig) notFound(`Rig ${input.rigCode}`);
+  const guide = (await usableGuides(user)).find((g) => g.slug === input.guideSlug);
+  if (!guide) notFound(`Guide ${input.guideSlug}`);
+  const id = input.id ?? randomUUID();
+  const existing = await Case.findByPk(id, { attributes: ["id", "companyId", "rigId", "guideVersionId"] });
+  if (existing) {
+    if (existing.companyId !== user.companyId) fail(409, "That case id is already taken.");
+    if (existing.rigId !== rig.id) fail(409, "That case id belongs to a case on another rig.");
+    return { id, created: false };
+  }
+  await Case.create({
+    id, companyId: user.companyId, rigId: rig.id, guideVersionId: guide.versionId, openedBy: user.id, openedAt: new Date(),
+    closedAt: null, engineHours: null, finalStep: null, causeCode: null, safetyAckAt: null, note: null,
+  });
+  return { id, created: true };
+}
+
+/** The company's case with the guide version it follows; another company's id is a 404. */
+async function findCaseWithGuide(user: SessionUser, caseId: string) {
+  const found = await Case.findOne({
+    where: { id: caseId, companyId: user.companyId },
+    include: [{ model: GuideVersion, as: "guideVersion", attributes: ["id", "number", "definition", "guideId"] }],
+  });
+  if (!found) notFound("That case");
+  const version = (found as Case & { guideVersion: GuideVersion }).guideVersion;
+  return { found, guide: version.definition, version };
+}
+
+/**
+ * Stores a batch of answers exactly once each. Every event must fit the guide version,
+ * or nothing of the batch is stored (422). Resent events are counted as duplicates.
+ */
+export async function storeEvents(user: SessionUser, caseId: string, events: CaseEventInput[]) {
+  const { found, guide } = await findCaseWithGuide(user, caseId);
+  const misfits = events.flatMap((e) => {
+    const why = answerFits(guide, e.stepId, e.answer);
+    return why ? [`event ${e.seq}: ${why}`] : [];
+  });
+  if (misfits.length) fail(422, `Nothing stored: ${misfits.join("; ")}.`);
+
+  return sequelize.transaction(async (transaction) => {
+    const known = await CaseEvent.findAll({
+      where: { caseId, [Op.or]: [{ id: events.map((e) => e.id) }, { seq: events.map((e) => e.seq) }] },
+      attributes: ["id", "seq"],
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
+    const knownIds = new Set(known.map((k) => k.id));
+    const seqOwner = new Map(known.map((k) => [k.seq, k.id]));
+    const fresh = [...new Map(events.filter((e) => !knownIds.has(e.id)).map((e) => [e.id, e])).values()];
+    for (const e of fresh) {
+      if (seqOwner.has(e.seq) && seqOwner.get(e.seq) !== e.id) fail(409, `Nothing stored: event ${e.seq} is already taken by another event.`);
+    }
+    try {
+      await CaseEvent.bulkCreate(
+        fresh.map((e) => ({ id: e.id, caseId, seq: e.seq, stepId: e.stepId, answer: e.answer, at: new Date(e.at), note: e.note?.trim() || null })),
+        { transaction },
+      );
+    } catch (error) {
+      if (error instanceof UniqueConstraintError) fail(409, "Nothing stored: two events in the batch share a sequence number.");
+      throw error;
+    }
+    const firstAck = fresh.filter((e) => e.answer === "ACK").map((e) => new Date(e.at)).sort((a, b) => +a - +b)[0];
+    if (firstAck && (!found.safetyAckAt || firstAck < found.safetyAckAt)) await found.update({ safetyAckAt: firstAck }, { transaction });
+    return { stored: fresh.length, duplicates: events.length - fresh.length };
+  });
+}
+
+/** Closes a case once: fixed or handoff at a matching end step, or abandoned. A hand-off tells the supervisors. */
+export async function closeCase(user: SessionUser, caseId: string, input: CloseCaseInput) {
+  const { found, guide } = await findCaseWithGuide(user, caseId);
+  if (found.outcome !== "open") {
+    if (found.outcome === input.outcome && found.finalStep === (input.finalStep ?? null)) return { outcome: found.outcome, alreadyClosed: true, notified: [], mailFailed: false };
+    fail(409, `This case is already closed as ${found.outcome}.`);
+  }
+  let causeCode: string | null = null;
+  if (input.outcome !== "abandoned") {
+    const step = input.finalStep ? guide.states[input.finalStep] : undefined;
+    if (!step) fail(422, "finalStep must name an end step of this guide.", { finalStep: "not a step of this guide" });
+    if (!isFinalKind(step.meta.kind) || step.meta.kind !== input.outcome) {
+      fail(422, `Step "${input.finalStep}" is a ${step.meta.kind} step, not a ${input.outcome} end.`, { finalStep: "does not match the outcome" });
+    }
+    causeCode = step.meta.cause ?? null;
+  }
+  const closedAt = input.at ? new Date(input.at) : new Date();
+  await sequelize.transaction(async (transaction) => {
+    await found.update(
+      { outcome: input.outcome, finalStep: input.finalStep ?? null, causeCode, closedAt, engineHours: input.engineHours ?? null, note: input.note?.trim() || null },
+      { transaction },
+    );
+    if (input.engineHours !== undefined) {
+      await Rig.update({ engineHours: input.engineHours }, { where: { id: found.rigId, engineHours: { [Op.lt]: input.engineHours } }, transaction });
+    }
+  });
+  let notified: string[] = [];
+  let mailFailed = false;
+  if (input.outcome === "handoff") {
+    // The case is closed either way; a mail server that is down must not lose the crew's answers.
+    try {
+      notified = await notifyHandoff(user, caseId);
+    } catch (error) {
+      mailFailed = true;
+      console.warn(`Hand-off mail for case ${caseId} failed: ${error instanceof Error ? error.message : error}`);
+    }
+  }
+  return { outcome: input.outcome, alreadyClosed: false, notified, mailFailed };
+}
+
+export interface CaseDetail {
+  id: string;
+  outcome: string;
+  openedAt: string;
+  closedAt: string | null;
+  engineHours: number | null;
+  finalStep: string | null;
+  causeCode: string | null;
+  safetyAckAt: string | null;
+  note: string | null;
+  rig: { code: string; name: string; hasHourMeter: boolean; engineHours: number; tankGal: number; hoseLengthFt: number; hoseDiameterIn: number; yardElevationFt: number; nozzleTips: Rig["nozzleTips"] };
+  guide: { slug: string; title: string; version: number; definition: Guide };
+  openedBy: string | null;
+  events: { id: string; seq: number; stepId: string; answer: string; at: string; note: string | null }[];
+  photos: { id: number; stepId: string | null; contentType: string }[];
+}
+
+export async function caseDetail(user: SessionUser, caseId: string): Promise<CaseDetail> {
+  const { found, guide, version } = await findCaseWithGuide(user, caseId);
+  const [rig, record, opener, events, photos] = await Promise.all([
+    Rig.findByPk(found.rigId),
+    GuideRecord.findByPk(version.guideId, { attributes: ["slug", "title"] }),
+    found.openedBy ? User.findByPk(found.openedBy, { attributes: ["name"] }) : null,
+    CaseEvent.findAll({ where: { caseId }, order: [["seq", "ASC"]] }),
+    CasePhoto.findAll({ where: { caseId }, attributes: ["id", "stepId", "contentType"], order: [["id", "ASC"]] }),
+  ]);
+  return {
+    id: found.id,
+    outcome: found.outcome,
+    openedAt: found.openedAt.toISOString(),
+    closedAt: found.closedAt?.toISOString() ?? null,
+    engineHours: found.engineHours,
+    finalStep: found.finalStep,
+    causeCode: found.causeCode,
+    safetyAckAt: found.safetyAckAt?.toISOString() ?? null,
+    note: found.note,
+    rig: {
+      code: rig!.code, name: rig!.name, hasHourMeter: rig!.hasHourMeter, engineHours: rig!.engineHours, tankGal: rig!.tankGal,
+      hoseLengthFt: rig!.hoseLengthFt, hoseDiameterIn: rig!.hoseDiameterIn, yardElevationFt: rig!.yardElevationFt, nozzleTips: rig!.nozzleTips,
+    },
+    guide: { slug: record!.slug, title: record!.title, version: version.number, definition: guide },
+    openedBy: opener?.name ?? null,
+    events: events.map((e) => ({ id: e.id, seq: e.seq, stepId: e.stepId, answer: e.answer, at: e.at.toISOString(), note: e.note })),
+    photos: photos.map((p) => ({ id: p.id, stepId: p.stepId, contentType: p.contentType })),
+  };
+}
+
+/** A rig's latest cases, newest first, for its page. */
+export async function recentRigCases(user: SessionUser, rigId: number, limit = 10) {
+  const rows = await Case.findAll({
+    where: { companyId: user.companyId, rigId },
+    attributes: ["id", "outcome", "openedAt", "closedAt", "causeCode"],
+    include: [
+      { model: GuideVersion, as: "guideVersion", attributes: ["number"], include: [{ model: GuideRecord, as: "guide", attributes: ["title"] }] },
+      { model: User, as: "opener", attributes: ["name"] },
+    ],
+    order: [["openedAt", "DESC"]],
+    limit,
+  });
+  return rows.map((c) => {
+    const v = (c as Case & { guideVersion: GuideVersion & { guide: GuideRecord } }).guideVersion;
+    const opener = (c as Case & { opener: User | null }).opener;
+    return { id: c.id, outcome: c.outcome, openedAt: c.openedAt.toISOString(), closedAt: c.closedAt?.toISOString() ?? null, causeCode: c.causeCode, guideTitle: v.guide.title, openedBy: opener?.name ?? null };
+  });
+}
+
+/** The rig this person last started a fix on, so it can be offered first. */
+export async function lastRigIdFor(user: SessionUser): Promise<number | null> {
+  const last = await Case.findOne({ where: { companyId: user.companyId, openedBy: user.id }, attributes: ["rigId"], order: [["openedAt", "DESC"]] });
+  return last?.rigId ?? null;
+}
