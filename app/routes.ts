@@ -9,11 +9,18 @@ export default [
   route("api/cases/:id", "routes/api.cases.$id.ts"),
   route("api/cases/:id/events", "routes/api.cases.$id.events.ts"),
   route("api/cases/:id/close", "routes/api.cases.$id.close.ts"),
+  route("api/cases/:id/photos", "routes/api.cases.$id.photos.ts"),
+  route("cases/:id/photos/:photoId", "routes/cases.$id.photos.$photoId.ts"),
+  route("rigs/:code/label", "routes/rigs.$code.label.tsx"),
   layout("routes/shell.tsx", [
     index("routes/home.tsx"),
     route("rigs", "routes/rigs.tsx"),
     route("rigs/new", "routes/rigs.new.tsx"),
     route("rigs/:code", "routes/rigs.$code.tsx"),
     route("rigs/:code/edit", "routes/rigs.$code.edit.tsx"),
+    route("rigs/:code/fix", "routes/rigs.$code.fix.tsx"),
+    route("cases/:id", "routes/cases.$id.tsx"),
+    route("cases/:id/walk", "routes/cases.$id.walk.tsx"),
+    route("admin/outbox", "routes/admin.outbox.tsx"),
   ]),
 ] satisfies RouteConfig;

@@ -11,6 +11,7 @@ export const NAV_ITEMS: NavItem[] = [
   { to: "/", label: "Start a fix", minRole: "crew" },
   { to: "/rigs", label: "Rigs", minRole: "crew" },
   { to: "/rigs/new", label: "Add a rig", minRole: "admin" },
+  { to: "/admin/outbox", label: "Outbox", minRole: "admin" },
 ];
 
 export const navFor = (role: Role) => NAV_ITEMS.filter((item) => hasRole(role, item.minRole));

@@ -1,6 +1,8 @@
 import { Form, Link } from "react-router";
 import { PageTitle } from "~/components/ui/page-title";
 import { fmt, ftToM, galToL, inToMm } from "~/lib/calc/units";
+import { formatDateTime, OUTCOME_LABELS } from "~/lib/format";
+import { recentRigCases } from "~/services/cases.server";
 import { requireRole, requireUser } from "~/services/guards.server";
 import { findRig, setRigRetired } from "~/services/rigs.server";
 import type { Route } from "./+types/rigs.$code";
@@ -8,7 +10,7 @@ import type { Route } from "./+types/rigs.$code";
 export async function loader({ request, params }: Route.LoaderArgs) {
   const user = await requireUser(request);
   const rig = await findRig(user, params.code);
-  return { rig: rig.get({ plain: true }), canEdit: user.role === "admin" };
+  return { rig: rig.get({ plain: true }), canEdit: user.role === "admin", cases: await recentRigCases(user, rig.id) };
 }
 
 export async function action({ request, params }: Route.ActionArgs) {
@@ -23,7 +25,7 @@ export async function action({ request, params }: Route.ActionArgs) {
 }
 
 export default function RigPage({ loaderData }: Route.ComponentProps) {
-  const { rig, canEdit } = loaderData;
+  const { rig, canEdit, cases } = loaderData;
   const specs: [string, string][] = [
     ["Mount", rig.mount],
     ["Tank", `${fmt(rig.tankGal)} gal (${fmt(galToL(rig.tankGal))} L)`],
@@ -38,6 +40,16 @@ export default function RigPage({ loaderData }: Route.ComponentProps) {
         {rig.code}
         {rig.retired ? <span className="ml-3 rounded bg-ink px-2 py-1 align-middle text-base text-white">retired</span> : null}
       </PageTitle>
+      {rig.retired ? null : (
+        <div className="mb-4 grid gap-3 sm:grid-cols-2">
+          <Link to="fix" className="flex min-h-16 items-center justify-center rounded-lg bg-go text-xl font-bold text-white no-underline">
+            Start a fix on {rig.code}
+          </Link>
+          <Link to="label" className="flex min-h-16 items-center justify-center rounded-lg border-2 border-ink bg-paper text-lg font-bold text-ink no-underline">
+            Print the rig label
+          </Link>
+        </div>
+      )}
       <section aria-labelledby="specs" className="rounded-lg border-2 border-ink bg-paper p-4">
         <h2 id="specs" className="text-xl font-bold">
           Specs
@@ -78,6 +90,27 @@ export default function RigPage({ loaderData }: Route.ComponentProps) {
           <p>No tips recorded.</p>
         )}
         {rig.notes ? <p className="mt-4 whitespace-pre-line">{rig.notes}</p> : null}
+      </section>
+      <section aria-labelledby="recent" className="mt-5">
+        <h2 id="recent" className="text-xl font-bold">
+          Recent cases
+        </h2>
+        {cases.length ? (
+          <ul className="mt-2 space-y-2">
+            {cases.map((c) => (
+              <li key={c.id} className="rounded-md border-2 border-rule bg-paper p-3">
+                <Link to={`/cases/${c.id}`} className="font-bold">
+                  {c.guideTitle}
+                </Link>
+                <p>
+                  {OUTCOME_LABELS[c.outcome]} · {formatDateTime(c.openedAt)} UTC · {c.openedBy ?? "—"}
+                </p>
+              </li>
+            ))}
+          </ul>
+        ) : (
+          <p className="mt-1">No cases yet.</p>
+        )}
       </section>
       {canEdit ? (
         <div className="mt-4 flex flex-wrap gap-3">

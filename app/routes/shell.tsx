@@ -2,16 +2,18 @@ import { Form, NavLink, Outlet } from "react-router";
 import { ErrorPanel } from "~/root";
 import { navFor } from "~/lib/navigation";
 import { ROLE_LABELS } from "~/lib/roles";
+import { env } from "~/services/env.server";
 import { requireUser } from "~/services/guards.server";
 import type { Route } from "./+types/shell";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);
-  return { user };
+  // The outbox exists only while the app sends through the local fake mail server.
+  return { user, hidden: env().MAIL_OUTBOX_DIR ? [] : ["/admin/outbox"] };
 }
 
 export default function Shell({ loaderData }: Route.ComponentProps) {
-  const { user } = loaderData;
+  const { user, hidden } = loaderData;
   return (
     <div className="min-h-dvh">
       <header className="no-print bg-go text-white">
@@ -28,7 +30,9 @@ export default function Shell({ loaderData }: Route.ComponentProps) {
         </div>
         <nav aria-label="Main" className="mx-auto max-w-3xl px-2 pb-2">
           <ul className="flex flex-wrap gap-1">
-            {navFor(user.role).map((item) => (
+            {navFor(user.role)
+              .filter((item) => !hidden.includes(item.to))
+              .map((item) => (
               <li key={item.to}>
                 <NavLink
                   to={item.to}

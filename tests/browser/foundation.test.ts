@@ -29,7 +29,7 @@ describe("sign-in and navigation at 360 px", () => {
     ["dana@cedarflats.example", "Crew", ["Start a fix", "Rigs"]],
     ["ravi@cedarflats.example", "Trainer", ["Start a fix", "Rigs"]],
     ["mo@cedarflats.example", "Supervisor", ["Start a fix", "Rigs"]],
-    ["june@cedarflats.example", "Admin", ["Start a fix", "Rigs", "Add a rig"]],
+    ["june@cedarflats.example", "Admin", ["Start a fix", "Rigs", "Add a rig", "Outbox"]],
   ])("%s sees the %s navigation and their company", async (email, role, expected) => {
     const p = await freshPage();
     await signIn(p, app.url, email);

@@ -1,0 +1,86 @@
+import { useState } from "react";
+import { Markdown } from "~/components/ui/markdown";
+import type { StepMeta } from "~/lib/guides/schema";
+import type { QueuedClose, WalkRecord } from "~/lib/walk-queue";
+
+/** The end of a walk-through: what was found (or who is told), engine hours, and Finish. */
+export function EndCard({
+  meta,
+  causeName,
+  record,
+  hourMeter,
+  onFinish,
+}: {
+  meta: StepMeta;
+  causeName?: string;
+  record: WalkRecord;
+  hourMeter: { has: boolean; current: number };
+  onFinish: (close: Omit<QueuedClose, "at" | "outcome" | "finalStep">) => void;
+}) {
+  const [hours, setHours] = useState(hourMeter.has ? String(hourMeter.current) : "");
+  const [note, setNote] = useState("");
+  const [error, setError] = useState<string | null>(null);
+  const fixed = meta.kind === "fixed";
+  const finished = !!record.close;
+
+  const finish = () => {
+    let engineHours: number | undefined;
+    if (hourMeter.has && hours.trim() !== "") {
+      engineHours = Number(hours);
+      if (!Number.isFinite(engineHours) || engineHours < 0 || engineHours > 100_000) return setError("Engine hours must be a number from 0 to 100,000.");
+      if (engineHours < hourMeter.current) return setError(`The meter read ${hourMeter.current} h before; enter the reading now (the same or more).`);
+    }
+    setError(null);
+    onFinish({ engineHours, note: note.trim() || undefined });
+  };
+
+  return (
+    <section aria-labelledby="end-title" className={`rounded-lg border-4 p-4 ${fixed ? "border-go bg-paper" : "border-stop bg-paper"}`}>
+      <h1 id="end-title" className={`text-2xl font-bold ${fixed ? "text-go" : "text-stop"}`}>
+        {fixed ? "Fixed" : "Handed off"}
+      </h1>
+      <Markdown className="mt-2 text-xl">{meta.prompt}</Markdown>
+      {fixed && causeName ? (
+        <p className="mt-2 text-lg">
+          <strong>Cause:</strong> {causeName}
+          {meta.component ? ` (${meta.component})` : ""}
+        </p>
+      ) : null}
+      {!fixed ? (
+        <p className="mt-2 text-lg font-bold">
+          {record.closeResult
+            ? record.closeResult.notified.length
+              ? `Told by e-mail: ${record.closeResult.notified.join(", ")}.`
+              : "The e-mail could not be sent. Call your supervisor."
+            : finished
+              ? "Your supervisor will be e-mailed as soon as this phone has signal."
+              : "When you finish, your supervisor is e-mailed with your answers."}
+        </p>
+      ) : null}
+      {finished ? (
+        <p className="mt-4 text-lg font-bold">{record.closeResult ? "Case closed and saved." : "Finished. The case closes when this phone has signal."}</p>
+      ) : (
+        <div className="mt-4 space-y-3">
+          {hourMeter.has ? (
+            <label className="block font-bold">
+              Engine hours now (hour meter)
+              <input value={hours} onChange={(e) => setHours(e.target.value)} inputMode="decimal" className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink px-3 text-lg" />
+            </label>
+          ) : null}
+          <label className="block font-bold">
+            Note for the case (optional)
+            <textarea value={note} onChange={(e) => setNote(e.target.value)} rows={2} maxLength={2000} className="mt-1 block w-full rounded-md border-2 border-ink p-2 text-lg font-normal" />
+          </label>
+          {error ? (
+            <p role="alert" className="font-bold text-stop">
+              {error}
+            </p>
+          ) : null}
+          <button type="button" onClick={finish} className="min-h-16 w-full rounded-lg bg-go text-xl font-bold text-white">
+            Finish
+          </button>
+        </div>
+      )}
+    </section>
+  );
+}

@@ -1,0 +1,80 @@
+import { useMachine } from "@xstate/react";
+import { useState } from "react";
+import { Markdown } from "~/components/ui/markdown";
+import type { GuideMachine } from "~/lib/guides/compile";
+import type { StepMeta } from "~/lib/guides/schema";
+import { AnswerButtons } from "./answer-buttons";
+import { SafetyCaution } from "./safety-caution";
+
+/**
+ * One step, driven by the guide's machine restored at that step. Answering sends the event
+ * to the machine and reports where it went; nothing here touches the network.
+ */
+export function StepCard({
+  machine,
+  stepId,
+  note,
+  onNoteChange,
+  onAdvance,
+  children,
+}: {
+  machine: GuideMachine;
+  stepId: string;
+  note: string;
+  onNoteChange: (note: string) => void;
+  onAdvance: (answer: string, to: string) => void;
+  children?: React.ReactNode;
+}) {
+  const [snapshot, send, actor] = useMachine(machine, { snapshot: machine.resolveState({ value: stepId }) });
+  const [showHelp, setShowHelp] = useState(false);
+  const [showNote, setShowNote] = useState(note !== "");
+  const here = String(snapshot.value);
+  const meta = snapshot.getMeta()[`${machine.id}.${here}`] as StepMeta;
+
+  const answer = (type: string) => {
+    send({ type });
+    const to = String(actor.getSnapshot().value);
+    if (to !== here) onAdvance(type, to);
+  };
+
+  const safety = meta.kind === "safety";
+  return (
+    <section aria-labelledby="step-prompt" className="flex flex-1 flex-col gap-4">
+      {safety ? <SafetyCaution compact /> : null}
+      <div className={`rounded-lg border-2 p-4 ${safety ? "border-ink bg-caution" : "border-ink bg-paper"}`}>
+        <p className="text-sm font-bold uppercase tracking-wide">
+          {safety ? "Shut-down stop" : meta.kind === "check" ? "Check" : "Do this"}
+          {meta.minutes ? ` · about ${meta.minutes < 1 ? "½" : meta.minutes} min` : ""}
+          {meta.handsOn ? " · hands-on" : ""}
+        </p>
+        <h1 id="step-prompt" className="mt-1 text-2xl leading-snug font-bold">
+          <Markdown>{meta.prompt}</Markdown>
+        </h1>
+        {meta.help ? (
+          <div className="mt-3">
+            <button type="button" aria-expanded={showHelp} onClick={() => setShowHelp(!showHelp)} className="min-h-12 rounded-md border-2 border-ink px-3 font-bold">
+              {showHelp ? "Less" : "More about this"}
+            </button>
+            {showHelp || safety ? <Markdown className="mt-2 text-lg">{meta.help}</Markdown> : null}
+          </div>
+        ) : null}
+      </div>
+      {children}
+      <div>
+        {showNote ? (
+          <label className="block font-bold">
+            Note (goes with your answer)
+            <textarea value={note} onChange={(e) => onNoteChange(e.target.value)} rows={2} maxLength={2000} className="mt-1 block w-full rounded-md border-2 border-ink bg-paper p-2 text-lg font-normal" />
+          </label>
+        ) : (
+          <button type="button" onClick={() => setShowNote(true)} className="min-h-12 rounded-md border-2 border-ink bg-paper px-3 font-bold">
+            Add a note
+          </button>
+        )}
+      </div>
+      <div className="sticky bottom-0 mt-auto bg-field pt-2 pb-3">
+        <AnswerButtons kind={meta.kind} onAnswer={answer} />
+      </div>
+    </section>
+  );
+}

@@ -1,0 +1,40 @@
+import { PageTitle } from "~/components/ui/page-title";
+import { formatDateTime } from "~/lib/format";
+import { User } from "~/services/db.server";
+import { notFound, requireRole } from "~/services/guards.server";
+import { readOutbox } from "~/services/outbox.server";
+import type { Route } from "./+types/admin.outbox";
+
+export async function loader({ request }: Route.LoaderArgs) {
+  const user = await requireRole(request, "admin");
+  const messages = await readOutbox();
+  if (!messages) notFound("The local outbox (the app is sending through a real mail provider)");
+  // The fake server holds every company's mail; an admin sees only mail to their own people.
+  const people = new Set((await User.findAll({ where: { companyId: user.companyId }, attributes: ["email"] })).map((u) => u.email));
+  return { messages: messages.filter((m) => m.to.some((t) => people.has(t))) };
+}
+
+export default function Outbox({ loaderData }: Route.ComponentProps) {
+  return (
+    <>
+      <PageTitle lead="Mail the app sent to your people while running with the local fake mail server (development only).">Outbox</PageTitle>
+      {loaderData.messages.length === 0 ? <p>No mail yet.</p> : null}
+      <ul className="space-y-3">
+        {loaderData.messages.map((m) => (
+          <li key={m.file} className="rounded-lg border-2 border-ink bg-paper p-4">
+            <p className="text-sm">
+              {formatDateTime(m.receivedAt)} UTC · to {m.to.join(", ")}
+            </p>
+            <p className="text-lg font-bold">{m.subject}</p>
+            <details className="mt-2">
+              <summary className="min-h-12 cursor-pointer py-2 font-bold">Show message</summary>
+              <pre className="overflow-x-auto text-sm whitespace-pre-wrap">{m.text}</pre>
+            </details>
+          </li>
+        ))}
+      </ul>
+    </>
+  );
+}
+
+export const meta: Route.MetaFunction = () => [{ title: "Outbox · Tankside" }];

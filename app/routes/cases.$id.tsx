@@ -1,0 +1,90 @@
+import { Link } from "react-router";
+import { PageTitle } from "~/components/ui/page-title";
+import { ANSWER_LABELS, formatDateTime, formatDuration, formatTime, OUTCOME_LABELS } from "~/lib/format";
+import { caseDetail } from "~/services/cases.server";
+import { requireUser } from "~/services/guards.server";
+import { causeList } from "~/services/guides.server";
+import type { Route } from "./+types/cases.$id";
+
+export async function loader({ request, params }: Route.LoaderArgs) {
+  const user = await requireUser(request);
+  const detail = await caseDetail(user, params.id);
+  const cause = causeList().find((c) => c.code === detail.causeCode) ?? null;
+  const states = detail.guide.definition.states;
+  return {
+    ...detail,
+    guide: { slug: detail.guide.slug, title: detail.guide.title, version: detail.guide.version },
+    cause,
+    finalPrompt: detail.finalStep ? (states[detail.finalStep]?.meta.prompt ?? null) : null,
+    events: detail.events.map((e) => ({ ...e, prompt: states[e.stepId]?.meta.prompt ?? e.stepId, kind: states[e.stepId]?.meta.kind ?? "check" })),
+  };
+}
+
+export default function CasePage({ loaderData: c }: Route.ComponentProps) {
+  const duration = c.closedAt ? formatDuration(Date.parse(c.closedAt) - Date.parse(c.openedAt)) : "still open";
+  const facts: [string, React.ReactNode][] = [
+    ["Rig", <Link to={`/rigs/${c.rig.code}`}>{c.rig.code} · {c.rig.name}</Link>],
+    ["Guide", `${c.guide.title} (version ${c.guide.version})`],
+    ["Started by", c.openedBy ?? "—"],
+    ["Opened", `${formatDateTime(c.openedAt)} UTC`],
+    ["Closed", c.closedAt ? `${formatDateTime(c.closedAt)} UTC` : "—"],
+    ["Time taken", duration],
+    ["Outcome", OUTCOME_LABELS[c.outcome]],
+    ["Cause", c.cause ? `${c.cause.name} (${c.cause.component})` : "—"],
+    ["Shut-down acknowledged", c.safetyAckAt ? `${formatTime(c.safetyAckAt)} UTC` : "no hands-on step reached"],
+    ["Engine hours", c.engineHours !== null ? `${c.engineHours} h` : "—"],
+  ];
+  return (
+    <>
+      <PageTitle lead={`${c.rig.code} · ${c.guide.title}`}>Case {OUTCOME_LABELS[c.outcome].toLowerCase()}</PageTitle>
+      {c.outcome === "open" ? (
+        <Link to={`/cases/${c.id}/walk`} className="mb-4 flex min-h-14 items-center justify-center rounded-md bg-go text-lg font-bold text-white no-underline">
+          Continue the walk-through
+        </Link>
+      ) : null}
+      <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-2 rounded-lg border-2 border-ink bg-paper p-4">
+        {facts.map(([k, v]) => (
+          <div key={k} className="contents">
+            <dt className="font-bold">{k}</dt>
+            <dd>{v}</dd>
+          </div>
+        ))}
+      </dl>
+      {c.finalPrompt ? <p className="mt-3 text-lg"><strong>Where it ended:</strong> {c.finalPrompt.replace(/\*\*/g, "")}</p> : null}
+      {c.note ? <p className="mt-2 text-lg"><strong>Crew note:</strong> {c.note}</p> : null}
+      <h2 className="mt-6 text-xl font-bold">Answers</h2>
+      <ol className="mt-2 space-y-2">
+        {c.events.map((e, i) => {
+          const gap = i === 0 ? Date.parse(e.at) - Date.parse(c.openedAt) : Date.parse(e.at) - Date.parse(c.events[i - 1].at);
+          return (
+            <li key={e.id} className={`rounded-md border-2 p-3 ${e.kind === "safety" ? "border-ink bg-caution" : "border-rule bg-paper"}`}>
+              <p className="text-sm">
+                {e.seq}. {formatTime(e.at)} UTC · +{formatDuration(gap)}
+              </p>
+              <p className="font-bold">{e.prompt.replace(/\*\*/g, "")}</p>
+              <p>→ {ANSWER_LABELS[e.answer] ?? e.answer}</p>
+              {e.note ? <p className="mt-1 italic">Note: {e.note}</p> : null}
+            </li>
+          );
+        })}
+        {c.events.length === 0 ? <li>No answers yet.</li> : null}
+      </ol>
+      <h2 className="mt-6 text-xl font-bold">Photos</h2>
+      {c.photos.length ? (
+        <ul className="mt-2 flex flex-wrap gap-3">
+          {c.photos.map((p) => (
+            <li key={p.id}>
+              <a href={`/cases/${c.id}/photos/${p.id}`}>
+                <img src={`/cases/${c.id}/photos/${p.id}`} alt={`Photo at step ${p.stepId ?? "—"}`} className="h-28 w-28 rounded border-2 border-ink object-cover" />
+              </a>
+            </li>
+          ))}
+        </ul>
+      ) : (
+        <p>No photos.</p>
+      )}
+    </>
+  );
+}
+
+export const meta: Route.MetaFunction = () => [{ title: "Case · Tankside" }];

@@ -1,0 +1,52 @@
+import { useEffect } from "react";
+import { WalkScreen } from "~/components/walk/walk-screen";
+import { stepsToEnd } from "~/lib/guides/graph";
+import { caseDetail } from "~/services/cases.server";
+import { requireUser } from "~/services/guards.server";
+import { causeList } from "~/services/guides.server";
+import type { Route } from "./+types/cases.$id.walk";
+
+export async function loader({ request, params }: Route.LoaderArgs) {
+  const user = await requireUser(request);
+  const detail = await caseDetail(user, params.id);
+  const codes = new Set(Object.values(detail.guide.definition.states).flatMap((s) => (s.meta.cause ? [s.meta.cause] : [])));
+  return {
+    caseId: detail.id,
+    closed: detail.outcome !== "open",
+    guide: detail.guide,
+    rig: detail.rig,
+    stepsToEnd: stepsToEnd(detail.guide.definition),
+    causeNames: Object.fromEntries(causeList().filter((c) => codes.has(c.code)).map((c) => [c.code, c.name])),
+    events: detail.events.map((e) => ({ id: e.id, seq: e.seq, stepId: e.stepId, answer: e.answer as "YES", at: e.at, ...(e.note ? { note: e.note } : {}) })),
+  };
+}
+
+export default function Walk({ loaderData }: Route.ComponentProps) {
+  const d = loaderData;
+  // Keep this page and its scripts on the phone so a reload with no signal still opens it.
+  useEffect(() => {
+    if (!("serviceWorker" in navigator)) return;
+    void navigator.serviceWorker.register("/sw.js").then(async () => {
+      const ready = await navigator.serviceWorker.ready;
+      const assets = performance
+        .getEntriesByType("resource")
+        .map((e) => e.name)
+        .filter((u) => u.startsWith(location.origin) && new URL(u).pathname.startsWith("/assets/"));
+      ready.active?.postMessage({ type: "keep", urls: [location.href, ...assets] });
+    });
+  }, []);
+  return (
+    <WalkScreen
+      caseId={d.caseId}
+      guide={d.guide.definition}
+      guideTitle={d.guide.title}
+      rig={d.rig}
+      stepsToEnd={d.stepsToEnd}
+      causeNames={d.causeNames}
+      serverEvents={d.events}
+      closed={d.closed}
+    />
+  );
+}
+
+export const meta: Route.MetaFunction = ({ data }) => [{ title: `${data?.rig.code ?? ""} ${data?.guide.title ?? "Walk-through"} · Tankside` }];

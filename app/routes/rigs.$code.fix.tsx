@@ -1,0 +1,105 @@
+import { useEffect, useRef, useState } from "react";
+import { Form, redirect, useFetcher, useNavigation } from "react-router";
+import { z } from "zod";
+import { startCase } from "~/services/cases.server";
+import { fail, requireUser } from "~/services/guards.server";
+import { usableGuides } from "~/services/guides.server";
+import { findRig } from "~/services/rigs.server";
+import type { Route } from "./+types/rigs.$code.fix";
+
+export async function loader({ request, params }: Route.LoaderArgs) {
+  const user = await requireUser(request);
+  const rig = await findRig(user, params.code);
+  const guides = await usableGuides(user);
+  return {
+    rig: { code: rig.code, name: rig.name, retired: rig.retired },
+    tiles: guides.map((g) => ({ slug: g.slug, title: g.title, hint: g.definition.symptoms[0] })),
+  };
+}
+
+const startForm = z.object({ guideSlug: z.string().min(1).max(80), caseId: z.string().uuid().optional().or(z.literal("").transform(() => undefined)) });
+
+export async function action({ request, params }: Route.ActionArgs) {
+  const user = await requireUser(request);
+  const parsed = startForm.safeParse(Object.fromEntries(await request.formData()));
+  if (!parsed.success) fail(400, "Pick a guide to start.");
+  const { id } = await startCase(user, { id: parsed.data.caseId, rigCode: params.code, guideSlug: parsed.data.guideSlug });
+  return redirect(`/cases/${id}/walk`);
+}
+
+interface Hit {
+  slug: string;
+  title: string;
+  score: number;
+}
+
+export default function StartFix({ loaderData }: Route.ComponentProps) {
+  const { rig, tiles } = loaderData;
+  const search = useFetcher<{ results?: Hit[]; error?: string }>();
+  const [query, setQuery] = useState("");
+  const busy = useNavigation().state !== "idle";
+  // The case id is made on the phone, so pressing twice on a slow signal still makes one case.
+  const caseId = useRef<string>("");
+  useEffect(() => {
+    caseId.current = crypto.randomUUID();
+  }, []);
+
+  useEffect(() => {
+    const q = query.trim();
+    if (q.length < 2) return;
+    const t = setTimeout(() => search.load(`/api/guides/search?q=${encodeURIComponent(q)}`), 200);
+    return () => clearTimeout(t);
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- search.load is stable enough; re-run on the words only
+  }, [query]);
+
+  const hits = query.trim().length >= 2 ? (search.data?.results ?? []) : [];
+  const StartButton = ({ slug, title, hint }: { slug: string; title: string; hint?: string }) => (
+    <Form method="post" onSubmit={(e) => ((e.currentTarget.elements.namedItem("caseId") as HTMLInputElement).value = caseId.current)}>
+      <input type="hidden" name="guideSlug" value={slug} />
+      <input type="hidden" name="caseId" value="" />
+      <button type="submit" disabled={busy} className="flex min-h-16 w-full flex-col items-start justify-center rounded-lg border-2 border-ink bg-paper px-4 py-2 text-left">
+        <span className="text-xl font-bold">{title}</span>
+        {hint ? <span className="text-base">“{hint}”</span> : null}
+      </button>
+    </Form>
+  );
+
+  return (
+    <>
+      <h1 className="text-3xl font-bold">What is {rig.code} doing?</h1>
+      <p className="mt-1 text-lg">{rig.name}</p>
+      {rig.retired ? <p className="mt-2 font-bold text-stop">This rig is retired; a fix cannot be started on it.</p> : null}
+      <label htmlFor="symptom" className="mt-5 block text-lg font-bold">
+        Say it in your own words
+      </label>
+      <input
+        id="symptom"
+        type="search"
+        value={query}
+        onChange={(e) => setQuery(e.target.value)}
+        placeholder="e.g. pump won't pick up water"
+        autoComplete="off"
+        className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink bg-paper px-3 text-lg"
+      />
+      {hits.length ? (
+        <section aria-label="Matching guides" className="mt-3 space-y-2">
+          {hits.slice(0, 3).map((h) => (
+            <StartButton key={h.slug} slug={h.slug} title={h.title} />
+          ))}
+        </section>
+      ) : query.trim().length >= 2 && search.state === "idle" && search.data ? (
+        <p className="mt-2">No guide matches those words. Pick one below.</p>
+      ) : null}
+      <h2 className="mt-6 text-xl font-bold">Or tap what it looks like</h2>
+      <ul className="mt-2 grid gap-2 sm:grid-cols-2">
+        {tiles.map((t) => (
+          <li key={t.slug}>
+            <StartButton {...t} />
+          </li>
+        ))}
+      </ul>
+    </>
+  );
+}
+
+export const meta: Route.MetaFunction = ({ data }) => [{ title: `Fix ${data?.rig.code ?? ""} · Tankside` }];

@@ -1,0 +1,36 @@
+import QRCode from "qrcode";
+import { requireUser } from "~/services/guards.server";
+import { env } from "~/services/env.server";
+import { findRig } from "~/services/rigs.server";
+import type { Route } from "./+types/rigs.$code.label";
+
+export async function loader({ request, params }: Route.LoaderArgs) {
+  const user = await requireUser(request);
+  const rig = await findRig(user, params.code);
+  const url = `${env().APP_URL}/rigs/${rig.code}/fix`;
+  const svg = await QRCode.toString(url, { type: "svg", errorCorrectionLevel: "M", margin: 1, color: { dark: "#000000", light: "#ffffff" } });
+  return { code: rig.code, name: rig.name, company: user.companyName, url, svg };
+}
+
+/** A printable label for the rig: scanning it opens "start a fix" for this rig. */
+export default function RigLabel({ loaderData }: Route.ComponentProps) {
+  const { code, name, company, url, svg } = loaderData;
+  return (
+    <main className="mx-auto max-w-sm bg-white p-6 text-black">
+      <div className="rounded-xl border-8 border-black p-5 text-center">
+        <p className="text-lg font-bold">{company}</p>
+        <p className="text-6xl font-bold tracking-wide">{code}</p>
+        <p className="text-xl">{name}</p>
+        {/* The SVG comes from the QR library, built from our own URL; no user text is in it. */}
+        <div className="mx-auto my-4 w-64" role="img" aria-label={`QR code for ${url}`} dangerouslySetInnerHTML={{ __html: svg }} />
+        <p className="text-lg font-bold">Rig acting up? Scan to start a fix.</p>
+        <p className="mt-1 text-sm break-all">{url}</p>
+      </div>
+      <button type="button" onClick={() => window.print()} className="no-print mt-4 min-h-14 w-full rounded-md bg-go text-lg font-bold text-white">
+        Print label
+      </button>
+    </main>
+  );
+}
+
+export const meta: Route.MetaFunction = ({ data }) => [{ title: `Label ${data?.code ?? ""} · Tankside` }];
