@@ -42,10 +42,10 @@ export default function CasePage({ loaderData: c }: Route.ComponentProps) {
           Continue the walk-through
         </Link>
       ) : null}
-      <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-2 rounded-lg border-2 border-ink bg-paper p-4">
+      <dl className="grid grid-cols-1 gap-x-4 rounded-lg border-2 border-ink bg-paper p-4 sm:grid-cols-[auto_1fr] sm:gap-y-2">
         {facts.map(([k, v]) => (
           <div key={k} className="contents">
-            <dt className="font-bold">{k}</dt>
+            <dt className="mt-2 font-bold sm:mt-0">{k}</dt>
             <dd>{v}</dd>
           </div>
         ))}

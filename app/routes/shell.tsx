@@ -17,37 +17,36 @@ export default function Shell({ loaderData }: Route.ComponentProps) {
   return (
     <div className="min-h-dvh">
       <header className="no-print bg-go text-white">
-        <div className="mx-auto flex max-w-3xl flex-wrap items-center justify-between gap-2 px-4 py-3">
-          <a href="/" className="text-2xl font-bold text-white no-underline">
+        <div className="mx-auto flex max-w-3xl items-center justify-between gap-2 px-3 pt-2">
+          <a href="/" className="text-xl font-bold text-white no-underline">
             Tankside
           </a>
-          <div className="text-right text-sm leading-tight">
-            <div className="font-bold">{user.name}</div>
-            <div>
-              {user.companyName} · {ROLE_LABELS[user.role]}
-            </div>
-          </div>
+          <p className="truncate text-right text-sm leading-tight">
+            {user.name} · {ROLE_LABELS[user.role]}
+            <span className="sr-only"> at </span>
+            <span className="block">{user.companyName}</span>
+          </p>
         </div>
-        <nav aria-label="Main" className="mx-auto max-w-3xl px-2 pb-2">
-          <ul className="flex flex-wrap gap-1">
+        <nav aria-label="Main" className="mx-auto max-w-3xl px-1 pb-1">
+          <ul className="flex flex-wrap items-center gap-x-1">
             {navFor(user.role)
               .filter((item) => !hidden.includes(item.to))
               .map((item) => (
-              <li key={item.to}>
-                <NavLink
-                  to={item.to}
-                  end
-                  className={({ isActive }) =>
-                    `block min-h-12 rounded-md px-3 py-3 font-bold text-white no-underline ${isActive ? "bg-go-dark ring-2 ring-white" : "hover:bg-go-dark"}`
-                  }
-                >
-                  {item.label}
-                </NavLink>
-              </li>
-            ))}
+                <li key={item.to}>
+                  <NavLink
+                    to={item.to}
+                    end
+                    className={({ isActive }) =>
+                      `flex min-h-12 items-center rounded-md px-2 font-bold text-white no-underline ${isActive ? "underline decoration-caution decoration-4 underline-offset-8" : ""}`
+                    }
+                  >
+                    {item.label}
+                  </NavLink>
+                </li>
+              ))}
             <li className="ml-auto">
               <Form method="post" action="/logout">
-                <button type="submit" className="min-h-12 rounded-md border-2 border-white px-3 font-bold">
+                <button type="submit" className="min-h-12 rounded-md px-2 font-bold underline">
                   Sign out
                 </button>
               </Form>
@@ -55,7 +54,7 @@ export default function Shell({ loaderData }: Route.ComponentProps) {
           </ul>
         </nav>
       </header>
-      <main className="mx-auto max-w-3xl px-4 py-5">
+      <main className="mx-auto max-w-3xl px-3 py-4">
         <Outlet />
       </main>
     </div>

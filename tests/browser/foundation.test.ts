@@ -33,7 +33,8 @@ describe("sign-in and navigation at 360 px", () => {
   ])("%s sees the %s navigation and their company", async (email, role, expected) => {
     const p = await freshPage();
     await signIn(p, app.url, email);
-    await p.getByText(`Cedar Flats Erosion Control · ${role}`).waitFor();
+    await p.getByText(`· ${role}`).waitFor();
+    await p.getByText("Cedar Flats Erosion Control").waitFor();
     expect(await navLabels(p)).toEqual(expected);
     expect(await p.getByText("BM-01").count()).toBe(0);
     await p.close();

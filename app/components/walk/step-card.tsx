@@ -42,22 +42,27 @@ export function StepCard({
     <section aria-labelledby="step-prompt" className="flex flex-1 flex-col gap-4">
       {safety ? <SafetyCaution compact /> : null}
       <div className={`rounded-lg border-2 p-4 ${safety ? "border-ink bg-caution" : "border-ink bg-paper"}`}>
-        <p className="text-sm font-bold uppercase tracking-wide">
+        <h1 className="text-sm font-bold tracking-wide uppercase">
           {safety ? "Shut-down stop" : meta.kind === "check" ? "Check" : "Do this"}
           {meta.minutes ? ` · about ${meta.minutes < 1 ? "½" : meta.minutes} min` : ""}
           {meta.handsOn ? " · hands-on" : ""}
-        </p>
-        <h1 id="step-prompt" className="mt-1 text-2xl leading-snug font-bold">
-          <Markdown>{meta.prompt}</Markdown>
         </h1>
-        {meta.help ? (
+        <div id="step-prompt" className={`mt-1 leading-snug ${safety ? "text-xl" : "text-[1.45rem] font-bold"}`}>
+          <Markdown>{meta.prompt}</Markdown>
+        </div>
+        {meta.help && safety ? <Markdown className="mt-3 text-base">{meta.help}</Markdown> : null}
+        {meta.help && !safety ? (
           <div className="mt-3">
             <button type="button" aria-expanded={showHelp} onClick={() => setShowHelp(!showHelp)} className="min-h-12 rounded-md border-2 border-ink px-3 font-bold">
               {showHelp ? "Less" : "More about this"}
             </button>
-            {showHelp || safety ? <Markdown className="mt-2 text-lg">{meta.help}</Markdown> : null}
+            {showHelp ? <Markdown className="mt-2 text-lg">{meta.help}</Markdown> : null}
           </div>
         ) : null}
+      </div>
+      {/* Answers stay under the thumb; the shut-down stop is read to the end before it is acknowledged. */}
+      <div className={safety ? "pb-2" : "sticky bottom-0 z-10 -mx-3 border-t-2 border-ink bg-field px-3 pt-2 pb-3"}>
+        <AnswerButtons kind={meta.kind} onAnswer={answer} />
       </div>
       {children}
       <div>
@@ -71,9 +76,6 @@ export function StepCard({
             Add a note
           </button>
         )}
-      </div>
-      <div className="sticky bottom-0 mt-auto bg-field pt-2 pb-3">
-        <AnswerButtons kind={meta.kind} onAnswer={answer} />
       </div>
     </section>
   );

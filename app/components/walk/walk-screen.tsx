@@ -50,7 +50,7 @@ export function WalkScreen({ caseId, guide, guideTitle, rig, stepsToEnd, causeNa
     update((r) => appendEvent(r, { id: crypto.randomUUID(), stepId, answer, at: new Date().toISOString(), ...(note.trim() ? { note: note.trim() } : {}) }));
 
   return (
-    <div className="flex min-h-[calc(100dvh-9rem)] flex-col gap-3">
+    <div className="flex flex-col gap-3">
       <header className="flex flex-wrap items-baseline justify-between gap-2">
         <p className="text-lg">
           <strong>{rig.code}</strong> · {guideTitle}
@@ -60,7 +60,6 @@ export function WalkScreen({ caseId, guide, guideTitle, rig, stepsToEnd, causeNa
           {atEnd ? " · end" : ` · at least ${stepsToEnd[here]} more to an end`}
         </p>
       </header>
-      <SyncBadge online={sync.online} waiting={sync.waiting} rejected={record.rejected} />
       {closed && !record.close ? <p className="font-bold">This case is already closed.</p> : null}
       {atEnd ? (
         <EndCard
@@ -89,6 +88,7 @@ export function WalkScreen({ caseId, guide, guideTitle, rig, stepsToEnd, causeNa
           <PhotoPicker caseId={caseId} stepId={here} online={sync.online} />
         </StepCard>
       )}
+      <SyncBadge online={sync.online} waiting={sync.waiting} rejected={record.rejected} />
       {path.length > 1 && !record.close ? (
         <button type="button" onClick={() => record_("BACK", here)} className="min-h-14 rounded-lg border-2 border-ink bg-paper text-lg font-bold">
           Back one step
