@@ -2,6 +2,8 @@ import type { Config } from "@react-router/dev/config";
 
 export default {
   ssr: true,
+  // Every route in the first manifest: a walk-through opened with no signal must not need to fetch more.
+  routeDiscovery: { mode: "initial" },
   future: {
     v8_middleware: true,
     v8_splitRouteModules: true,

@@ -5,13 +5,26 @@ const CACHE = "tankside-walk-v1";
 self.addEventListener("install", () => self.skipWaiting());
 self.addEventListener("activate", (event) => event.waitUntil(self.clients.claim()));
 
-// The page names what to keep once the worker is ready (it was loaded before the worker ran).
+// The page names what to keep once the worker is ready (it was loaded before the worker ran),
+// and hears back on its port when all of it is kept.
 self.addEventListener("message", (event) => {
   if (event.data?.type !== "keep") return;
+  const port = event.ports[0];
   event.waitUntil(
-    caches.open(CACHE).then((cache) =>
-      Promise.all(event.data.urls.map((url) => fetch(url, { credentials: "same-origin" }).then((res) => res.ok && cache.put(url, res)).catch(() => {}))),
-    ),
+    caches
+      .open(CACHE)
+      .then((cache) =>
+        Promise.all(
+          event.data.urls.map((url) =>
+            fetch(url, { credentials: "same-origin" }).then((res) => {
+              if (!res.ok) throw new Error(`${url}: ${res.status}`);
+              return cache.put(url, res);
+            }),
+          ),
+        ),
+      )
+      .then(() => port?.postMessage({ kept: true }))
+      .catch(() => port?.postMessage({ kept: false })),
   );
 });
 

@@ -29,7 +29,12 @@ export function buildIfStale(root = process.cwd(), log: (line: string) => void =
     return false;
   }
   log("Building the app…");
-  execFileSync(path.join(root, "node_modules/.bin/react-router"), ["build"], { cwd: root, stdio: ["ignore", "ignore", "inherit"] });
+  // Always a production build, even when called from the tests (where NODE_ENV is "test").
+  execFileSync(path.join(root, "node_modules/.bin/react-router"), ["build"], {
+    cwd: root,
+    stdio: ["ignore", "ignore", "inherit"],
+    env: { ...process.env, NODE_ENV: "production" },
+  });
   fs.writeFileSync(stamp, current);
   return true;
 }

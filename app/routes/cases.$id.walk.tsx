@@ -1,4 +1,4 @@
-import { useEffect } from "react";
+import { useEffect, useState } from "react";
 import { WalkScreen } from "~/components/walk/walk-screen";
 import { stepsToEnd } from "~/lib/guides/graph";
 import { caseDetail } from "~/services/cases.server";
@@ -23,18 +23,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
 
 export default function Walk({ loaderData }: Route.ComponentProps) {
   const d = loaderData;
-  // Keep this page and its scripts on the phone so a reload with no signal still opens it.
-  useEffect(() => {
-    if (!("serviceWorker" in navigator)) return;
-    void navigator.serviceWorker.register("/sw.js").then(async () => {
-      const ready = await navigator.serviceWorker.ready;
-      const assets = performance
-        .getEntriesByType("resource")
-        .map((e) => e.name)
-        .filter((u) => u.startsWith(location.origin) && new URL(u).pathname.startsWith("/assets/"));
-      ready.active?.postMessage({ type: "keep", urls: [location.href, ...assets] });
-    });
-  }, []);
+  const offlineReady = useKeepForNoSignal();
   return (
     <WalkScreen
       caseId={d.caseId}
@@ -45,8 +34,31 @@ export default function Walk({ loaderData }: Route.ComponentProps) {
       causeNames={d.causeNames}
       serverEvents={d.events}
       closed={d.closed}
+      offlineReady={offlineReady}
     />
   );
+}
+
+/** Keeps this page and its scripts on the phone so a reload with no signal still opens it; true once kept. */
+function useKeepForNoSignal(): boolean {
+  const [kept, setKept] = useState(false);
+  useEffect(() => {
+    if (!("serviceWorker" in navigator)) return;
+    void navigator.serviceWorker
+      .register("/sw.js")
+      .then(async () => {
+        const worker = (await navigator.serviceWorker.ready).active;
+        const assets = performance
+          .getEntriesByType("resource")
+          .map((e) => e.name)
+          .filter((u) => u.startsWith(location.origin) && new URL(u).pathname.startsWith("/assets/"));
+        const channel = new MessageChannel();
+        channel.port1.onmessage = (e) => setKept(e.data?.kept === true);
+        worker?.postMessage({ type: "keep", urls: [location.href, ...assets] }, [channel.port2]);
+      })
+      .catch(() => setKept(false));
+  }, []);
+  return kept;
 }
 
 export const meta: Route.MetaFunction = ({ data }) => [{ title: `${data?.rig.code ?? ""} ${data?.guide.title ?? "Walk-through"} · Tankside` }];

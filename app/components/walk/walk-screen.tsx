@@ -18,11 +18,12 @@ export interface WalkScreenProps {
   causeNames: Record<string, string>;
   serverEvents: QueuedEvent[];
   closed: boolean;
+  offlineReady?: boolean;
   renderCalc?: (calc: string) => React.ReactNode;
 }
 
 /** The crew's walk-through: state lives on the phone, the server hears about it in batches. */
-export function WalkScreen({ caseId, guide, guideTitle, rig, stepsToEnd, causeNames, serverEvents, closed, renderCalc }: WalkScreenProps) {
+export function WalkScreen({ caseId, guide, guideTitle, rig, stepsToEnd, causeNames, serverEvents, closed, offlineReady, renderCalc }: WalkScreenProps) {
   const machine = useMemo(() => compileGuide(guide), [guide]);
   const [record, setRecord] = useState<WalkRecord>(() => mergeServerEvents({ caseId, events: [], synced: [] }, serverEvents));
   const [note, setNote] = useState("");
@@ -89,6 +90,7 @@ export function WalkScreen({ caseId, guide, guideTitle, rig, stepsToEnd, causeNa
         </StepCard>
       )}
       <SyncBadge online={sync.online} waiting={sync.waiting} rejected={record.rejected} />
+      {offlineReady ? <p className="text-base">This walk-through is kept on this phone: it opens again even with no signal.</p> : null}
       {path.length > 1 && !record.close ? (
         <button type="button" onClick={() => record_("BACK", here)} className="min-h-14 rounded-lg border-2 border-ink bg-paper text-lg font-bold">
           Back one step

@@ -1,0 +1,102 @@
+import { randomUUID } from "node:crypto";
+import { beforeAll, describe, expect, it } from "vitest";
+import { Case, CasePhoto, Company, GuideVersion, Rig, User } from "../../db/index";
+import { action as photoAction } from "~/routes/api.cases.$id.photos";
+import { loader as caseLoader } from "~/routes/cases.$id";
+import { loader as photoLoader } from "~/routes/cases.$id.photos.$photoId";
+import { loader as walkLoader } from "~/routes/cases.$id.walk";
+import { action as fixAction, loader as fixLoader } from "~/routes/rigs.$code.fix";
+import { loader as labelLoader } from "~/routes/rigs.$code.label";
+import { resetDatabase } from "../helpers/db";
+import { requestAs, run } from "../helpers/requests";
+
+const DANA = "dana@cedarflats.example";
+const SAM = "sam@bluemesa.example";
+const args = (request: Request, params: Record<string, string> = {}) => ({ request, params, context: {} }) as never;
+let caseId: string;
+
+// A real JPEG's first bytes are enough for the type check; the rest is padding.
+const jpegBytes = (size: number) => {
+  const b = new Uint8Array(size);
+  b.set([0xff, 0xd8, 0xff, 0xe0, 0x00, 0x10, 0x4a, 0x46, 0x49, 0x46, 0x00, 0x01]);
+  return b;
+};
+const upload = async (email: string, id: string, bytes: Uint8Array, name: string) => {
+  const form = new FormData();
+  form.set("stepId", "agitator-speed");
+  form.set("photo", new File([bytes], name, { type: "image/jpeg" }));
+  return run(async () => photoAction(args(await requestAs(email, `/api/cases/${id}/photos`, { method: "POST", body: form }), { id })));
+};
+
+beforeAll(async () => {
+  await resetDatabase();
+  const cedar = await Company.findOne({ where: { slug: "cedar-flats" } });
+  const rig = await Rig.findOne({ where: { code: "CF-07" } });
+  const dana = await User.findOne({ where: { email: DANA } });
+  const version = await GuideVersion.findOne();
+  caseId = randomUUID();
+  await Case.create({
+    id: caseId, companyId: cedar!.id, rigId: rig!.id, guideVersionId: version!.id, openedBy: dana!.id, openedAt: new Date(),
+    closedAt: null, engineHours: null, finalStep: null, causeCode: null, safetyAckAt: null, note: null,
+  });
+});
+
+describe("photos", () => {
+  it("stores a JPEG under a key the server makes, and serves it to the company", async () => {
+    const res = await upload(DANA, caseId, jpegBytes(2048), "../../etc/passwd.jpg");
+    expect(res.status).toBe(201);
+    const photo = await CasePhoto.findByPk(res.data.id);
+    expect(photo!.storageKey).toMatch(new RegExp(`^companies/\\d+/cases/${caseId}/[0-9a-f-]{36}\\.jpg$`));
+    const served = (await photoLoader(args(await requestAs(DANA, "/x"), { id: caseId, photoId: String(res.data.id) }))) as Response;
+    expect(served.headers.get("Content-Type")).toBe("image/jpeg");
+    expect(new Uint8Array(await served.arrayBuffer()).slice(0, 3)).toEqual(new Uint8Array([0xff, 0xd8, 0xff]));
+  });
+
+  it("refuses a text file renamed .jpg, and saves nothing", async () => {
+    const before = await CasePhoto.count();
+    const res = await upload(DANA, caseId, new TextEncoder().encode("just some notes, not a photo\n".repeat(20)), "notes.jpg");
+    expect(res.status).toBe(415);
+    expect(res.data.error).toMatch(/not a photo/);
+    expect(await CasePhoto.count()).toBe(before);
+  });
+
+  it("refuses an 11 MB image with 413", async () => {
+    const before = await CasePhoto.count();
+    const res = await upload(DANA, caseId, jpegBytes(11 * 1024 * 1024), "huge.jpg");
+    expect(res.status).toBe(413);
+    expect(res.data.error).toMatch(/at most 10 MB/);
+    expect(await CasePhoto.count()).toBe(before);
+  });
+});
+
+describe("another company's ids answer 404 on every case page", () => {
+  it.each([
+    ["case page", () => caseLoader],
+    ["walk-through", () => walkLoader],
+  ])("%s", async (_name, loader) => {
+    expect((await run(async () => loader()(args(await requestAs(SAM, `/cases/${caseId}`), { id: caseId })))).status).toBe(404);
+    expect((await run(async () => loader()(args(await requestAs(DANA, `/cases/${caseId}`), { id: caseId })))).status).toBe(200);
+  });
+
+  it("photo upload and photo view", async () => {
+    expect((await upload(SAM, caseId, jpegBytes(100), "x.jpg")).status).toBe(404);
+    const photo = await CasePhoto.findOne();
+    expect((await run(async () => photoLoader(args(await requestAs(SAM, "/x"), { id: caseId, photoId: String(photo!.id) })))).status).toBe(404);
+  });
+
+  it("start-a-fix and the rig label", async () => {
+    for (const loader of [fixLoader, labelLoader]) {
+      expect((await run(async () => loader(args(await requestAs(SAM, "/rigs/CF-07/fix"), { code: "CF-07" })))).status).toBe(404);
+    }
+    const start = await run(async () => fixAction(args(await requestAs(SAM, "/rigs/CF-07/fix", { form: { guideSlug: "foaming" } }), { code: "CF-07" })));
+    expect(start.status).toBe(404);
+  });
+});
+
+describe("rig label", () => {
+  it("carries a QR code that opens start-a-fix for the rig", async () => {
+    const res = await run(async () => labelLoader(args(await requestAs(DANA, "/rigs/CF-07/label"), { code: "CF-07" })));
+    expect(res.data.url).toMatch(/\/rigs\/CF-07\/fix$/);
+    expect(res.data.svg).toMatch(/^<svg/);
+  });
+});
