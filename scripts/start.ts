@@ -45,7 +45,7 @@ async function main() {
   console.log("Local fake SMTP (mail kept in .data/outbox, shown at /admin/outbox) and fake S3 (.data/s3) are up.");
   const applied = await migrateUp(db());
   if (applied.length) console.log(`Applied migrations: ${applied.join(", ")}`);
-  await seedAll();
+  await seedAll({ history: true });
   await closeDb();
   if (!dev) buildIfStale(root);
 

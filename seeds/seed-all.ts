@@ -1,10 +1,15 @@
 import { loadLibrary } from "../app/lib/guides/files";
 import { seedDemo } from "./demo";
+import { seedDemoHistory } from "./demo-history";
 import { importBuiltinGuides } from "./import-guides";
 
-/** Everything the first start puts in the database. Safe to run on every start. */
-export async function seedAll(log: (line: string) => void = console.log): Promise<void> {
-  await seedDemo(log);
+/**
+ * Everything a start puts in the database; safe to run on every start. The year of demo
+ * history is added only with `history` (npm start), not for the tests' clean databases.
+ */
+export async function seedAll({ history = false, log = console.log }: { history?: boolean; log?: (line: string) => void } = {}): Promise<void> {
+  const fresh = await seedDemo(log);
   const { created, updated } = await importBuiltinGuides(loadLibrary());
   if (created || updated) log(`Guide library: ${created} new, ${updated} updated.`);
+  if (fresh && history) await seedDemoHistory(new Date(), log);
 }

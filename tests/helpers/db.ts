@@ -13,5 +13,5 @@ export async function resetDatabase({ seed = true } = {}) {
     for (const t of tables) await sequelize.query(`TRUNCATE TABLE \`${t}\``, { transaction });
     await sequelize.query("SET FOREIGN_KEY_CHECKS = 1", { transaction });
   });
-  if (seed) await seedAll(() => {});
+  if (seed) await seedAll({ log: () => {} });
 }

@@ -17,11 +17,11 @@ let caseId: string;
 
 // A real JPEG's first bytes are enough for the type check; the rest is padding.
 const jpegBytes = (size: number) => {
-  const b = new Uint8Array(size);
+  const b = new Uint8Array(new ArrayBuffer(size));
   b.set([0xff, 0xd8, 0xff, 0xe0, 0x00, 0x10, 0x4a, 0x46, 0x49, 0x46, 0x00, 0x01]);
   return b;
 };
-const upload = async (email: string, id: string, bytes: Uint8Array, name: string) => {
+const upload = async (email: string, id: string, bytes: Uint8Array<ArrayBuffer>, name: string) => {
   const form = new FormData();
   form.set("stepId", "agitator-speed");
   form.set("photo", new File([bytes], name, { type: "image/jpeg" }));

@@ -1,0 +1,51 @@
+import { beforeAll, describe, expect, it } from "vitest";
+import { QueryTypes } from "sequelize";
+import { Case, db } from "../../db/index";
+import { seedDemoHistory } from "../../seeds/demo-history";
+import { resetDatabase } from "../helpers/db";
+
+const now = new Date(Date.UTC(2026, 11, 1));
+let count = 0;
+
+beforeAll(async () => {
+  await resetDatabase();
+  count = await seedDemoHistory(now, () => {});
+});
+
+const perRig = () =>
+  db().query<{ code: string; n: number; hours: number }>(
+    "SELECT r.code, COUNT(*) AS n, MAX(c.engine_hours) - MIN(c.engine_hours) AS hours FROM cases c JOIN rigs r ON r.id = c.rig_id GROUP BY r.code ORDER BY r.code",
+    { type: QueryTypes.SELECT },
+  );
+
+describe("demo history", () => {
+  it("holds at least 2,000 cases over the year, for both companies", async () => {
+    expect(count).toBeGreaterThanOrEqual(2000);
+    const oldest = await Case.min<Date, Case>("openedAt");
+    expect(now.getTime() - new Date(oldest).getTime()).toBeGreaterThan(200 * 86_400_000);
+    const companies = await db().query("SELECT DISTINCT company_id FROM cases", { type: QueryTypes.SELECT });
+    expect(companies).toHaveLength(2);
+  });
+
+  it("makes CF-03 clearly worse than CF-11, with engine hours rising", async () => {
+    const rows = Object.fromEntries((await perRig()).map((r) => [r.code, r]));
+    expect(Number(rows["CF-03"].n)).toBeGreaterThan(3 * Number(rows["CF-11"].n));
+    expect(Number(rows["CF-07"].hours)).toBeGreaterThan(500);
+  });
+
+  it("contains repeats: the same cause on the same rig within 30 days", async () => {
+    const [row] = await db().query<{ repeats: number }>(
+      `SELECT COUNT(*) AS repeats FROM cases a JOIN cases b ON a.rig_id = b.rig_id AND a.cause_code = b.cause_code
+       AND b.opened_at > a.opened_at AND b.opened_at <= a.opened_at + INTERVAL 30 DAY WHERE a.cause_code = 'suction-air-leak'`,
+      { type: QueryTypes.SELECT },
+    );
+    expect(Number(row.repeats)).toBeGreaterThan(10);
+  });
+
+  it("is the same every time from its fixed seed", async () => {
+    const first = await perRig();
+    await resetDatabase();
+    await seedDemoHistory(now, () => {});
+    expect(await perRig()).toEqual(first);
+  });
+});
