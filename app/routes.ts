@@ -5,6 +5,7 @@ export default [
   route("logout", "routes/logout.tsx"),
   route("healthz", "routes/healthz.ts"),
   route("api/guides/search", "routes/api.guides.search.ts"),
+  route("api/calc/:kind", "routes/api.calc.$kind.ts"),
   route("api/cases", "routes/api.cases.ts"),
   route("api/cases/:id", "routes/api.cases.$id.ts"),
   route("api/cases/:id/events", "routes/api.cases.$id.events.ts"),
@@ -22,5 +23,7 @@ export default [
     route("cases/:id", "routes/cases.$id.tsx"),
     route("cases/:id/walk", "routes/cases.$id.walk.tsx"),
     route("admin/outbox", "routes/admin.outbox.tsx"),
+    route("tools", "routes/tools.tsx"),
+    route("tools/:tool", "routes/tools.$tool.tsx"),
   ]),
 ] satisfies RouteConfig;

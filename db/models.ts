@@ -19,6 +19,11 @@ export interface NozzleTip {
   widthFt: number;
 }
 
+export interface TorqueSpec {
+  part: string;
+  ftLb: number;
+}
+
 export class Company extends Model<InferAttributes<Company>, InferCreationAttributes<Company>> {
   declare id: CreationOptional<number>;
   declare name: string;
@@ -55,6 +60,7 @@ export class Rig extends Model<InferAttributes<Rig>, InferCreationAttributes<Rig
   declare hoseDiameterIn: number;
   declare yardElevationFt: CreationOptional<number>;
   declare nozzleTips: NozzleTip[];
+  declare torqueSpecs: CreationOptional<TorqueSpec[]>;
   declare notes: string | null;
   declare retired: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
@@ -189,6 +195,7 @@ export function initModels(sequelize: Sequelize) {
       hoseDiameterIn: decimal(4, 2, "hoseDiameterIn"),
       yardElevationFt: { type: DataTypes.INTEGER, defaultValue: 0 },
       nozzleTips: DataTypes.JSON,
+      torqueSpecs: { type: DataTypes.JSON, defaultValue: [] },
       notes: DataTypes.TEXT,
       retired: { type: DataTypes.BOOLEAN, defaultValue: false },
       ...timestamps,

@@ -4,7 +4,8 @@
  */
 import { db, Company, Rig, User } from "../db/index";
 import { hashPassword } from "../app/lib/password";
-import { rigInputSchema, type RigInput } from "../app/lib/rig-schema";
+import type { z } from "zod";
+import { rigInputSchema } from "../app/lib/rig-schema";
 import { DEMO_PASSWORD, DEMO_PEOPLE } from "./demo-people";
 
 const COMPANIES = [
@@ -12,18 +13,20 @@ const COMPANIES = [
   { slug: "blue-mesa", name: "Blue Mesa Land Works" },
 ] as const;
 
-const RIGS: Record<(typeof COMPANIES)[number]["slug"], RigInput[]> = {
+const RIGS: Record<(typeof COMPANIES)[number]["slug"], z.input<typeof rigInputSchema>[]> = {
   "cedar-flats": [
     {
       code: "CF-03", name: "Old Blue", mount: "truck", tankGal: 800, pumpKind: "Centrifugal 2 in, belt clutch", hasHourMeter: true,
       engineHours: 4120, hoseLengthFt: 200, hoseDiameterIn: 1.5, yardElevationFt: 420,
       nozzleTips: [{ name: "Wide fan", reachFt: 40, widthFt: 12 }, { name: "Narrow fan", reachFt: 70, widthFt: 6 }],
+      torqueSpecs: [{ part: "Agitator bearing flange bolts", ftLb: 25 }, { part: "Pump mount bolts", ftLb: 45 }],
       notes: "Suction clamp on this one has been replaced twice.",
     },
     {
       code: "CF-07", name: "Trailer Seven", mount: "trailer", tankGal: 1500, pumpKind: "Centrifugal 3 in, electric clutch", hasHourMeter: true,
       engineHours: 2310.5, hoseLengthFt: 300, hoseDiameterIn: 1.5, yardElevationFt: 420,
       nozzleTips: [{ name: "Wide fan", reachFt: 50, widthFt: 15 }, { name: "Narrow fan", reachFt: 90, widthFt: 8 }, { name: "Long range", reachFt: 150, widthFt: 4 }],
+      torqueSpecs: [{ part: "Agitator bearing flange bolts", ftLb: 25 }, { part: "Pump mount bolts", ftLb: 50 }, { part: "Tank hold-down bolts", ftLb: 75 }],
     },
     {
       code: "CF-11", name: "Big Cedar", mount: "truck", tankGal: 3000, pumpKind: "Centrifugal 4 in, electric clutch", hasHourMeter: true,

@@ -16,13 +16,14 @@ export function RigForm({
 }) {
   const [form, fields] = useForm({
     lastResult,
-    defaultValue: defaultValue ?? { mount: "truck", hasHourMeter: true, engineHours: 0, yardElevationFt: 0, nozzleTips: [] },
+    defaultValue: defaultValue ?? { mount: "truck", hasHourMeter: true, engineHours: 0, yardElevationFt: 0, nozzleTips: [], torqueSpecs: [] },
     onValidate: ({ formData }) => parseWithZod(formData, { schema: rigInputSchema }),
     // Not on blur: a message appearing as focus leaves would move the Save button under the thumb.
     shouldValidate: "onSubmit",
     shouldRevalidate: "onInput",
   });
   const tips = fields.nozzleTips.getFieldList();
+  const specs = fields.torqueSpecs.getFieldList();
   const number = (f: typeof fields.tankGal) => ({ ...getInputProps(f, { type: "text" }), inputMode: "decimal" as const });
 
   return (
@@ -92,6 +93,28 @@ export function RigForm({
         })}
         <button {...form.insert.getButtonProps({ name: fields.nozzleTips.name })} className="min-h-12 rounded-md border-2 border-ink px-3 font-bold">
           Add a tip
+        </button>
+      </fieldset>
+      <fieldset className="space-y-3 rounded-md border-2 border-rule p-3">
+        <legend className="px-1 font-bold">Torque figures (your company's, per part)</legend>
+        {specs.map((spec, index) => {
+          const t = spec.getFieldset();
+          return (
+            <div key={spec.key} className="grid gap-2 border-b border-rule pb-3">
+              <FormField field={t.part} label={`Part ${index + 1}`}>
+                <input {...getInputProps(t.part, { type: "text" })} className={inputClass} />
+              </FormField>
+              <FormField field={t.ftLb} label="Torque (ft·lb)">
+                <input {...number(t.ftLb)} className={inputClass} />
+              </FormField>
+              <button {...form.remove.getButtonProps({ name: fields.torqueSpecs.name, index })} className="min-h-12 rounded-md border-2 border-ink px-3 font-bold">
+                Remove part {index + 1}
+              </button>
+            </div>
+          );
+        })}
+        <button {...form.insert.getButtonProps({ name: fields.torqueSpecs.name })} className="min-h-12 rounded-md border-2 border-ink px-3 font-bold">
+          Add a torque figure
         </button>
       </fieldset>
       <FormField field={fields.notes} label="Notes">

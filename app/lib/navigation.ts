@@ -10,6 +10,7 @@ export interface NavItem {
 export const NAV_ITEMS: NavItem[] = [
   { to: "/", label: "Start a fix", minRole: "crew" },
   { to: "/rigs", label: "Rigs", minRole: "crew" },
+  { to: "/tools", label: "Field math", minRole: "crew" },
   { to: "/rigs/new", label: "Add a rig", minRole: "admin" },
   { to: "/admin/outbox", label: "Outbox", minRole: "admin" },
 ];

@@ -7,6 +7,12 @@ export const nozzleTipSchema = z.object({
   widthFt: z.number({ error: "Give the pattern width in feet." }).min(0.5, "Width must be at least 0.5 ft.").max(100, "Width over 100 ft is not plausible."),
 });
 
+/** A tightening figure the company uses for one part of the rig. */
+export const torqueSpecSchema = z.object({
+  part: z.string({ error: "Name the part." }).trim().min(1, "Name the part.").max(80, "Keep the part name under 80 characters."),
+  ftLb: z.number({ error: "Give the torque in ft·lb." }).min(1, "Torque must be at least 1 ft·lb.").max(2000, "Over 2,000 ft·lb is not a rig part figure."),
+});
+
 /** The one definition of a rig's editable fields: forms, API and seeds all use it. */
 export const rigInputSchema = z.object({
   code: z
@@ -39,6 +45,7 @@ export const rigInputSchema = z.object({
     .min(-300, "Elevation below −300 ft is not plausible.")
     .max(14_000, "Elevation above 14,000 ft is not plausible."),
   nozzleTips: z.array(nozzleTipSchema).max(8, "Record at most 8 tips.").default([]),
+  torqueSpecs: z.array(torqueSpecSchema).max(20, "Record at most 20 torque figures.").default([]),
   notes: z.string().trim().max(2000, "Keep notes under 2,000 characters.").optional(),
 });
 

@@ -1,4 +1,5 @@
 import { useEffect, useState } from "react";
+import { CalcWidget } from "~/components/calc/calc-widget";
 import { WalkScreen } from "~/components/walk/walk-screen";
 import { stepsToEnd } from "~/lib/guides/graph";
 import { caseDetail } from "~/services/cases.server";
@@ -35,6 +36,7 @@ export default function Walk({ loaderData }: Route.ComponentProps) {
       serverEvents={d.events}
       closed={d.closed}
       offlineReady={offlineReady}
+      renderCalc={(calc) => <CalcWidget calc={calc} rig={d.rig} />}
     />
   );
 }

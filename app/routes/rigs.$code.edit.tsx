@@ -11,10 +11,10 @@ import type { Route } from "./+types/rigs.$code.edit";
 export async function loader({ request, params }: Route.LoaderArgs) {
   const user = await requireRole(request, "admin");
   const rig = await findRig(user, params.code);
-  const { code, name, mount, tankGal, pumpKind, hasHourMeter, engineHours, hoseLengthFt, hoseDiameterIn, yardElevationFt, nozzleTips, notes } =
+  const { code, name, mount, tankGal, pumpKind, hasHourMeter, engineHours, hoseLengthFt, hoseDiameterIn, yardElevationFt, nozzleTips, torqueSpecs, notes } =
     rig.get({ plain: true });
   return {
-    rig: { code, name, mount, tankGal, pumpKind, hasHourMeter, engineHours, hoseLengthFt, hoseDiameterIn, yardElevationFt, nozzleTips, notes: notes ?? undefined },
+    rig: { code, name, mount, tankGal, pumpKind, hasHourMeter, engineHours, hoseLengthFt, hoseDiameterIn, yardElevationFt, nozzleTips, torqueSpecs, notes: notes ?? undefined },
   };
 }
 

@@ -129,7 +129,7 @@ export interface CaseDetail {
   causeCode: string | null;
   safetyAckAt: string | null;
   note: string | null;
-  rig: { code: string; name: string; hasHourMeter: boolean; engineHours: number; tankGal: number; hoseLengthFt: number; hoseDiameterIn: number; yardElevationFt: number; nozzleTips: Rig["nozzleTips"] };
+  rig: { code: string; name: string; hasHourMeter: boolean; engineHours: number; tankGal: number; hoseLengthFt: number; hoseDiameterIn: number; yardElevationFt: number; nozzleTips: Rig["nozzleTips"]; torqueSpecs: NonNullable<Rig["torqueSpecs"]> };
   guide: { slug: string; title: string; version: number; definition: Guide };
   openedBy: string | null;
   events: { id: string; seq: number; stepId: string; answer: string; at: string; note: string | null }[];
@@ -157,7 +157,7 @@ export async function caseDetail(user: SessionUser, caseId: string): Promise<Cas
     note: found.note,
     rig: {
       code: rig!.code, name: rig!.name, hasHourMeter: rig!.hasHourMeter, engineHours: rig!.engineHours, tankGal: rig!.tankGal,
-      hoseLengthFt: rig!.hoseLengthFt, hoseDiameterIn: rig!.hoseDiameterIn, yardElevationFt: rig!.yardElevationFt, nozzleTips: rig!.nozzleTips,
+      hoseLengthFt: rig!.hoseLengthFt, hoseDiameterIn: rig!.hoseDiameterIn, yardElevationFt: rig!.yardElevationFt, nozzleTips: rig!.nozzleTips, torqueSpecs: rig!.torqueSpecs ?? [],
     },
     guide: { slug: record!.slug, title: record!.title, version: version.number, definition: guide },
     openedBy: opener?.name ?? null,

@@ -2,6 +2,7 @@ import type { QueryInterface } from "sequelize";
 import * as m001 from "./001-companies-users-rigs";
 import * as m002 from "./002-guides";
 import * as m003 from "./003-cases";
+import * as m004 from "./004-rig-torque-specs";
 
 export interface Migration {
   name: string;
@@ -14,4 +15,5 @@ export const migrations: Migration[] = [
   { name: "001-companies-users-rigs", ...m001 },
   { name: "002-guides", ...m002 },
   { name: "003-cases", ...m003 },
+  { name: "004-rig-torque-specs", ...m004 },
 ];

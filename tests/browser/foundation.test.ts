@@ -26,10 +26,10 @@ const navLabels = async (p: Page) => (await p.getByRole("navigation", { name: "M
 
 describe("sign-in and navigation at 360 px", () => {
   it.each([
-    ["dana@cedarflats.example", "Crew", ["Start a fix", "Rigs"]],
-    ["ravi@cedarflats.example", "Trainer", ["Start a fix", "Rigs"]],
-    ["mo@cedarflats.example", "Supervisor", ["Start a fix", "Rigs"]],
-    ["june@cedarflats.example", "Admin", ["Start a fix", "Rigs", "Add a rig", "Outbox"]],
+    ["dana@cedarflats.example", "Crew", ["Start a fix", "Rigs", "Field math"]],
+    ["ravi@cedarflats.example", "Trainer", ["Start a fix", "Rigs", "Field math"]],
+    ["mo@cedarflats.example", "Supervisor", ["Start a fix", "Rigs", "Field math"]],
+    ["june@cedarflats.example", "Admin", ["Start a fix", "Rigs", "Field math", "Add a rig", "Outbox"]],
   ])("%s sees the %s navigation and their company", async (email, role, expected) => {
     const p = await freshPage();
     await signIn(p, app.url, email);
