@@ -5,6 +5,7 @@ export default [
   route("logout", "routes/logout.tsx"),
   route("healthz", "routes/healthz.ts"),
   route("api/guides/search", "routes/api.guides.search.ts"),
+  route("api/board", "routes/api.board.ts"),
   route("api/calc/:kind", "routes/api.calc.$kind.ts"),
   route("api/cases", "routes/api.cases.ts"),
   route("api/cases/:id", "routes/api.cases.$id.ts"),

@@ -120,6 +120,8 @@ export class Case extends Model<InferAttributes<Case>, InferCreationAttributes<C
   declare causeCode: string | null;
   declare safetyAckAt: Date | null;
   declare note: string | null;
+  declare handoffResolvedAt: CreationOptional<Date | null>;
+  declare handoffResolvedBy: CreationOptional<number | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -248,6 +250,8 @@ export function initModels(sequelize: Sequelize) {
       causeCode: DataTypes.STRING(60),
       safetyAckAt: DataTypes.DATE(3),
       note: DataTypes.TEXT,
+      handoffResolvedAt: DataTypes.DATE(3),
+      handoffResolvedBy: DataTypes.INTEGER.UNSIGNED,
       ...timestamps,
     },
     { sequelize, tableName: "cases" },

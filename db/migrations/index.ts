@@ -3,6 +3,7 @@ import * as m001 from "./001-companies-users-rigs";
 import * as m002 from "./002-guides";
 import * as m003 from "./003-cases";
 import * as m004 from "./004-rig-torque-specs";
+import * as m005 from "./005-board";
 
 export interface Migration {
   name: string;
@@ -16,4 +17,5 @@ export const migrations: Migration[] = [
   { name: "002-guides", ...m002 },
   { name: "003-cases", ...m003 },
   { name: "004-rig-torque-specs", ...m004 },
+  { name: "005-board", ...m005 },
 ];
