@@ -14,6 +14,7 @@ export default [
   route("api/cases/:id/photos", "routes/api.cases.$id.photos.ts"),
   route("cases/:id/photos/:photoId", "routes/cases.$id.photos.$photoId.ts"),
   route("rigs/:code/label", "routes/rigs.$code.label.tsx"),
+  route("cases/export", "routes/cases.export.ts"),
   layout("routes/shell.tsx", [
     index("routes/home.tsx"),
     route("rigs", "routes/rigs.tsx"),
@@ -21,6 +22,8 @@ export default [
     route("rigs/:code", "routes/rigs.$code.tsx"),
     route("rigs/:code/edit", "routes/rigs.$code.edit.tsx"),
     route("rigs/:code/fix", "routes/rigs.$code.fix.tsx"),
+    route("board", "routes/board.tsx"),
+    route("cases", "routes/cases.tsx"),
     route("cases/:id", "routes/cases.$id.tsx"),
     route("cases/:id/walk", "routes/cases.$id.walk.tsx"),
     route("admin/outbox", "routes/admin.outbox.tsx"),

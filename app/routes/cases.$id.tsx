@@ -1,8 +1,9 @@
-import { Link } from "react-router";
+import { Form, Link } from "react-router";
+import { hasRole } from "~/lib/roles";
 import { PageTitle } from "~/components/ui/page-title";
 import { ANSWER_LABELS, formatDateTime, formatDuration, formatTime, OUTCOME_LABELS } from "~/lib/format";
-import { caseDetail } from "~/services/cases.server";
-import { requireUser } from "~/services/guards.server";
+import { caseDetail, resolveHandoff } from "~/services/cases.server";
+import { fail, requireRole, requireUser } from "~/services/guards.server";
 import { causeList } from "~/services/guides.server";
 import type { Route } from "./+types/cases.$id";
 
@@ -13,11 +14,20 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   const states = detail.guide.definition.states;
   return {
     ...detail,
+    canResolve: hasRole(user.role, "supervisor"),
     guide: { slug: detail.guide.slug, title: detail.guide.title, version: detail.guide.version },
     cause,
     finalPrompt: detail.finalStep ? (states[detail.finalStep]?.meta.prompt ?? null) : null,
     events: detail.events.map((e) => ({ ...e, prompt: states[e.stepId]?.meta.prompt ?? e.stepId, kind: states[e.stepId]?.meta.kind ?? "check" })),
   };
+}
+
+export async function action({ request, params }: Route.ActionArgs) {
+  const user = await requireRole(request, "supervisor");
+  const form = await request.formData();
+  if (form.get("intent") !== "resolve-handoff") fail(400, "Unknown action.");
+  await resolveHandoff(user, params.id);
+  return { ok: true };
 }
 
 export default function CasePage({ loaderData: c }: Route.ComponentProps) {
@@ -52,6 +62,19 @@ export default function CasePage({ loaderData: c }: Route.ComponentProps) {
       </dl>
       {c.finalPrompt ? <p className="mt-3 text-lg"><strong>Where it ended:</strong> {c.finalPrompt.replace(/\*\*/g, "")}</p> : null}
       {c.note ? <p className="mt-2 text-lg"><strong>Crew note:</strong> {c.note}</p> : null}
+      {c.outcome === "handoff" ? (
+        c.handoffResolvedAt ? (
+          <p className="mt-2 font-bold">Hand-off dealt with {formatDateTime(c.handoffResolvedAt)} UTC.</p>
+        ) : c.canResolve ? (
+          <Form method="post" className="mt-3">
+            <button name="intent" value="resolve-handoff" className="min-h-14 rounded-md bg-go px-4 text-lg font-bold text-white">
+              Mark this hand-off dealt with
+            </button>
+          </Form>
+        ) : (
+          <p className="mt-2 font-bold">Waiting for a supervisor.</p>
+        )
+      ) : null}
       <h2 className="mt-6 text-xl font-bold">Answers</h2>
       <ol className="mt-2 space-y-2">
         {c.events.map((e, i) => {

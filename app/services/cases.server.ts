@@ -129,6 +129,7 @@ export interface CaseDetail {
   causeCode: string | null;
   safetyAckAt: string | null;
   note: string | null;
+  handoffResolvedAt: string | null;
   rig: { code: string; name: string; hasHourMeter: boolean; engineHours: number; tankGal: number; hoseLengthFt: number; hoseDiameterIn: number; yardElevationFt: number; nozzleTips: Rig["nozzleTips"]; torqueSpecs: NonNullable<Rig["torqueSpecs"]> };
   guide: { slug: string; title: string; version: number; definition: Guide };
   openedBy: string | null;
@@ -155,6 +156,7 @@ export async function caseDetail(user: SessionUser, caseId: string): Promise<Cas
     causeCode: found.causeCode,
     safetyAckAt: found.safetyAckAt?.toISOString() ?? null,
     note: found.note,
+    handoffResolvedAt: found.handoffResolvedAt?.toISOString() ?? null,
     rig: {
       code: rig!.code, name: rig!.name, hasHourMeter: rig!.hasHourMeter, engineHours: rig!.engineHours, tankGal: rig!.tankGal,
       hoseLengthFt: rig!.hoseLengthFt, hoseDiameterIn: rig!.hoseDiameterIn, yardElevationFt: rig!.yardElevationFt, nozzleTips: rig!.nozzleTips, torqueSpecs: rig!.torqueSpecs ?? [],
@@ -189,4 +191,11 @@ export async function recentRigCases(user: SessionUser, rigId: number, limit = 1
 export async function lastRigIdFor(user: SessionUser): Promise<number | null> {
   const last = await Case.findOne({ where: { companyId: user.companyId, openedBy: user.id }, attributes: ["rigId"], order: [["openedAt", "DESC"]] });
   return last?.rigId ?? null;
+}
+
+/** A supervisor marks a hand-off as dealt with, so it leaves the board's open list. */
+export async function resolveHandoff(user: SessionUser, caseId: string) {
+  const { found } = await findCaseWithGuide(user, caseId);
+  if (found.outcome !== "handoff") fail(409, "Only a handed-off case can be marked dealt with.");
+  if (!found.handoffResolvedAt) await found.update({ handoffResolvedAt: new Date(), handoffResolvedBy: user.id });
 }

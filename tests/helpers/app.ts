@@ -4,25 +4,16 @@
  */
 import { spawn, type ChildProcess } from "node:child_process";
 import fs from "node:fs";
-import net from "node:net";
 import os from "node:os";
 import path from "node:path";
 import { chromium, type BrowserContext, type Page } from "playwright-core";
 import { buildIfStale } from "../../scripts/build-if-stale";
+import { freePort } from "../../scripts/free-port";
 import { resetDatabase } from "./db";
 
 const root = path.resolve(import.meta.dirname, "../..");
 
-export async function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const srv = net.createServer();
-    srv.listen(0, "127.0.0.1", () => {
-      const { port } = srv.address() as net.AddressInfo;
-      srv.close(() => resolve(port));
-    });
-    srv.on("error", reject);
-  });
-}
+export { freePort };
 
 export interface RunningApp {
   url: string;

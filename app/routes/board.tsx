@@ -1,0 +1,280 @@
+import { Form, Link, useNavigation } from "react-router";
+import { ParetoChart, TrendChart } from "~/components/board/charts";
+import { PageTitle } from "~/components/ui/page-title";
+import { boardQuerySchema } from "~/lib/board-query";
+import { fmt } from "~/lib/calc/units";
+import { formatDateTime } from "~/lib/format";
+import { boardFor } from "~/services/board.server";
+import { sendDigest } from "~/services/digest.server";
+import { fail, requireRole } from "~/services/guards.server";
+import { causeList } from "~/services/guides.server";
+import { listRigs } from "~/services/rigs.server";
+import type { Route } from "./+types/board";
+
+export async function loader({ request }: Route.LoaderArgs) {
+  const user = await requireRole(request, "supervisor");
+  const parsed = boardQuerySchema.safeParse(Object.fromEntries(new URL(request.url).searchParams));
+  if (!parsed.success) fail(400, `Check the window: ${parsed.error.issues.map((i) => `${i.path.join(".")} ${i.message}`).join("; ")}.`);
+  const q = parsed.data;
+  const [board, rigs] = await Promise.all([boardFor(user, q), listRigs(user, { includeRetired: true })]);
+  return {
+    board,
+    window: { from: q.fromDay, to: q.toDay, rig: q.rigCode ?? "", repeatDays: q.repeatDays },
+    rigs: rigs.map((r) => r.code),
+    causeNames: Object.fromEntries(causeList().map((c) => [c.code, c.name])),
+    canSendDigest: user.role === "admin",
+  };
+}
+
+export async function action({ request }: Route.ActionArgs) {
+  const user = await requireRole(request, "admin");
+  const sent = await sendDigest(user.companyId);
+  return { sentTo: sent };
+}
+
+const h = (v: number | null, digits = 0) => (v === null ? "—" : fmt(v, digits));
+
+export default function BoardPage({ loaderData, actionData }: Route.ComponentProps) {
+  const { board, window, rigs, causeNames, canSendDigest } = loaderData;
+  const busy = useNavigation().state !== "idle";
+  const name = (code: string) => causeNames[code] ?? code;
+  const flagged = board.rigs.filter((r) => r.outOfLine);
+  const worst = [...board.rigs].filter((r) => r.ratePer100h !== null).sort((a, b) => b.ratePer100h! - a.ratePer100h!)[0];
+  const topCause = board.pareto[0];
+  return (
+    <>
+      <PageTitle lead={`${window.from} to ${window.to}${window.rig ? ` · ${window.rig}` : " · all rigs"} · ${board.fleet.cases.toLocaleString("en-US")} cases`}>Fault board</PageTitle>
+
+      <section aria-label="What to act on" className="grid gap-3 sm:grid-cols-2">
+        <div className="rounded-lg border-4 border-stop bg-paper p-4">
+          <h2 className="text-lg font-bold">Look at first</h2>
+          {flagged.length ? (
+            <p className="text-xl">
+              <strong>{flagged.map((r) => r.rigCode).join(", ")}</strong> fail{flagged.length === 1 ? "s" : ""} more often than the rest of the fleet
+              {flagged[0].ratePer100h !== null ? ` (${h(flagged[0].ratePer100h, 1)} vs ${h(flagged[0].fleetRatePer100h, 1)} per 100 engine hours)` : ""}.
+            </p>
+          ) : worst ? (
+            <p className="text-xl">No rig stands out from the fleet. Highest rate: {worst.rigCode}, {h(worst.ratePer100h, 1)} per 100 h.</p>
+          ) : (
+            <p>No engine hours recorded in this window.</p>
+          )}
+          <p className="mt-1 text-sm">A flag is a prompt to look, not a verdict: it means the rig's whole 95 % range sits above the others' rate.</p>
+        </div>
+        <div className="rounded-lg border-4 border-ink bg-paper p-4">
+          <h2 className="text-lg font-bold">Most common cause</h2>
+          {topCause ? (
+            <p className="text-xl">
+              <strong>{name(topCause.cause)}</strong>: {topCause.count} cases ({fmt(topCause.share * 100)} %), {h(topCause.downtimeHours, 1)} h of downtime.
+            </p>
+          ) : (
+            <p>No causes found in this window.</p>
+          )}
+          <p className="mt-1 text-sm">Worth a word at the next tailgate meeting, or a guide change.</p>
+        </div>
+      </section>
+
+      <Form method="get" className="mt-4 grid grid-cols-2 gap-3 rounded-lg border-2 border-ink bg-paper p-3 sm:grid-cols-5">
+        <label className="font-bold">
+          From
+          <input type="date" name="from" defaultValue={window.from} className="mt-1 block min-h-12 w-full rounded-md border-2 border-ink px-2" />
+        </label>
+        <label className="font-bold">
+          To
+          <input type="date" name="to" defaultValue={window.to} className="mt-1 block min-h-12 w-full rounded-md border-2 border-ink px-2" />
+        </label>
+        <label className="font-bold">
+          Rig
+          <select name="rig" defaultValue={window.rig} className="mt-1 block min-h-12 w-full rounded-md border-2 border-ink bg-paper px-2">
+            <option value="">All rigs</option>
+            {rigs.map((r) => (
+              <option key={r}>{r}</option>
+            ))}
+          </select>
+        </label>
+        <label className="font-bold">
+          Repeat window (days)
+          <input name="repeatDays" inputMode="numeric" defaultValue={window.repeatDays} className="mt-1 block min-h-12 w-full rounded-md border-2 border-ink px-2" />
+        </label>
+        <button type="submit" className="col-span-2 min-h-12 self-end rounded-md bg-go font-bold text-white sm:col-span-1">
+          Show
+        </button>
+      </Form>
+
+      <section aria-labelledby="rigs-h" className="mt-6">
+        <h2 id="rigs-h" className="text-2xl font-bold">
+          Rigs
+        </h2>
+        <div className="mt-2 overflow-x-auto rounded-lg border-2 border-ink bg-paper">
+          <table className="w-full min-w-[46rem] border-collapse text-left">
+            <thead>
+              <tr className="border-b-2 border-ink">
+                {["Rig", "Cases", "Fixed / handed off / abandoned", "Engine h", "MTBF", "MTTR", "Downtime", "Availability", "Faults per 100 h (95 % range)", "Flag"].map((c) => (
+                  <th key={c} scope="col" className="p-2">
+                    {c}
+                  </th>
+                ))}
+              </tr>
+            </thead>
+            <tbody>
+              {board.rigs.map((r) => (
+                <tr key={r.rigCode} className={`border-b border-rule ${r.outOfLine ? "bg-caution" : ""}`}>
+                  <th scope="row" className="p-2">
+                    <Link to={`/rigs/${r.rigCode}`}>{r.rigCode}</Link>
+                  </th>
+                  <td className="p-2">{r.cases}</td>
+                  <td className="p-2">
+                    {r.fixed} / {r.handoff} / {r.abandoned}
+                  </td>
+                  <td className="p-2">{r.operatingHours === null ? "no meter" : h(r.operatingHours)}</td>
+                  <td className="p-2">{r.mtbfHours === null ? "—" : `${h(r.mtbfHours, 1)} h`}</td>
+                  <td className="p-2">{r.mttrHours === null ? "—" : `${h(r.mttrHours * 60)} min`}</td>
+                  <td className="p-2">{h(r.repairHours, 1)} h</td>
+                  <td className="p-2">{r.availability === null ? "—" : `${fmt(r.availability * 100, 2)} %`}</td>
+                  <td className="p-2">{r.ratePer100h === null ? "—" : `${h(r.ratePer100h, 1)} (${h(r.rateInterval!.lower, 1)}–${h(r.rateInterval!.upper, 1)})`}</td>
+                  <td className="p-2 font-bold">{r.outOfLine ? `Above fleet (${h(r.fleetRatePer100h, 1)})` : ""}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+        <p className="mt-1 text-sm">
+          MTBF: engine hours ÷ fixed and handed-off cases; MTTR: mean time from opening to closing a case; availability = MTBF ÷ (MTBF + MTTR) (ISO 14224 definitions). Range: exact Poisson (Garwood).
+        </p>
+      </section>
+
+      <section aria-labelledby="pareto-h" className="mt-6">
+        <h2 id="pareto-h" className="text-2xl font-bold">
+          Causes, most frequent first
+        </h2>
+        <ParetoChart rows={board.pareto.slice(0, 12).map((p) => ({ label: name(p.cause).split(" (")[0].slice(0, 28), count: p.count, cumulative: Math.round(p.cumulativeShare * 1000) / 10 }))} />
+        <details className="rounded-md border-2 border-rule bg-paper p-3" open>
+          <summary className="min-h-12 cursor-pointer py-2 font-bold">Causes as a table</summary>
+          <table className="w-full border-collapse text-left">
+            <thead>
+              <tr className="border-b-2 border-ink">
+                <th scope="col">Cause</th>
+                <th scope="col">Cases</th>
+                <th scope="col">Share</th>
+                <th scope="col">Running</th>
+                <th scope="col">Downtime</th>
+              </tr>
+            </thead>
+            <tbody>
+              {board.pareto.map((p) => (
+                <tr key={p.cause} className="border-b border-rule">
+                  <td>{name(p.cause)}</td>
+                  <td>{p.count}</td>
+                  <td>{fmt(p.share * 100, 1)} %</td>
+                  <td>{fmt(p.cumulativeShare * 100, 1)} %</td>
+                  <td>{h(p.downtimeHours, 1)} h</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </details>
+      </section>
+
+      <section aria-labelledby="repeats-h" className="mt-6">
+        <h2 id="repeats-h" className="text-2xl font-bold">
+          Repeats: same cause, same rig, within {window.repeatDays} days
+        </h2>
+        {board.repeats.length === 0 ? <p>None in this window.</p> : null}
+        <ul className="mt-2 space-y-2">
+          {board.repeats.slice(0, 20).map((g) => (
+            <li key={`${g.rigCode}-${g.cause}-${g.cases[0].caseId}`} className="rounded-md border-2 border-rule bg-paper p-3">
+              <p className="font-bold">
+                {g.rigCode}: {name(g.cause)} — {g.cases.length} times
+              </p>
+              <p className="text-sm">
+                {g.cases.map((c, i) => (
+                  <span key={c.caseId}>
+                    {i ? ", " : ""}
+                    <Link to={`/cases/${c.caseId}`}>{c.openedAt.slice(0, 10)}</Link>
+                  </span>
+                ))}
+              </p>
+            </li>
+          ))}
+        </ul>
+        {board.repeats.length > 20 ? <p className="mt-1">…and {board.repeats.length - 20} more chains.</p> : null}
+      </section>
+
+      <section aria-labelledby="trend-h" className="mt-6">
+        <h2 id="trend-h" className="text-2xl font-bold">
+          Cases per week
+        </h2>
+        <TrendChart weeks={board.weeks} />
+        <details className="rounded-md border-2 border-rule bg-paper p-3">
+          <summary className="min-h-12 cursor-pointer py-2 font-bold">Weeks as a table</summary>
+          <table className="w-full text-left">
+            <thead>
+              <tr>
+                <th scope="col">Week of</th>
+                <th scope="col">Cases</th>
+                <th scope="col">Hand-offs</th>
+              </tr>
+            </thead>
+            <tbody>
+              {board.weeks.map((w) => (
+                <tr key={w.weekStart}>
+                  <td>{w.weekStart}</td>
+                  <td>{w.cases}</td>
+                  <td>{w.handoffs}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </details>
+      </section>
+
+      <section aria-labelledby="crew-h" className="mt-6">
+        <h2 id="crew-h" className="text-2xl font-bold">
+          People
+        </h2>
+        <p className="text-sm">What each person meets, for training — not for blame.</p>
+        <ul className="mt-2 grid gap-2 sm:grid-cols-2">
+          {board.people.map((p) => (
+            <li key={p.name} className="rounded-md border-2 border-rule bg-paper p-3">
+              <p className="font-bold">
+                {p.name}: {p.cases} cases, {fmt(p.handoffRate * 100)} % handed off
+              </p>
+              <p className="text-sm">Guides: {p.guides.map((g) => `${g.title} (${g.count})`).join(", ")}</p>
+              <p className="text-sm">Causes: {p.causes.map((c) => `${name(c.cause)} (${c.count})`).join(", ") || "—"}</p>
+            </li>
+          ))}
+        </ul>
+      </section>
+
+      <section aria-labelledby="handoffs-h" className="mt-6">
+        <h2 id="handoffs-h" className="text-2xl font-bold">
+          Open hand-offs
+        </h2>
+        {board.openHandoffs.length === 0 ? <p>None waiting.</p> : null}
+        <ul className="mt-2 space-y-1">
+          {board.openHandoffs.slice(0, 15).map((o) => (
+            <li key={o.caseId}>
+              <Link to={`/cases/${o.caseId}`}>
+                {o.rigCode} · {o.guideTitle}
+              </Link>{" "}
+              — {formatDateTime(o.openedAt)} UTC{o.openedBy ? `, ${o.openedBy}` : ""}
+            </li>
+          ))}
+        </ul>
+      </section>
+
+      <p className="mt-6">
+        <a href={`/api/board?from=${window.from}&to=${window.to}${window.rig ? `&rig=${window.rig}` : ""}&repeatDays=${window.repeatDays}`}>These figures as JSON</a>
+      </p>
+      {canSendDigest ? (
+        <Form method="post" className="mt-4">
+          <button type="submit" disabled={busy} className="min-h-14 rounded-md border-2 border-ink bg-paper px-4 font-bold">
+            Send the weekly digest now
+          </button>
+          {actionData ? <p role="status" className="mt-2 font-bold">Digest sent to {actionData.sentTo.join(", ") || "no one (no supervisors)"}.</p> : null}
+        </Form>
+      ) : null}
+    </>
+  );
+}
+
+export const meta: Route.MetaFunction = () => [{ title: "Fault board · Tankside" }];

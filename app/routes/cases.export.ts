@@ -1,0 +1,23 @@
+import { stringify } from "csv-stringify/sync";
+import { caseFiltersSchema } from "~/lib/case-filters";
+import { listCases } from "~/services/case-list.server";
+import { fail, requireRole } from "~/services/guards.server";
+import { causeList } from "~/services/guides.server";
+import type { Route } from "./+types/cases.export";
+
+/** The filtered cases as CSV (the same filters as the table, every page). */
+export async function loader({ request }: Route.LoaderArgs) {
+  const user = await requireRole(request, "supervisor");
+  const parsed = caseFiltersSchema.safeParse(Object.fromEntries(new URL(request.url).searchParams));
+  if (!parsed.success) fail(400, "Check the filters.");
+  const { rows } = await listCases(user, parsed.data, { all: true });
+  const names = new Map(causeList().map((c) => [c.code, c.name]));
+  const csv = stringify(
+    rows.map((r) => [r.id, r.rigCode, r.guideTitle, r.causeCode ?? "", r.causeCode ? (names.get(r.causeCode) ?? "") : "", r.outcome, r.person ?? "", r.openedAt, r.durationSeconds ?? ""]),
+    { header: true, columns: ["case_id", "rig", "guide", "cause_code", "cause", "outcome", "opened_by", "opened_at_utc", "duration_seconds"] },
+  );
+  const stamp = new Date().toISOString().slice(0, 10);
+  return new Response(csv, {
+    headers: { "Content-Type": "text/csv; charset=utf-8", "Content-Disposition": `attachment; filename="tankside-cases-${stamp}.csv"` },
+  });
+}

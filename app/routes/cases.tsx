@@ -1,0 +1,175 @@
+import { Form, Link } from "react-router";
+import { PageTitle } from "~/components/ui/page-title";
+import { caseFiltersSchema, filtersToSearch, PAGE_SIZE, type CaseFilters } from "~/lib/case-filters";
+import { formatDateTime, formatDuration, OUTCOME_LABELS } from "~/lib/format";
+import { caseFilterOptions, listCases } from "~/services/case-list.server";
+import { fail, requireRole } from "~/services/guards.server";
+import { causeList } from "~/services/guides.server";
+import type { Route } from "./+types/cases";
+
+export async function loader({ request }: Route.LoaderArgs) {
+  const user = await requireRole(request, "supervisor");
+  const parsed = caseFiltersSchema.safeParse(Object.fromEntries(new URL(request.url).searchParams));
+  if (!parsed.success) fail(400, `Check the filters: ${parsed.error.issues.map((i) => `${i.path.join(".")} ${i.message}`).join("; ")}.`);
+  const filters = parsed.data;
+  const [{ rows, total }, options] = await Promise.all([listCases(user, filters), caseFilterOptions(user)]);
+  return { rows, total, filters, options, causes: causeList().map((c) => ({ code: c.code, name: c.name })) };
+}
+
+const COLUMNS: { key: CaseFilters["sort"]; label: string }[] = [
+  { key: "rig", label: "Rig" },
+  { key: "guide", label: "Guide" },
+  { key: "cause", label: "Cause" },
+  { key: "outcome", label: "Outcome" },
+  { key: "person", label: "Who" },
+  { key: "opened", label: "Opened (UTC)" },
+  { key: "duration", label: "Took" },
+];
+
+export default function Cases({ loaderData }: Route.ComponentProps) {
+  const { rows, total, filters, options, causes } = loaderData;
+  const pages = Math.max(1, Math.ceil(total / PAGE_SIZE));
+  const causeName = new Map(causes.map((c) => [c.code, c.name]));
+  const select = "mt-1 block min-h-12 w-full rounded-md border-2 border-ink bg-paper px-2";
+  return (
+    <>
+      <PageTitle lead={`${total.toLocaleString("en-US")} case${total === 1 ? "" : "s"} match.`}>Cases</PageTitle>
+      <Form method="get" className="grid grid-cols-2 gap-3 rounded-lg border-2 border-ink bg-paper p-3 sm:grid-cols-4">
+        <label className="font-bold">
+          Rig
+          <select name="rig" defaultValue={filters.rig ?? ""} className={select}>
+            <option value="">All</option>
+            {options.rigs.map((r) => (
+              <option key={r}>{r}</option>
+            ))}
+          </select>
+        </label>
+        <label className="font-bold">
+          Guide
+          <select name="guide" defaultValue={filters.guide ?? ""} className={select}>
+            <option value="">All</option>
+            {options.guides.map((g) => (
+              <option key={g.slug} value={g.slug}>
+                {g.title}
+              </option>
+            ))}
+          </select>
+        </label>
+        <label className="font-bold">
+          Cause
+          <select name="cause" defaultValue={filters.cause ?? ""} className={select}>
+            <option value="">All</option>
+            {causes.map((c) => (
+              <option key={c.code} value={c.code}>
+                {c.name}
+              </option>
+            ))}
+          </select>
+        </label>
+        <label className="font-bold">
+          Outcome
+          <select name="outcome" defaultValue={filters.outcome ?? ""} className={select}>
+            <option value="">All</option>
+            {Object.entries(OUTCOME_LABELS).map(([k, v]) => (
+              <option key={k} value={k}>
+                {v}
+              </option>
+            ))}
+          </select>
+        </label>
+        <label className="font-bold">
+          Person
+          <select name="person" defaultValue={filters.person ?? ""} className={select}>
+            <option value="">Anyone</option>
+            {options.people.map((p) => (
+              <option key={p.id} value={p.id}>
+                {p.name}
+              </option>
+            ))}
+          </select>
+        </label>
+        <label className="font-bold">
+          From
+          <input type="date" name="from" defaultValue={filters.from ?? ""} className={select} />
+        </label>
+        <label className="font-bold">
+          To
+          <input type="date" name="to" defaultValue={filters.to ?? ""} className={select} />
+        </label>
+        <input type="hidden" name="sort" value={filters.sort} />
+        <input type="hidden" name="dir" value={filters.dir} />
+        <button type="submit" className="col-span-2 min-h-12 self-end rounded-md bg-go font-bold text-white sm:col-span-1">
+          Filter
+        </button>
+      </Form>
+      <p className="mt-3">
+        <a href={`/cases/export?${filtersToSearch(filters, { page: undefined })}`} download className="font-bold">
+          Download these {total.toLocaleString("en-US")} cases as CSV
+        </a>
+      </p>
+      <div className="mt-3 overflow-x-auto rounded-lg border-2 border-ink bg-paper">
+        <table className="w-full min-w-[44rem] border-collapse text-left">
+          <thead>
+            <tr className="border-b-2 border-ink">
+              {COLUMNS.map((col) => {
+                const active = filters.sort === col.key;
+                const dir = active && filters.dir === "desc" ? "asc" : "desc";
+                return (
+                  <th key={col.key} scope="col" aria-sort={active ? (filters.dir === "asc" ? "ascending" : "descending") : undefined} className="p-2">
+                    <Link to={`?${filtersToSearch(filters, { sort: col.key, dir, page: 1 })}`} className="font-bold">
+                      {col.label}
+                      {active ? (filters.dir === "asc" ? " ↑" : " ↓") : ""}
+                    </Link>
+                  </th>
+                );
+              })}
+            </tr>
+          </thead>
+          <tbody>
+            {rows.map((r) => (
+              <tr key={r.id} className="border-b border-rule">
+                <td className="p-2 font-bold">{r.rigCode}</td>
+                <td className="p-2">
+                  <Link to={`/cases/${r.id}`}>{r.guideTitle}</Link>
+                </td>
+                <td className="p-2">{r.causeCode ? (causeName.get(r.causeCode) ?? r.causeCode) : "—"}</td>
+                <td className="p-2">{OUTCOME_LABELS[r.outcome]}</td>
+                <td className="p-2">{r.person ?? "—"}</td>
+                <td className="p-2">{formatDateTime(r.openedAt)}</td>
+                <td className="p-2">{r.durationSeconds === null ? "open" : formatDuration(r.durationSeconds * 1000)}</td>
+              </tr>
+            ))}
+            {rows.length === 0 ? (
+              <tr>
+                <td colSpan={7} className="p-3">
+                  No cases match these filters.
+                </td>
+              </tr>
+            ) : null}
+          </tbody>
+        </table>
+      </div>
+      <nav aria-label="Pages" className="mt-3 flex items-center justify-between gap-2">
+        {filters.page > 1 ? (
+          <Link to={`?${filtersToSearch(filters, { page: filters.page - 1 })}`} className="flex min-h-12 items-center rounded-md border-2 border-ink bg-paper px-4 font-bold">
+            Previous
+          </Link>
+        ) : (
+          <span />
+        )}
+        <span>
+          Page {filters.page} of {pages}
+        </span>
+        {filters.page < pages ? (
+          <Link to={`?${filtersToSearch(filters, { page: filters.page + 1 })}`} className="flex min-h-12 items-center rounded-md border-2 border-ink bg-paper px-4 font-bold">
+            Next
+          </Link>
+        ) : (
+          <span />
+        )}
+      </nav>
+    </>
+  );
+}
+
+export const meta: Route.MetaFunction = () => [{ title: "Cases · Tankside" }];

@@ -1,0 +1,72 @@
+import { QueryTypes } from "sequelize";
+import { PAGE_SIZE, type CaseFilters } from "~/lib/case-filters";
+import { Rig, sequelize, User } from "./db.server";
+import type { SessionUser } from "./guards.server";
+
+const ORDER: Record<CaseFilters["sort"], string> = {
+  opened: "c.opened_at",
+  duration: "duration",
+  rig: "r.code",
+  guide: "g.title",
+  cause: "c.cause_code",
+  outcome: "c.outcome",
+  person: "u.name",
+};
+
+export interface CaseRow {
+  id: string;
+  rigCode: string;
+  guideTitle: string;
+  causeCode: string | null;
+  outcome: string;
+  person: string | null;
+  openedAt: string;
+  durationSeconds: number | null;
+}
+
+function where(user: SessionUser, f: CaseFilters) {
+  const replacements = {
+    company: user.companyId, rig: f.rig ?? null, guide: f.guide ?? null, cause: f.cause ?? null, outcome: f.outcome ?? null,
+    person: f.person ?? null, from: f.from ? new Date(`${f.from}T00:00:00Z`) : null, to: f.to ? new Date(Date.parse(`${f.to}T00:00:00Z`) + 86_400_000) : null,
+  };
+  const sql = `FROM cases c JOIN rigs r ON r.id = c.rig_id JOIN guide_versions v ON v.id = c.guide_version_id JOIN guides g ON g.id = v.guide_id
+    LEFT JOIN users u ON u.id = c.opened_by
+    WHERE c.company_id = :company AND (:rig IS NULL OR r.code = :rig) AND (:guide IS NULL OR g.slug = :guide)
+      AND (:cause IS NULL OR c.cause_code = :cause) AND (:outcome IS NULL OR c.outcome = :outcome) AND (:person IS NULL OR c.opened_by = :person)
+      AND (:from IS NULL OR c.opened_at >= :from) AND (:to IS NULL OR c.opened_at < :to)`;
+  return { sql, replacements };
+}
+
+const toRow = (r: Record<string, unknown>): CaseRow => ({
+  id: String(r.id), rigCode: String(r.code), guideTitle: String(r.title), causeCode: (r.cause_code as string) ?? null, outcome: String(r.outcome),
+  person: (r.name as string) ?? null, openedAt: new Date(r.opened_at as string).toISOString(), durationSeconds: r.duration === null ? null : Number(r.duration),
+});
+
+/** One page of the company's cases, filtered and sorted on the server. */
+export async function listCases(user: SessionUser, f: CaseFilters, { limit = PAGE_SIZE, all = false } = {}) {
+  const { sql, replacements } = where(user, f);
+  const order = `${ORDER[f.sort]} ${f.dir === "asc" ? "ASC" : "DESC"}, c.opened_at DESC, c.id`;
+  const page = all ? "LIMIT 50000" : `LIMIT ${limit} OFFSET ${(f.page - 1) * limit}`;
+  const [rows, count] = await Promise.all([
+    sequelize.query<Record<string, unknown>>(
+      `SELECT c.id, r.code, g.title, c.cause_code, c.outcome, u.name, c.opened_at, TIMESTAMPDIFF(SECOND, c.opened_at, c.closed_at) AS duration ${sql} ORDER BY ${order} ${page}`,
+      { replacements, type: QueryTypes.SELECT },
+    ),
+    all ? Promise.resolve([{ n: 0 }]) : sequelize.query<{ n: number }>(`SELECT COUNT(*) AS n ${sql}`, { replacements, type: QueryTypes.SELECT }),
+  ]);
+  return { rows: rows.map(toRow), total: Number(count[0].n) };
+}
+
+/** What the filter menus offer: the company's rigs, people and the guides they can use. */
+export async function caseFilterOptions(user: SessionUser) {
+  const [rigs, people, guides] = await Promise.all([
+    Rig.findAll({ where: { companyId: user.companyId }, attributes: ["code"], order: [["code", "ASC"]] }),
+    User.findAll({ where: { companyId: user.companyId }, attributes: ["id", "name"], order: [["name", "ASC"]] }),
+    sequelize.query<{ slug: string; title: string }>(
+      "SELECT DISTINCT g.slug, g.title FROM guides g WHERE g.company_id IS NULL OR g.company_id = :company ORDER BY g.title",
+      { replacements: { company: user.companyId }, type: QueryTypes.SELECT },
+    ),
+  ]);
+  return { rigs: rigs.map((r) => r.code), people: people.map((p) => ({ id: p.id, name: p.name })), guides };
+}
+
