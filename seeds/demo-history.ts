@@ -91,6 +91,8 @@ export async function seedDemoHistory(now = new Date(), log: (line: string) => v
             engineHours: rig.hasHourMeter ? Math.round(hours * 10) / 10 : null,
             outcome: abandoned ? "abandoned" : (endKind as "fixed" | "handoff"),
             finalStep, causeCode: finalStep ? (guide.definition.states[finalStep].meta.cause ?? null) : null, safetyAckAt: ack, note: null,
+            // Supervisors have dealt with all but the last week's hand-offs.
+            handoffResolvedAt: endKind === "handoff" && !abandoned && end - day > 7 * DAY ? new Date(closedAt.getTime() + 86_400_000) : null,
           });
         }
       }

@@ -18,7 +18,7 @@ export function digestMail(company: string, board: Board, window: { from: string
     ...(board.pareto.length ? board.pareto.slice(0, 5).map((p) => `  ${causeName(p.cause)}: ${p.count} (${fmt(p.share * 100)} %)`) : ["  none"]),
     "",
     "Repeats (same cause on the same rig):",
-    ...(board.repeats.length ? board.repeats.slice(0, 10).map((g) => `  ${g.rigCode}: ${causeName(g.cause)}, ${g.cases.length} times`) : ["  none"]),
+    ...(board.repeats.length ? board.repeats.slice(0, 10).map((g) => `  ${g.rigCode}: ${causeName(g.cause)}, ${g.count} times (${g.firstAt.slice(0, 10)} to ${g.lastAt.slice(0, 10)})`) : ["  none"]),
     "",
     "Open hand-offs:",
     ...(board.openHandoffs.length

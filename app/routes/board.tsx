@@ -181,17 +181,19 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
         {board.repeats.length === 0 ? <p>None in this window.</p> : null}
         <ul className="mt-2 space-y-2">
           {board.repeats.slice(0, 20).map((g) => (
-            <li key={`${g.rigCode}-${g.cause}-${g.cases[0].caseId}`} className="rounded-md border-2 border-rule bg-paper p-3">
+            <li key={`${g.rigCode}-${g.cause}-${g.firstAt}`} className="rounded-md border-2 border-rule bg-paper p-3">
               <p className="font-bold">
-                {g.rigCode}: {name(g.cause)} — {g.cases.length} times
+                {g.rigCode}: {name(g.cause)} — {g.count} times
               </p>
               <p className="text-sm">
-                {g.cases.map((c, i) => (
+                {g.firstAt.slice(0, 10)} to {g.lastAt.slice(0, 10)}. Latest:{" "}
+                {g.latest.map((c, i) => (
                   <span key={c.caseId}>
                     {i ? ", " : ""}
                     <Link to={`/cases/${c.caseId}`}>{c.openedAt.slice(0, 10)}</Link>
                   </span>
                 ))}
+                . <Link to={`/cases?rig=${g.rigCode}&cause=${g.cause}&from=${g.firstAt.slice(0, 10)}&to=${g.lastAt.slice(0, 10)}`}>All of them</Link>
               </p>
             </li>
           ))}

@@ -20,52 +20,70 @@ const iso = (v: unknown) => (v instanceof Date ? v.toISOString() : new Date(Stri
  */
 export async function boardAggregates(companyId: number, w: BoardWindow): Promise<BoardAggregates> {
   const repeatDays = w.repeatDays ?? 30;
-  const params = { company: companyId, from: w.from, to: w.to, rig: w.rigCode ?? null, days: repeatDays };
-  const rigFilter = "AND (:rig IS NULL OR r.code = :rig)";
+  // Rigs are few: read them once, then filter and group cases by rig id alone, so each grouped
+  // query runs on a covering index of `cases` without a join per row.
+  const rigRows = await sequelize.query<{ id: number; code: string; has_hour_meter: number }>(
+    "SELECT id, code, has_hour_meter FROM rigs WHERE company_id = :company AND (:rig IS NULL OR code = :rig) ORDER BY code",
+    { replacements: { company: companyId, rig: w.rigCode ?? null }, type: QueryTypes.SELECT },
+  );
+  const codeOf = new Map(rigRows.map((r) => [Number(r.id), String(r.code)]));
+  const params = { company: companyId, from: w.from, to: w.to, rigId: w.rigCode ? (rigRows[0]?.id ?? -1) : null, days: repeatDays };
+  const rigFilter = "AND (:rigId IS NULL OR c.rig_id = :rigId)";
   const q = <T extends object>(sql: string) => sequelize.query<T>(sql, { replacements: params, type: QueryTypes.SELECT });
 
-  const [rigs, causes, candidates, weeks, people, guides, personCauses, handoffs] = await Promise.all([
+  const [rigs, causes, chains, weeks, people, guides, personCauses, handoffs] = await Promise.all([
     q<Record<string, unknown>>(`
-      SELECT r.code, r.has_hour_meter, COUNT(c.id) AS cases,
+      SELECT c.rig_id, COUNT(*) AS cases,
         SUM(c.outcome = 'fixed') AS fixed, SUM(c.outcome = 'handoff') AS handoff, SUM(c.outcome = 'abandoned') AS abandoned,
         MAX(c.engine_hours) - MIN(c.engine_hours) AS hours,
         SUM(TIMESTAMPDIFF(SECOND, c.opened_at, c.closed_at)) AS repair_seconds, COUNT(c.closed_at) AS closed
-      FROM rigs r LEFT JOIN cases c ON c.rig_id = r.id AND c.opened_at >= :from AND c.opened_at < :to
-      WHERE r.company_id = :company ${rigFilter}
-      GROUP BY r.id, r.code, r.has_hour_meter ORDER BY r.code`),
+      FROM cases c
+      WHERE c.company_id = :company AND c.opened_at >= :from AND c.opened_at < :to ${rigFilter}
+      GROUP BY c.rig_id`),
     q<Record<string, unknown>>(`
       SELECT c.cause_code AS cause, COUNT(*) AS count, SUM(TIMESTAMPDIFF(SECOND, c.opened_at, c.closed_at)) AS downtime_seconds
-      FROM cases c JOIN rigs r ON r.id = c.rig_id
+      FROM cases c
       WHERE c.company_id = :company AND c.opened_at >= :from AND c.opened_at < :to AND c.cause_code IS NOT NULL ${rigFilter}
       GROUP BY c.cause_code`),
-    // Only the cases that sit within the repeat window of the same cause on the same rig.
+    // Repeat chains as gaps and islands: a case starts a new chain unless the same cause was
+    // found on the same rig within the window before it; only chains of two or more come back.
     q<Record<string, unknown>>(`
-      SELECT id, code, cause_code, opened_at FROM (
-        SELECT c.id, r.code, c.cause_code, c.opened_at,
-          LAG(c.opened_at) OVER (PARTITION BY c.rig_id, c.cause_code ORDER BY c.opened_at) AS prev_at,
-          LEAD(c.opened_at) OVER (PARTITION BY c.rig_id, c.cause_code ORDER BY c.opened_at) AS next_at
-        FROM cases c JOIN rigs r ON r.id = c.rig_id
-        WHERE c.company_id = :company AND c.opened_at >= :from AND c.opened_at < :to AND c.cause_code IS NOT NULL ${rigFilter}
-      ) t
-      WHERE (prev_at IS NOT NULL AND opened_at <= prev_at + INTERVAL :days DAY) OR (next_at IS NOT NULL AND next_at <= opened_at + INTERVAL :days DAY)`),
+      SELECT rig_id, cause_code, COUNT(*) AS n, MIN(opened_at) AS first_at, MAX(opened_at) AS last_at,
+        GROUP_CONCAT(id ORDER BY opened_at DESC, id DESC SEPARATOR ',' LIMIT 3) AS latest_ids,
+        GROUP_CONCAT(DATE_FORMAT(opened_at, '%Y-%m-%dT%H:%i:%s.%fZ') ORDER BY opened_at DESC, id DESC SEPARATOR ',' LIMIT 3) AS latest_at
+      FROM (
+        SELECT id, rig_id, cause_code, opened_at, SUM(new_chain) OVER (PARTITION BY rig_id, cause_code ORDER BY opened_at, id) AS chain
+        FROM (
+          SELECT c.id, c.rig_id, c.cause_code, c.opened_at,
+            CASE WHEN LAG(c.opened_at) OVER (PARTITION BY c.rig_id, c.cause_code ORDER BY c.opened_at, c.id) >= c.opened_at - INTERVAL :days DAY THEN 0 ELSE 1 END AS new_chain
+          FROM cases c
+          WHERE c.company_id = :company AND c.opened_at >= :from AND c.opened_at < :to AND c.cause_code IS NOT NULL ${rigFilter}
+        ) marked
+      ) chained
+      GROUP BY rig_id, cause_code, chain HAVING COUNT(*) > 1`),
     q<Record<string, unknown>>(`
       SELECT DATE_FORMAT(DATE(c.opened_at) - INTERVAL WEEKDAY(c.opened_at) DAY, '%Y-%m-%d') AS week, COUNT(*) AS cases, SUM(c.outcome = 'handoff') AS handoffs
-      FROM cases c JOIN rigs r ON r.id = c.rig_id
+      FROM cases c
       WHERE c.company_id = :company AND c.opened_at >= :from AND c.opened_at < :to ${rigFilter}
       GROUP BY week ORDER BY week`),
     q<Record<string, unknown>>(`
-      SELECT u.id, u.name, COUNT(*) AS cases, SUM(c.outcome = 'handoff') AS handoffs
-      FROM cases c JOIN users u ON u.id = c.opened_by JOIN rigs r ON r.id = c.rig_id
-      WHERE c.company_id = :company AND c.opened_at >= :from AND c.opened_at < :to ${rigFilter}
-      GROUP BY u.id, u.name ORDER BY cases DESC`),
+      SELECT p.uid AS id, u.name, p.cases, p.handoffs FROM (
+        SELECT c.opened_by AS uid, COUNT(*) AS cases, SUM(c.outcome = 'handoff') AS handoffs
+        FROM cases c
+        WHERE c.company_id = :company AND c.opened_at >= :from AND c.opened_at < :to ${rigFilter}
+        GROUP BY c.opened_by
+      ) p JOIN users u ON u.id = p.uid ORDER BY p.cases DESC`),
     q<Record<string, unknown>>(`
-      SELECT c.opened_by AS uid, g.title, COUNT(*) AS count
-      FROM cases c JOIN guide_versions v ON v.id = c.guide_version_id JOIN guides g ON g.id = v.guide_id JOIN rigs r ON r.id = c.rig_id
-      WHERE c.company_id = :company AND c.opened_at >= :from AND c.opened_at < :to ${rigFilter}
-      GROUP BY c.opened_by, g.title`),
+      SELECT p.uid, g.title, SUM(p.count) AS count FROM (
+        SELECT c.opened_by AS uid, c.guide_version_id AS vid, COUNT(*) AS count
+        FROM cases c
+        WHERE c.company_id = :company AND c.opened_at >= :from AND c.opened_at < :to ${rigFilter}
+        GROUP BY c.opened_by, c.guide_version_id
+      ) p JOIN guide_versions v ON v.id = p.vid JOIN guides g ON g.id = v.guide_id
+      GROUP BY p.uid, g.title`),
     q<Record<string, unknown>>(`
       SELECT c.opened_by AS uid, c.cause_code AS cause, COUNT(*) AS count
-      FROM cases c JOIN rigs r ON r.id = c.rig_id
+      FROM cases c
       WHERE c.company_id = :company AND c.opened_at >= :from AND c.opened_at < :to AND c.cause_code IS NOT NULL ${rigFilter}
       GROUP BY c.opened_by, c.cause_code`),
     q<Record<string, unknown>>(`
@@ -78,14 +96,24 @@ export async function boardAggregates(companyId: number, w: BoardWindow): Promis
 
   const top = <T extends { count: number }>(xs: T[]) => xs.sort((a, b) => b.count - a.count).slice(0, 5);
   return {
-    rigs: rigs.map((r) => ({
-      rigCode: String(r.code),
+    rigs: rigRows.map((rig) => {
+      const r = rigs.find((x) => n(x.rig_id) === n(rig.id)) ?? {};
+      return {
+      rigCode: String(rig.code),
       cases: n(r.cases), fixed: n(r.fixed), handoff: n(r.handoff), abandoned: n(r.abandoned),
-      operatingHours: n(r.has_hour_meter) && r.hours !== null ? n(r.hours) : null,
+      operatingHours: n(rig.has_hour_meter) && r.hours !== null && r.hours !== undefined ? n(r.hours) : null,
       repairHours: n(r.repair_seconds) / 3600, closedCases: n(r.closed),
-    })),
+      };
+    }),
     causes: causes.map((c) => ({ cause: String(c.cause), count: n(c.count), downtimeHours: n(c.downtime_seconds) / 3600 })),
-    repeatCandidates: candidates.map((c) => ({ caseId: String(c.id), rigCode: String(c.code), cause: String(c.cause_code), openedAt: iso(c.opened_at) })),
+    repeatChains: chains.map((c) => {
+      const ids = String(c.latest_ids).split(",");
+      const times = String(c.latest_at).split(",");
+      return {
+        rigCode: codeOf.get(n(c.rig_id)) ?? "?", cause: String(c.cause_code), count: n(c.n), firstAt: iso(c.first_at), lastAt: iso(c.last_at),
+        latest: ids.map((caseId, i) => ({ caseId, openedAt: new Date(times[i].replace(/(\.\d{3})\d*Z$/, "$1Z")).toISOString() })),
+      };
+    }),
     weeks: weeks.map((w) => ({ weekStart: String(w.week), cases: n(w.cases), handoffs: n(w.handoffs) })),
     people: people.map((p) => ({
       name: String(p.name), cases: n(p.cases), handoffs: n(p.handoffs),
@@ -97,5 +125,5 @@ export async function boardAggregates(companyId: number, w: BoardWindow): Promis
 }
 
 export async function boardFor(user: SessionUser, w: BoardWindow): Promise<Board> {
-  return buildBoard(await boardAggregates(user.companyId, w), w.repeatDays ?? 30);
+  return buildBoard(await boardAggregates(user.companyId, w));
 }

@@ -4,6 +4,7 @@ import * as m002 from "./002-guides";
 import * as m003 from "./003-cases";
 import * as m004 from "./004-rig-torque-specs";
 import * as m005 from "./005-board";
+import * as m006 from "./006-board-people-index";
 
 export interface Migration {
   name: string;
@@ -18,4 +19,5 @@ export const migrations: Migration[] = [
   { name: "003-cases", ...m003 },
   { name: "004-rig-torque-specs", ...m004 },
   { name: "005-board", ...m005 },
+  { name: "006-board-people-index", ...m006 },
 ];

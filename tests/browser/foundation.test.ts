@@ -28,8 +28,8 @@ describe("sign-in and navigation at 360 px", () => {
   it.each([
     ["dana@cedarflats.example", "Crew", ["Start a fix", "Rigs", "Field math"]],
     ["ravi@cedarflats.example", "Trainer", ["Start a fix", "Rigs", "Field math"]],
-    ["mo@cedarflats.example", "Supervisor", ["Start a fix", "Rigs", "Field math"]],
-    ["june@cedarflats.example", "Admin", ["Start a fix", "Rigs", "Field math", "Add a rig", "Outbox"]],
+    ["mo@cedarflats.example", "Supervisor", ["Start a fix", "Rigs", "Field math", "Fault board", "Cases"]],
+    ["june@cedarflats.example", "Admin", ["Start a fix", "Rigs", "Field math", "Fault board", "Cases", "Add a rig", "Outbox"]],
   ])("%s sees the %s navigation and their company", async (email, role, expected) => {
     const p = await freshPage();
     await signIn(p, app.url, email);

@@ -2,7 +2,7 @@ import { randomUUID } from "node:crypto";
 import { beforeAll, describe, expect, it } from "vitest";
 import { Case, Company, GuideVersion, Rig, User } from "../../db/index";
 import { buildBoard } from "~/lib/stats/board";
-import { findRepeats } from "~/lib/stats/repeats";
+import { byWeight, findRepeats, summariseChain } from "~/lib/stats/repeats";
 import { rigFigures, type RigAggregate } from "~/lib/stats/reliability";
 import { loader as boardApi } from "~/routes/api.board";
 import { boardAggregates } from "~/services/board.server";
@@ -79,10 +79,13 @@ describe("board aggregates in MariaDB agree with the pure module on the same dat
     expect(board.pareto.map((p) => [p.cause, p.count])).toEqual([["plug-sump", 6], ["suction-air-leak", 4], ["low-engine-speed", 3]]);
     expect(board.pareto.at(-1)!.cumulativeShare).toBeCloseTo(1, 12);
     const hits = FIXTURE.filter((r) => r.rig.startsWith("CF") && r.cause).map((r) => ({ caseId: ids.get(r)!, rigCode: r.rig, cause: r.cause!, openedAt: new Date(start + r.day * DAY + 15 * 3_600_000).toISOString() }));
-    const expected = findRepeats(hits, 30);
+    // The chains SQL finds (gaps and islands) are exactly the pure module's on the same cases.
+    const expected = findRepeats(hits, 30).map((g) => summariseChain(g)).sort(byWeight);
     expect(board.repeats).toEqual(expected);
     // Air leaks on days 0, 10, 25, 33 form one chain; sump plugs on days 60–100 form another. BM-01's never show here.
-    expect(board.repeats.map((g) => [g.rigCode, g.cause, g.cases.length])).toEqual([["CF-03", "plug-sump", 6], ["CF-03", "suction-air-leak", 4]]);
+    expect(board.repeats.map((g) => [g.rigCode, g.cause, g.count])).toEqual([["CF-03", "plug-sump", 6], ["CF-03", "suction-air-leak", 4]]);
+    const shortWindow = buildBoard(await boardAggregates(cedar.id, { ...window, repeatDays: 9 }));
+    expect(shortWindow.repeats).toEqual(findRepeats(hits, 9).map((g) => summariseChain(g)).sort(byWeight));
     expect(board.openHandoffs.length).toBe(2);
   });
 });

@@ -1,12 +1,13 @@
 import { pareto, type CauseAggregate, type ParetoRow } from "./pareto";
-import { findRepeats, type CauseHit, type RepeatGroup } from "./repeats";
+import { byWeight, type RepeatChain } from "./repeats";
 import { rigFigures, type RigAggregate, type RigFigures } from "./reliability";
 
 /** The aggregates SQL produces for one company and window; the board is computed from these alone. */
 export interface BoardAggregates {
   rigs: RigAggregate[];
   causes: CauseAggregate[];
-  repeatCandidates: CauseHit[];
+  /** Chains of the same cause on the same rig within the repeat window (SQL finds them). */
+  repeatChains: RepeatChain[];
   weeks: { weekStart: string; cases: number; handoffs: number }[];
   people: { name: string; cases: number; handoffs: number; guides: { title: string; count: number }[]; causes: { cause: string; count: number }[] }[];
   openHandoffs: { caseId: string; rigCode: string; guideTitle: string; openedAt: string; openedBy: string | null }[];
@@ -16,13 +17,13 @@ export interface Board {
   rigs: RigFigures[];
   fleet: { cases: number; failures: number; operatingHours: number; downtimeHours: number; mtbfHours: number | null; mttrHours: number | null };
   pareto: ParetoRow[];
-  repeats: RepeatGroup[];
+  repeats: RepeatChain[];
   weeks: BoardAggregates["weeks"];
   people: (BoardAggregates["people"][number] & { handoffRate: number })[];
   openHandoffs: BoardAggregates["openHandoffs"];
 }
 
-export function buildBoard(a: BoardAggregates, repeatDays = 30): Board {
+export function buildBoard(a: BoardAggregates): Board {
   const rigs = rigFigures(a.rigs);
   const failures = rigs.reduce((s, r) => s + r.failures, 0);
   const operatingHours = rigs.reduce((s, r) => s + (r.operatingHours ?? 0), 0);
@@ -40,7 +41,7 @@ export function buildBoard(a: BoardAggregates, repeatDays = 30): Board {
       mttrHours: closed ? downtimeHours / closed : null,
     },
     pareto: pareto(a.causes),
-    repeats: findRepeats(a.repeatCandidates, repeatDays),
+    repeats: [...a.repeatChains].sort(byWeight),
     weeks: a.weeks,
     people: a.people.map((p) => ({ ...p, handoffRate: p.cases ? p.handoffs / p.cases : 0 })),
     openHandoffs: a.openHandoffs,

@@ -41,3 +41,28 @@ export function findRepeats(hits: CauseHit[], windowDays = 30): RepeatGroup[] {
   }
   return groups.sort((a, b) => Date.parse(b.cases[b.cases.length - 1].openedAt) - Date.parse(a.cases[a.cases.length - 1].openedAt));
 }
+
+/** A chain of repeats as the board shows it: how many, over what span, and the latest cases. */
+export interface RepeatChain {
+  rigCode: string;
+  cause: string;
+  count: number;
+  firstAt: string;
+  lastAt: string;
+  latest: { caseId: string; openedAt: string }[];
+}
+
+export function summariseChain(group: RepeatGroup, latest = 3): RepeatChain {
+  const cases = group.cases;
+  return {
+    rigCode: group.rigCode,
+    cause: group.cause,
+    count: cases.length,
+    firstAt: cases[0].openedAt,
+    lastAt: cases[cases.length - 1].openedAt,
+    latest: cases.slice(-latest).reverse().map((c) => ({ caseId: c.caseId, openedAt: c.openedAt })),
+  };
+}
+
+/** Longest chains first, then the most recent. */
+export const byWeight = (a: RepeatChain, b: RepeatChain) => b.count - a.count || Date.parse(b.lastAt) - Date.parse(a.lastAt) || a.rigCode.localeCompare(b.rigCode) || a.cause.localeCompare(b.cause);
