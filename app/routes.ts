@@ -15,6 +15,8 @@ export default [
   route("cases/:id/photos/:photoId", "routes/cases.$id.photos.$photoId.ts"),
   route("rigs/:code/label", "routes/rigs.$code.label.tsx"),
   route("cases/export", "routes/cases.export.ts"),
+  route("desk/:guideId/v/:number/export", "routes/desk.$guideId.v.$number.export.ts"),
+  route("api/desk/:guideId/v/:number", "routes/api.desk.$guideId.v.$number.ts"),
   layout("routes/shell.tsx", [
     index("routes/home.tsx"),
     route("rigs", "routes/rigs.tsx"),
@@ -27,6 +29,13 @@ export default [
     route("cases/:id", "routes/cases.$id.tsx"),
     route("cases/:id/walk", "routes/cases.$id.walk.tsx"),
     route("admin/outbox", "routes/admin.outbox.tsx"),
+    route("desk", "routes/desk.tsx", [
+      index("routes/desk._index.tsx"),
+      route(":guideId", "routes/desk.$guideId.tsx"),
+      route(":guideId/diff", "routes/desk.$guideId.diff.tsx"),
+      route(":guideId/v/:number", "routes/desk.$guideId.v.$number.tsx"),
+      route(":guideId/v/:number/preview", "routes/desk.$guideId.v.$number.preview.tsx"),
+    ]),
     route("tools", "routes/tools.tsx"),
     route("tools/:tool", "routes/tools.$tool.tsx"),
   ]),

@@ -11,6 +11,7 @@ export const NAV_ITEMS: NavItem[] = [
   { to: "/", label: "Start a fix", minRole: "crew" },
   { to: "/rigs", label: "Rigs", minRole: "crew" },
   { to: "/tools", label: "Field math", minRole: "crew" },
+  { to: "/desk", label: "Guide desk", minRole: "trainer" },
   { to: "/board", label: "Fault board", minRole: "supervisor" },
   { to: "/cases", label: "Cases", minRole: "supervisor" },
   { to: "/rigs/new", label: "Add a rig", minRole: "admin" },

@@ -23,7 +23,7 @@ export function expectedMinutes(order: Check[]): number {
 }
 
 /** The ratio rule: highest probability per minute first (ties: the quicker check first). */
-export function ratioOrder(checks: Check[]): Check[] {
+export function ratioOrder<T extends Check>(checks: T[]): T[] {
   const ratio = (c: Check) => (c.minutes > 0 ? c.probability / c.minutes : c.probability > 0 ? Infinity : 0);
   return [...checks].sort((a, b) => ratio(b) - ratio(a) || a.minutes - b.minutes || a.id.localeCompare(b.id));
 }

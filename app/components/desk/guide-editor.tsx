@@ -1,0 +1,184 @@
+import { useMemo, useState } from "react";
+import { type Cause } from "~/lib/guides/causes";
+import { validateGuide } from "~/lib/guides/validate";
+import { ProblemsPanel } from "./problems-panel";
+import { StepForm, type LooseStep } from "./step-form";
+import { TreeDrawing } from "./tree-drawing";
+
+export interface Draft {
+  id: string;
+  title: string;
+  summary: string;
+  symptoms: string[];
+  initial: string;
+  states: Record<string, LooseStep>;
+}
+
+const field = "mt-1 block min-h-12 w-full rounded-md border-2 border-ink bg-paper px-2";
+
+function uniqueId(states: Record<string, unknown>, base: string) {
+  let id = base;
+  for (let n = 2; id in states; n++) id = `${base}-${n}`;
+  return id;
+}
+
+/** Edit a draft: guide fields, steps, answers; the validator runs on every change. Saving sends the whole draft. */
+export function GuideEditor({ initial, causes, saveUrl }: { initial: Draft; causes: Cause[]; saveUrl: string }) {
+  const [draft, setDraft] = useState<Draft>(initial);
+  const [selected, setSelected] = useState<string | null>(initial.initial in initial.states ? initial.initial : null);
+  const [saved, setSaved] = useState<"saved" | "unsaved" | "saving" | "failed">("saved");
+  const problems = useMemo(() => validateGuide(draft, { causes }).problems, [draft, causes]);
+  const ids = Object.keys(draft.states);
+
+  const change = (next: Draft) => {
+    setDraft(next);
+    setSaved("unsaved");
+  };
+  const setStep = (id: string, step: LooseStep) => change({ ...draft, states: { ...draft.states, [id]: step } });
+  const addStep = (kind: LooseStep["meta"]["kind"] = "check") => {
+    const id = uniqueId(draft.states, `new-${kind}`);
+    const on: Record<string, string> | undefined = kind === "check" ? { YES: "", NO: "" } : kind === "task" ? { DONE: "", CANT: "" } : kind === "safety" ? { ACK: "" } : undefined;
+    change({ ...draft, states: { ...draft.states, [id]: { ...(on ? { on } : { type: "final" as const }), meta: { kind, prompt: "" } } } });
+    setSelected(id);
+    return id;
+  };
+  const removeStep = (id: string) => {
+    const states = Object.fromEntries(
+      Object.entries(draft.states)
+        .filter(([k]) => k !== id)
+        .map(([k, s]) => [k, s.on ? { ...s, on: Object.fromEntries(Object.entries(s.on).map(([a, t]) => [a, t === id ? "" : t])) } : s]),
+    );
+    change({ ...draft, states });
+    setSelected(null);
+  };
+  const rename = (from: string, to: string) => {
+    if (to in draft.states) return;
+    const states = Object.fromEntries(
+      Object.entries(draft.states).map(([k, s]) => [k === from ? to : k, s.on ? { ...s, on: Object.fromEntries(Object.entries(s.on).map(([a, t]) => [a, t === from ? to : t])) } : s]),
+    );
+    change({ ...draft, initial: draft.initial === from ? to : draft.initial, states });
+    setSelected(to);
+  };
+  const move = (id: string, by: number) => {
+    const keys = Object.keys(draft.states);
+    const i = keys.indexOf(id);
+    const j = i + by;
+    if (j < 0 || j >= keys.length) return;
+    [keys[i], keys[j]] = [keys[j], keys[i]];
+    change({ ...draft, states: Object.fromEntries(keys.map((k) => [k, draft.states[k]])) });
+  };
+  const save = async () => {
+    setSaved("saving");
+    try {
+      const res = await fetch(saveUrl, { method: "POST", headers: { "Content-Type": "application/json" }, body: JSON.stringify({ definition: draft }) });
+      setSaved(res.ok ? "saved" : "failed");
+    } catch {
+      setSaved("failed");
+    }
+  };
+
+  return (
+    <div className="space-y-4">
+      <div className="sticky top-0 z-10 flex flex-wrap items-center gap-3 border-b-2 border-ink bg-field py-2">
+        <button type="button" onClick={save} disabled={saved === "saving"} className="min-h-12 rounded-md bg-go px-4 font-bold text-white">
+          Save draft
+        </button>
+        <span role="status" className="font-bold">
+          {saved === "saved" ? "All changes saved." : saved === "saving" ? "Saving…" : saved === "failed" ? "Not saved: try again." : "Unsaved changes."}
+        </span>
+      </div>
+      <ProblemsPanel problems={problems} onSelect={setSelected} />
+      <fieldset className="space-y-3 rounded-lg border-2 border-ink bg-paper p-3">
+        <legend className="px-1 font-bold">Guide</legend>
+        <label className="block font-bold">
+          Title
+          <input value={draft.title} onChange={(e) => change({ ...draft, title: e.target.value })} className={field} />
+        </label>
+        <label className="block font-bold">
+          Summary
+          <textarea value={draft.summary} onChange={(e) => change({ ...draft, summary: e.target.value })} rows={2} className={`${field} py-2`} />
+        </label>
+        <label className="block font-bold">
+          Symptom phrases (one per line, as a crew member would say them)
+          <textarea
+            value={draft.symptoms.join("\n")}
+            onChange={(e) => change({ ...draft, symptoms: e.target.value.split("\n") })}
+            onBlur={() => change({ ...draft, symptoms: draft.symptoms.map((s) => s.trim()).filter(Boolean) })}
+            rows={4}
+            className={`${field} py-2`}
+          />
+        </label>
+        <label className="block font-bold">
+          First step
+          <select value={draft.initial} onChange={(e) => change({ ...draft, initial: e.target.value })} className={field}>
+            {ids.map((id) => (
+              <option key={id}>{id}</option>
+            ))}
+          </select>
+        </label>
+      </fieldset>
+      <TreeDrawing states={draft.states} selected={selected} onSelect={setSelected} />
+      <div className="grid gap-4 md:grid-cols-[16rem_1fr]">
+        <section aria-label="Steps" className="space-y-2">
+          <ul className="space-y-1">
+            {ids.map((id) => (
+              <li key={id} className="flex items-center gap-1">
+                <button
+                  type="button"
+                  onClick={() => setSelected(id)}
+                  aria-current={selected === id ? "true" : undefined}
+                  className={`min-h-11 flex-1 truncate rounded-md border-2 px-2 text-left ${selected === id ? "border-link bg-paper font-bold" : "border-rule bg-paper"}`}
+                >
+                  {draft.states[id].meta.kind === "safety" ? "⛔ " : ""}
+                  {id}
+                </button>
+                <button type="button" aria-label={`Move ${id} up`} onClick={() => move(id, -1)} className="min-h-11 min-w-11 rounded-md border-2 border-rule bg-paper">
+                  ↑
+                </button>
+                <button type="button" aria-label={`Move ${id} down`} onClick={() => move(id, 1)} className="min-h-11 min-w-11 rounded-md border-2 border-rule bg-paper">
+                  ↓
+                </button>
+              </li>
+            ))}
+          </ul>
+          <div className="flex flex-wrap gap-2">
+            {(["check", "task", "safety", "fixed", "handoff"] as const).map((k) => (
+              <button key={k} type="button" onClick={() => addStep(k)} className="min-h-11 rounded-md border-2 border-ink bg-paper px-2 font-bold">
+                + {k}
+              </button>
+            ))}
+          </div>
+        </section>
+        <section aria-label="Selected step" className="rounded-lg border-2 border-ink bg-paper p-3">
+          {selected && draft.states[selected] ? (
+            <>
+              <StepForm
+                id={selected}
+                step={draft.states[selected]}
+                stepIds={ids}
+                causes={causes}
+                onChange={(s) => setStep(selected, s)}
+                onRename={(to) => rename(selected, to)}
+                onCreateTarget={(answer) => {
+                  const kind = "check";
+                  const id = uniqueId(draft.states, `new-${kind}`);
+                  const from = draft.states[selected];
+                  change({
+                    ...draft,
+                    states: { ...draft.states, [selected]: { ...from, on: { ...from.on, [answer]: id } }, [id]: { on: { YES: "", NO: "" }, meta: { kind, prompt: "" } } },
+                  });
+                  setSelected(id);
+                }}
+              />
+              <button type="button" onClick={() => removeStep(selected)} className="mt-4 min-h-12 rounded-md border-2 border-stop px-3 font-bold text-stop">
+                Remove step “{selected}”
+              </button>
+            </>
+          ) : (
+            <p>Pick a step in the list or the drawing.</p>
+          )}
+        </section>
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,137 @@
+import { Markdown } from "~/components/ui/markdown";
+import { CALC_WIDGETS, EVENTS_BY_KIND, STEP_KINDS, type StepKind } from "~/lib/guides/schema";
+
+export interface LooseStep {
+  type?: "final";
+  on?: Record<string, string>;
+  meta: { kind: StepKind; prompt: string; help?: string; handsOn?: boolean; minutes?: number; calc?: string; cause?: string; component?: string };
+}
+
+const NEW = "__new__";
+const field = "mt-1 block min-h-12 w-full rounded-md border-2 border-ink bg-paper px-2";
+
+/** One step's fields, with a live preview of its markdown and answer targets picked from the guide's steps or made on the spot. */
+export function StepForm({
+  id,
+  step,
+  stepIds,
+  causes,
+  onChange,
+  onRename,
+  onCreateTarget,
+}: {
+  id: string;
+  step: LooseStep;
+  stepIds: string[];
+  causes: { code: string; name: string; component: string }[];
+  onChange: (step: LooseStep) => void;
+  onRename: (to: string) => void;
+  onCreateTarget: (answer: string) => void;
+}) {
+  const meta = step.meta;
+  const set = (change: Partial<LooseStep["meta"]>) => onChange({ ...step, meta: { ...meta, ...change } });
+  const setKind = (kind: StepKind) => {
+    const events: readonly string[] = EVENTS_BY_KIND[kind];
+    const on = Object.fromEntries(events.map((e) => [e, step.on?.[e] ?? ""]));
+    const final = events.length === 0;
+    onChange({ ...(final ? { type: "final" as const } : { on }), meta: { ...meta, kind, ...(kind === "fixed" ? {} : { cause: undefined, component: undefined }) } });
+  };
+  return (
+    <div className="space-y-3">
+      <label className="block font-bold">
+        Step id
+        <input
+          key={id}
+          defaultValue={id}
+          onBlur={(e) => e.target.value.trim() && e.target.value.trim() !== id && onRename(e.target.value.trim())}
+          className={field}
+        />
+        <span className="text-sm font-normal">Lower-case words with dashes. Renaming updates every answer that points here.</span>
+      </label>
+      <label className="block font-bold">
+        Kind
+        <select value={meta.kind} onChange={(e) => setKind(e.target.value as StepKind)} className={field}>
+          {STEP_KINDS.map((k) => (
+            <option key={k} value={k}>
+              {k}
+            </option>
+          ))}
+        </select>
+      </label>
+      <label className="block font-bold">
+        Prompt (markdown, short)
+        <textarea value={meta.prompt} onChange={(e) => set({ prompt: e.target.value })} rows={3} className={`${field} py-2`} />
+      </label>
+      <div className="rounded-md border-2 border-dashed border-rule p-2" aria-label="Prompt preview">
+        <p className="text-sm font-bold">Preview</p>
+        <Markdown className="text-lg">{meta.prompt || "—"}</Markdown>
+      </div>
+      <label className="block font-bold">
+        Help (markdown, shown behind “More about this”)
+        <textarea value={meta.help ?? ""} onChange={(e) => set({ help: e.target.value || undefined })} rows={3} className={`${field} py-2`} />
+      </label>
+      {meta.help ? (
+        <div className="rounded-md border-2 border-dashed border-rule p-2" aria-label="Help preview">
+          <Markdown>{meta.help}</Markdown>
+        </div>
+      ) : null}
+      <div className="grid grid-cols-2 gap-3">
+        <label className="flex min-h-12 items-center gap-2 font-bold">
+          <input type="checkbox" checked={!!meta.handsOn} onChange={(e) => set({ handsOn: e.target.checked || undefined })} className="h-6 w-6" />
+          Hands-on
+        </label>
+        <label className="block font-bold">
+          Minutes
+          <input inputMode="decimal" value={meta.minutes ?? ""} onChange={(e) => set({ minutes: e.target.value === "" ? undefined : Number(e.target.value) })} className={field} />
+        </label>
+      </div>
+      <label className="block font-bold">
+        Field-math widget
+        <select value={meta.calc ?? ""} onChange={(e) => set({ calc: e.target.value || undefined })} className={field}>
+          <option value="">None</option>
+          {CALC_WIDGETS.map((c) => (
+            <option key={c}>{c}</option>
+          ))}
+        </select>
+      </label>
+      {meta.kind === "fixed" ? (
+        <label className="block font-bold">
+          Cause
+          <select
+            value={meta.cause ?? ""}
+            onChange={(e) => {
+              const c = causes.find((x) => x.code === e.target.value);
+              set({ cause: e.target.value || undefined, component: c?.component });
+            }}
+            className={field}
+          >
+            <option value="">Choose a cause…</option>
+            {causes.map((c) => (
+              <option key={c.code} value={c.code}>
+                {c.name}
+              </option>
+            ))}
+          </select>
+        </label>
+      ) : null}
+      {(EVENTS_BY_KIND[meta.kind] as readonly string[]).map((answer) => (
+        <label key={answer} className="block font-bold">
+          On {answer} go to
+          <select
+            value={step.on?.[answer] ?? ""}
+            onChange={(e) => (e.target.value === NEW ? onCreateTarget(answer) : onChange({ ...step, on: { ...step.on, [answer]: e.target.value } }))}
+            className={field}
+          >
+            <option value="">Choose a step…</option>
+            {stepIds
+              .filter((s) => s !== id)
+              .map((s) => (
+                <option key={s}>{s}</option>
+              ))}
+            <option value={NEW}>+ A new step</option>
+          </select>
+        </label>
+      ))}
+    </div>
+  );
+}

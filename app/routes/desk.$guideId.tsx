@@ -1,0 +1,170 @@
+import { data, Form, Link, redirect } from "react-router";
+import { z } from "zod";
+import { PageTitle } from "~/components/ui/page-title";
+import { fmt } from "~/lib/calc/units";
+import { formatDateTime } from "~/lib/format";
+import { hasRole } from "~/lib/roles";
+import { GuideVersion } from "~/services/db.server";
+import { deskGuide, learnFromCases, openDraft, reviewVersion, submitDraft } from "~/services/desk.server";
+import { fail, requireRole } from "~/services/guards.server";
+import type { Route } from "./+types/desk.$guideId";
+
+const guideIdOf = (params: { guideId: string }) => {
+  const id = Number(params.guideId);
+  if (!Number.isInteger(id) || id < 1) fail(404, "That guide was not found.");
+  return id;
+};
+
+export async function loader({ request, params }: Route.LoaderArgs) {
+  const user = await requireRole(request, "trainer");
+  const guide = await deskGuide(user, guideIdOf(params));
+  const versions = await GuideVersion.findAll({ where: { guideId: guide.id }, attributes: ["number", "status", "changeNote", "reviewComment", "updatedAt", "publishedAt"], order: [["number", "DESC"]] });
+  return {
+    guide: { id: guide.id, title: guide.title, slug: guide.slug, builtIn: guide.companyId === null, publishedVersion: guide.publishedVersion },
+    versions: versions.map((v) => ({ number: v.number, status: v.status, changeNote: v.changeNote, reviewComment: v.reviewComment, updatedAt: v.updatedAt.toISOString() })),
+    canPublish: hasRole(user.role, "supervisor"),
+    learning: await learnFromCases(user, guide.id),
+  };
+}
+
+const actionSchema = z.discriminatedUnion("intent", [
+  z.object({ intent: z.literal("edit") }),
+  z.object({ intent: z.literal("submit"), number: z.coerce.number().int().positive(), changeNote: z.string().trim().min(3, "Say what changed (at least 3 characters).").max(1000) }),
+  z.object({ intent: z.literal("approve"), number: z.coerce.number().int().positive(), comment: z.string().trim().max(1000).optional() }),
+  z.object({ intent: z.literal("return"), number: z.coerce.number().int().positive(), comment: z.string().trim().min(3, "Say what needs changing.").max(1000) }),
+]);
+
+export async function action({ request, params }: Route.ActionArgs) {
+  const user = await requireRole(request, "trainer");
+  const guideId = guideIdOf(params);
+  const parsed = actionSchema.safeParse(Object.fromEntries(await request.formData()));
+  if (!parsed.success) return data({ error: parsed.error.issues.map((i) => i.message).join(" ") }, { status: 400 });
+  const a = parsed.data;
+  if (a.intent === "edit") {
+    const draft = await openDraft(user, guideId);
+    return redirect(`/desk/${draft.guideId}/v/${draft.number}`);
+  }
+  if (a.intent === "submit") {
+    await submitDraft(user, guideId, a.number, a.changeNote);
+    return { done: `Version ${a.number} sent for review.` };
+  }
+  await requireRole(request, "supervisor");
+  await reviewVersion(user, guideId, a.number, a.intent === "approve" ? "approve" : "return", a.comment ?? null);
+  return { done: a.intent === "approve" ? `Version ${a.number} published: new cases use it.` : `Version ${a.number} sent back to draft.` };
+}
+
+const STATUS: Record<string, string> = { draft: "Draft", in_review: "In review", published: "Published", retired: "Retired" };
+
+export default function DeskGuide({ loaderData, actionData }: Route.ComponentProps) {
+  const { guide, versions, canPublish, learning } = loaderData;
+  const input = "mt-1 block min-h-12 w-full rounded-md border-2 border-ink px-2";
+  return (
+    <>
+      <PageTitle lead={guide.builtIn ? "Built-in guide: editing makes your company's own copy; the built-in stays as it is." : "Your company's guide."}>{guide.title}</PageTitle>
+      {actionData && "error" in actionData ? <p role="alert" className="mb-3 font-bold text-stop">{actionData.error}</p> : null}
+      {actionData && "done" in actionData ? <p role="status" className="mb-3 font-bold text-go">{actionData.done}</p> : null}
+      <Form method="post">
+        <button name="intent" value="edit" className="min-h-14 rounded-md bg-go px-5 text-lg font-bold text-white">
+          {guide.builtIn ? "Edit as your company's copy" : versions.some((v) => v.status === "draft") ? "Open the draft" : "Start a new draft"}
+        </button>
+      </Form>
+
+      <h2 className="mt-6 text-xl font-bold">Versions</h2>
+      <ul className="mt-2 space-y-3">
+        {versions.map((v, i) => (
+          <li key={v.number} className="rounded-lg border-2 border-ink bg-paper p-3">
+            <p className="font-bold">
+              Version {v.number}: {STATUS[v.status]} <span className="font-normal">· {formatDateTime(v.updatedAt)} UTC</span>
+            </p>
+            {v.changeNote ? <p>Change: {v.changeNote}</p> : null}
+            {v.reviewComment ? <p>Review: {v.reviewComment}</p> : null}
+            <p className="mt-1 flex flex-wrap gap-x-4">
+              <Link to={`v/${v.number}`}>{v.status === "draft" && !guide.builtIn ? "Edit" : "View"}</Link>
+              <Link to={`v/${v.number}/preview`}>Preview as crew</Link>
+              <a href={`/desk/${guide.id}/v/${v.number}/export`} download>
+                Export JSON
+              </a>
+              {versions[i + 1] ? <Link to={`diff?a=${versions[i + 1].number}&b=${v.number}`}>What changed from v{versions[i + 1].number}</Link> : null}
+            </p>
+            {v.status === "draft" && !guide.builtIn ? (
+              <Form method="post" className="mt-2">
+                <input type="hidden" name="number" value={v.number} />
+                <label className="block font-bold">
+                  Change note for the reviewer
+                  <input name="changeNote" className={input} />
+                </label>
+                <button name="intent" value="submit" className="mt-2 min-h-12 rounded-md border-2 border-ink bg-paper px-4 font-bold">
+                  Send for review
+                </button>
+              </Form>
+            ) : null}
+            {v.status === "in_review" && canPublish ? (
+              <Form method="post" className="mt-2">
+                <input type="hidden" name="number" value={v.number} />
+                <label className="block font-bold">
+                  Comment
+                  <input name="comment" className={input} />
+                </label>
+                <div className="mt-2 flex flex-wrap gap-2">
+                  <button name="intent" value="approve" className="min-h-12 rounded-md bg-go px-4 font-bold text-white">
+                    Approve and publish
+                  </button>
+                  <button name="intent" value="return" className="min-h-12 rounded-md border-2 border-ink bg-paper px-4 font-bold">
+                    Send back to draft
+                  </button>
+                </div>
+              </Form>
+            ) : null}
+            {v.status === "in_review" && !canPublish ? <p className="mt-1">Waiting for a supervisor to review.</p> : null}
+          </li>
+        ))}
+      </ul>
+
+      {learning ? (
+        <>
+          <h2 className="mt-6 text-xl font-bold">How crews went through version {learning.version} ({learning.cases} cases)</h2>
+          <div className="mt-2 overflow-x-auto rounded-lg border-2 border-ink bg-paper">
+            <table className="w-full min-w-[36rem] text-left">
+              <thead>
+                <tr className="border-b-2 border-ink">
+                  <th scope="col" className="p-2">Step</th>
+                  <th scope="col" className="p-2">Reached</th>
+                  <th scope="col" className="p-2">Answers</th>
+                  <th scope="col" className="p-2">Stopped here</th>
+                  <th scope="col" className="p-2">Median time</th>
+                </tr>
+              </thead>
+              <tbody>
+                {learning.flow.map((f) => (
+                  <tr key={f.stepId} className="border-b border-rule">
+                    <td className="p-2">{f.stepId}</td>
+                    <td className="p-2">{f.reached}</td>
+                    <td className="p-2">{Object.entries(f.answers).map(([a, n]) => `${a} ${n}`).join(", ") || "—"}</td>
+                    <td className="p-2">{f.abandonedHere ? `${f.abandonedHere} abandoned` : ""}{f.endedHere ? `${f.endedHere} ended` : ""}</td>
+                    <td className="p-2">{f.medianSeconds === null ? "—" : `${fmt(f.medianSeconds / 60, 1)} min`}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+          <h2 className="mt-6 text-xl font-bold">Check-order advisor</h2>
+          <p>
+            From {learning.advisor.foundCases} past causes and each check's minutes, checking in this order would find the fault in about{" "}
+            <strong>{fmt(learning.advisor.suggestedMinutes, 1)} min</strong> on average, against <strong>{fmt(learning.advisor.currentMinutes, 1)} min</strong> in the guide's order now
+            (highest chance per minute first). A safety stop moves with the check it guards.
+          </p>
+          <ol className="mt-2 list-decimal space-y-1 pl-6">
+            {learning.advisor.suggested.map((c) => (
+              <li key={c.id}>
+                <strong>{c.id}</strong>
+                {c.guard ? ` (after its stop “${c.guard}”)` : ""}: {c.probability} cases, {fmt(c.minutes, 1)} min
+              </li>
+            ))}
+          </ol>
+        </>
+      ) : null}
+    </>
+  );
+}
+
+export const meta: Route.MetaFunction = ({ data }) => [{ title: `${data?.guide.title ?? "Guide"} · Guide desk · Tankside` }];

@@ -1,0 +1,42 @@
+import { Link } from "react-router";
+import { PreviewWalk } from "~/components/desk/preview-walk";
+import { PageTitle } from "~/components/ui/page-title";
+import { validateGuide } from "~/lib/guides/validate";
+import { versionFor } from "~/services/desk.server";
+import { deskParams } from "~/services/desk-params.server";
+import { requireRole } from "~/services/guards.server";
+import { causeList } from "~/services/guides.server";
+import type { Route } from "./+types/desk.$guideId.v.$number.preview";
+
+export async function loader({ request, params }: Route.LoaderArgs) {
+  const user = await requireRole(request, "trainer");
+  const { guideId, number } = deskParams(params);
+  const v = await versionFor(user, guideId, number);
+  const { guide, problems } = validateGuide(v.version.definition, { causes: causeList() });
+  return { guideId: v.guide.id, title: v.guide.title, number, guide, problems: problems.map((p) => `${p.step ? `step "${p.step}": ` : ""}${p.message}`) };
+}
+
+export default function Preview({ loaderData: d }: Route.ComponentProps) {
+  return (
+    <>
+      <PageTitle lead={`Version ${d.number}, as the crew will see it. No case is made.`}>Preview: {d.title}</PageTitle>
+      <p className="mb-3">
+        <Link to={`/desk/${d.guideId}/v/${d.number}`}>Back to the editor</Link>
+      </p>
+      {d.guide ? (
+        <PreviewWalk guide={d.guide} />
+      ) : (
+        <div role="alert" className="rounded-md border-4 border-stop bg-paper p-3">
+          <p className="font-bold">Fix these first: a guide with problems cannot be walked.</p>
+          <ul className="mt-2 list-disc pl-6">
+            {d.problems.map((p, i) => (
+              <li key={i}>{p}</li>
+            ))}
+          </ul>
+        </div>
+      )}
+    </>
+  );
+}
+
+export const meta: Route.MetaFunction = () => [{ title: "Preview · Guide desk · Tankside" }];

@@ -1,0 +1,214 @@
+import { createHash } from "node:crypto";
+import { Op, QueryTypes } from "sequelize";
+import { compileGuide } from "~/lib/guides/compile";
+import { mainLine } from "~/lib/guides/main-line";
+import type { Guide } from "~/lib/guides/schema";
+import { validateGuide, type GuideProblem } from "~/lib/guides/validate";
+import { expectedMinutes, ratioOrder } from "~/lib/stats/check-order";
+import { stepFlow, type FlowCase } from "~/lib/stats/step-flow";
+import { GuideRecord, GuideVersion, guideScope, sequelize, User } from "./db.server";
+import { fail, notFound, type SessionUser } from "./guards.server";
+import { causeList } from "./guides.server";
+
+const MAX_DEFINITION_CHARS = 200_000;
+const hash = (definition: unknown) => createHash("sha256").update(JSON.stringify(definition)).digest("hex");
+export const checkDefinition = (definition: unknown) => validateGuide(definition, { causes: causeList() }).problems;
+
+/** A guide the company may see on the desk: its own, or built-in. Another company's is a 404. */
+export async function deskGuide(user: SessionUser, guideId: number) {
+  const guide = await GuideRecord.findOne({ where: { id: guideId, [Op.or]: [{ companyId: null }, { companyId: user.companyId }] } });
+  if (!guide) notFound("That guide");
+  return guide;
+}
+
+async function deskVersion(user: SessionUser, guideId: number, number: number) {
+  const guide = await deskGuide(user, guideId);
+  const version = await GuideVersion.findOne({ where: { guideId: guide.id, number } });
+  if (!version) notFound("That version");
+  return { guide, version };
+}
+
+/** The desk's list: built-in and company guides with their versions, newest first. */
+export async function deskList(user: SessionUser) {
+  const guides = await GuideRecord.findAll({
+    where: { [Op.or]: [{ companyId: null }, { companyId: user.companyId }] },
+    attributes: ["id", "companyId", "slug", "title", "publishedVersion", "basedOnGuideId"],
+    include: [{ model: GuideVersion, as: "versions", attributes: ["number", "status", "updatedAt"] }],
+    order: [["title", "ASC"]],
+  });
+  const replaced = new Set(guides.filter((g) => g.companyId !== null && g.basedOnGuideId).map((g) => g.basedOnGuideId));
+  return guides.map((g) => ({
+    id: g.id,
+    slug: g.slug,
+    title: g.title,
+    builtIn: g.companyId === null,
+    replacedByCompanyCopy: replaced.has(g.id),
+    publishedVersion: g.publishedVersion,
+    versions: ((g as GuideRecord & { versions: GuideVersion[] }).versions ?? [])
+      .map((v) => ({ number: v.number, status: v.status, updatedAt: v.updatedAt.toISOString() }))
+      .sort((a, b) => b.number - a.number),
+  }));
+}
+
+/**
+ * Opens a draft to edit. A built-in guide is never edited: the company gets its own copy
+ * (which replaces the built-in for its crews once published). An existing draft is reused.
+ */
+export async function openDraft(user: SessionUser, guideId: number): Promise<{ guideId: number; number: number }> {
+  const source = await deskGuide(user, guideId);
+  return sequelize.transaction(async (transaction) => {
+    let guide = source;
+    if (source.companyId === null) {
+      const scope = guideScope(user.companyId);
+      guide =
+        (await GuideRecord.findOne({ where: { scope, slug: source.slug }, transaction, lock: transaction.LOCK.UPDATE })) ??
+        (await GuideRecord.create({ companyId: user.companyId, scope, slug: source.slug, title: source.title, publishedVersion: null, basedOnGuideId: source.id }, { transaction }));
+    }
+    const draft = await GuideVersion.findOne({ where: { guideId: guide.id, status: "draft" }, transaction });
+    if (draft) return { guideId: guide.id, number: draft.number };
+    const ownLatest = await GuideVersion.findOne({ where: { guideId: guide.id }, order: [["number", "DESC"]], transaction });
+    const from =
+      (guide.publishedVersion ? await GuideVersion.findOne({ where: { guideId: guide.id, number: guide.publishedVersion }, transaction }) : null) ??
+      ownLatest ??
+      (source.publishedVersion ? await GuideVersion.findOne({ where: { guideId: source.id, number: source.publishedVersion }, transaction }) : null);
+    if (!from) notFound("A version to start from");
+    const number = (ownLatest?.number ?? 0) + 1;
+    await GuideVersion.create(
+      { guideId: guide.id, number, status: "draft", definition: from.definition, sourceHash: hash(from.definition), authorId: user.id, reviewerId: null, changeNote: null, reviewComment: null, publishedAt: null },
+      { transaction },
+    );
+    return { guideId: guide.id, number };
+  });
+}
+
+/** A new company guide from a small, valid starting point. */
+export async function createGuide(user: SessionUser, title: string): Promise<{ guideId: number; number: number }> {
+  const base = title.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 60) || "new-guide";
+  const scope = guideScope(user.companyId);
+  let slug = /^[a-z]/.test(base) ? base : `guide-${base}`;
+  for (let n = 2; await GuideRecord.findOne({ where: { [Op.or]: [{ scope, slug }, { scope: "builtin", slug }] } }); n++) slug = `${base}-${n}`;
+  const definition: Guide = {
+    id: slug, title, summary: "What this guide is for, in a sentence.", symptoms: [title.toLowerCase()], initial: "first-check",
+    states: {
+      "first-check": { on: { YES: "fixed-end", NO: "handoff-end" }, meta: { kind: "check", prompt: "Is the first likely cause the problem?", minutes: 1 } },
+      "fixed-end": { type: "final", meta: { kind: "fixed", prompt: "Fixed.", cause: causeList()[0].code, component: causeList()[0].component } },
+      "handoff-end": { type: "final", meta: { kind: "handoff", prompt: "Your supervisor has been told." } },
+    },
+  };
+  const guide = await GuideRecord.create({ companyId: user.companyId, scope, slug, title, publishedVersion: null, basedOnGuideId: null });
+  await GuideVersion.create({ guideId: guide.id, number: 1, status: "draft", definition, sourceHash: hash(definition), authorId: user.id, reviewerId: null, changeNote: null, reviewComment: null, publishedAt: null });
+  return { guideId: guide.id, number: 1 };
+}
+
+/** Saves a draft as it stands (problems and all); repeating a save changes nothing more. A published version cannot be saved over. */
+export async function saveDraft(user: SessionUser, guideId: number, number: number, definition: unknown) {
+  const { guide, version } = await deskVersion(user, guideId, number);
+  if (guide.companyId !== user.companyId || version.status !== "draft") fail(409, "Only a draft of your company's guide can be saved.");
+  if (typeof definition !== "object" || definition === null || Array.isArray(definition)) fail(400, "The guide must be a JSON object.");
+  if (JSON.stringify(definition).length > MAX_DEFINITION_CHARS) fail(413, "That guide is too large (over 200,000 characters).");
+  const sourceHash = hash(definition);
+  if (sourceHash !== version.sourceHash) await version.update({ definition: definition as Guide, sourceHash });
+  return { problems: checkDefinition(definition) };
+}
+
+/** Draft → in review, with a change note; refused while the validator finds problems. */
+export async function submitDraft(user: SessionUser, guideId: number, number: number, changeNote: string) {
+  const { guide, version } = await deskVersion(user, guideId, number);
+  if (guide.companyId !== user.companyId || version.status !== "draft") fail(409, "Only a draft can be sent for review.");
+  const problems = checkDefinition(version.definition);
+  if (problems.length) fail(422, `Fix ${problems.length} problem${problems.length === 1 ? "" : "s"} before sending this for review.`);
+  await version.update({ status: "in_review", changeNote, authorId: version.authorId ?? user.id });
+}
+
+/** A supervisor approves (publishes; the previous published version is retired) or sends back to draft with a comment. */
+export async function reviewVersion(user: SessionUser, guideId: number, number: number, decision: "approve" | "return", comment: string | null) {
+  const { guide, version } = await deskVersion(user, guideId, number);
+  if (guide.companyId !== user.companyId || version.status !== "in_review") fail(409, "Only a version in review can be approved or sent back.");
+  if (decision === "return") {
+    if (!comment) fail(400, "Say what needs changing.", { comment: "required when sending back" });
+    await version.update({ status: "draft", reviewComment: comment, reviewerId: user.id });
+    return;
+  }
+  const problems = checkDefinition(version.definition);
+  if (problems.length) fail(422, "This version has problems and cannot be published.");
+  await sequelize.transaction(async (transaction) => {
+    await GuideVersion.update({ status: "retired" }, { where: { guideId: guide.id, status: "published" }, transaction });
+    await version.update({ status: "published", reviewerId: user.id, reviewComment: comment, publishedAt: new Date() }, { transaction });
+    await guide.update({ publishedVersion: version.number, title: version.definition.title }, { transaction });
+  });
+}
+
+/** Imports a guide file as a new draft; a bad file lists every problem and changes nothing. */
+export async function importGuide(user: SessionUser, text: string): Promise<{ guideId: number; number: number }> {
+  const { guide: parsed, problems } = validateGuide(text, { causes: causeList(), name: "imported file" });
+  if (!parsed) fail(400, `The file has ${problems.length} problem${problems.length === 1 ? "" : "s"}; nothing was imported.`, Object.fromEntries(problems.map((p, i) => [String(i + 1), `${p.step ? `step "${p.step}": ` : ""}${p.message}`])));
+  const scope = guideScope(user.companyId);
+  return sequelize.transaction(async (transaction) => {
+    const builtIn = await GuideRecord.findOne({ where: { scope: "builtin", slug: parsed.id }, transaction });
+    const guide =
+      (await GuideRecord.findOne({ where: { scope, slug: parsed.id }, transaction, lock: transaction.LOCK.UPDATE })) ??
+      (await GuideRecord.create({ companyId: user.companyId, scope, slug: parsed.id, title: parsed.title, publishedVersion: null, basedOnGuideId: builtIn?.id ?? null }, { transaction }));
+    const existingDraft = await GuideVersion.findOne({ where: { guideId: guide.id, status: "draft" }, transaction });
+    if (existingDraft) fail(409, "This guide already has a draft: finish or send it for review before importing another.");
+    const latest = await GuideVersion.findOne({ where: { guideId: guide.id }, order: [["number", "DESC"]], transaction });
+    const number = (latest?.number ?? 0) + 1;
+    await GuideVersion.create(
+      { guideId: guide.id, number, status: "draft", definition: parsed, sourceHash: hash(parsed), authorId: user.id, reviewerId: null, changeNote: "Imported from a file.", reviewComment: null, publishedAt: null },
+      { transaction },
+    );
+    return { guideId: guide.id, number };
+  });
+}
+
+export async function versionFor(user: SessionUser, guideId: number, number: number) {
+  const { guide, version } = await deskVersion(user, guideId, number);
+  const people = await User.findAll({ where: { id: [version.authorId, version.reviewerId].filter((x): x is number => !!x) }, attributes: ["id", "name"] });
+  const nameOf = (id: number | null) => people.find((p) => p.id === id)?.name ?? null;
+  return {
+    guide: { id: guide.id, slug: guide.slug, title: guide.title, builtIn: guide.companyId === null, publishedVersion: guide.publishedVersion },
+    version: {
+      number: version.number, status: version.status, definition: version.definition, changeNote: version.changeNote, reviewComment: version.reviewComment,
+      author: nameOf(version.authorId), reviewer: nameOf(version.reviewerId), publishedAt: version.publishedAt?.toISOString() ?? null, updatedAt: version.updatedAt.toISOString(),
+    },
+  };
+}
+
+/** How crews went through a guide's published version, and what order of checks past causes suggest. */
+export async function learnFromCases(user: SessionUser, guideId: number) {
+  const guide = await deskGuide(user, guideId);
+  if (!guide.publishedVersion) return null;
+  const version = (await GuideVersion.findOne({ where: { guideId: guide.id, number: guide.publishedVersion } }))!;
+  const rows = await sequelize.query<Record<string, unknown>>(
+    `SELECT c.id, c.outcome, c.final_step, c.opened_at, c.cause_code, e.seq, e.step_id, e.answer, e.at
+     FROM cases c LEFT JOIN case_events e ON e.case_id = c.id
+     WHERE c.company_id = :company AND c.guide_version_id = :version ORDER BY c.id, e.seq`,
+    { replacements: { company: user.companyId, version: version.id }, type: QueryTypes.SELECT },
+  );
+  const cases = new Map<string, FlowCase & { cause: string | null }>();
+  for (const r of rows) {
+    const id = String(r.id);
+    if (!cases.has(id)) cases.set(id, { outcome: String(r.outcome), finalStep: (r.final_step as string) ?? null, openedAt: new Date(r.opened_at as string).toISOString(), events: [], cause: (r.cause_code as string) ?? null });
+    if (r.seq !== null) cases.get(id)!.events.push({ seq: Number(r.seq), stepId: String(r.step_id), answer: String(r.answer), at: new Date(r.at as string).toISOString() });
+  }
+  const definition = version.definition;
+  const flow = stepFlow(compileGuide(definition), Object.keys(definition.states), [...cases.values()]);
+  const causeCounts = new Map<string, number>();
+  for (const c of cases.values()) if (c.cause) causeCounts.set(c.cause, (causeCounts.get(c.cause) ?? 0) + 1);
+  const line = mainLine(definition);
+  const checks = line.map((l) => ({ id: l.stepId, minutes: l.minutes, probability: l.causes.reduce((s, c) => s + (causeCounts.get(c) ?? 0), 0), guard: l.guard, causes: l.causes }));
+  const suggested = ratioOrder(checks);
+  return {
+    version: version.number,
+    cases: cases.size,
+    flow,
+    advisor: {
+      current: checks,
+      suggested,
+      currentMinutes: expectedMinutes(checks),
+      suggestedMinutes: expectedMinutes(suggested),
+      foundCases: checks.reduce((s, c) => s + c.probability, 0),
+    },
+  };
+}
+
+export type { GuideProblem };
