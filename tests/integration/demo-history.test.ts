@@ -1,6 +1,7 @@
 import { beforeAll, describe, expect, it } from "vitest";
 import { QueryTypes } from "sequelize";
-import { Case, db } from "../../db/index";
+import { Case, db, GuideRecord, User } from "../../db/index";
+import { learnFromCases } from "~/services/desk.server";
 import { seedDemoHistory } from "../../seeds/demo-history";
 import { resetDatabase } from "../helpers/db";
 
@@ -40,6 +41,20 @@ describe("demo history", () => {
       { type: QueryTypes.SELECT },
     );
     expect(Number(row.repeats)).toBeGreaterThan(10);
+  });
+
+  it("feeds the guide desk: how crews went through lost-prime, and a check order no slower than the guide's", async () => {
+    const mo = (await User.findOne({ where: { email: "mo@cedarflats.example" } }))!;
+    const user = { id: mo.id, name: mo.name, email: mo.email, role: mo.role, companyId: mo.companyId, companyName: "" };
+    const guide = (await GuideRecord.findOne({ where: { scope: "builtin", slug: "lost-prime" } }))!;
+    const learned = (await learnFromCases(user, guide.id))!;
+    const companyCases = await Case.count({ where: { companyId: mo.companyId, guideVersionId: (await db().query("SELECT id FROM guide_versions WHERE guide_id = ? AND status = 'published'", { replacements: [guide.id], type: QueryTypes.SELECT }) as { id: number }[])[0].id } });
+    expect(learned.cases).toBe(companyCases);
+    const first = learned.flow.find((f) => f.stepId === "water-level")!;
+    expect(first.reached).toBe(companyCases);
+    expect(first.medianSeconds).toBeGreaterThan(0);
+    expect(learned.advisor.suggestedMinutes).toBeLessThanOrEqual(learned.advisor.currentMinutes + 1e-9);
+    expect(learned.advisor.foundCases).toBeGreaterThan(0);
   });
 
   it("is the same every time from its fixed seed", async () => {

@@ -1,0 +1,62 @@
+import type { Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { GuideVersion } from "../../db/index";
+import { launchBrowser, signIn, startApp, type RunningApp } from "../helpers/app";
+
+let app: RunningApp;
+let browser: Awaited<ReturnType<typeof launchBrowser>>;
+
+beforeAll(async () => {
+  app = await startApp();
+  browser = await launchBrowser({ width: 1280, height: 900 });
+});
+afterAll(async () => {
+  await browser?.close();
+  await app?.stop();
+});
+
+const caution = (p: Page) => p.getByRole("note", { name: "Shut-down caution" });
+
+describe("guide desk in the browser", () => {
+  it("blocks sending a draft whose hands-on step skips the safety stop, with the caution on every desk page", async () => {
+    const p = await browser.context.newPage();
+    await signIn(p, app.url, "ravi@cedarflats.example");
+    await p.getByRole("link", { name: "Guide desk" }).click();
+    await caution(p).waitFor();
+    await p.getByRole("link", { name: "Vibration or jumping" }).click();
+    await caution(p).waitFor();
+    await p.getByRole("button", { name: "Edit as your company's copy" }).click();
+    await p.waitForURL(/\/desk\/\d+\/v\/\d+$/);
+    await caution(p).waitFor();
+    await p.getByRole("heading", { name: /Checks pass/ }).waitFor();
+
+    // Point "agitator-only" YES straight at the hands-on paddle check, past its safety stop.
+    await p.getByRole("region", { name: "Steps" }).getByRole("button", { name: "agitator-only", exact: true }).click();
+    await p.getByLabel("On YES go to").selectOption("look-paddles");
+    await p.getByRole("button", { name: 'Step “look-paddles”' }).first().waitFor();
+    await p.getByText("is hands-on but can be reached without passing a safety step").first().waitFor();
+    await p.getByRole("button", { name: "Save draft" }).click();
+    await p.getByText("All changes saved.").waitFor();
+
+    await p.getByRole("link", { name: "Versions and review" }).click();
+    await caution(p).waitFor();
+    await p.getByLabel("Change note for the reviewer").fill("Skip the stop");
+    await p.getByRole("button", { name: "Send for review" }).click();
+    await p.getByRole("alert").filter({ hasText: /Fix \d+ problems? before sending this for review/ }).waitFor();
+    const drafts = await GuideVersion.findAll({ where: { status: "in_review" } });
+    expect(drafts).toHaveLength(0);
+    await p.close();
+  });
+
+  it("previews a draft as the crew sees it, without making a case", async () => {
+    const p = await browser.context.newPage();
+    await p.goto(`${app.url}/desk`);
+    await p.getByRole("link", { name: "Leaks" }).first().click();
+    await p.getByRole("link", { name: "Preview as crew" }).first().click();
+    await caution(p).waitFor();
+    await p.locator("#step-prompt", { hasText: "cam-lock" }).waitFor();
+    await p.getByRole("button", { name: "Yes", exact: true }).click();
+    await p.getByRole("button", { name: "Machine is shut down and locked out" }).waitFor();
+    await p.close();
+  });
+});
