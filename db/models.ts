@@ -1,12 +1,4 @@
-import {
-  DataTypes,
-  Model,
-  type CreationOptional,
-  type ForeignKey,
-  type InferAttributes,
-  type InferCreationAttributes,
-  type Sequelize,
-} from "sequelize";
+import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
 
 import type { Guide } from "../app/lib/guides/schema";
 import { ROLES, type Role } from "../app/lib/roles";
@@ -165,10 +157,7 @@ const decimal = (precision: number, scale: number, field: string) => ({
 
 /** Binds every model to the one Sequelize instance. Called once, by db/index.ts. */
 export function initModels(sequelize: Sequelize) {
-  Company.init(
-    { id, name: DataTypes.STRING(120), slug: DataTypes.STRING(60), ...timestamps },
-    { sequelize, tableName: "companies" },
-  );
+  Company.init({ id, name: DataTypes.STRING(120), slug: DataTypes.STRING(60), ...timestamps }, { sequelize, tableName: "companies" });
   User.init(
     {
       id,

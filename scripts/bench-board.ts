@@ -17,7 +17,12 @@ import { loadLibrary } from "../app/lib/guides/files";
 import { importBuiltinGuides } from "../seeds/import-guides";
 import { seededRandom } from "../seeds/random";
 
-const server = await startLocalMariadb({ dir: path.resolve(".data/bench"), port: Number(process.env.BENCH_DB_PORT ?? 3427), database: "tankside_bench", log: () => {} });
+const server = await startLocalMariadb({
+  dir: path.resolve(".data/bench"),
+  port: Number(process.env.BENCH_DB_PORT ?? 3427),
+  database: "tankside_bench",
+  log: () => {},
+});
 process.env.DATABASE_URL = server.url;
 const { boardAggregates } = await import("../app/services/board.server");
 const { buildBoard } = await import("../app/lib/stats/board");
@@ -26,7 +31,17 @@ const sequelize = db();
 const random = seededRandom(7);
 const YEAR = 365 * 86_400_000;
 const now = Date.UTC(2026, 10, 30);
-const CAUSES = ["suction-air-leak", "plug-sump", "plug-nozzle", "low-engine-speed", "foam-over-agitation", "leak-pressure-clamp", "hose-too-long", "bent-paddle", null];
+const CAUSES = [
+  "suction-air-leak",
+  "plug-sump",
+  "plug-nozzle",
+  "low-engine-speed",
+  "foam-over-agitation",
+  "leak-pressure-clamp",
+  "hose-too-long",
+  "bent-paddle",
+  null,
+];
 
 async function reset() {
   await sequelize.query("SET FOREIGN_KEY_CHECKS = 0");
@@ -40,10 +55,31 @@ async function reset() {
 
 async function company(slug: string) {
   const c = await Company.create({ name: slug, slug });
-  const user = await User.create({ companyId: c.id, email: `${slug}@bench.example`, name: slug, passwordHash: "x", role: "crew", firstFailedAt: null, lockedUntil: null });
+  const user = await User.create({
+    companyId: c.id,
+    email: `${slug}@bench.example`,
+    name: slug,
+    passwordHash: "x",
+    role: "crew",
+    firstFailedAt: null,
+    lockedUntil: null,
+  });
   const rigs = [];
   for (let i = 1; i <= 5; i++) {
-    rigs.push(await Rig.create({ companyId: c.id, code: `R-${i}`, name: `Rig ${i}`, mount: "truck", tankGal: 1000, pumpKind: "c", hoseLengthFt: 200, hoseDiameterIn: 1.5, nozzleTips: [], notes: null }));
+    rigs.push(
+      await Rig.create({
+        companyId: c.id,
+        code: `R-${i}`,
+        name: `Rig ${i}`,
+        mount: "truck",
+        tankGal: 1000,
+        pumpKind: "c",
+        hoseLengthFt: 200,
+        hoseDiameterIn: 1.5,
+        nozzleTips: [],
+        notes: null,
+      }),
+    );
   }
   return { id: c.id, userId: user.id, rigIds: rigs.map((r) => r.id) };
 }
@@ -53,12 +89,26 @@ async function addCases(c: { id: number; userId: number; rigIds: number[] }, cou
     const batch: CreationAttributes<Case>[] = [];
     for (let i = 0; i < Math.min(5000, count - done); i++) {
       const openedAt = new Date(now - random.next() * YEAR);
-      const outcome = random.weighted([["fixed", 8], ["handoff", 1.5], ["abandoned", 0.5]] as const);
+      const outcome = random.weighted([
+        ["fixed", 8],
+        ["handoff", 1.5],
+        ["abandoned", 0.5],
+      ] as const);
       const cause = outcome === "fixed" ? random.pick(CAUSES) : null;
       batch.push({
-        id: randomUUID(), companyId: c.id, rigId: random.pick(c.rigIds), guideVersionId: versionId, openedBy: c.userId, openedAt,
-        closedAt: new Date(openedAt.getTime() + random.int(5, 90) * 60_000), engineHours: Math.round((openedAt.getTime() - now + YEAR) / 3_600_000) / 4,
-        outcome, finalStep: null, causeCode: cause, safetyAckAt: null, note: null,
+        id: randomUUID(),
+        companyId: c.id,
+        rigId: random.pick(c.rigIds),
+        guideVersionId: versionId,
+        openedBy: c.userId,
+        openedAt,
+        closedAt: new Date(openedAt.getTime() + random.int(5, 90) * 60_000),
+        engineHours: Math.round((openedAt.getTime() - now + YEAR) / 3_600_000) / 4,
+        outcome,
+        finalStep: null,
+        causeCode: cause,
+        safetyAckAt: null,
+        note: null,
       });
     }
     await Case.bulkCreate(batch);

@@ -10,7 +10,9 @@ import { startFakeSmtp } from "./fakes/smtp";
 import { freePort } from "./free-port";
 
 const dataDir = path.resolve(".data");
-const db = process.env.DATABASE_URL ? null : await startLocalMariadb({ dir: path.join(dataDir, "mariadb"), port: Number(process.env.DB_PORT ?? 3406), database: "tankside", log: () => {} });
+const db = process.env.DATABASE_URL
+  ? null
+  : await startLocalMariadb({ dir: path.join(dataDir, "mariadb"), port: Number(process.env.DB_PORT ?? 3406), database: "tankside", log: () => {} });
 if (db) process.env.DATABASE_URL = db.url;
 const smtp = process.env.SMTP_URL ? null : await startFakeSmtp({ port: await freePort(), dir: path.join(dataDir, "outbox") });
 if (smtp) {

@@ -16,16 +16,62 @@ const SEED = 20_261_202;
 
 /** How each rig behaves: fault chances per working day, and guides it tends to need. */
 const PROFILES: Record<string, { perDay: number; hoursPerDay: number; favourites: [string, number][]; repeatEnd?: [string, string, number] }> = {
-  "CF-03": { perDay: 3.8, hoursPerDay: 6.5, favourites: [["lost-prime", 5], ["leaks", 3], ["plugging", 2]], repeatEnd: ["lost-prime", "fixed-air-leak", 0.55] },
-  "CF-07": { perDay: 2.2, hoursPerDay: 7, favourites: [["short-throw", 3], ["plugging", 2], ["slurry-too-thick", 2]] },
-  "CF-11": { perDay: 1.0, hoursPerDay: 7.5, favourites: [["foaming", 2], ["short-throw", 2]] },
-  "BM-01": { perDay: 2.6, hoursPerDay: 6, favourites: [["foaming", 4], ["agitator-stall", 2], ["lost-prime", 2]] },
-  "BM-02": { perDay: 1.6, hoursPerDay: 5, favourites: [["vibration", 3], ["leaks", 2]] },
+  "CF-03": {
+    perDay: 3.8,
+    hoursPerDay: 6.5,
+    favourites: [
+      ["lost-prime", 5],
+      ["leaks", 3],
+      ["plugging", 2],
+    ],
+    repeatEnd: ["lost-prime", "fixed-air-leak", 0.55],
+  },
+  "CF-07": {
+    perDay: 2.2,
+    hoursPerDay: 7,
+    favourites: [
+      ["short-throw", 3],
+      ["plugging", 2],
+      ["slurry-too-thick", 2],
+    ],
+  },
+  "CF-11": {
+    perDay: 1.0,
+    hoursPerDay: 7.5,
+    favourites: [
+      ["foaming", 2],
+      ["short-throw", 2],
+    ],
+  },
+  "BM-01": {
+    perDay: 2.6,
+    hoursPerDay: 6,
+    favourites: [
+      ["foaming", 4],
+      ["agitator-stall", 2],
+      ["lost-prime", 2],
+    ],
+  },
+  "BM-02": {
+    perDay: 1.6,
+    hoursPerDay: 5,
+    favourites: [
+      ["vibration", 3],
+      ["leaks", 2],
+    ],
+  },
 };
 
 const OPENERS: Record<string, [string, number][]> = {
-  "cedar-flats": [["dana@cedarflats.example", 8], ["ravi@cedarflats.example", 3], ["mo@cedarflats.example", 1]],
-  "blue-mesa": [["sam@bluemesa.example", 7], ["li@bluemesa.example", 2]],
+  "cedar-flats": [
+    ["dana@cedarflats.example", 8],
+    ["ravi@cedarflats.example", 3],
+    ["mo@cedarflats.example", 1],
+  ],
+  "blue-mesa": [
+    ["sam@bluemesa.example", 7],
+    ["li@bluemesa.example", 2],
+  ],
 };
 
 /** Spraying season: mid-March to mid-November, Monday to Saturday. */
@@ -87,10 +133,19 @@ export async function seedDemoHistory(now = new Date(), log: (line: string) => v
           const closedAt = new Date(t + (endKind === "handoff" && !abandoned ? 20 : 2) * 60_000 * (0.5 + random.next()));
           const finalStep = abandoned ? null : path.steps[path.steps.length - 1];
           cases.push({
-            id, companyId: company.id, rigId: rig.id, guideVersionId: guide.versionId, openedBy: random.weighted(openers), openedAt, closedAt,
+            id,
+            companyId: company.id,
+            rigId: rig.id,
+            guideVersionId: guide.versionId,
+            openedBy: random.weighted(openers),
+            openedAt,
+            closedAt,
             engineHours: rig.hasHourMeter ? Math.round(hours * 10) / 10 : null,
             outcome: abandoned ? "abandoned" : (endKind as "fixed" | "handoff"),
-            finalStep, causeCode: finalStep ? (guide.definition.states[finalStep].meta.cause ?? null) : null, safetyAckAt: ack, note: null,
+            finalStep,
+            causeCode: finalStep ? (guide.definition.states[finalStep].meta.cause ?? null) : null,
+            safetyAckAt: ack,
+            note: null,
             // Supervisors have dealt with all but the last week's hand-offs.
             handoffResolvedAt: endKind === "handoff" && !abandoned && end - day > 7 * DAY ? new Date(closedAt.getTime() + 86_400_000) : null,
           });

@@ -30,8 +30,16 @@ export async function importBuiltinGuides(library: Guide[]): Promise<{ created: 
       await GuideVersion.update({ status: "retired" }, { where: { guideId: record.id, status: "published" }, transaction });
       await GuideVersion.create(
         {
-          guideId: record.id, number, status: "published", definition: guide, sourceHash: hash, authorId: null, reviewerId: null,
-          changeNote: number === 1 ? "Shipped with Tankside." : "Updated shipped guide.", reviewComment: null, publishedAt: new Date(),
+          guideId: record.id,
+          number,
+          status: "published",
+          definition: guide,
+          sourceHash: hash,
+          authorId: null,
+          reviewerId: null,
+          changeNote: number === 1 ? "Shipped with Tankside." : "Updated shipped guide.",
+          reviewComment: null,
+          publishedAt: new Date(),
         },
         { transaction },
       );

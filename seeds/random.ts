@@ -10,8 +10,8 @@ export function seededRandom(seed: number) {
   return {
     next,
     int: (lo: number, hi: number) => lo + Math.floor(next() * (hi - lo + 1)),
-    pick: <T,>(xs: readonly T[]): T => xs[Math.floor(next() * xs.length)],
-    weighted: <T,>(items: readonly (readonly [T, number])[]): T => {
+    pick: <T>(xs: readonly T[]): T => xs[Math.floor(next() * xs.length)],
+    weighted: <T>(items: readonly (readonly [T, number])[]): T => {
       const total = items.reduce((sum, [, w]) => sum + w, 0);
       let r = next() * total;
       for (const [item, w] of items) if ((r -= w) <= 0) return item;

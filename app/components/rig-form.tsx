@@ -85,7 +85,10 @@ export function RigForm({
               <FormField field={t.widthFt} label="Pattern width (ft)">
                 <input {...number(t.widthFt)} className={inputClass} />
               </FormField>
-              <button {...form.remove.getButtonProps({ name: fields.nozzleTips.name, index })} className="min-h-12 rounded-md border-2 border-ink px-3 font-bold">
+              <button
+                {...form.remove.getButtonProps({ name: fields.nozzleTips.name, index })}
+                className="min-h-12 rounded-md border-2 border-ink px-3 font-bold"
+              >
                 Remove tip {index + 1}
               </button>
             </div>
@@ -107,7 +110,10 @@ export function RigForm({
               <FormField field={t.ftLb} label="Torque (ft·lb)">
                 <input {...number(t.ftLb)} className={inputClass} />
               </FormField>
-              <button {...form.remove.getButtonProps({ name: fields.torqueSpecs.name, index })} className="min-h-12 rounded-md border-2 border-ink px-3 font-bold">
+              <button
+                {...form.remove.getButtonProps({ name: fields.torqueSpecs.name, index })}
+                className="min-h-12 rounded-md border-2 border-ink px-3 font-bold"
+              >
                 Remove part {index + 1}
               </button>
             </div>

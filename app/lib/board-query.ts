@@ -1,14 +1,28 @@
 import { z } from "zod";
 
-const day = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, "use a date like 2026-06-01").refine((s) => !Number.isNaN(Date.parse(s)), "not a real date");
+const day = z
+  .string()
+  .regex(/^\d{4}-\d{2}-\d{2}$/, "use a date like 2026-06-01")
+  .refine((s) => !Number.isNaN(Date.parse(s)), "not a real date");
 
 /** The board's window from a query string: ?from=YYYY-MM-DD&to=YYYY-MM-DD&rig=CF-03&repeatDays=30 (default: the last 365 days). */
 export const boardQuerySchema = z
   .object({
     from: day.optional(),
     to: day.optional(),
-    rig: z.string().trim().toUpperCase().max(16).optional().or(z.literal("").transform(() => undefined)),
-    repeatDays: z.coerce.number({ error: "repeatDays must be a number" }).int("repeatDays must be whole days").min(1, "repeatDays must be at least 1").max(365, "repeatDays must be at most 365").default(30),
+    rig: z
+      .string()
+      .trim()
+      .toUpperCase()
+      .max(16)
+      .optional()
+      .or(z.literal("").transform(() => undefined)),
+    repeatDays: z.coerce
+      .number({ error: "repeatDays must be a number" })
+      .int("repeatDays must be whole days")
+      .min(1, "repeatDays must be at least 1")
+      .max(365, "repeatDays must be at most 365")
+      .default(30),
   })
   .transform((q, ctx) => {
     const today = new Date();

@@ -18,7 +18,9 @@ export function digestMail(company: string, board: Board, window: { from: string
     ...(board.pareto.length ? board.pareto.slice(0, 5).map((p) => `  ${causeName(p.cause)}: ${p.count} (${fmt(p.share * 100)} %)`) : ["  none"]),
     "",
     "Repeats (same cause on the same rig):",
-    ...(board.repeats.length ? board.repeats.slice(0, 10).map((g) => `  ${g.rigCode}: ${causeName(g.cause)}, ${g.count} times (${g.firstAt.slice(0, 10)} to ${g.lastAt.slice(0, 10)})`) : ["  none"]),
+    ...(board.repeats.length
+      ? board.repeats.slice(0, 10).map((g) => `  ${g.rigCode}: ${causeName(g.cause)}, ${g.count} times (${g.firstAt.slice(0, 10)} to ${g.lastAt.slice(0, 10)})`)
+      : ["  none"]),
     "",
     "Open hand-offs:",
     ...(board.openHandoffs.length
@@ -27,5 +29,8 @@ export function digestMail(company: string, board: Board, window: { from: string
     "",
     `The fault board: ${appUrl}/board`,
   ];
-  return { subject: `Tankside weekly digest: ${flagged.length ? `${flagged.map((r) => r.rigCode).join(", ")} to look at` : "no rig flagged"}`, text: lines.join("\n") };
+  return {
+    subject: `Tankside weekly digest: ${flagged.length ? `${flagged.map((r) => r.rigCode).join(", ")} to look at` : "no rig flagged"}`,
+    text: lines.join("\n"),
+  };
 }

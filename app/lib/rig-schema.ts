@@ -29,7 +29,10 @@ export const rigInputSchema = z.object({
     .max(6000, "A tank over 6,000 gal is not plausible."),
   pumpKind: z.string({ error: "Say what pump it has." }).trim().min(1, "Say what pump it has.").max(120, "Keep it under 120 characters."),
   hasHourMeter: z.boolean().default(false),
-  engineHours: z.number({ error: "Give the engine hours (0 if unknown)." }).min(0, "Engine hours cannot be negative.").max(100_000, "Over 100,000 engine hours is not plausible."),
+  engineHours: z
+    .number({ error: "Give the engine hours (0 if unknown)." })
+    .min(0, "Engine hours cannot be negative.")
+    .max(100_000, "Over 100,000 engine hours is not plausible."),
   hoseLengthFt: z
     .number({ error: "Give the hose carried, in feet." })
     .int("Hose length is a whole number of feet.")

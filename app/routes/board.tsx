@@ -43,7 +43,9 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
   const topCause = board.pareto[0];
   return (
     <>
-      <PageTitle lead={`${window.from} to ${window.to}${window.rig ? ` · ${window.rig}` : " · all rigs"} · ${board.fleet.cases.toLocaleString("en-US")} cases`}>Fault board</PageTitle>
+      <PageTitle lead={`${window.from} to ${window.to}${window.rig ? ` · ${window.rig}` : " · all rigs"} · ${board.fleet.cases.toLocaleString("en-US")} cases`}>
+        Fault board
+      </PageTitle>
 
       <section aria-label="What to act on" className="grid gap-3 sm:grid-cols-2">
         <div className="rounded-lg border-4 border-stop bg-paper p-4">
@@ -54,7 +56,9 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
               {flagged[0].ratePer100h !== null ? ` (${h(flagged[0].ratePer100h, 1)} vs ${h(flagged[0].fleetRatePer100h, 1)} per 100 engine hours)` : ""}.
             </p>
           ) : worst ? (
-            <p className="text-xl">No rig stands out from the fleet. Highest rate: {worst.rigCode}, {h(worst.ratePer100h, 1)} per 100 h.</p>
+            <p className="text-xl">
+              No rig stands out from the fleet. Highest rate: {worst.rigCode}, {h(worst.ratePer100h, 1)} per 100 h.
+            </p>
           ) : (
             <p>No engine hours recorded in this window.</p>
           )}
@@ -93,7 +97,12 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
         </label>
         <label className="font-bold">
           Repeat window (days)
-          <input name="repeatDays" inputMode="numeric" defaultValue={window.repeatDays} className="mt-1 block min-h-12 w-full rounded-md border-2 border-ink px-2" />
+          <input
+            name="repeatDays"
+            inputMode="numeric"
+            defaultValue={window.repeatDays}
+            className="mt-1 block min-h-12 w-full rounded-md border-2 border-ink px-2"
+          />
         </label>
         <button type="submit" className="col-span-2 min-h-12 self-end rounded-md bg-go font-bold text-white sm:col-span-1">
           Show
@@ -108,7 +117,18 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
           <table className="w-full min-w-[46rem] border-collapse text-left">
             <thead>
               <tr className="border-b-2 border-ink">
-                {["Rig", "Cases", "Fixed / handed off / abandoned", "Engine h", "MTBF", "MTTR", "Downtime", "Availability", "Faults per 100 h (95 % range)", "Flag"].map((c) => (
+                {[
+                  "Rig",
+                  "Cases",
+                  "Fixed / handed off / abandoned",
+                  "Engine h",
+                  "MTBF",
+                  "MTTR",
+                  "Downtime",
+                  "Availability",
+                  "Faults per 100 h (95 % range)",
+                  "Flag",
+                ].map((c) => (
                   <th key={c} scope="col" className="p-2">
                     {c}
                   </th>
@@ -130,7 +150,9 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
                   <td className="p-2">{r.mttrHours === null ? "—" : `${h(r.mttrHours * 60)} min`}</td>
                   <td className="p-2">{h(r.repairHours, 1)} h</td>
                   <td className="p-2">{r.availability === null ? "—" : `${fmt(r.availability * 100, 2)} %`}</td>
-                  <td className="p-2">{r.ratePer100h === null ? "—" : `${h(r.ratePer100h, 1)} (${h(r.rateInterval!.lower, 1)}–${h(r.rateInterval!.upper, 1)})`}</td>
+                  <td className="p-2">
+                    {r.ratePer100h === null ? "—" : `${h(r.ratePer100h, 1)} (${h(r.rateInterval!.lower, 1)}–${h(r.rateInterval!.upper, 1)})`}
+                  </td>
                   <td className="p-2 font-bold">{r.outOfLine ? `Above fleet (${h(r.fleetRatePer100h, 1)})` : ""}</td>
                 </tr>
               ))}
@@ -138,7 +160,8 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
           </table>
         </div>
         <p className="mt-1 text-sm">
-          MTBF: engine hours ÷ fixed and handed-off cases; MTTR: mean time from opening to closing a case; availability = MTBF ÷ (MTBF + MTTR) (ISO 14224 definitions). Range: exact Poisson (Garwood).
+          MTBF: engine hours ÷ fixed and handed-off cases; MTTR: mean time from opening to closing a case; availability = MTBF ÷ (MTBF + MTTR) (ISO 14224
+          definitions). Range: exact Poisson (Garwood).
         </p>
       </section>
 
@@ -146,7 +169,11 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
         <h2 id="pareto-h" className="text-2xl font-bold">
           Causes, most frequent first
         </h2>
-        <ParetoChart rows={board.pareto.slice(0, 12).map((p) => ({ label: name(p.cause).split(" (")[0].slice(0, 28), count: p.count, cumulative: Math.round(p.cumulativeShare * 1000) / 10 }))} />
+        <ParetoChart
+          rows={board.pareto
+            .slice(0, 12)
+            .map((p) => ({ label: name(p.cause).split(" (")[0].slice(0, 28), count: p.count, cumulative: Math.round(p.cumulativeShare * 1000) / 10 }))}
+        />
         <details className="rounded-md border-2 border-rule bg-paper p-3" open>
           <summary className="min-h-12 cursor-pointer py-2 font-bold">Causes as a table</summary>
           <table className="w-full border-collapse text-left">
@@ -265,14 +292,20 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
       </section>
 
       <p className="mt-6">
-        <a href={`/api/board?from=${window.from}&to=${window.to}${window.rig ? `&rig=${window.rig}` : ""}&repeatDays=${window.repeatDays}`}>These figures as JSON</a>
+        <a href={`/api/board?from=${window.from}&to=${window.to}${window.rig ? `&rig=${window.rig}` : ""}&repeatDays=${window.repeatDays}`}>
+          These figures as JSON
+        </a>
       </p>
       {canSendDigest ? (
         <Form method="post" className="mt-4">
           <button type="submit" disabled={busy} className="min-h-14 rounded-md border-2 border-ink bg-paper px-4 font-bold">
             Send the weekly digest now
           </button>
-          {actionData ? <p role="status" className="mt-2 font-bold">Digest sent to {actionData.sentTo.join(", ") || "no one (no supervisors)"}.</p> : null}
+          {actionData ? (
+            <p role="status" className="mt-2 font-bold">
+              Digest sent to {actionData.sentTo.join(", ") || "no one (no supervisors)"}.
+            </p>
+          ) : null}
         </Form>
       ) : null}
     </>

@@ -33,7 +33,12 @@ export async function action({ request, params }: Route.ActionArgs) {
 export default function CasePage({ loaderData: c }: Route.ComponentProps) {
   const duration = c.closedAt ? formatDuration(Date.parse(c.closedAt) - Date.parse(c.openedAt)) : "still open";
   const facts: [string, React.ReactNode][] = [
-    ["Rig", <Link to={`/rigs/${c.rig.code}`}>{c.rig.code} · {c.rig.name}</Link>],
+    [
+      "Rig",
+      <Link to={`/rigs/${c.rig.code}`}>
+        {c.rig.code} · {c.rig.name}
+      </Link>,
+    ],
     ["Guide", `${c.guide.title} (version ${c.guide.version})`],
     ["Started by", c.openedBy ?? "—"],
     ["Opened", `${formatDateTime(c.openedAt)} UTC`],
@@ -60,8 +65,16 @@ export default function CasePage({ loaderData: c }: Route.ComponentProps) {
           </div>
         ))}
       </dl>
-      {c.finalPrompt ? <p className="mt-3 text-lg"><strong>Where it ended:</strong> {c.finalPrompt.replace(/\*\*/g, "")}</p> : null}
-      {c.note ? <p className="mt-2 text-lg"><strong>Crew note:</strong> {c.note}</p> : null}
+      {c.finalPrompt ? (
+        <p className="mt-3 text-lg">
+          <strong>Where it ended:</strong> {c.finalPrompt.replace(/\*\*/g, "")}
+        </p>
+      ) : null}
+      {c.note ? (
+        <p className="mt-2 text-lg">
+          <strong>Crew note:</strong> {c.note}
+        </p>
+      ) : null}
       {c.outcome === "handoff" ? (
         c.handoffResolvedAt ? (
           <p className="mt-2 font-bold">Hand-off dealt with {formatDateTime(c.handoffResolvedAt)} UTC.</p>
@@ -98,7 +111,11 @@ export default function CasePage({ loaderData: c }: Route.ComponentProps) {
           {c.photos.map((p) => (
             <li key={p.id}>
               <a href={`/cases/${c.id}/photos/${p.id}`}>
-                <img src={`/cases/${c.id}/photos/${p.id}`} alt={`Photo at step ${p.stepId ?? "—"}`} className="h-28 w-28 rounded border-2 border-ink object-cover" />
+                <img
+                  src={`/cases/${c.id}/photos/${p.id}`}
+                  alt={`Photo at step ${p.stepId ?? "—"}`}
+                  className="h-28 w-28 rounded border-2 border-ink object-cover"
+                />
               </a>
             </li>
           ))}

@@ -17,7 +17,11 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     guide: detail.guide,
     rig: detail.rig,
     stepsToEnd: stepsToEnd(detail.guide.definition),
-    causeNames: Object.fromEntries(causeList().filter((c) => codes.has(c.code)).map((c) => [c.code, c.name])),
+    causeNames: Object.fromEntries(
+      causeList()
+        .filter((c) => codes.has(c.code))
+        .map((c) => [c.code, c.name]),
+    ),
     events: detail.events.map((e) => ({ id: e.id, seq: e.seq, stepId: e.stepId, answer: e.answer as "YES", at: e.at, ...(e.note ? { note: e.note } : {}) })),
   };
 }

@@ -13,7 +13,17 @@ export async function loader({ request }: Route.LoaderArgs) {
   const { rows } = await listCases(user, parsed.data, { all: true });
   const names = new Map(causeList().map((c) => [c.code, c.name]));
   const csv = stringify(
-    rows.map((r) => [r.id, r.rigCode, r.guideTitle, r.causeCode ?? "", r.causeCode ? (names.get(r.causeCode) ?? "") : "", r.outcome, r.person ?? "", r.openedAt, r.durationSeconds ?? ""]),
+    rows.map((r) => [
+      r.id,
+      r.rigCode,
+      r.guideTitle,
+      r.causeCode ?? "",
+      r.causeCode ? (names.get(r.causeCode) ?? "") : "",
+      r.outcome,
+      r.person ?? "",
+      r.openedAt,
+      r.durationSeconds ?? "",
+    ]),
     { header: true, columns: ["case_id", "rig", "guide", "cause_code", "cause", "outcome", "opened_by", "opened_at_utc", "duration_seconds"] },
   );
   const stamp = new Date().toISOString().slice(0, 10);

@@ -151,7 +151,10 @@ export default function Cases({ loaderData }: Route.ComponentProps) {
       </div>
       <nav aria-label="Pages" className="mt-3 flex items-center justify-between gap-2">
         {filters.page > 1 ? (
-          <Link to={`?${filtersToSearch(filters, { page: filters.page - 1 })}`} className="flex min-h-12 items-center rounded-md border-2 border-ink bg-paper px-4 font-bold">
+          <Link
+            to={`?${filtersToSearch(filters, { page: filters.page - 1 })}`}
+            className="flex min-h-12 items-center rounded-md border-2 border-ink bg-paper px-4 font-bold"
+          >
             Previous
           </Link>
         ) : (
@@ -161,7 +164,10 @@ export default function Cases({ loaderData }: Route.ComponentProps) {
           Page {filters.page} of {pages}
         </span>
         {filters.page < pages ? (
-          <Link to={`?${filtersToSearch(filters, { page: filters.page + 1 })}`} className="flex min-h-12 items-center rounded-md border-2 border-ink bg-paper px-4 font-bold">
+          <Link
+            to={`?${filtersToSearch(filters, { page: filters.page + 1 })}`}
+            className="flex min-h-12 items-center rounded-md border-2 border-ink bg-paper px-4 font-bold"
+          >
             Next
           </Link>
         ) : (

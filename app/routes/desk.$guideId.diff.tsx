@@ -16,7 +16,10 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   const before = va.version.definition.states;
   const after = vb.version.definition.states;
   return {
-    guide: va.guide, a: a.number, b: b.number, diff,
+    guide: va.guide,
+    a: a.number,
+    b: b.number,
+    diff,
     changed: diff.changed.map((c) => ({ ...c, before: before[c.step], after: after[c.step] })),
     added: diff.added.map((id) => ({ id, step: after[id] })),
     removed: diff.removed.map((id) => ({ id, step: before[id] })),
@@ -37,9 +40,21 @@ export default function Diff({ loaderData: d }: Route.ComponentProps) {
         </p>
       ))}
       <h2 className="mt-4 text-xl font-bold">Steps added ({d.added.length})</h2>
-      <ul className="list-disc pl-6">{d.added.map((s) => <li key={s.id}><strong>{s.id}</strong> ({s.step.meta.kind}): {s.step.meta.prompt}</li>)}</ul>
+      <ul className="list-disc pl-6">
+        {d.added.map((s) => (
+          <li key={s.id}>
+            <strong>{s.id}</strong> ({s.step.meta.kind}): {s.step.meta.prompt}
+          </li>
+        ))}
+      </ul>
       <h2 className="mt-4 text-xl font-bold">Steps removed ({d.removed.length})</h2>
-      <ul className="list-disc pl-6">{d.removed.map((s) => <li key={s.id}><strong>{s.id}</strong> ({s.step.meta.kind}): {s.step.meta.prompt}</li>)}</ul>
+      <ul className="list-disc pl-6">
+        {d.removed.map((s) => (
+          <li key={s.id}>
+            <strong>{s.id}</strong> ({s.step.meta.kind}): {s.step.meta.prompt}
+          </li>
+        ))}
+      </ul>
       <h2 className="mt-4 text-xl font-bold">Steps changed ({d.changed.length})</h2>
       {d.changed.map((c) => (
         <div key={c.step} className="mt-2 rounded-md border-2 border-rule bg-paper p-3">
@@ -47,8 +62,12 @@ export default function Diff({ loaderData: d }: Route.ComponentProps) {
             {c.step}: {c.fields.join(", ")}
           </p>
           <div className="mt-2 grid gap-2 sm:grid-cols-2">
-            <pre className="overflow-x-auto rounded bg-field p-2 text-sm whitespace-pre-wrap" aria-label={`${c.step} before`}>{JSON.stringify(c.before, null, 1)}</pre>
-            <pre className="overflow-x-auto rounded bg-field p-2 text-sm whitespace-pre-wrap" aria-label={`${c.step} after`}>{JSON.stringify(c.after, null, 1)}</pre>
+            <pre className="overflow-x-auto rounded bg-field p-2 text-sm whitespace-pre-wrap" aria-label={`${c.step} before`}>
+              {JSON.stringify(c.before, null, 1)}
+            </pre>
+            <pre className="overflow-x-auto rounded bg-field p-2 text-sm whitespace-pre-wrap" aria-label={`${c.step} after`}>
+              {JSON.stringify(c.after, null, 1)}
+            </pre>
           </div>
         </div>
       ))}

@@ -18,10 +18,20 @@ const guideIdOf = (params: { guideId: string }) => {
 export async function loader({ request, params }: Route.LoaderArgs) {
   const user = await requireRole(request, "trainer");
   const guide = await deskGuide(user, guideIdOf(params));
-  const versions = await GuideVersion.findAll({ where: { guideId: guide.id }, attributes: ["number", "status", "changeNote", "reviewComment", "updatedAt", "publishedAt"], order: [["number", "DESC"]] });
+  const versions = await GuideVersion.findAll({
+    where: { guideId: guide.id },
+    attributes: ["number", "status", "changeNote", "reviewComment", "updatedAt", "publishedAt"],
+    order: [["number", "DESC"]],
+  });
   return {
     guide: { id: guide.id, title: guide.title, slug: guide.slug, builtIn: guide.companyId === null, publishedVersion: guide.publishedVersion },
-    versions: versions.map((v) => ({ number: v.number, status: v.status, changeNote: v.changeNote, reviewComment: v.reviewComment, updatedAt: v.updatedAt.toISOString() })),
+    versions: versions.map((v) => ({
+      number: v.number,
+      status: v.status,
+      changeNote: v.changeNote,
+      reviewComment: v.reviewComment,
+      updatedAt: v.updatedAt.toISOString(),
+    })),
     canPublish: hasRole(user.role, "supervisor"),
     learning: await learnFromCases(user, guide.id),
   };
@@ -29,9 +39,17 @@ export async function loader({ request, params }: Route.LoaderArgs) {
 
 const actionSchema = z.discriminatedUnion("intent", [
   z.object({ intent: z.literal("edit") }),
-  z.object({ intent: z.literal("submit"), number: z.coerce.number().int().positive(), changeNote: z.string().trim().min(3, "Say what changed (at least 3 characters).").max(1000) }),
+  z.object({
+    intent: z.literal("submit"),
+    number: z.coerce.number().int().positive(),
+    changeNote: z.string().trim().min(3, "Say what changed (at least 3 characters).").max(1000),
+  }),
   z.object({ intent: z.literal("approve"), number: z.coerce.number().int().positive(), comment: z.string().trim().max(1000).optional() }),
-  z.object({ intent: z.literal("return"), number: z.coerce.number().int().positive(), comment: z.string().trim().min(3, "Say what needs changing.").max(1000) }),
+  z.object({
+    intent: z.literal("return"),
+    number: z.coerce.number().int().positive(),
+    comment: z.string().trim().min(3, "Say what needs changing.").max(1000),
+  }),
 ]);
 
 export async function action({ request, params }: Route.ActionArgs) {
@@ -60,9 +78,19 @@ export default function DeskGuide({ loaderData, actionData }: Route.ComponentPro
   const input = "mt-1 block min-h-12 w-full rounded-md border-2 border-ink px-2";
   return (
     <>
-      <PageTitle lead={guide.builtIn ? "Built-in guide: editing makes your company's own copy; the built-in stays as it is." : "Your company's guide."}>{guide.title}</PageTitle>
-      {actionData && "error" in actionData ? <p role="alert" className="mb-3 font-bold text-stop">{actionData.error}</p> : null}
-      {actionData && "done" in actionData ? <p role="status" className="mb-3 font-bold text-go">{actionData.done}</p> : null}
+      <PageTitle lead={guide.builtIn ? "Built-in guide: editing makes your company's own copy; the built-in stays as it is." : "Your company's guide."}>
+        {guide.title}
+      </PageTitle>
+      {actionData && "error" in actionData ? (
+        <p role="alert" className="mb-3 font-bold text-stop">
+          {actionData.error}
+        </p>
+      ) : null}
+      {actionData && "done" in actionData ? (
+        <p role="status" className="mb-3 font-bold text-go">
+          {actionData.done}
+        </p>
+      ) : null}
       <Form method="post">
         <button name="intent" value="edit" className="min-h-14 rounded-md bg-go px-5 text-lg font-bold text-white">
           {guide.builtIn ? "Edit as your company's copy" : versions.some((v) => v.status === "draft") ? "Open the draft" : "Start a new draft"}
@@ -122,16 +150,28 @@ export default function DeskGuide({ loaderData, actionData }: Route.ComponentPro
 
       {learning ? (
         <>
-          <h2 className="mt-6 text-xl font-bold">How crews went through version {learning.version} ({learning.cases} cases)</h2>
+          <h2 className="mt-6 text-xl font-bold">
+            How crews went through version {learning.version} ({learning.cases} cases)
+          </h2>
           <div className="mt-2 overflow-x-auto rounded-lg border-2 border-ink bg-paper">
             <table className="w-full min-w-[36rem] text-left">
               <thead>
                 <tr className="border-b-2 border-ink">
-                  <th scope="col" className="p-2">Step</th>
-                  <th scope="col" className="p-2">Reached</th>
-                  <th scope="col" className="p-2">Answers</th>
-                  <th scope="col" className="p-2">Stopped here</th>
-                  <th scope="col" className="p-2">Median time</th>
+                  <th scope="col" className="p-2">
+                    Step
+                  </th>
+                  <th scope="col" className="p-2">
+                    Reached
+                  </th>
+                  <th scope="col" className="p-2">
+                    Answers
+                  </th>
+                  <th scope="col" className="p-2">
+                    Stopped here
+                  </th>
+                  <th scope="col" className="p-2">
+                    Median time
+                  </th>
                 </tr>
               </thead>
               <tbody>
@@ -139,8 +179,15 @@ export default function DeskGuide({ loaderData, actionData }: Route.ComponentPro
                   <tr key={f.stepId} className="border-b border-rule">
                     <td className="p-2">{f.stepId}</td>
                     <td className="p-2">{f.reached}</td>
-                    <td className="p-2">{Object.entries(f.answers).map(([a, n]) => `${a} ${n}`).join(", ") || "—"}</td>
-                    <td className="p-2">{f.abandonedHere ? `${f.abandonedHere} abandoned` : ""}{f.endedHere ? `${f.endedHere} ended` : ""}</td>
+                    <td className="p-2">
+                      {Object.entries(f.answers)
+                        .map(([a, n]) => `${a} ${n}`)
+                        .join(", ") || "—"}
+                    </td>
+                    <td className="p-2">
+                      {f.abandonedHere ? `${f.abandonedHere} abandoned` : ""}
+                      {f.endedHere ? `${f.endedHere} ended` : ""}
+                    </td>
                     <td className="p-2">{f.medianSeconds === null ? "—" : `${fmt(f.medianSeconds / 60, 1)} min`}</td>
                   </tr>
                 ))}
@@ -150,8 +197,8 @@ export default function DeskGuide({ loaderData, actionData }: Route.ComponentPro
           <h2 className="mt-6 text-xl font-bold">Check-order advisor</h2>
           <p>
             From {learning.advisor.foundCases} past causes and each check's minutes, checking in this order would find the fault in about{" "}
-            <strong>{fmt(learning.advisor.suggestedMinutes, 1)} min</strong> on average, against <strong>{fmt(learning.advisor.currentMinutes, 1)} min</strong> in the guide's order now
-            (highest chance per minute first). A safety stop moves with the check it guards.
+            <strong>{fmt(learning.advisor.suggestedMinutes, 1)} min</strong> on average, against <strong>{fmt(learning.advisor.currentMinutes, 1)} min</strong>{" "}
+            in the guide's order now (highest chance per minute first). A safety stop moves with the check it guards.
           </p>
           <ol className="mt-2 list-decimal space-y-1 pl-6">
             {learning.advisor.suggested.map((c) => (

@@ -20,7 +20,9 @@ export default function EditVersion({ loaderData }: Route.ComponentProps) {
   const { guide, version, editable, causes, problems } = loaderData;
   return (
     <>
-      <PageTitle lead={`Version ${version.number} · ${version.status.replace("_", " ")}${version.author ? ` · by ${version.author}` : ""}`}>{guide.title}</PageTitle>
+      <PageTitle lead={`Version ${version.number} · ${version.status.replace("_", " ")}${version.author ? ` · by ${version.author}` : ""}`}>
+        {guide.title}
+      </PageTitle>
       <p className="mb-3 flex flex-wrap gap-x-4">
         <Link to={`/desk/${guide.id}`}>Versions and review</Link>
         <Link to="preview">Preview as crew</Link>
@@ -28,7 +30,9 @@ export default function EditVersion({ loaderData }: Route.ComponentProps) {
           Export JSON
         </a>
       </p>
-      {version.reviewComment && version.status === "draft" ? <p className="mb-3 rounded-md border-2 border-ink bg-caution p-3 font-bold">Reviewer: {version.reviewComment}</p> : null}
+      {version.reviewComment && version.status === "draft" ? (
+        <p className="mb-3 rounded-md border-2 border-ink bg-caution p-3 font-bold">Reviewer: {version.reviewComment}</p>
+      ) : null}
       {editable ? (
         <GuideEditor initial={version.definition as unknown as Draft} causes={causes} saveUrl={`/api/desk/${guide.id}/v/${version.number}`} />
       ) : (

@@ -18,13 +18,15 @@ export async function action({ request }: Route.ActionArgs) {
   try {
     if (intent === "new") {
       const title = String(form.get("title") ?? "").trim();
-      if (title.length < 3 || title.length > 120) return data({ error: "Give the new guide a title of 3 to 120 characters.", problems: [] as string[] }, { status: 400 });
+      if (title.length < 3 || title.length > 120)
+        return data({ error: "Give the new guide a title of 3 to 120 characters.", problems: [] as string[] }, { status: 400 });
       const { guideId, number } = await createGuide(user, title);
       return redirect(`/desk/${guideId}/v/${number}`);
     }
     if (intent === "import") {
       const file = form.get("file");
-      if (!(file instanceof File) || file.size === 0) return data({ error: "Choose a guide file (.json) to import.", problems: [] as string[] }, { status: 400 });
+      if (!(file instanceof File) || file.size === 0)
+        return data({ error: "Choose a guide file (.json) to import.", problems: [] as string[] }, { status: 400 });
       if (file.size > MAX_IMPORT_BYTES) return data({ error: "That file is too large for a guide (over 200 kB).", problems: [] as string[] }, { status: 413 });
       const { guideId, number } = await importGuide(user, await file.text());
       return redirect(`/desk/${guideId}/v/${number}`);
@@ -32,7 +34,11 @@ export async function action({ request }: Route.ActionArgs) {
   } catch (thrown) {
     // A refused import lists every problem; the desk stays as it was.
     const body = (thrown as { data?: { error?: string; fields?: Record<string, string> } }).data;
-    if (body?.error) return data({ error: body.error, problems: Object.values(body.fields ?? {}) }, { status: (thrown as { init?: { status?: number } }).init?.status ?? 400 });
+    if (body?.error)
+      return data(
+        { error: body.error, problems: Object.values(body.fields ?? {}) },
+        { status: (thrown as { init?: { status?: number } }).init?.status ?? 400 },
+      );
     throw thrown;
   }
   return data({ error: "Unknown action.", problems: [] as string[] }, { status: 400 });

@@ -14,7 +14,21 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   const { code, name, mount, tankGal, pumpKind, hasHourMeter, engineHours, hoseLengthFt, hoseDiameterIn, yardElevationFt, nozzleTips, torqueSpecs, notes } =
     rig.get({ plain: true });
   return {
-    rig: { code, name, mount, tankGal, pumpKind, hasHourMeter, engineHours, hoseLengthFt, hoseDiameterIn, yardElevationFt, nozzleTips, torqueSpecs, notes: notes ?? undefined },
+    rig: {
+      code,
+      name,
+      mount,
+      tankGal,
+      pumpKind,
+      hasHourMeter,
+      engineHours,
+      hoseLengthFt,
+      hoseDiameterIn,
+      yardElevationFt,
+      nozzleTips,
+      torqueSpecs,
+      notes: notes ?? undefined,
+    },
   };
 }
 

@@ -17,7 +17,14 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   };
 }
 
-const startForm = z.object({ guideSlug: z.string().min(1).max(80), caseId: z.string().uuid().optional().or(z.literal("").transform(() => undefined)) });
+const startForm = z.object({
+  guideSlug: z.string().min(1).max(80),
+  caseId: z
+    .string()
+    .uuid()
+    .optional()
+    .or(z.literal("").transform(() => undefined)),
+});
 
 export async function action({ request, params }: Route.ActionArgs) {
   const user = await requireUser(request);
@@ -57,7 +64,11 @@ export default function StartFix({ loaderData }: Route.ComponentProps) {
     <Form method="post" onSubmit={(e) => ((e.currentTarget.elements.namedItem("caseId") as HTMLInputElement).value = caseId.current)}>
       <input type="hidden" name="guideSlug" value={slug} />
       <input type="hidden" name="caseId" value="" />
-      <button type="submit" disabled={busy} className="flex min-h-16 w-full flex-col items-start justify-center rounded-lg border-2 border-ink bg-paper px-4 py-2 text-left">
+      <button
+        type="submit"
+        disabled={busy}
+        className="flex min-h-16 w-full flex-col items-start justify-center rounded-lg border-2 border-ink bg-paper px-4 py-2 text-left"
+      >
         <span className="text-xl font-bold">{title}</span>
         {hint ? <span className="text-base">“{hint}”</span> : null}
       </button>

@@ -45,7 +45,10 @@ export default function RigPage({ loaderData }: Route.ComponentProps) {
           <Link to="fix" className="flex min-h-16 items-center justify-center rounded-lg bg-go text-xl font-bold text-white no-underline">
             Start a fix on {rig.code}
           </Link>
-          <Link to="label" className="flex min-h-16 items-center justify-center rounded-lg border-2 border-ink bg-paper text-lg font-bold text-ink no-underline">
+          <Link
+            to="label"
+            className="flex min-h-16 items-center justify-center rounded-lg border-2 border-ink bg-paper text-lg font-bold text-ink no-underline"
+          >
             Print the rig label
           </Link>
         </div>
@@ -118,11 +121,7 @@ export default function RigPage({ loaderData }: Route.ComponentProps) {
             Edit rig
           </Link>
           <Form method="post">
-            <button
-              name="intent"
-              value={rig.retired ? "reinstate" : "retire"}
-              className="min-h-14 rounded-md border-2 border-ink bg-paper px-5 font-bold"
-            >
+            <button name="intent" value={rig.retired ? "reinstate" : "retire"} className="min-h-14 rounded-md border-2 border-ink bg-paper px-5 font-bold">
               {rig.retired ? "Put back in service" : "Retire rig"}
             </button>
           </Form>

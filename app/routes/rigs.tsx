@@ -15,7 +15,11 @@ export default function Rigs({ loaderData }: Route.ComponentProps) {
   return (
     <>
       <PageTitle lead={`${rigs.filter((r) => !r.retired).length} in service`}>Rigs</PageTitle>
-      {canEdit ? <ButtonLink to="/rigs/new" className="mb-4 sm:w-60">Add a rig</ButtonLink> : null}
+      {canEdit ? (
+        <ButtonLink to="/rigs/new" className="mb-4 sm:w-60">
+          Add a rig
+        </ButtonLink>
+      ) : null}
       <ul className="space-y-3">
         {rigs.map((rig) => (
           <li key={rig.code} className={`rounded-lg border-2 bg-paper p-4 ${rig.retired ? "border-dashed border-rule" : "border-ink"}`}>

@@ -99,10 +99,14 @@ export async function boardAggregates(companyId: number, w: BoardWindow): Promis
     rigs: rigRows.map((rig) => {
       const r = rigs.find((x) => n(x.rig_id) === n(rig.id)) ?? {};
       return {
-      rigCode: String(rig.code),
-      cases: n(r.cases), fixed: n(r.fixed), handoff: n(r.handoff), abandoned: n(r.abandoned),
-      operatingHours: n(rig.has_hour_meter) && r.hours !== null && r.hours !== undefined ? n(r.hours) : null,
-      repairHours: n(r.repair_seconds) / 3600, closedCases: n(r.closed),
+        rigCode: String(rig.code),
+        cases: n(r.cases),
+        fixed: n(r.fixed),
+        handoff: n(r.handoff),
+        abandoned: n(r.abandoned),
+        operatingHours: n(rig.has_hour_meter) && r.hours !== null && r.hours !== undefined ? n(r.hours) : null,
+        repairHours: n(r.repair_seconds) / 3600,
+        closedCases: n(r.closed),
       };
     }),
     causes: causes.map((c) => ({ cause: String(c.cause), count: n(c.count), downtimeHours: n(c.downtime_seconds) / 3600 })),
@@ -110,17 +114,29 @@ export async function boardAggregates(companyId: number, w: BoardWindow): Promis
       const ids = String(c.latest_ids).split(",");
       const times = String(c.latest_at).split(",");
       return {
-        rigCode: codeOf.get(n(c.rig_id)) ?? "?", cause: String(c.cause_code), count: n(c.n), firstAt: iso(c.first_at), lastAt: iso(c.last_at),
+        rigCode: codeOf.get(n(c.rig_id)) ?? "?",
+        cause: String(c.cause_code),
+        count: n(c.n),
+        firstAt: iso(c.first_at),
+        lastAt: iso(c.last_at),
         latest: ids.map((caseId, i) => ({ caseId, openedAt: new Date(times[i].replace(/(\.\d{3})\d*Z$/, "$1Z")).toISOString() })),
       };
     }),
     weeks: weeks.map((w) => ({ weekStart: String(w.week), cases: n(w.cases), handoffs: n(w.handoffs) })),
     people: people.map((p) => ({
-      name: String(p.name), cases: n(p.cases), handoffs: n(p.handoffs),
+      name: String(p.name),
+      cases: n(p.cases),
+      handoffs: n(p.handoffs),
       guides: top(guides.filter((g) => n(g.uid) === n(p.id)).map((g) => ({ title: String(g.title), count: n(g.count) }))),
       causes: top(personCauses.filter((c) => n(c.uid) === n(p.id)).map((c) => ({ cause: String(c.cause), count: n(c.count) }))),
     })),
-    openHandoffs: handoffs.map((h) => ({ caseId: String(h.id), rigCode: String(h.code), guideTitle: String(h.title), openedAt: iso(h.opened_at), openedBy: h.name ? String(h.name) : null })),
+    openHandoffs: handoffs.map((h) => ({
+      caseId: String(h.id),
+      rigCode: String(h.code),
+      guideTitle: String(h.title),
+      openedAt: iso(h.opened_at),
+      openedBy: h.name ? String(h.name) : null,
+    })),
   };
 }
 

@@ -26,8 +26,14 @@ export interface CaseRow {
 
 function where(user: SessionUser, f: CaseFilters) {
   const replacements = {
-    company: user.companyId, rig: f.rig ?? null, guide: f.guide ?? null, cause: f.cause ?? null, outcome: f.outcome ?? null,
-    person: f.person ?? null, from: f.from ? new Date(`${f.from}T00:00:00Z`) : null, to: f.to ? new Date(Date.parse(`${f.to}T00:00:00Z`) + 86_400_000) : null,
+    company: user.companyId,
+    rig: f.rig ?? null,
+    guide: f.guide ?? null,
+    cause: f.cause ?? null,
+    outcome: f.outcome ?? null,
+    person: f.person ?? null,
+    from: f.from ? new Date(`${f.from}T00:00:00Z`) : null,
+    to: f.to ? new Date(Date.parse(`${f.to}T00:00:00Z`) + 86_400_000) : null,
   };
   const sql = `FROM cases c JOIN rigs r ON r.id = c.rig_id JOIN guide_versions v ON v.id = c.guide_version_id JOIN guides g ON g.id = v.guide_id
     LEFT JOIN users u ON u.id = c.opened_by
@@ -38,8 +44,14 @@ function where(user: SessionUser, f: CaseFilters) {
 }
 
 const toRow = (r: Record<string, unknown>): CaseRow => ({
-  id: String(r.id), rigCode: String(r.code), guideTitle: String(r.title), causeCode: (r.cause_code as string) ?? null, outcome: String(r.outcome),
-  person: (r.name as string) ?? null, openedAt: new Date(r.opened_at as string).toISOString(), durationSeconds: r.duration === null ? null : Number(r.duration),
+  id: String(r.id),
+  rigCode: String(r.code),
+  guideTitle: String(r.title),
+  causeCode: (r.cause_code as string) ?? null,
+  outcome: String(r.outcome),
+  person: (r.name as string) ?? null,
+  openedAt: new Date(r.opened_at as string).toISOString(),
+  durationSeconds: r.duration === null ? null : Number(r.duration),
 });
 
 /** One page of the company's cases, filtered and sorted on the server. */
@@ -69,4 +81,3 @@ export async function caseFilterOptions(user: SessionUser) {
   ]);
   return { rigs: rigs.map((r) => r.code), people: people.map((p) => ({ id: p.id, name: p.name })), guides };
 }
-

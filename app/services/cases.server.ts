@@ -22,8 +22,18 @@ export async function startCase(user: SessionUser, input: { id?: string; rigCode
     return { id, created: false };
   }
   await Case.create({
-    id, companyId: user.companyId, rigId: rig.id, guideVersionId: guide.versionId, openedBy: user.id, openedAt: new Date(),
-    closedAt: null, engineHours: null, finalStep: null, causeCode: null, safetyAckAt: null, note: null,
+    id,
+    companyId: user.companyId,
+    rigId: rig.id,
+    guideVersionId: guide.versionId,
+    openedBy: user.id,
+    openedAt: new Date(),
+    closedAt: null,
+    engineHours: null,
+    finalStep: null,
+    causeCode: null,
+    safetyAckAt: null,
+    note: null,
   });
   return { id, created: true };
 }
@@ -73,7 +83,10 @@ export async function storeEvents(user: SessionUser, caseId: string, events: Cas
       if (error instanceof UniqueConstraintError) fail(409, "Nothing stored: two events in the batch share a sequence number.");
       throw error;
     }
-    const firstAck = fresh.filter((e) => e.answer === "ACK").map((e) => new Date(e.at)).sort((a, b) => +a - +b)[0];
+    const firstAck = fresh
+      .filter((e) => e.answer === "ACK")
+      .map((e) => new Date(e.at))
+      .sort((a, b) => +a - +b)[0];
     if (firstAck && (!found.safetyAckAt || firstAck < found.safetyAckAt)) await found.update({ safetyAckAt: firstAck }, { transaction });
     return { stored: fresh.length, duplicates: events.length - fresh.length };
   });
@@ -83,7 +96,8 @@ export async function storeEvents(user: SessionUser, caseId: string, events: Cas
 export async function closeCase(user: SessionUser, caseId: string, input: CloseCaseInput) {
   const { found, guide } = await findCaseWithGuide(user, caseId);
   if (found.outcome !== "open") {
-    if (found.outcome === input.outcome && found.finalStep === (input.finalStep ?? null)) return { outcome: found.outcome, alreadyClosed: true, notified: [], mailFailed: false };
+    if (found.outcome === input.outcome && found.finalStep === (input.finalStep ?? null))
+      return { outcome: found.outcome, alreadyClosed: true, notified: [], mailFailed: false };
     fail(409, `This case is already closed as ${found.outcome}.`);
   }
   let causeCode: string | null = null;
@@ -98,7 +112,14 @@ export async function closeCase(user: SessionUser, caseId: string, input: CloseC
   const closedAt = input.at ? new Date(input.at) : new Date();
   await sequelize.transaction(async (transaction) => {
     await found.update(
-      { outcome: input.outcome, finalStep: input.finalStep ?? null, causeCode, closedAt, engineHours: input.engineHours ?? null, note: input.note?.trim() || null },
+      {
+        outcome: input.outcome,
+        finalStep: input.finalStep ?? null,
+        causeCode,
+        closedAt,
+        engineHours: input.engineHours ?? null,
+        note: input.note?.trim() || null,
+      },
       { transaction },
     );
     if (input.engineHours !== undefined) {
@@ -130,7 +151,18 @@ export interface CaseDetail {
   safetyAckAt: string | null;
   note: string | null;
   handoffResolvedAt: string | null;
-  rig: { code: string; name: string; hasHourMeter: boolean; engineHours: number; tankGal: number; hoseLengthFt: number; hoseDiameterIn: number; yardElevationFt: number; nozzleTips: Rig["nozzleTips"]; torqueSpecs: NonNullable<Rig["torqueSpecs"]> };
+  rig: {
+    code: string;
+    name: string;
+    hasHourMeter: boolean;
+    engineHours: number;
+    tankGal: number;
+    hoseLengthFt: number;
+    hoseDiameterIn: number;
+    yardElevationFt: number;
+    nozzleTips: Rig["nozzleTips"];
+    torqueSpecs: NonNullable<Rig["torqueSpecs"]>;
+  };
   guide: { slug: string; title: string; version: number; definition: Guide };
   openedBy: string | null;
   events: { id: string; seq: number; stepId: string; answer: string; at: string; note: string | null }[];
@@ -158,8 +190,16 @@ export async function caseDetail(user: SessionUser, caseId: string): Promise<Cas
     note: found.note,
     handoffResolvedAt: found.handoffResolvedAt?.toISOString() ?? null,
     rig: {
-      code: rig!.code, name: rig!.name, hasHourMeter: rig!.hasHourMeter, engineHours: rig!.engineHours, tankGal: rig!.tankGal,
-      hoseLengthFt: rig!.hoseLengthFt, hoseDiameterIn: rig!.hoseDiameterIn, yardElevationFt: rig!.yardElevationFt, nozzleTips: rig!.nozzleTips, torqueSpecs: rig!.torqueSpecs ?? [],
+      code: rig!.code,
+      name: rig!.name,
+      hasHourMeter: rig!.hasHourMeter,
+      engineHours: rig!.engineHours,
+      tankGal: rig!.tankGal,
+      hoseLengthFt: rig!.hoseLengthFt,
+      hoseDiameterIn: rig!.hoseDiameterIn,
+      yardElevationFt: rig!.yardElevationFt,
+      nozzleTips: rig!.nozzleTips,
+      torqueSpecs: rig!.torqueSpecs ?? [],
     },
     guide: { slug: record!.slug, title: record!.title, version: version.number, definition: guide },
     openedBy: opener?.name ?? null,
@@ -183,7 +223,15 @@ export async function recentRigCases(user: SessionUser, rigId: number, limit = 1
   return rows.map((c) => {
     const v = (c as Case & { guideVersion: GuideVersion & { guide: GuideRecord } }).guideVersion;
     const opener = (c as Case & { opener: User | null }).opener;
-    return { id: c.id, outcome: c.outcome, openedAt: c.openedAt.toISOString(), closedAt: c.closedAt?.toISOString() ?? null, causeCode: c.causeCode, guideTitle: v.guide.title, openedBy: opener?.name ?? null };
+    return {
+      id: c.id,
+      outcome: c.outcome,
+      openedAt: c.openedAt.toISOString(),
+      closedAt: c.closedAt?.toISOString() ?? null,
+      causeCode: c.causeCode,
+      guideTitle: v.guide.title,
+      openedBy: opener?.name ?? null,
+    };
   });
 }
 

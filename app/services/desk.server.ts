@@ -62,7 +62,10 @@ export async function openDraft(user: SessionUser, guideId: number): Promise<{ g
       const scope = guideScope(user.companyId);
       guide =
         (await GuideRecord.findOne({ where: { scope, slug: source.slug }, transaction, lock: transaction.LOCK.UPDATE })) ??
-        (await GuideRecord.create({ companyId: user.companyId, scope, slug: source.slug, title: source.title, publishedVersion: null, basedOnGuideId: source.id }, { transaction }));
+        (await GuideRecord.create(
+          { companyId: user.companyId, scope, slug: source.slug, title: source.title, publishedVersion: null, basedOnGuideId: source.id },
+          { transaction },
+        ));
     }
     const draft = await GuideVersion.findOne({ where: { guideId: guide.id, status: "draft" }, transaction });
     if (draft) return { guideId: guide.id, number: draft.number };
@@ -74,7 +77,18 @@ export async function openDraft(user: SessionUser, guideId: number): Promise<{ g
     if (!from) notFound("A version to start from");
     const number = (ownLatest?.number ?? 0) + 1;
     await GuideVersion.create(
-      { guideId: guide.id, number, status: "draft", definition: from.definition, sourceHash: hash(from.definition), authorId: user.id, reviewerId: null, changeNote: null, reviewComment: null, publishedAt: null },
+      {
+        guideId: guide.id,
+        number,
+        status: "draft",
+        definition: from.definition,
+        sourceHash: hash(from.definition),
+        authorId: user.id,
+        reviewerId: null,
+        changeNote: null,
+        reviewComment: null,
+        publishedAt: null,
+      },
       { transaction },
     );
     return { guideId: guide.id, number };
@@ -83,12 +97,33 @@ export async function openDraft(user: SessionUser, guideId: number): Promise<{ g
 
 /** A new company guide from a small, valid starting point. */
 export async function createGuide(user: SessionUser, title: string): Promise<{ guideId: number; number: number }> {
-  const base = title.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 60) || "new-guide";
+  const base =
+    title
+      .toLowerCase()
+      .replace(/[^a-z0-9]+/g, "-")
+      .replace(/^-|-$/g, "")
+      .slice(0, 60) || "new-guide";
   const scope = guideScope(user.companyId);
   let slug = /^[a-z]/.test(base) ? base : `guide-${base}`;
-  for (let n = 2; await GuideRecord.findOne({ where: { [Op.or]: [{ scope, slug }, { scope: "builtin", slug }] } }); n++) slug = `${base}-${n}`;
+  for (
+    let n = 2;
+    await GuideRecord.findOne({
+      where: {
+        [Op.or]: [
+          { scope, slug },
+          { scope: "builtin", slug },
+        ],
+      },
+    });
+    n++
+  )
+    slug = `${base}-${n}`;
   const definition: Guide = {
-    id: slug, title, summary: "What this guide is for, in a sentence.", symptoms: [title.toLowerCase()], initial: "first-check",
+    id: slug,
+    title,
+    summary: "What this guide is for, in a sentence.",
+    symptoms: [title.toLowerCase()],
+    initial: "first-check",
     states: {
       "first-check": { on: { YES: "fixed-end", NO: "handoff-end" }, meta: { kind: "check", prompt: "Is the first likely cause the problem?", minutes: 1 } },
       "fixed-end": { type: "final", meta: { kind: "fixed", prompt: "Fixed.", cause: causeList()[0].code, component: causeList()[0].component } },
@@ -96,7 +131,18 @@ export async function createGuide(user: SessionUser, title: string): Promise<{ g
     },
   };
   const guide = await GuideRecord.create({ companyId: user.companyId, scope, slug, title, publishedVersion: null, basedOnGuideId: null });
-  await GuideVersion.create({ guideId: guide.id, number: 1, status: "draft", definition, sourceHash: hash(definition), authorId: user.id, reviewerId: null, changeNote: null, reviewComment: null, publishedAt: null });
+  await GuideVersion.create({
+    guideId: guide.id,
+    number: 1,
+    status: "draft",
+    definition,
+    sourceHash: hash(definition),
+    authorId: user.id,
+    reviewerId: null,
+    changeNote: null,
+    reviewComment: null,
+    publishedAt: null,
+  });
   return { guideId: guide.id, number: 1 };
 }
 
@@ -141,19 +187,38 @@ export async function reviewVersion(user: SessionUser, guideId: number, number: 
 /** Imports a guide file as a new draft; a bad file lists every problem and changes nothing. */
 export async function importGuide(user: SessionUser, text: string): Promise<{ guideId: number; number: number }> {
   const { guide: parsed, problems } = validateGuide(text, { causes: causeList(), name: "imported file" });
-  if (!parsed) fail(400, `The file has ${problems.length} problem${problems.length === 1 ? "" : "s"}; nothing was imported.`, Object.fromEntries(problems.map((p, i) => [String(i + 1), `${p.step ? `step "${p.step}": ` : ""}${p.message}`])));
+  if (!parsed)
+    fail(
+      400,
+      `The file has ${problems.length} problem${problems.length === 1 ? "" : "s"}; nothing was imported.`,
+      Object.fromEntries(problems.map((p, i) => [String(i + 1), `${p.step ? `step "${p.step}": ` : ""}${p.message}`])),
+    );
   const scope = guideScope(user.companyId);
   return sequelize.transaction(async (transaction) => {
     const builtIn = await GuideRecord.findOne({ where: { scope: "builtin", slug: parsed.id }, transaction });
     const guide =
       (await GuideRecord.findOne({ where: { scope, slug: parsed.id }, transaction, lock: transaction.LOCK.UPDATE })) ??
-      (await GuideRecord.create({ companyId: user.companyId, scope, slug: parsed.id, title: parsed.title, publishedVersion: null, basedOnGuideId: builtIn?.id ?? null }, { transaction }));
+      (await GuideRecord.create(
+        { companyId: user.companyId, scope, slug: parsed.id, title: parsed.title, publishedVersion: null, basedOnGuideId: builtIn?.id ?? null },
+        { transaction },
+      ));
     const existingDraft = await GuideVersion.findOne({ where: { guideId: guide.id, status: "draft" }, transaction });
     if (existingDraft) fail(409, "This guide already has a draft: finish or send it for review before importing another.");
     const latest = await GuideVersion.findOne({ where: { guideId: guide.id }, order: [["number", "DESC"]], transaction });
     const number = (latest?.number ?? 0) + 1;
     await GuideVersion.create(
-      { guideId: guide.id, number, status: "draft", definition: parsed, sourceHash: hash(parsed), authorId: user.id, reviewerId: null, changeNote: "Imported from a file.", reviewComment: null, publishedAt: null },
+      {
+        guideId: guide.id,
+        number,
+        status: "draft",
+        definition: parsed,
+        sourceHash: hash(parsed),
+        authorId: user.id,
+        reviewerId: null,
+        changeNote: "Imported from a file.",
+        reviewComment: null,
+        publishedAt: null,
+      },
       { transaction },
     );
     return { guideId: guide.id, number };
@@ -167,8 +232,15 @@ export async function versionFor(user: SessionUser, guideId: number, number: num
   return {
     guide: { id: guide.id, slug: guide.slug, title: guide.title, builtIn: guide.companyId === null, publishedVersion: guide.publishedVersion },
     version: {
-      number: version.number, status: version.status, definition: version.definition, changeNote: version.changeNote, reviewComment: version.reviewComment,
-      author: nameOf(version.authorId), reviewer: nameOf(version.reviewerId), publishedAt: version.publishedAt?.toISOString() ?? null, updatedAt: version.updatedAt.toISOString(),
+      number: version.number,
+      status: version.status,
+      definition: version.definition,
+      changeNote: version.changeNote,
+      reviewComment: version.reviewComment,
+      author: nameOf(version.authorId),
+      reviewer: nameOf(version.reviewerId),
+      publishedAt: version.publishedAt?.toISOString() ?? null,
+      updatedAt: version.updatedAt.toISOString(),
     },
   };
 }
@@ -187,15 +259,29 @@ export async function learnFromCases(user: SessionUser, guideId: number) {
   const cases = new Map<string, FlowCase & { cause: string | null }>();
   for (const r of rows) {
     const id = String(r.id);
-    if (!cases.has(id)) cases.set(id, { outcome: String(r.outcome), finalStep: (r.final_step as string) ?? null, openedAt: new Date(r.opened_at as string).toISOString(), events: [], cause: (r.cause_code as string) ?? null });
-    if (r.seq !== null) cases.get(id)!.events.push({ seq: Number(r.seq), stepId: String(r.step_id), answer: String(r.answer), at: new Date(r.at as string).toISOString() });
+    if (!cases.has(id))
+      cases.set(id, {
+        outcome: String(r.outcome),
+        finalStep: (r.final_step as string) ?? null,
+        openedAt: new Date(r.opened_at as string).toISOString(),
+        events: [],
+        cause: (r.cause_code as string) ?? null,
+      });
+    if (r.seq !== null)
+      cases.get(id)!.events.push({ seq: Number(r.seq), stepId: String(r.step_id), answer: String(r.answer), at: new Date(r.at as string).toISOString() });
   }
   const definition = version.definition;
   const flow = stepFlow(compileGuide(definition), Object.keys(definition.states), [...cases.values()]);
   const causeCounts = new Map<string, number>();
   for (const c of cases.values()) if (c.cause) causeCounts.set(c.cause, (causeCounts.get(c.cause) ?? 0) + 1);
   const line = mainLine(definition);
-  const checks = line.map((l) => ({ id: l.stepId, minutes: l.minutes, probability: l.causes.reduce((s, c) => s + (causeCounts.get(c) ?? 0), 0), guard: l.guard, causes: l.causes }));
+  const checks = line.map((l) => ({
+    id: l.stepId,
+    minutes: l.minutes,
+    probability: l.causes.reduce((s, c) => s + (causeCounts.get(c) ?? 0), 0),
+    guard: l.guard,
+    causes: l.causes,
+  }));
   const suggested = ratioOrder(checks);
   return {
     version: version.number,

@@ -18,7 +18,13 @@ export async function sendDigest(companyId: number, now = new Date()): Promise<s
   let people = await User.findAll({ where: { companyId, role: "supervisor" }, attributes: ["name", "email"] });
   if (!people.length) people = await User.findAll({ where: { companyId, role: "admin" }, attributes: ["name", "email"] });
   const names = new Map(causeList().map((c) => [c.code, c.name]));
-  const mail = digestMail(company.name, board, { from: from.toISOString().slice(0, 10), to: new Date(to.getTime() - 86_400_000).toISOString().slice(0, 10) }, (c) => names.get(c) ?? c, env().APP_URL);
+  const mail = digestMail(
+    company.name,
+    board,
+    { from: from.toISOString().slice(0, 10), to: new Date(to.getTime() - 86_400_000).toISOString().slice(0, 10) },
+    (c) => names.get(c) ?? c,
+    env().APP_URL,
+  );
   await sendMail({ to: people.map((p) => p.email), ...mail });
   return people.map((p) => p.name);
 }

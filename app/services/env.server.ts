@@ -6,7 +6,10 @@ const schema = z
     DATABASE_URL: z.string().regex(/^(mariadb|mysql):\/\//, "must be a mariadb:// URL"),
     SESSION_SECRET: z.string().min(16, "must be at least 16 characters").optional(),
     APP_URL: z.string().url().default("http://127.0.0.1:3000"),
-    SMTP_URL: z.string().regex(/^smtps?:\/\//, "must be an smtp:// or smtps:// URL").optional(),
+    SMTP_URL: z
+      .string()
+      .regex(/^smtps?:\/\//, "must be an smtp:// or smtps:// URL")
+      .optional(),
     MAIL_FROM: z.string().default("Tankside <no-reply@tankside.example>"),
     // Set only when the local fake SMTP server writes its messages there (development, tests).
     MAIL_OUTBOX_DIR: z.string().optional(),

@@ -8,7 +8,7 @@ function transporter(): Transporter {
   if (!url) throw new Error("SMTP_URL is not set: no mail can be sent.");
   // The local fake has no TLS; real providers are reached with smtps:// or STARTTLS as they offer.
   const local = /^smtp:\/\/(127\.0\.0\.1|localhost)[:/]/.test(url);
-  return (transport ??= nodemailer.createTransport(local ? { url, secure: false, ignoreTLS: true } as never : url));
+  return (transport ??= nodemailer.createTransport(local ? ({ url, secure: false, ignoreTLS: true } as never) : url));
 }
 
 export interface Mail {

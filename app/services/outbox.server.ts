@@ -15,7 +15,11 @@ export interface OutboxMessage {
 export async function readOutbox(limit = 50): Promise<OutboxMessage[] | null> {
   const dir = env().MAIL_OUTBOX_DIR;
   if (!dir) return null;
-  const files = (await fs.readdir(dir).catch(() => [] as string[])).filter((f) => f.endsWith(".json")).sort().reverse().slice(0, limit);
+  const files = (await fs.readdir(dir).catch(() => [] as string[]))
+    .filter((f) => f.endsWith(".json"))
+    .sort()
+    .reverse()
+    .slice(0, limit);
   return Promise.all(
     files.map(async (file) => {
       const kept = JSON.parse(await fs.readFile(path.join(dir, file), "utf8")) as { receivedAt: string; to: string[]; raw: string };

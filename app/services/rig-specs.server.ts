@@ -10,7 +10,13 @@ export async function rigSpecsFor(user: SessionUser): Promise<(RigSpecs & { name
     order: [["code", "ASC"]],
   });
   return rigs.map((r) => ({
-    code: r.code, name: r.name, tankGal: r.tankGal, hoseLengthFt: r.hoseLengthFt, hoseDiameterIn: r.hoseDiameterIn,
-    yardElevationFt: r.yardElevationFt, nozzleTips: r.nozzleTips, torqueSpecs: r.torqueSpecs ?? [],
+    code: r.code,
+    name: r.name,
+    tankGal: r.tankGal,
+    hoseLengthFt: r.hoseLengthFt,
+    hoseDiameterIn: r.hoseDiameterIn,
+    yardElevationFt: r.yardElevationFt,
+    nozzleTips: r.nozzleTips,
+    torqueSpecs: r.torqueSpecs ?? [],
   }));
 }

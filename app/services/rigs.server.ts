@@ -10,7 +10,10 @@ export async function listRigs(user: SessionUser, { includeRetired = false } = {
   const rigs = await Rig.findAll({
     where: { companyId: user.companyId, ...(includeRetired ? {} : { retired: false }) },
     attributes: [...LIST_COLUMNS],
-    order: [["retired", "ASC"], ["code", "ASC"]],
+    order: [
+      ["retired", "ASC"],
+      ["code", "ASC"],
+    ],
   });
   return rigs.map((r) => r.get({ plain: true }));
 }

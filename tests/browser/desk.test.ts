@@ -33,7 +33,7 @@ describe("guide desk in the browser", () => {
     // Point "agitator-only" YES straight at the hands-on paddle check, past its safety stop.
     await p.getByRole("region", { name: "Steps" }).getByRole("button", { name: "agitator-only", exact: true }).click();
     await p.getByLabel("On YES go to").selectOption("look-paddles");
-    await p.getByRole("button", { name: 'Step “look-paddles”' }).first().waitFor();
+    await p.getByRole("button", { name: "Step “look-paddles”" }).first().waitFor();
     await p.getByText("is hands-on but can be reached without passing a safety step").first().waitFor();
     await p.getByRole("button", { name: "Save draft" }).click();
     await p.getByText("All changes saved.").waitFor();
@@ -42,7 +42,10 @@ describe("guide desk in the browser", () => {
     await caution(p).waitFor();
     await p.getByLabel("Change note for the reviewer").fill("Skip the stop");
     await p.getByRole("button", { name: "Send for review" }).click();
-    await p.getByRole("alert").filter({ hasText: /Fix \d+ problems? before sending this for review/ }).waitFor();
+    await p
+      .getByRole("alert")
+      .filter({ hasText: /Fix \d+ problems? before sending this for review/ })
+      .waitFor();
     const drafts = await GuideVersion.findAll({ where: { status: "in_review" } });
     expect(drafts).toHaveLength(0);
     await p.close();

@@ -24,9 +24,15 @@ const waitSynced = (p: Page) => p.locator('[data-synced="yes"]').waitFor();
 async function startFix(p: Page, email: string, rig: string, words: string, guideTitle: string) {
   await browser.context.clearCookies();
   await signIn(p, app.url, email);
-  await p.getByRole("link", { name: new RegExp(rig) }).first().click();
+  await p
+    .getByRole("link", { name: new RegExp(rig) })
+    .first()
+    .click();
   await p.getByLabel("Say it in your own words").fill(words);
-  await p.getByRole("region", { name: "Matching guides" }).getByRole("button", { name: new RegExp(guideTitle) }).click();
+  await p
+    .getByRole("region", { name: "Matching guides" })
+    .getByRole("button", { name: new RegExp(guideTitle) })
+    .click();
   await p.waitForURL(/\/cases\/[^/]+\/walk$/);
 }
 
@@ -50,7 +56,13 @@ describe("walk-through on a phone (360×640)", () => {
     await p.getByText("Case closed and saved.").waitFor();
     const id = caseIdOf(p);
     const stored = await CaseEvent.findAll({ where: { caseId: id }, order: [["seq", "ASC"]] });
-    expect(stored.map((e) => `${e.stepId}:${e.answer}`)).toEqual(["water-level:NO", "add-water:DONE", "holds-after-water:BACK", "add-water:DONE", "holds-after-water:YES"]);
+    expect(stored.map((e) => `${e.stepId}:${e.answer}`)).toEqual([
+      "water-level:NO",
+      "add-water:DONE",
+      "holds-after-water:BACK",
+      "add-water:DONE",
+      "holds-after-water:YES",
+    ]);
     expect(await Case.findByPk(id)).toMatchObject({ outcome: "fixed", causeCode: "low-water", engineHours: 2320 });
 
     await p.goto(`${app.url}/cases/${id}`);

@@ -74,7 +74,15 @@ export async function launchBrowser(viewport = PHONE): Promise<{ context: Browse
     executablePath: "/usr/bin/chromium",
     headless: true,
     viewport,
-    args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+    args: [
+      "--no-sandbox",
+      "--disable-gpu",
+      "--disable-quic",
+      "--no-first-run",
+      "--disable-background-networking",
+      "--disable-component-update",
+      "--disable-sync",
+    ],
   });
   // Fail with the locator's name well inside the test's own timeout.
   context.setDefaultTimeout(10_000);
@@ -105,4 +113,3 @@ export async function failSignIn(page: Page, appUrl: string, email: string, pass
   await page.getByRole("button", { name: "Sign in" }).click();
   return (await response).status();
 }
-

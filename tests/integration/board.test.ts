@@ -11,11 +11,25 @@ import { requestAs, run } from "../helpers/requests";
 
 const DAY = 86_400_000;
 const start = Date.UTC(2026, 3, 1);
-interface Row { rig: string; day: number; outcome: "fixed" | "handoff" | "abandoned"; cause: string | null; hours: number | null; minutes: number }
+interface Row {
+  rig: string;
+  day: number;
+  outcome: "fixed" | "handoff" | "abandoned";
+  cause: string | null;
+  hours: number | null;
+  minutes: number;
+}
 
 // Hand-built fixture: CF-03 fails often with repeated air leaks; CF-07 rarely; BM-01 belongs to the other company.
 const FIXTURE: Row[] = [
-  ...[0, 10, 25, 33, 60, 70, 75, 80, 90, 100].map((d, i) => ({ rig: "CF-03", day: d, outcome: i % 4 === 3 ? ("handoff" as const) : ("fixed" as const), cause: i < 4 ? "suction-air-leak" : "plug-sump", hours: 1000 + d * 6, minutes: 20 + i })),
+  ...[0, 10, 25, 33, 60, 70, 75, 80, 90, 100].map((d, i) => ({
+    rig: "CF-03",
+    day: d,
+    outcome: i % 4 === 3 ? ("handoff" as const) : ("fixed" as const),
+    cause: i < 4 ? "suction-air-leak" : "plug-sump",
+    hours: 1000 + d * 6,
+    minutes: 20 + i,
+  })),
   ...[5, 50, 95].map((d) => ({ rig: "CF-07", day: d, outcome: "fixed" as const, cause: "low-engine-speed", hours: 2000 + d * 7, minutes: 15 })),
   { rig: "CF-07", day: 96, outcome: "abandoned", cause: null, hours: 2672, minutes: 5 },
   ...[1, 2, 3].map((d) => ({ rig: "BM-01", day: d, outcome: "fixed" as const, cause: "suction-air-leak", hours: 500 + d, minutes: 10 })),
@@ -32,9 +46,19 @@ beforeAll(async () => {
     ids.set(row, id);
     const openedAt = new Date(start + row.day * DAY + 15 * 3_600_000);
     await Case.create({
-      id, companyId: rig.companyId, rigId: rig.id, guideVersionId: version!.id, openedBy: opener!.id, openedAt,
-      closedAt: new Date(openedAt.getTime() + row.minutes * 60_000), engineHours: row.hours, outcome: row.outcome,
-      finalStep: null, causeCode: row.cause, safetyAckAt: null, note: null,
+      id,
+      companyId: rig.companyId,
+      rigId: rig.id,
+      guideVersionId: version!.id,
+      openedBy: opener!.id,
+      openedAt,
+      closedAt: new Date(openedAt.getTime() + row.minutes * 60_000),
+      engineHours: row.hours,
+      outcome: row.outcome,
+      finalStep: null,
+      causeCode: row.cause,
+      safetyAckAt: null,
+      note: null,
     });
   }
 });
@@ -50,11 +74,14 @@ describe("board aggregates in MariaDB agree with the pure module on the same dat
       const rows = FIXTURE.filter((r) => r.rig === code);
       const hours = rows.map((r) => r.hours!).filter((h) => h !== null);
       return {
-        rigCode: code, cases: rows.length,
-        fixed: rows.filter((r) => r.outcome === "fixed").length, handoff: rows.filter((r) => r.outcome === "handoff").length,
+        rigCode: code,
+        cases: rows.length,
+        fixed: rows.filter((r) => r.outcome === "fixed").length,
+        handoff: rows.filter((r) => r.outcome === "handoff").length,
         abandoned: rows.filter((r) => r.outcome === "abandoned").length,
         operatingHours: hours.length ? Math.max(...hours) - Math.min(...hours) : null,
-        repairHours: rows.reduce((s, r) => s + r.minutes / 60, 0), closedCases: rows.length,
+        repairHours: rows.reduce((s, r) => s + r.minutes / 60, 0),
+        closedCases: rows.length,
       };
     });
     const expected = rigFigures(byHand);
@@ -76,35 +103,68 @@ describe("board aggregates in MariaDB agree with the pure module on the same dat
   it("causes and repeats", async () => {
     const cedar = (await Company.findOne({ where: { slug: "cedar-flats" } }))!;
     const board = buildBoard(await boardAggregates(cedar.id, window));
-    expect(board.pareto.map((p) => [p.cause, p.count])).toEqual([["plug-sump", 6], ["suction-air-leak", 4], ["low-engine-speed", 3]]);
+    expect(board.pareto.map((p) => [p.cause, p.count])).toEqual([
+      ["plug-sump", 6],
+      ["suction-air-leak", 4],
+      ["low-engine-speed", 3],
+    ]);
     expect(board.pareto.at(-1)!.cumulativeShare).toBeCloseTo(1, 12);
-    const hits = FIXTURE.filter((r) => r.rig.startsWith("CF") && r.cause).map((r) => ({ caseId: ids.get(r)!, rigCode: r.rig, cause: r.cause!, openedAt: new Date(start + r.day * DAY + 15 * 3_600_000).toISOString() }));
+    const hits = FIXTURE.filter((r) => r.rig.startsWith("CF") && r.cause).map((r) => ({
+      caseId: ids.get(r)!,
+      rigCode: r.rig,
+      cause: r.cause!,
+      openedAt: new Date(start + r.day * DAY + 15 * 3_600_000).toISOString(),
+    }));
     // The chains SQL finds (gaps and islands) are exactly the pure module's on the same cases.
-    const expected = findRepeats(hits, 30).map((g) => summariseChain(g)).sort(byWeight);
+    const expected = findRepeats(hits, 30)
+      .map((g) => summariseChain(g))
+      .sort(byWeight);
     expect(board.repeats).toEqual(expected);
     // Air leaks on days 0, 10, 25, 33 form one chain; sump plugs on days 60–100 form another. BM-01's never show here.
-    expect(board.repeats.map((g) => [g.rigCode, g.cause, g.count])).toEqual([["CF-03", "plug-sump", 6], ["CF-03", "suction-air-leak", 4]]);
+    expect(board.repeats.map((g) => [g.rigCode, g.cause, g.count])).toEqual([
+      ["CF-03", "plug-sump", 6],
+      ["CF-03", "suction-air-leak", 4],
+    ]);
     const shortWindow = buildBoard(await boardAggregates(cedar.id, { ...window, repeatDays: 9 }));
-    expect(shortWindow.repeats).toEqual(findRepeats(hits, 9).map((g) => summariseChain(g)).sort(byWeight));
+    expect(shortWindow.repeats).toEqual(
+      findRepeats(hits, 9)
+        .map((g) => summariseChain(g))
+        .sort(byWeight),
+    );
     expect(board.openHandoffs.length).toBe(2);
   });
 });
 
 describe("GET /api/board", () => {
   it("answers supervisors and admins, and crew and trainers get 403", async () => {
-    for (const [email, status] of [["mo@cedarflats.example", 200], ["june@cedarflats.example", 200], ["dana@cedarflats.example", 403], ["ravi@cedarflats.example", 403]] as const) {
-      expect((await run(async () => boardApi({ request: await requestAs(email, "/api/board?from=2026-04-01&to=2026-10-01"), params: {}, context: {} } as never))).status, email).toBe(status);
+    for (const [email, status] of [
+      ["mo@cedarflats.example", 200],
+      ["june@cedarflats.example", 200],
+      ["dana@cedarflats.example", 403],
+      ["ravi@cedarflats.example", 403],
+    ] as const) {
+      expect(
+        (await run(async () => boardApi({ request: await requestAs(email, "/api/board?from=2026-04-01&to=2026-10-01"), params: {}, context: {} } as never)))
+          .status,
+        email,
+      ).toBe(status);
     }
   });
 
   it("shows each company only its own rigs, filters by rig, and names a bad window", async () => {
-    const res = await run(async () => boardApi({ request: await requestAs("li@bluemesa.example", "/api/board?from=2026-04-01&to=2026-10-01"), params: {}, context: {} } as never));
+    const res = await run(async () =>
+      boardApi({ request: await requestAs("li@bluemesa.example", "/api/board?from=2026-04-01&to=2026-10-01"), params: {}, context: {} } as never),
+    );
     expect(res.data.rigs.map((r: { rigCode: string }) => r.rigCode)).toEqual(["BM-01", "BM-02"]);
     expect(res.data.fleet.cases).toBe(3);
-    const one = await run(async () => boardApi({ request: await requestAs("mo@cedarflats.example", "/api/board?from=2026-04-01&to=2026-10-01&rig=cf-07"), params: {}, context: {} } as never));
+    const one = await run(async () =>
+      boardApi({ request: await requestAs("mo@cedarflats.example", "/api/board?from=2026-04-01&to=2026-10-01&rig=cf-07"), params: {}, context: {} } as never),
+    );
     expect(one.data.rigs.map((r: { rigCode: string }) => r.rigCode)).toEqual(["CF-07"]);
     expect(one.data.pareto.map((p: { cause: string }) => p.cause)).toEqual(["low-engine-speed"]);
-    const bad = await run(async () => boardApi({ request: await requestAs("mo@cedarflats.example", "/api/board?from=2026-13-01&repeatDays=0"), params: {}, context: {} } as never));
+    const bad = await run(async () =>
+      boardApi({ request: await requestAs("mo@cedarflats.example", "/api/board?from=2026-13-01&repeatDays=0"), params: {}, context: {} } as never),
+    );
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.data.fields).sort()).toEqual(["from", "repeatDays"]);
   });

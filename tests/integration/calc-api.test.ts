@@ -6,7 +6,11 @@ import { requestAs, run } from "../helpers/requests";
 const call = (kind: string, body: unknown, email: string | null = "dana@cedarflats.example") =>
   run(async () =>
     action({
-      request: await requestAs(email, `/api/calc/${kind}`, { method: "POST", body: typeof body === "string" ? body : JSON.stringify(body), headers: { "Content-Type": "application/json" } }),
+      request: await requestAs(email, `/api/calc/${kind}`, {
+        method: "POST",
+        body: typeof body === "string" ? body : JSON.stringify(body),
+        headers: { "Content-Type": "application/json" },
+      }),
       params: { kind },
       context: {},
     } as never),
@@ -30,7 +34,12 @@ describe("field-math API", () => {
   });
 
   it("load: loads, per-load water, area and materials, totals", async () => {
-    const res = await call("load", { areaSqFt: 43_560, tankGal: 1000, maxFiberLbPer100Gal: 50, materials: [{ name: "Wood fiber", lbPerAcre: 2000, fiber: true, bagLb: 50 }] });
+    const res = await call("load", {
+      areaSqFt: 43_560,
+      tankGal: 1000,
+      maxFiberLbPer100Gal: 50,
+      materials: [{ name: "Wood fiber", lbPerAcre: 2000, fiber: true, bagLb: 50 }],
+    });
     expect(res.data.loads).toBe(4);
     expect(res.data.perLoad[0]).toMatchObject({ waterGal: 1000, areaSqFt: 10_890, materials: [{ name: "Wood fiber", lb: 500, bags: 10 }] });
     expect(res.data.totals.materials[0].lb).toBe(2000);
@@ -43,9 +52,15 @@ describe("field-math API", () => {
   it("names every bad field with 400", async () => {
     const res = await call("hose", { flowGpm: "lots", lengthFt: 10_000 });
     expect(res.status).toBe(400);
-    expect(res.data.fields).toEqual({ flowGpm: "Flow must be a number", lengthFt: "Hose length over 2,000 is not plausible", diameterIn: "Hose diameter must be a number" });
+    expect(res.data.fields).toEqual({
+      flowGpm: "Flow must be a number",
+      lengthFt: "Hose length over 2,000 is not plausible",
+      diameterIn: "Hose diameter must be a number",
+    });
     expect((await call("load", "{not json")).status).toBe(400);
-    expect((await call("suction", { altitudeFt: 0, waterTempF: 248, liftFt: 5, suctionLossFt: 1, npshRequiredFt: 8 })).data.fields.waterTempF).toMatch(/not plausible/);
+    expect((await call("suction", { altitudeFt: 0, waterTempF: 248, liftFt: 5, suctionLossFt: 1, npshRequiredFt: 8 })).data.fields.waterTempF).toMatch(
+      /not plausible/,
+    );
   });
 
   it("needs a signed-in person, and knows only its four calculators", async () => {

@@ -20,7 +20,13 @@ async function start(email: string, rigCode: string, guideSlug: string, id = ran
 }
 const sendEvents = async (email: string, id: string, events: unknown[]) =>
   run(async () => eventsAction(args(await post(email, `/api/cases/${id}/events`, { events }), { id })));
-const ev = (seq: number, stepId: string, answer: string) => ({ id: randomUUID(), seq, stepId, answer, at: new Date(Date.UTC(2026, 5, 1, 14, seq)).toISOString() });
+const ev = (seq: number, stepId: string, answer: string) => ({
+  id: randomUUID(),
+  seq,
+  stepId,
+  answer,
+  at: new Date(Date.UTC(2026, 5, 1, 14, seq)).toISOString(),
+});
 
 beforeAll(() => resetDatabase());
 
@@ -57,7 +63,10 @@ describe("storing answers", () => {
     expect((await sendEvents(DANA, id, [later[1]])).data).toEqual({ stored: 1, duplicates: 0 });
     const res = await run(async () => caseLoader(args(await requestAs(DANA, `/api/cases/${id}`), { id })));
     expect(res.data.events.map((e: { seq: number; stepId: string }) => `${e.seq}:${e.stepId}`)).toEqual([
-      "1:water-level", "2:suction-valve", "3:open-suction-valve", "4:holds-after-valve",
+      "1:water-level",
+      "2:suction-valve",
+      "3:open-suction-valve",
+      "4:holds-after-valve",
     ]);
   });
 
@@ -93,7 +102,9 @@ describe("closing a case", () => {
     const id = randomUUID();
     await start(DANA, "CF-07", "lost-prime", id);
     await sendEvents(DANA, id, [ev(1, "water-level", "NO"), ev(2, "add-water", "DONE"), ev(3, "holds-after-water", "YES")]);
-    const res = await run(async () => closeAction(args(await post(DANA, `/api/cases/${id}/close`, { outcome: "fixed", finalStep: "fixed-low-water", engineHours: 2400 }), { id })));
+    const res = await run(async () =>
+      closeAction(args(await post(DANA, `/api/cases/${id}/close`, { outcome: "fixed", finalStep: "fixed-low-water", engineHours: 2400 }), { id })),
+    );
     expect(res.status).toBe(200);
     expect(await Case.findByPk(id)).toMatchObject({ outcome: "fixed", causeCode: "low-water", engineHours: 2400 });
     expect((await Rig.findOne({ where: { code: "CF-07" } }))!.engineHours).toBe(2400);
@@ -112,7 +123,10 @@ describe("closing a case", () => {
     await start(DANA, "CF-07", "leaks", id);
     await sendEvents(DANA, id, [ev(1, "at-coupling", "YES"), ev(2, "stop-coupling", "ACK"), ev(3, "fix-coupling", "CANT")]);
     const before = (await outbox()).length;
-    const close = () => run(async () => closeAction(args(await post(DANA, `/api/cases/${id}/close`, { outcome: "handoff", finalStep: "handoff-leak", note: "Gasket seat cracked" }), { id })));
+    const close = () =>
+      run(async () =>
+        closeAction(args(await post(DANA, `/api/cases/${id}/close`, { outcome: "handoff", finalStep: "handoff-leak", note: "Gasket seat cracked" }), { id })),
+      );
     const res = await close();
     expect(res.data).toMatchObject({ outcome: "handoff", notified: ["Mo Brennan"] });
     const mails = (await outbox()).slice(before);

@@ -36,8 +36,18 @@ beforeAll(async () => {
   const version = await GuideVersion.findOne();
   caseId = randomUUID();
   await Case.create({
-    id: caseId, companyId: cedar!.id, rigId: rig!.id, guideVersionId: version!.id, openedBy: dana!.id, openedAt: new Date(),
-    closedAt: null, engineHours: null, finalStep: null, causeCode: null, safetyAckAt: null, note: null,
+    id: caseId,
+    companyId: cedar!.id,
+    rigId: rig!.id,
+    guideVersionId: version!.id,
+    openedBy: dana!.id,
+    openedAt: new Date(),
+    closedAt: null,
+    engineHours: null,
+    finalStep: null,
+    causeCode: null,
+    safetyAckAt: null,
+    note: null,
   });
 });
 

@@ -48,7 +48,17 @@ describe("demo history", () => {
     const user = { id: mo.id, name: mo.name, email: mo.email, role: mo.role, companyId: mo.companyId, companyName: "" };
     const guide = (await GuideRecord.findOne({ where: { scope: "builtin", slug: "lost-prime" } }))!;
     const learned = (await learnFromCases(user, guide.id))!;
-    const companyCases = await Case.count({ where: { companyId: mo.companyId, guideVersionId: (await db().query("SELECT id FROM guide_versions WHERE guide_id = ? AND status = 'published'", { replacements: [guide.id], type: QueryTypes.SELECT }) as { id: number }[])[0].id } });
+    const companyCases = await Case.count({
+      where: {
+        companyId: mo.companyId,
+        guideVersionId: (
+          (await db().query("SELECT id FROM guide_versions WHERE guide_id = ? AND status = 'published'", {
+            replacements: [guide.id],
+            type: QueryTypes.SELECT,
+          })) as { id: number }[]
+        )[0].id,
+      },
+    });
     expect(learned.cases).toBe(companyCases);
     const first = learned.flow.find((f) => f.stepId === "water-level")!;
     expect(first.reached).toBe(companyCases);

@@ -48,7 +48,8 @@ describe("access", () => {
       async () => previewLoader(args(await requestAs(CREW, `/desk/${id}/v/1/preview`), p)),
       async () => exportLoader(args(await requestAs(CREW, `/desk/${id}/v/1/export`), p)),
       async () => diffLoader(args(await requestAs(CREW, `/desk/${id}/diff?a=1&b=1`), p)),
-      async () => saveApi(args(await requestAs(CREW, `/api/desk/${id}/v/1`, { method: "POST", body: "{}", headers: { "Content-Type": "application/json" } }), p)),
+      async () =>
+        saveApi(args(await requestAs(CREW, `/api/desk/${id}/v/1`, { method: "POST", body: "{}", headers: { "Content-Type": "application/json" } }), p)),
     ];
     const [layout, ...rest] = calls;
     expect((await run(layout as () => Promise<unknown>)).status).toBe(302); // signed out: to sign-in
@@ -85,13 +86,27 @@ describe("drafts, review and publishing", () => {
     const definition = structuredClone(draft.definition);
     definition.states["agitator-speed"].meta.prompt = "Is the agitator faster than half speed right now?";
     const save = async () =>
-      run(async () => saveApi(args(await requestAs(TRAINER, "/x", { method: "POST", body: JSON.stringify({ definition }), headers: { "Content-Type": "application/json" } }), { guideId: copyId, number: String(draft.number) })));
+      run(async () =>
+        saveApi(
+          args(await requestAs(TRAINER, "/x", { method: "POST", body: JSON.stringify({ definition }), headers: { "Content-Type": "application/json" } }), {
+            guideId: copyId,
+            number: String(draft.number),
+          }),
+        ),
+      );
     expect((await save()).data).toEqual({ problems: [] });
     const once = (await draft.reload()).updatedAt;
     expect((await save()).status).toBe(200);
     expect((await draft.reload()).updatedAt).toEqual(once);
     const published = (await GuideVersion.findOne({ where: { guideId: builtinFoaming.id } }))!;
-    const over = await run(async () => saveApi(args(await requestAs(TRAINER, "/x", { method: "POST", body: JSON.stringify({ definition }), headers: { "Content-Type": "application/json" } }), { guideId: String(builtinFoaming.id), number: String(published.number) })));
+    const over = await run(async () =>
+      saveApi(
+        args(await requestAs(TRAINER, "/x", { method: "POST", body: JSON.stringify({ definition }), headers: { "Content-Type": "application/json" } }), {
+          guideId: String(builtinFoaming.id),
+          number: String(published.number),
+        }),
+      ),
+    );
     expect(over.status).toBe(409);
   });
 
@@ -114,7 +129,9 @@ describe("drafts, review and publishing", () => {
     const oldVersion = (await GuideVersion.findByPk(oldVersionId))!.toJSON();
 
     const draft = (await GuideVersion.findOne({ where: { guideId: Number(copyId), status: "draft" } }))!;
-    expect((await form(TRAINER, "/x", { intent: "submit", number: String(draft.number), changeNote: "Clearer first question" }, { guideId: copyId })).status).toBe(200);
+    expect(
+      (await form(TRAINER, "/x", { intent: "submit", number: String(draft.number), changeNote: "Clearer first question" }, { guideId: copyId })).status,
+    ).toBe(200);
     expect((await draft.reload()).status).toBe("in_review");
     expect((await form(TRAINER, "/x", { intent: "approve", number: String(draft.number) }, { guideId: copyId })).status).toBe(403);
     expect((await draft.reload()).status).toBe("in_review");
@@ -139,7 +156,10 @@ describe("drafts, review and publishing", () => {
     expect((await form(TRAINER, "/x", { intent: "submit", number, changeNote: "Second pass" }, { guideId: copyId })).status).toBe(200);
     expect((await form(SUPERVISOR, "/x", { intent: "return", number, comment: "" }, { guideId: copyId })).status).toBe(400);
     await form(SUPERVISOR, "/x", { intent: "return", number, comment: "Add a photo prompt" }, { guideId: copyId });
-    expect(await GuideVersion.findOne({ where: { guideId: Number(copyId), number: 2 } })).toMatchObject({ status: "draft", reviewComment: "Add a photo prompt" });
+    expect(await GuideVersion.findOne({ where: { guideId: Number(copyId), number: 2 } })).toMatchObject({
+      status: "draft",
+      reviewComment: "Add a photo prompt",
+    });
     await form(TRAINER, "/x", { intent: "submit", number, changeNote: "Second pass again" }, { guideId: copyId });
     await form(SUPERVISOR, "/x", { intent: "approve", number }, { guideId: copyId });
     const versions = await GuideVersion.findAll({ where: { guideId: Number(copyId) }, order: [["number", "ASC"]] });

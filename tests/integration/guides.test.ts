@@ -30,7 +30,10 @@ describe("guide storage", () => {
     edited.states["agitator-speed"].meta.prompt = "Is the agitator above half speed?";
     expect(await importBuiltinGuides([edited])).toEqual({ created: 0, updated: 1, unchanged: 0 });
     const versions = await GuideVersion.findAll({ where: { guideId: record!.id }, order: [["number", "ASC"]] });
-    expect(versions.map((v) => [v.number, v.status])).toEqual([[1, "retired"], [2, "published"]]);
+    expect(versions.map((v) => [v.number, v.status])).toEqual([
+      [1, "retired"],
+      [2, "published"],
+    ]);
     expect(versions[0].definition).toEqual(before.definition);
     expect(versions[0].definition.states["agitator-speed"].meta.prompt).toBe(foaming.states["agitator-speed"].meta.prompt);
     expect((await record!.reload()).publishedVersion).toBe(2);
@@ -67,10 +70,25 @@ describe("GET /api/guides/search", () => {
   it("finds a company's own guide for that company only", async () => {
     const mesa = await Company.findOne({ where: { slug: "blue-mesa" } });
     const own = { ...tinyGuide(), id: "hopper-gate", title: "Hopper gate sticks", symptoms: ["hopper gate sticks", "gate won't open"] };
-    const record = await GuideRecord.create({ companyId: mesa!.id, scope: guideScope(mesa!.id), slug: own.id, title: own.title, publishedVersion: 1, basedOnGuideId: null });
+    const record = await GuideRecord.create({
+      companyId: mesa!.id,
+      scope: guideScope(mesa!.id),
+      slug: own.id,
+      title: own.title,
+      publishedVersion: 1,
+      basedOnGuideId: null,
+    });
     await GuideVersion.create({
-      guideId: record.id, number: 1, status: "published", definition: own, sourceHash: "x".repeat(64),
-      authorId: null, reviewerId: null, changeNote: null, reviewComment: null, publishedAt: new Date(),
+      guideId: record.id,
+      number: 1,
+      status: "published",
+      definition: own,
+      sourceHash: "x".repeat(64),
+      authorId: null,
+      reviewerId: null,
+      changeNote: null,
+      reviewComment: null,
+      publishedAt: new Date(),
     });
     expect((await search("sam@bluemesa.example", "hopper gate sticks")).body.results[0].slug).toBe("hopper-gate");
     const cedar = (await search("dana@cedarflats.example", "hopper gate sticks")).body.results.map((r: { slug: string }) => r.slug);

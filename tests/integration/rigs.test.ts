@@ -9,9 +9,19 @@ import { requestAs, run } from "../helpers/requests";
 
 const args = (request: Request, params: Record<string, string> = {}) => ({ request, params, context: {} }) as never;
 const goodRig = {
-  code: "CF-21", name: "New trailer", mount: "trailer", tankGal: "1000", pumpKind: "Centrifugal 3 in",
-  hasHourMeter: "on", engineHours: "0", hoseLengthFt: "200", hoseDiameterIn: "1.5", yardElevationFt: "400",
-  "nozzleTips[0].name": "Wide fan", "nozzleTips[0].reachFt": "45", "nozzleTips[0].widthFt": "12",
+  code: "CF-21",
+  name: "New trailer",
+  mount: "trailer",
+  tankGal: "1000",
+  pumpKind: "Centrifugal 3 in",
+  hasHourMeter: "on",
+  engineHours: "0",
+  hoseLengthFt: "200",
+  hoseDiameterIn: "1.5",
+  yardElevationFt: "400",
+  "nozzleTips[0].name": "Wide fan",
+  "nozzleTips[0].reachFt": "45",
+  "nozzleTips[0].widthFt": "12",
 };
 
 beforeAll(() => resetDatabase());

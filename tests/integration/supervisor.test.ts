@@ -25,8 +25,19 @@ beforeAll(async () => {
     const id = randomUUID();
     const openedAt = new Date(Date.now() - day * 86_400_000);
     await Case.create({
-      id, companyId: rig.companyId, rigId: rig.id, guideVersionId: version!.id, openedBy: opener.id, openedAt,
-      closedAt: new Date(openedAt.getTime() + 600_000), engineHours: 100 + day, outcome, finalStep: null, causeCode: cause, safetyAckAt: null, note: awkwardNote,
+      id,
+      companyId: rig.companyId,
+      rigId: rig.id,
+      guideVersionId: version!.id,
+      openedBy: opener.id,
+      openedAt,
+      closedAt: new Date(openedAt.getTime() + 600_000),
+      engineHours: 100 + day,
+      outcome,
+      finalStep: null,
+      causeCode: cause,
+      safetyAckAt: null,
+      note: awkwardNote,
     });
     return id;
   };
@@ -37,7 +48,12 @@ beforeAll(async () => {
 
 describe("cases table", () => {
   it("is for supervisors and admins only", async () => {
-    for (const [email, status] of [["dana@cedarflats.example", 403], ["ravi@cedarflats.example", 403], [MO, 200], ["june@cedarflats.example", 200]] as const) {
+    for (const [email, status] of [
+      ["dana@cedarflats.example", 403],
+      ["ravi@cedarflats.example", 403],
+      [MO, 200],
+      ["june@cedarflats.example", 200],
+    ] as const) {
       expect((await run(async () => casesLoader(args(await requestAs(email, "/cases"))))).status, email).toBe(status);
     }
   });
@@ -50,7 +66,9 @@ describe("cases table", () => {
     const page2 = await run(async () => casesLoader(args(await requestAs(MO, "/cases?page=2"))));
     expect(page2.data.rows).toHaveLength(6);
     const cf07 = await run(async () => casesLoader(args(await requestAs(MO, "/cases?rig=CF-07&cause=plug-sump&sort=opened&dir=asc"))));
-    expect(cf07.data.rows.map((r: { rigCode: string; causeCode: string }) => `${r.rigCode}:${r.causeCode}`)).toEqual(Array(cf07.data.total).fill("CF-07:plug-sump"));
+    expect(cf07.data.rows.map((r: { rigCode: string; causeCode: string }) => `${r.rigCode}:${r.causeCode}`)).toEqual(
+      Array(cf07.data.total).fill("CF-07:plug-sump"),
+    );
     const dates = cf07.data.rows.map((r: { openedAt: string }) => r.openedAt);
     expect([...dates].sort()).toEqual(dates);
     expect((await run(async () => casesLoader(args(await requestAs(MO, "/cases?sort=bogus"))))).status).toBe(400);
@@ -62,7 +80,10 @@ describe("cases table", () => {
     expect(res.headers.get("Content-Disposition")).toMatch(/attachment; filename="tankside-cases-/);
     const rows = parse(await res.text(), { columns: true }) as Record<string, string>[];
     expect(rows.map((r) => r.case_id)).toEqual([handoffId]);
-    const everything = parse(await ((await exportLoader(args(await requestAs(MO, "/cases/export")))) as Response).text(), { columns: true }) as Record<string, string>[];
+    const everything = parse(await ((await exportLoader(args(await requestAs(MO, "/cases/export")))) as Response).text(), { columns: true }) as Record<
+      string,
+      string
+    >[];
     expect(everything).toHaveLength(31);
     expect(everything.some((r) => r.rig === "BM-01")).toBe(false);
     expect((await run(async () => exportLoader(args(await requestAs("dana@cedarflats.example", "/cases/export"))))).status).toBe(403);
@@ -83,13 +104,22 @@ describe("board page, hand-offs and the digest", () => {
   it("gives crew and trainers 403 and supervisors the board", async () => {
     expect((await run(async () => boardLoader(args(await requestAs("ravi@cedarflats.example", "/board"))))).status).toBe(403);
     const board = await run(async () => boardLoader(args(await requestAs(MO, "/board"))));
-    expect(board.data.board.pareto.map((p: { cause: string; count: number }) => [p.cause, p.count])).toEqual([["plug-sump", 15], ["suction-air-leak", 15]]);
+    expect(board.data.board.pareto.map((p: { cause: string; count: number }) => [p.cause, p.count])).toEqual([
+      ["plug-sump", 15],
+      ["suction-air-leak", 15],
+    ]);
     expect(board.data.board.openHandoffs.map((o: { caseId: string }) => o.caseId)).toEqual([handoffId]);
   });
 
   it("lets a supervisor mark a hand-off dealt with, and another company gets 404", async () => {
-    expect((await run(async () => caseAction(args(await requestAs("li@bluemesa.example", "/x", { form: { intent: "resolve-handoff" } }), { id: handoffId })))).status).toBe(404);
-    expect((await run(async () => caseAction(args(await requestAs("dana@cedarflats.example", "/x", { form: { intent: "resolve-handoff" } }), { id: handoffId })))).status).toBe(403);
+    expect(
+      (await run(async () => caseAction(args(await requestAs("li@bluemesa.example", "/x", { form: { intent: "resolve-handoff" } }), { id: handoffId }))))
+        .status,
+    ).toBe(404);
+    expect(
+      (await run(async () => caseAction(args(await requestAs("dana@cedarflats.example", "/x", { form: { intent: "resolve-handoff" } }), { id: handoffId }))))
+        .status,
+    ).toBe(403);
     await run(async () => caseAction(args(await requestAs(MO, "/x", { form: { intent: "resolve-handoff" } }), { id: handoffId })));
     expect((await Case.findByPk(handoffId))!.handoffResolvedAt).not.toBeNull();
     const board = await run(async () => boardLoader(args(await requestAs(MO, "/board"))));

@@ -18,7 +18,14 @@ export function HoseCalc({ rig, compact = false }: { rig?: RigSpecs; compact?: b
 
   const lengthFt = 100 * toNumber(hundreds) + 50 * toNumber(fifties);
   const friction = tryCalc(hoseFriction, { flowGpm: toNumber(flow), lengthFt, diameterIn: toNumber(diameter), table, elevationFt: toNumber(rise) });
-  const reach = tryCalc(reachByHoseLength, { pumpPsi: toNumber(pump), tipIn: toNumber(tip), diameterIn: toNumber(diameter), table, elevationFt: toNumber(rise), maxLengthFt: Math.max(100, Math.min(1000, lengthFt || 300)) });
+  const reach = tryCalc(reachByHoseLength, {
+    pumpPsi: toNumber(pump),
+    tipIn: toNumber(tip),
+    diameterIn: toNumber(diameter),
+    table,
+    elevationFt: toNumber(rise),
+    maxLengthFt: Math.max(100, Math.min(1000, lengthFt || 300)),
+  });
   const r = friction.result;
   const pumpPsi = toNumber(pump);
   const share = r && pumpPsi > 0 ? r.totalLossPsi / pumpPsi : null;
@@ -36,16 +43,34 @@ export function HoseCalc({ rig, compact = false }: { rig?: RigSpecs; compact?: b
       <NumberField id="hose-diameter" label="Hose inside diameter" value={diameter} onChange={setDiameter} unit="in" error={friction.errors.diameterIn} />
       <label className="block font-bold">
         Coefficient table
-        <select value={table} onChange={(e) => setTable(e.target.value)} className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink bg-paper px-3 text-lg">
+        <select
+          value={table}
+          onChange={(e) => setTable(e.target.value)}
+          className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink bg-paper px-3 text-lg"
+        >
           {FRICTION_TABLES.map((t) => (
             <option key={t.id} value={t.id}>
-              {t.name} ({Object.keys(t.coefficients).map(Number).sort((a, b) => a - b).join(", ")} in)
+              {t.name} (
+              {Object.keys(t.coefficients)
+                .map(Number)
+                .sort((a, b) => a - b)
+                .join(", ")}{" "}
+              in)
             </option>
           ))}
         </select>
       </label>
       <NumberField id="hose-flow" label="Flow" value={flow} onChange={setFlow} unit="gpm" error={friction.errors.flowGpm} />
-      {compact ? null : <NumberField id="hose-rise" label="Rise from pump to nozzle (negative if downhill)" value={rise} onChange={setRise} unit="ft" error={friction.errors.elevationFt} />}
+      {compact ? null : (
+        <NumberField
+          id="hose-rise"
+          label="Rise from pump to nozzle (negative if downhill)"
+          value={rise}
+          onChange={setRise}
+          unit="ft"
+          error={friction.errors.elevationFt}
+        />
+      )}
       <NumberField id="hose-pump" label="Pump pressure" value={pump} onChange={setPump} unit="psi" error={reach.errors.pumpPsi} />
       {r ? (
         <ResultBox tone={share !== null && share > 0.5 ? "warn" : "plain"}>
@@ -53,7 +78,11 @@ export function HoseCalc({ rig, compact = false }: { rig?: RigSpecs; compact?: b
             Friction loss: {fmt(r.frictionLossPsi, 1)} psi ({fmt(psiToKpa(r.frictionLossPsi))} kPa)
           </p>
           {r.elevationPsi ? <p>Rise: {fmt(r.elevationPsi, 1)} psi more</p> : null}
-          {share !== null ? <p className="text-lg">That is {fmt(share * 100)} % of the pump's {fmt(pumpPsi)} psi{share > 0.5 ? ": the hose is eating most of the pressure." : "."}</p> : null}
+          {share !== null ? (
+            <p className="text-lg">
+              That is {fmt(share * 100)} % of the pump's {fmt(pumpPsi)} psi{share > 0.5 ? ": the hose is eating most of the pressure." : "."}
+            </p>
+          ) : null}
           <SourceNote>
             C = {r.coefficient} for {diameter} in hose, from {r.source}. {r.note}
           </SourceNote>
@@ -62,7 +91,9 @@ export function HoseCalc({ rig, compact = false }: { rig?: RigSpecs; compact?: b
       {compact ? null : <NumberField id="hose-tip" label="Smooth-bore tip diameter" value={tip} onChange={setTip} unit="in" error={reach.errors.tipIn} />}
       {reach.result ? (
         <table className="w-full border-collapse text-left">
-          <caption className="text-left font-bold">Reach by hose length at {pump} psi at the pump, {tip} in tip</caption>
+          <caption className="text-left font-bold">
+            Reach by hose length at {pump} psi at the pump, {tip} in tip
+          </caption>
           <thead>
             <tr className="border-b-2 border-ink">
               <th scope="col">Hose</th>
@@ -83,7 +114,11 @@ export function HoseCalc({ rig, compact = false }: { rig?: RigSpecs; compact?: b
           </tbody>
         </table>
       ) : null}
-      {reach.result ? <SourceNote>Reach: S = NP/2 + 26 ft for a ¾ in tip, +5 ft per ⅛ in larger (Fire Engineering, Aug 1960). Flow: 29.7·d²·√NP. Water figures; slurry reaches less.</SourceNote> : null}
+      {reach.result ? (
+        <SourceNote>
+          Reach: S = NP/2 + 26 ft for a ¾ in tip, +5 ft per ⅛ in larger (Fire Engineering, Aug 1960). Flow: 29.7·d²·√NP. Water figures; slurry reaches less.
+        </SourceNote>
+      ) : null}
     </div>
   );
 }

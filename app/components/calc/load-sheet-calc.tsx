@@ -35,7 +35,12 @@ export function LoadSheetCalc({ rig, compact = false }: { rig?: RigSpecs; compac
     areaSqFt,
     tankGal: toNumber(tank),
     maxFiberLbPer100Gal: toNumber(ceiling),
-    materials: rows.map((row) => ({ name: row.name, lbPerAcre: toNumber(row.rate), fiber: row.fiber, ...(row.bag.trim() ? { bagLb: toNumber(row.bag) } : {}) })),
+    materials: rows.map((row) => ({
+      name: row.name,
+      lbPerAcre: toNumber(row.rate),
+      fiber: row.fiber,
+      ...(row.bag.trim() ? { bagLb: toNumber(row.bag) } : {}),
+    })),
   });
 
   return (
@@ -43,7 +48,12 @@ export function LoadSheetCalc({ rig, compact = false }: { rig?: RigSpecs; compac
       <div className="no-print space-y-3">
         <div className="grid grid-cols-[1fr_auto] items-end gap-2">
           <NumberField id="load-area" label="Area to cover" value={area} onChange={setArea} unit="" error={errors.areaSqFt} />
-          <select aria-label="Area unit" value={areaUnit} onChange={(e) => setAreaUnit(e.target.value as "acres")} className="mb-[2px] min-h-14 rounded-md border-2 border-ink bg-paper px-2 text-lg">
+          <select
+            aria-label="Area unit"
+            value={areaUnit}
+            onChange={(e) => setAreaUnit(e.target.value as "acres")}
+            className="mb-[2px] min-h-14 rounded-md border-2 border-ink bg-paper px-2 text-lg"
+          >
             {Object.entries(AREA_UNITS).map(([k, v]) => (
               <option key={k} value={k}>
                 {v}
@@ -51,9 +61,29 @@ export function LoadSheetCalc({ rig, compact = false }: { rig?: RigSpecs; compac
             ))}
           </select>
         </div>
-        {Number.isFinite(areaSqFt) ? <p className="text-sm">= {fmt(areaSqFt)} ft² = {fmt(sqFtToAcres(areaSqFt), 3)} ac</p> : null}
-        <NumberField id="load-tank" label="Tank size" value={tank} onChange={setTank} unit="gal" beside={`${fmt(galToL(toNumber(tank) || 0))} L`} error={errors.tankGal} />
-        <NumberField id="load-ceiling" label="Most fiber per 100 gal of water" value={ceiling} onChange={setCeiling} unit="lb" beside="50 lb is common practice; use your product's figure." error={errors.maxFiberLbPer100Gal} />
+        {Number.isFinite(areaSqFt) ? (
+          <p className="text-sm">
+            = {fmt(areaSqFt)} ft² = {fmt(sqFtToAcres(areaSqFt), 3)} ac
+          </p>
+        ) : null}
+        <NumberField
+          id="load-tank"
+          label="Tank size"
+          value={tank}
+          onChange={setTank}
+          unit="gal"
+          beside={`${fmt(galToL(toNumber(tank) || 0))} L`}
+          error={errors.tankGal}
+        />
+        <NumberField
+          id="load-ceiling"
+          label="Most fiber per 100 gal of water"
+          value={ceiling}
+          onChange={setCeiling}
+          unit="lb"
+          beside="50 lb is common practice; use your product's figure."
+          error={errors.maxFiberLbPer100Gal}
+        />
         {compact ? null : (
           <fieldset className="space-y-3 rounded-md border-2 border-rule p-3">
             <legend className="px-1 font-bold">Materials at the spec rate</legend>
@@ -62,20 +92,46 @@ export function LoadSheetCalc({ rig, compact = false }: { rig?: RigSpecs; compac
               <div key={row.key} className="grid grid-cols-2 gap-2 border-b border-rule pb-3">
                 <label className="col-span-2 font-bold">
                   Material {i + 1}
-                  <input value={row.name} onChange={(e) => setRow(row.key, { name: e.target.value })} className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink bg-paper px-3 text-lg" />
+                  <input
+                    value={row.name}
+                    onChange={(e) => setRow(row.key, { name: e.target.value })}
+                    className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink bg-paper px-3 text-lg"
+                  />
                   {errors[`materials.${i}.name`] ? <span className="text-stop">{errors[`materials.${i}.name`]}</span> : null}
                 </label>
-                <NumberField id={`rate-${row.key}`} label="Rate" value={row.rate} onChange={(v) => setRow(row.key, { rate: v })} unit="lb/ac" error={errors[`materials.${i}.lbPerAcre`]} />
-                <NumberField id={`bag-${row.key}`} label="Bag size" value={row.bag} onChange={(v) => setRow(row.key, { bag: v })} unit="lb" error={errors[`materials.${i}.bagLb`]} />
+                <NumberField
+                  id={`rate-${row.key}`}
+                  label="Rate"
+                  value={row.rate}
+                  onChange={(v) => setRow(row.key, { rate: v })}
+                  unit="lb/ac"
+                  error={errors[`materials.${i}.lbPerAcre`]}
+                />
+                <NumberField
+                  id={`bag-${row.key}`}
+                  label="Bag size"
+                  value={row.bag}
+                  onChange={(v) => setRow(row.key, { bag: v })}
+                  unit="lb"
+                  error={errors[`materials.${i}.bagLb`]}
+                />
                 <label className="flex min-h-12 items-center gap-2 font-bold">
                   <input type="checkbox" checked={row.fiber} onChange={(e) => setRow(row.key, { fiber: e.target.checked })} className="h-6 w-6" /> Fiber mulch
                 </label>
-                <button type="button" onClick={() => setRows(rows.filter((x) => x.key !== row.key))} className="min-h-12 rounded-md border-2 border-ink bg-paper font-bold">
+                <button
+                  type="button"
+                  onClick={() => setRows(rows.filter((x) => x.key !== row.key))}
+                  className="min-h-12 rounded-md border-2 border-ink bg-paper font-bold"
+                >
                   Remove
                 </button>
               </div>
             ))}
-            <button type="button" onClick={() => setRows([...rows, { key: Date.now(), name: "Tackifier", rate: "100", fiber: false, bag: "" }])} className="min-h-12 rounded-md border-2 border-ink bg-paper px-3 font-bold">
+            <button
+              type="button"
+              onClick={() => setRows([...rows, { key: Date.now(), name: "Tackifier", rate: "100", fiber: false, bag: "" }])}
+              className="min-h-12 rounded-md border-2 border-ink bg-paper px-3 font-bold"
+            >
               Add a material
             </button>
           </fieldset>
@@ -134,7 +190,8 @@ export function LoadSheetCalc({ rig, compact = false }: { rig?: RigSpecs; compac
             ))}
           </ol>
           <SourceNote>
-            Order and the {r.seedInTankMinutes}-minute seed limit: USDA NRCS Wyoming hydroseeding fact sheet. Area per load = fiber ÷ rate × 43,560 ft². Fiber ceiling: common practice.
+            Order and the {r.seedInTankMinutes}-minute seed limit: USDA NRCS Wyoming hydroseeding fact sheet. Area per load = fiber ÷ rate × 43,560 ft². Fiber
+            ceiling: common practice.
           </SourceNote>
         </ResultBox>
       ) : null}

@@ -9,7 +9,12 @@ export function TorqueCalc({ rig, compact = false }: { rig?: RigSpecs; compact?:
   const [unit, setUnit] = useState<"ft-lb" | "N-m">("ft-lb");
   const [bolt, setBolt] = useState({ diameterIn: "0.5", threadsPerInch: "13", grade: "5", condition: "dry" });
   const converted = tryCalc(convertTorque, { value: toNumber(value), unit });
-  const estimate = tryCalc(boltTorque, { diameterIn: toNumber(bolt.diameterIn), threadsPerInch: toNumber(bolt.threadsPerInch), grade: Number(bolt.grade), condition: bolt.condition });
+  const estimate = tryCalc(boltTorque, {
+    diameterIn: toNumber(bolt.diameterIn),
+    threadsPerInch: toNumber(bolt.threadsPerInch),
+    grade: Number(bolt.grade),
+    condition: bolt.condition,
+  });
   return (
     <div className="space-y-3">
       {rig?.torqueSpecs.length ? (
@@ -33,7 +38,12 @@ export function TorqueCalc({ rig, compact = false }: { rig?: RigSpecs; compact?:
       )}
       <div className="grid grid-cols-[1fr_auto] items-end gap-2">
         <NumberField id="torque-value" label="Convert" value={value} onChange={setValue} unit="" error={converted.errors.value} />
-        <select aria-label="Unit" value={unit} onChange={(e) => setUnit(e.target.value as "ft-lb")} className="mb-[2px] min-h-14 rounded-md border-2 border-ink bg-paper px-2 text-lg">
+        <select
+          aria-label="Unit"
+          value={unit}
+          onChange={(e) => setUnit(e.target.value as "ft-lb")}
+          className="mb-[2px] min-h-14 rounded-md border-2 border-ink bg-paper px-2 text-lg"
+        >
           <option value="ft-lb">ft·lb</option>
           <option value="N-m">N·m</option>
         </select>
@@ -50,18 +60,40 @@ export function TorqueCalc({ rig, compact = false }: { rig?: RigSpecs; compact?:
         <details className="rounded-md border-2 border-rule bg-paper p-3">
           <summary className="min-h-12 cursor-pointer py-2 font-bold">No figure from the maker? Estimate for a steel bolt</summary>
           <div className="mt-2 grid grid-cols-2 gap-3">
-            <NumberField id="bolt-d" label="Diameter" value={bolt.diameterIn} onChange={(v) => setBolt({ ...bolt, diameterIn: v })} unit="in" error={estimate.errors.diameterIn} />
-            <NumberField id="bolt-n" label="Threads per inch" value={bolt.threadsPerInch} onChange={(v) => setBolt({ ...bolt, threadsPerInch: v })} unit="TPI" error={estimate.errors.threadsPerInch} />
+            <NumberField
+              id="bolt-d"
+              label="Diameter"
+              value={bolt.diameterIn}
+              onChange={(v) => setBolt({ ...bolt, diameterIn: v })}
+              unit="in"
+              error={estimate.errors.diameterIn}
+            />
+            <NumberField
+              id="bolt-n"
+              label="Threads per inch"
+              value={bolt.threadsPerInch}
+              onChange={(v) => setBolt({ ...bolt, threadsPerInch: v })}
+              unit="TPI"
+              error={estimate.errors.threadsPerInch}
+            />
             <label className="font-bold">
               SAE grade
-              <select value={bolt.grade} onChange={(e) => setBolt({ ...bolt, grade: e.target.value })} className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink bg-paper px-2">
+              <select
+                value={bolt.grade}
+                onChange={(e) => setBolt({ ...bolt, grade: e.target.value })}
+                className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink bg-paper px-2"
+              >
                 <option value="5">5</option>
                 <option value="8">8</option>
               </select>
             </label>
             <label className="font-bold">
               Threads
-              <select value={bolt.condition} onChange={(e) => setBolt({ ...bolt, condition: e.target.value })} className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink bg-paper px-2">
+              <select
+                value={bolt.condition}
+                onChange={(e) => setBolt({ ...bolt, condition: e.target.value })}
+                className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink bg-paper px-2"
+              >
                 <option value="dry">Dry</option>
                 <option value="lubricated">Lubricated</option>
               </select>
@@ -72,7 +104,10 @@ export function TorqueCalc({ rig, compact = false }: { rig?: RigSpecs; compact?:
               About {fmt(estimate.result.ftLb)} ft·lb ({fmt(estimate.result.nm)} N·m)
             </p>
           ) : null}
-          <SourceNote>T = K·D·P with P = 75 % of proof load (SAE J429), K 0.20 dry / 0.15 lubricated. Charts with other K differ: never mix charts. The maker's figure comes first.</SourceNote>
+          <SourceNote>
+            T = K·D·P with P = 75 % of proof load (SAE J429), K 0.20 dry / 0.15 lubricated. Charts with other K differ: never mix charts. The maker's figure
+            comes first.
+          </SourceNote>
         </details>
       )}
     </div>

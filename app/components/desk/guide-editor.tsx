@@ -37,7 +37,8 @@ export function GuideEditor({ initial, causes, saveUrl }: { initial: Draft; caus
   const setStep = (id: string, step: LooseStep) => change({ ...draft, states: { ...draft.states, [id]: step } });
   const addStep = (kind: LooseStep["meta"]["kind"] = "check") => {
     const id = uniqueId(draft.states, `new-${kind}`);
-    const on: Record<string, string> | undefined = kind === "check" ? { YES: "", NO: "" } : kind === "task" ? { DONE: "", CANT: "" } : kind === "safety" ? { ACK: "" } : undefined;
+    const on: Record<string, string> | undefined =
+      kind === "check" ? { YES: "", NO: "" } : kind === "task" ? { DONE: "", CANT: "" } : kind === "safety" ? { ACK: "" } : undefined;
     change({ ...draft, states: { ...draft.states, [id]: { ...(on ? { on } : { type: "final" as const }), meta: { kind, prompt: "" } } } });
     setSelected(id);
     return id;
@@ -54,7 +55,10 @@ export function GuideEditor({ initial, causes, saveUrl }: { initial: Draft; caus
   const rename = (from: string, to: string) => {
     if (to in draft.states) return;
     const states = Object.fromEntries(
-      Object.entries(draft.states).map(([k, s]) => [k === from ? to : k, s.on ? { ...s, on: Object.fromEntries(Object.entries(s.on).map(([a, t]) => [a, t === from ? to : t])) } : s]),
+      Object.entries(draft.states).map(([k, s]) => [
+        k === from ? to : k,
+        s.on ? { ...s, on: Object.fromEntries(Object.entries(s.on).map(([a, t]) => [a, t === from ? to : t])) } : s,
+      ]),
     );
     change({ ...draft, initial: draft.initial === from ? to : draft.initial, states });
     setSelected(to);
@@ -132,10 +136,20 @@ export function GuideEditor({ initial, causes, saveUrl }: { initial: Draft; caus
                   {draft.states[id].meta.kind === "safety" ? "⛔ " : ""}
                   {id}
                 </button>
-                <button type="button" aria-label={`Move ${id} up`} onClick={() => move(id, -1)} className="min-h-11 min-w-11 rounded-md border-2 border-rule bg-paper">
+                <button
+                  type="button"
+                  aria-label={`Move ${id} up`}
+                  onClick={() => move(id, -1)}
+                  className="min-h-11 min-w-11 rounded-md border-2 border-rule bg-paper"
+                >
                   ↑
                 </button>
-                <button type="button" aria-label={`Move ${id} down`} onClick={() => move(id, 1)} className="min-h-11 min-w-11 rounded-md border-2 border-rule bg-paper">
+                <button
+                  type="button"
+                  aria-label={`Move ${id} down`}
+                  onClick={() => move(id, 1)}
+                  className="min-h-11 min-w-11 rounded-md border-2 border-rule bg-paper"
+                >
                   ↓
                 </button>
               </li>
@@ -165,7 +179,11 @@ export function GuideEditor({ initial, causes, saveUrl }: { initial: Draft; caus
                   const from = draft.states[selected];
                   change({
                     ...draft,
-                    states: { ...draft.states, [selected]: { ...from, on: { ...from.on, [answer]: id } }, [id]: { on: { YES: "", NO: "" }, meta: { kind, prompt: "" } } },
+                    states: {
+                      ...draft.states,
+                      [selected]: { ...from, on: { ...from.on, [answer]: id } },
+                      [id]: { on: { YES: "", NO: "" }, meta: { kind, prompt: "" } },
+                    },
                   });
                   setSelected(id);
                 }}

@@ -25,10 +25,22 @@ export function PreviewWalk({ guide }: { guide: Guide }) {
           <Markdown className="mt-2 text-xl">{meta.prompt}</Markdown>
         </section>
       ) : (
-        <StepCard key={`${here}-${path.length}`} machine={machine} stepId={here} note="" onNoteChange={() => {}} onAdvance={(_answer, to) => setPath([...path, to])} />
+        <StepCard
+          key={`${here}-${path.length}`}
+          machine={machine}
+          stepId={here}
+          note=""
+          onNoteChange={() => {}}
+          onAdvance={(_answer, to) => setPath([...path, to])}
+        />
       )}
       <div className="mt-3 grid grid-cols-2 gap-2">
-        <button type="button" disabled={path.length < 2} onClick={() => setPath(path.slice(0, -1))} className="min-h-12 rounded-md border-2 border-ink bg-paper font-bold">
+        <button
+          type="button"
+          disabled={path.length < 2}
+          onClick={() => setPath(path.slice(0, -1))}
+          className="min-h-12 rounded-md border-2 border-ink bg-paper font-bold"
+        >
           Back one step
         </button>
         <button type="button" onClick={() => setPath([guide.initial])} className="min-h-12 rounded-md border-2 border-ink bg-paper font-bold">

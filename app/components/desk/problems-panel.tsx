@@ -3,9 +3,15 @@ import type { GuideProblem } from "~/lib/guides/validate";
 /** Live checks: every problem, each with a way to jump to its step. */
 export function ProblemsPanel({ problems, onSelect }: { problems: GuideProblem[]; onSelect: (step: string) => void }) {
   return (
-    <section aria-labelledby="checks-h" aria-live="polite" className={`rounded-lg border-4 p-3 ${problems.length ? "border-stop bg-paper" : "border-go bg-paper"}`}>
+    <section
+      aria-labelledby="checks-h"
+      aria-live="polite"
+      className={`rounded-lg border-4 p-3 ${problems.length ? "border-stop bg-paper" : "border-go bg-paper"}`}
+    >
       <h2 id="checks-h" className="font-bold">
-        {problems.length ? `${problems.length} problem${problems.length === 1 ? "" : "s"}: this draft can be saved but not sent for review` : "Checks pass: every path ends, every step is reachable, every hands-on step is behind a safety stop"}
+        {problems.length
+          ? `${problems.length} problem${problems.length === 1 ? "" : "s"}: this draft can be saved but not sent for review`
+          : "Checks pass: every path ends, every step is reachable, every hands-on step is behind a safety stop"}
       </h2>
       {problems.length ? (
         <ul className="mt-2 space-y-1">

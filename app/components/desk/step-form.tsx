@@ -34,7 +34,10 @@ export function StepForm({
     const events: readonly string[] = EVENTS_BY_KIND[kind];
     const on = Object.fromEntries(events.map((e) => [e, step.on?.[e] ?? ""]));
     const final = events.length === 0;
-    onChange({ ...(final ? { type: "final" as const } : { on }), meta: { ...meta, kind, ...(kind === "fixed" ? {} : { cause: undefined, component: undefined }) } });
+    onChange({
+      ...(final ? { type: "final" as const } : { on }),
+      meta: { ...meta, kind, ...(kind === "fixed" ? {} : { cause: undefined, component: undefined }) },
+    });
   };
   return (
     <div className="space-y-3">
@@ -82,7 +85,12 @@ export function StepForm({
         </label>
         <label className="block font-bold">
           Minutes
-          <input inputMode="decimal" value={meta.minutes ?? ""} onChange={(e) => set({ minutes: e.target.value === "" ? undefined : Number(e.target.value) })} className={field} />
+          <input
+            inputMode="decimal"
+            value={meta.minutes ?? ""}
+            onChange={(e) => set({ minutes: e.target.value === "" ? undefined : Number(e.target.value) })}
+            className={field}
+          />
         </label>
       </div>
       <label className="block font-bold">

@@ -4,7 +4,15 @@ import { layoutTree, NODE } from "~/lib/guides/tree-layout";
 const FILL: Record<string, string> = { check: "#ffffff", task: "#e8efe9", safety: "#ffd23f", fixed: "#0f4a2c", handoff: "#7f1111" };
 
 /** The decision tree as a picture; clicking a step opens it in the editor. */
-export function TreeDrawing({ states, selected, onSelect }: { states: Record<string, { on?: Record<string, string>; meta?: { kind?: string } }>; selected: string | null; onSelect: (id: string) => void }) {
+export function TreeDrawing({
+  states,
+  selected,
+  onSelect,
+}: {
+  states: Record<string, { on?: Record<string, string>; meta?: { kind?: string } }>;
+  selected: string | null;
+  onSelect: (id: string) => void;
+}) {
   const tree = useMemo(() => layoutTree(states), [states]);
   return (
     <div className="overflow-auto rounded-lg border-2 border-ink bg-paper" style={{ maxHeight: 520 }}>
@@ -30,9 +38,21 @@ export function TreeDrawing({ states, selected, onSelect }: { states: Record<str
         {tree.nodes.map((n) => {
           const dark = n.kind === "fixed" || n.kind === "handoff";
           return (
-            <g key={n.id} transform={`translate(${n.x - NODE.width / 2},${n.y - NODE.height / 2})`} onClick={() => onSelect(n.id)} style={{ cursor: "pointer" }}>
+            <g
+              key={n.id}
+              transform={`translate(${n.x - NODE.width / 2},${n.y - NODE.height / 2})`}
+              onClick={() => onSelect(n.id)}
+              style={{ cursor: "pointer" }}
+            >
               <title>{`${n.kind}: ${n.id}`}</title>
-              <rect width={NODE.width} height={NODE.height} rx={6} fill={FILL[n.kind] ?? "#ddd"} stroke={selected === n.id ? "#123f8c" : "#101418"} strokeWidth={selected === n.id ? 4 : 1.5} />
+              <rect
+                width={NODE.width}
+                height={NODE.height}
+                rx={6}
+                fill={FILL[n.kind] ?? "#ddd"}
+                stroke={selected === n.id ? "#123f8c" : "#101418"}
+                strokeWidth={selected === n.id ? 4 : 1.5}
+              />
               <text x={8} y={17} fontSize={10} fill={dark ? "#ffffff" : "#101418"}>
                 {n.kind}
               </text>

@@ -64,12 +64,23 @@ export function EndCard({
           {hourMeter.has ? (
             <label className="block font-bold">
               Engine hours now (hour meter)
-              <input value={hours} onChange={(e) => setHours(e.target.value)} inputMode="decimal" className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink px-3 text-lg" />
+              <input
+                value={hours}
+                onChange={(e) => setHours(e.target.value)}
+                inputMode="decimal"
+                className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink px-3 text-lg"
+              />
             </label>
           ) : null}
           <label className="block font-bold">
             Note for the case (optional)
-            <textarea value={note} onChange={(e) => setNote(e.target.value)} rows={2} maxLength={2000} className="mt-1 block w-full rounded-md border-2 border-ink p-2 text-lg font-normal" />
+            <textarea
+              value={note}
+              onChange={(e) => setNote(e.target.value)}
+              rows={2}
+              maxLength={2000}
+              className="mt-1 block w-full rounded-md border-2 border-ink p-2 text-lg font-normal"
+            />
           </label>
           {error ? (
             <p role="alert" className="font-bold text-stop">

@@ -59,7 +59,9 @@ export function PhotoPicker({ caseId, stepId, online }: { caseId: string; stepId
       <ul className="mt-2 space-y-2">
         {uploads.map((u, i) => (
           <li key={i} className="flex items-center gap-3">
-            {u.photoId ? <img src={`/cases/${caseId}/photos/${u.photoId}`} alt={`Photo ${i + 1}`} className="h-16 w-16 rounded border-2 border-ink object-cover" /> : null}
+            {u.photoId ? (
+              <img src={`/cases/${caseId}/photos/${u.photoId}`} alt={`Photo ${i + 1}`} className="h-16 w-16 rounded border-2 border-ink object-cover" />
+            ) : null}
             <span>
               {u.name}:{" "}
               {u.error ? (

@@ -53,7 +53,12 @@ export function StepCard({
         {meta.help && safety ? <Markdown className="mt-3 text-base">{meta.help}</Markdown> : null}
         {meta.help && !safety ? (
           <div className="mt-3">
-            <button type="button" aria-expanded={showHelp} onClick={() => setShowHelp(!showHelp)} className="min-h-12 rounded-md border-2 border-ink px-3 font-bold">
+            <button
+              type="button"
+              aria-expanded={showHelp}
+              onClick={() => setShowHelp(!showHelp)}
+              className="min-h-12 rounded-md border-2 border-ink px-3 font-bold"
+            >
               {showHelp ? "Less" : "More about this"}
             </button>
             {showHelp ? <Markdown className="mt-2 text-lg">{meta.help}</Markdown> : null}
@@ -69,7 +74,13 @@ export function StepCard({
         {showNote ? (
           <label className="block font-bold">
             Note (goes with your answer)
-            <textarea value={note} onChange={(e) => onNoteChange(e.target.value)} rows={2} maxLength={2000} className="mt-1 block w-full rounded-md border-2 border-ink bg-paper p-2 text-lg font-normal" />
+            <textarea
+              value={note}
+              onChange={(e) => onNoteChange(e.target.value)}
+              rows={2}
+              maxLength={2000}
+              className="mt-1 block w-full rounded-md border-2 border-ink bg-paper p-2 text-lg font-normal"
+            />
           </label>
         ) : (
           <button type="button" onClick={() => setShowNote(true)} className="min-h-12 rounded-md border-2 border-ink bg-paper px-3 font-bold">

@@ -13,7 +13,12 @@ export function SyncBadge({ online, waiting, rejected }: { online: boolean; wait
     tone = "border-ink bg-caution text-ink";
   }
   return (
-    <p role="status" aria-live="polite" data-synced={waiting === 0 && !rejected ? "yes" : "no"} className={`rounded-md border-2 px-3 py-2 text-base font-bold ${tone}`}>
+    <p
+      role="status"
+      aria-live="polite"
+      data-synced={waiting === 0 && !rejected ? "yes" : "no"}
+      className={`rounded-md border-2 px-3 py-2 text-base font-bold ${tone}`}
+    >
       {text}
     </p>
   );

@@ -39,8 +39,16 @@ export function useWalkSync(record: WalkRecord, update: (change: (r: WalkRecord)
         if (pending.length) {
           const res = await post(`/api/cases/${caseId}/events`, { events: pending }, keepalive);
           if (!res.ok) return void (await refuse(res));
-          update((r) => markSynced(r, pending.map((e) => e.id)));
-          latest.current = markSynced(latest.current, pending.map((e) => e.id));
+          update((r) =>
+            markSynced(
+              r,
+              pending.map((e) => e.id),
+            ),
+          );
+          latest.current = markSynced(
+            latest.current,
+            pending.map((e) => e.id),
+          );
         }
         if (closePending(latest.current) && unsynced(latest.current).length === 0) {
           const res = await post(`/api/cases/${caseId}/close`, latest.current.close, keepalive);

@@ -11,7 +11,9 @@ export const hoseFrictionInput = z.object({
   flowGpm: num("Flow", 0, 1500, { minInclusive: false }),
   lengthFt: num("Hose length", 0, 2000, { minInclusive: false }),
   diameterIn: num("Hose diameter", 0.5, 6),
-  table: z.enum(FRICTION_TABLES.map((t) => t.id) as [string, ...string[]], { error: `table must be one of ${FRICTION_TABLES.map((t) => t.id).join(", ")}` }).optional(),
+  table: z
+    .enum(FRICTION_TABLES.map((t) => t.id) as [string, ...string[]], { error: `table must be one of ${FRICTION_TABLES.map((t) => t.id).join(", ")}` })
+    .optional(),
   elevationFt: num("Elevation change", -500, 500).optional(),
 });
 export type HoseFrictionInput = z.infer<typeof hoseFrictionInput>;
@@ -23,7 +25,14 @@ export function hoseFriction(input: unknown) {
   if (!table || (wanted && table.id !== wanted)) {
     const t = wanted ? tableById(wanted)! : undefined;
     throw new CalcInputError({
-      diameterIn: `no published coefficient for ${diameterIn} in hose${t ? ` in the ${t.name} table (it has ${Object.keys(t.coefficients).map(Number).sort((a, b) => a - b).join(", ")} in)` : ""}`,
+      diameterIn: `no published coefficient for ${diameterIn} in hose${
+        t
+          ? ` in the ${t.name} table (it has ${Object.keys(t.coefficients)
+              .map(Number)
+              .sort((a, b) => a - b)
+              .join(", ")} in)`
+          : ""
+      }`,
     });
   }
   const c = table.coefficients[String(diameterIn)];
@@ -31,12 +40,24 @@ export function hoseFriction(input: unknown) {
   const l = lengthFt / 100;
   const frictionLossPsi = c * q * q * l;
   const elevationPsi = PSI_PER_FT_RISE * elevationFt;
-  return { frictionLossPsi, elevationPsi, totalLossPsi: frictionLossPsi + elevationPsi, coefficient: c, table: table.id, tableName: table.name, source: table.source, note: SLURRY_NOTE };
+  return {
+    frictionLossPsi,
+    elevationPsi,
+    totalLossPsi: frictionLossPsi + elevationPsi,
+    coefficient: c,
+    table: table.id,
+    tableName: table.name,
+    source: table.source,
+    note: SLURRY_NOTE,
+  };
 }
 
 /** Smooth-bore tip flow: gpm = 29.7·d²·√NP (d in inches, NP nozzle pressure in psi). */
 export function tipFlowGpm(tipIn: number, nozzlePsi: number): number {
-  const { tipIn: d, nozzlePsi: p } = parseInput(z.object({ tipIn: num("Tip diameter", 0.25, 3), nozzlePsi: num("Nozzle pressure", 0, 400) }), { tipIn, nozzlePsi });
+  const { tipIn: d, nozzlePsi: p } = parseInput(z.object({ tipIn: num("Tip diameter", 0.25, 3), nozzlePsi: num("Nozzle pressure", 0, 400) }), {
+    tipIn,
+    nozzlePsi,
+  });
   return 29.7 * d * d * Math.sqrt(p);
 }
 
@@ -46,7 +67,10 @@ export function tipFlowGpm(tipIn: number, nozzlePsi: number): number {
  * Hydraulics p. 171). Below 30 psi the rule does not apply and null is returned.
  */
 export function reachFt(tipIn: number, nozzlePsi: number): number | null {
-  const { tipIn: d, nozzlePsi: p } = parseInput(z.object({ tipIn: num("Tip diameter", 0.75, 2), nozzlePsi: num("Nozzle pressure", 0, 400) }), { tipIn, nozzlePsi });
+  const { tipIn: d, nozzlePsi: p } = parseInput(z.object({ tipIn: num("Tip diameter", 0.75, 2), nozzlePsi: num("Nozzle pressure", 0, 400) }), {
+    tipIn,
+    nozzlePsi,
+  });
   if (p <= 30) return null;
   return p / 2 + 26 + 5 * ((d - 0.75) / 0.125);
 }

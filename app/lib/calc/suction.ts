@@ -51,7 +51,8 @@ export function suctionCheck(input: unknown) {
   const atmosphereFt = kpaToFtHead(atmosphereKpa(i.altitudeFt));
   const vapourFt = kpaToFtHead(vapourPressureKpa(i.waterTempF));
   const npshAvailable = npshAvailableFt({ atmosphereFt, vapourFt, liftFt: i.liftFt, lossesFt: i.suctionLossFt });
-  const verdict: SuctionVerdict = npshAvailable >= i.npshRequiredFt + margin ? "enough" : npshAvailable >= i.npshRequiredFt ? "marginal" : "will cavitate or lose prime";
+  const verdict: SuctionVerdict =
+    npshAvailable >= i.npshRequiredFt + margin ? "enough" : npshAvailable >= i.npshRequiredFt ? "marginal" : "will cavitate or lose prime";
   const advice: string[] = [];
   if (verdict !== "enough") {
     const short = i.npshRequiredFt + margin - npshAvailable;
@@ -61,10 +62,24 @@ export function suctionCheck(input: unknown) {
   }
   // USDA NRCS Nebraska NE-ENG-76: total suction head no more than 22 ft; under 20 recommended; 15 preferred.
   const totalSuctionFt = i.liftFt + i.suctionLossFt;
-  const liftNote = totalSuctionFt > 22 ? "Total suction head is over 22 ft, beyond what NE-ENG-76 allows for drafting." : totalSuctionFt > 20 ? "Total suction head is over the 20 ft NE-ENG-76 recommends (15 ft preferred)." : null;
+  const liftNote =
+    totalSuctionFt > 22
+      ? "Total suction head is over 22 ft, beyond what NE-ENG-76 allows for drafting."
+      : totalSuctionFt > 20
+        ? "Total suction head is over the 20 ft NE-ENG-76 recommends (15 ft preferred)."
+        : null;
   return {
-    atmosphereFt, vapourFt, npshAvailableFt: npshAvailable, npshRequiredFt: i.npshRequiredFt, marginFt: margin, verdict, advice, liftNote,
-    altitudeM: ftToM(i.altitudeFt), waterTempC: fToC(i.waterTempF), vapourSource: ANTOINE_SOURCE,
+    atmosphereFt,
+    vapourFt,
+    npshAvailableFt: npshAvailable,
+    npshRequiredFt: i.npshRequiredFt,
+    marginFt: margin,
+    verdict,
+    advice,
+    liftNote,
+    altitudeM: ftToM(i.altitudeFt),
+    waterTempC: fToC(i.waterTempF),
+    vapourSource: ANTOINE_SOURCE,
   };
 }
 

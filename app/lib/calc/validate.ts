@@ -3,7 +3,11 @@ import { z } from "zod";
 /** Bad calculator input: each field named with what is wrong, never NaN or Infinity out. */
 export class CalcInputError extends Error {
   constructor(readonly fields: Record<string, string>) {
-    super(Object.entries(fields).map(([k, v]) => `${k}: ${v}`).join("; "));
+    super(
+      Object.entries(fields)
+        .map(([k, v]) => `${k}: ${v}`)
+        .join("; "),
+    );
   }
 }
 

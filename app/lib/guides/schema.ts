@@ -18,9 +18,7 @@ export type Answer = (typeof ANSWERS)[number];
 /** Field-math widgets a step may show (built by the field-math screens). */
 export const CALC_WIDGETS = ["hose-friction", "suction-head", "load-sheet", "torque"] as const;
 
-export const COMPONENTS = [
-  "pump", "suction", "sump", "agitator", "hose", "nozzle", "valve", "engine", "tank", "lubrication", "material", "operation",
-] as const;
+export const COMPONENTS = ["pump", "suction", "sump", "agitator", "hose", "nozzle", "valve", "engine", "tank", "lubrication", "material", "operation"] as const;
 
 const slug = z.string().regex(/^[a-z][a-z0-9]*(-[a-z0-9]+)*$/, "use lower-case words joined by dashes");
 

@@ -27,7 +27,9 @@ export const SYNONYMS: string[][] = [
 ];
 
 const STOPWORDS = new Set(
-  "a an the is it its my our and or but of to in on at for with from this that there be was are were has have had i we me up out just keep keeps getting get got very really".split(" "),
+  "a an the is it its my our and or but of to in on at for with from this that there be was are were has have had i we me up out just keep keeps getting get got very really".split(
+    " ",
+  ),
 );
 
 export const normalise = (text: string) =>

@@ -71,7 +71,8 @@ function validate(input: unknown, { causes, name }: { causes: Cause[]; name?: st
       const inStep = top === "states" && stepId !== undefined;
       const field = (inStep ? rest : [top, stepId, ...rest]).filter((x) => x !== undefined).join(".");
       let message = issue.message;
-      if (issue.code === "unrecognized_keys") message = `unknown field${issue.keys.length > 1 ? "s" : ""} ${issue.keys.map((k) => `"${k}"`).join(", ")}${field ? ` in ${field}` : ""}`;
+      if (issue.code === "unrecognized_keys")
+        message = `unknown field${issue.keys.length > 1 ? "s" : ""} ${issue.keys.map((k) => `"${k}"`).join(", ")}${field ? ` in ${field}` : ""}`;
       else if (/received undefined/.test(message)) message = `missing field "${field}"`;
       else if (field) message = `${field}: ${message}`;
       add(message, inStep ? stepId : undefined);
@@ -104,7 +105,10 @@ function checkStructure(raw: Loose, causes: Cause[], add: (message: string, step
     for (const event of needed) if (!given.includes(event)) add(`a ${kind} step needs a ${event} answer`, id);
     for (const event of given) {
       if (!needed.includes(event)) {
-        add(needed.length ? `a ${kind} step answers ${needed.join(" or ")}, not ${event}` : `a ${kind} step is an end and takes no answers (found ${event})`, id);
+        add(
+          needed.length ? `a ${kind} step answers ${needed.join(" or ")}, not ${event}` : `a ${kind} step is an end and takes no answers (found ${event})`,
+          id,
+        );
       }
     }
     for (const [event, target] of Object.entries(step.on ?? {})) {

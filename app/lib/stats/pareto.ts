@@ -19,6 +19,11 @@ export function pareto(rows: CauseAggregate[]): ParetoRow[] {
     .sort((a, b) => b.count - a.count || b.downtimeHours - a.downtimeHours || a.cause.localeCompare(b.cause))
     .map((r) => {
       running += r.count;
-      return { ...r, share: total ? r.count / total : 0, cumulativeShare: total ? running / total : 0, downtimeShare: downtime ? r.downtimeHours / downtime : 0 };
+      return {
+        ...r,
+        share: total ? r.count / total : 0,
+        cumulativeShare: total ? running / total : 0,
+        downtimeShare: downtime ? r.downtimeHours / downtime : 0,
+      };
     });
 }

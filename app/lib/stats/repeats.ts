@@ -60,9 +60,13 @@ export function summariseChain(group: RepeatGroup, latest = 3): RepeatChain {
     count: cases.length,
     firstAt: cases[0].openedAt,
     lastAt: cases[cases.length - 1].openedAt,
-    latest: cases.slice(-latest).reverse().map((c) => ({ caseId: c.caseId, openedAt: c.openedAt })),
+    latest: cases
+      .slice(-latest)
+      .reverse()
+      .map((c) => ({ caseId: c.caseId, openedAt: c.openedAt })),
   };
 }
 
 /** Longest chains first, then the most recent. */
-export const byWeight = (a: RepeatChain, b: RepeatChain) => b.count - a.count || Date.parse(b.lastAt) - Date.parse(a.lastAt) || a.rigCode.localeCompare(b.rigCode) || a.cause.localeCompare(b.cause);
+export const byWeight = (a: RepeatChain, b: RepeatChain) =>
+  b.count - a.count || Date.parse(b.lastAt) - Date.parse(a.lastAt) || a.rigCode.localeCompare(b.rigCode) || a.cause.localeCompare(b.cause);

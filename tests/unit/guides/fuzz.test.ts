@@ -19,7 +19,7 @@ function rng(seed: number) {
 type Raw = { initial: string; states: Record<string, { type?: string; on?: Record<string, string>; meta: Record<string, unknown> }> } & Record<string, unknown>;
 
 function mutate(g: Raw, random: () => number) {
-  const pick = <T,>(xs: T[]): T => xs[Math.floor(random() * xs.length)];
+  const pick = <T>(xs: T[]): T => xs[Math.floor(random() * xs.length)];
   const ids = Object.keys(g.states);
   const id = pick(ids);
   const step = g.states[id];
@@ -52,7 +52,12 @@ function breaksARule(g: Guide): string | null {
     });
   for (const [id, s] of Object.entries(g.states)) {
     const needed = [...EVENTS_BY_KIND[s.meta.kind]].sort().join();
-    if (Object.keys(s.on ?? {}).sort().join() !== needed) return `${id}: events`;
+    if (
+      Object.keys(s.on ?? {})
+        .sort()
+        .join() !== needed
+    )
+      return `${id}: events`;
     if (s.meta.kind === "fixed" && !causes.some((c) => c.code === s.meta.cause)) return `${id}: cause`;
   }
   if (!Object.values(g.states).some((s) => s.meta.kind === "fixed")) return "no fixed";
@@ -62,7 +67,10 @@ function breaksARule(g: Guide): string | null {
     const ends = getShortestPaths(machineFrom(id), { events }).filter((p) => p.state.status === "done");
     if (ends.length === 0) return `${id}: no end`;
   }
-  const unguarded = getShortestPaths(machineFrom(g.initial, (id) => g.states[id].meta.kind === "safety"), { events });
+  const unguarded = getShortestPaths(
+    machineFrom(g.initial, (id) => g.states[id].meta.kind === "safety"),
+    { events },
+  );
   if (unguarded.some((p) => g.states[p.state.value as string].meta.handsOn && g.states[p.state.value as string].meta.kind !== "safety")) return "unguarded";
   return null;
 }

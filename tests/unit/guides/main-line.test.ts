@@ -28,7 +28,16 @@ describe("step flow from cases", () => {
     const g = tinyGuide();
     const t = (s: number) => new Date(Date.UTC(2026, 0, 1, 8, 0, s)).toISOString();
     const flow = stepFlow(compileGuide(g), Object.keys(g.states), [
-      { outcome: "fixed", finalStep: "done", openedAt: t(0), events: [{ seq: 1, stepId: "look", answer: "YES", at: t(10) }, { seq: 2, stepId: "stop", answer: "ACK", at: t(40) }, { seq: 3, stepId: "fix", answer: "DONE", at: t(100) }] },
+      {
+        outcome: "fixed",
+        finalStep: "done",
+        openedAt: t(0),
+        events: [
+          { seq: 1, stepId: "look", answer: "YES", at: t(10) },
+          { seq: 2, stepId: "stop", answer: "ACK", at: t(40) },
+          { seq: 3, stepId: "fix", answer: "DONE", at: t(100) },
+        ],
+      },
       { outcome: "handoff", finalStep: "gone", openedAt: t(0), events: [{ seq: 1, stepId: "look", answer: "NO", at: t(20) }] },
       { outcome: "abandoned", finalStep: null, openedAt: t(0), events: [{ seq: 1, stepId: "look", answer: "YES", at: t(30) }] },
     ]);

@@ -66,11 +66,15 @@ describe("symptom search", () => {
   it(`puts the right guide in the top 3 for at least 90 % of ${PHRASES.length} crew phrases`, () => {
     const misses: string[] = [];
     for (const [phrase, slug] of PHRASES) {
-      const top = search(phrase).slice(0, 3).map((h) => h.slug);
+      const top = search(phrase)
+        .slice(0, 3)
+        .map((h) => h.slug);
       if (!top.includes(slug)) misses.push(`${phrase} → ${top.join(", ") || "nothing"} (wanted ${slug})`);
     }
     const rate = (PHRASES.length - misses.length) / PHRASES.length;
-    console.info(`search top-3 hit rate: ${(rate * 100).toFixed(1)} % (${PHRASES.length - misses.length}/${PHRASES.length})${misses.length ? `; misses: ${misses.join("; ")}` : ""}`);
+    console.info(
+      `search top-3 hit rate: ${(rate * 100).toFixed(1)} % (${PHRASES.length - misses.length}/${PHRASES.length})${misses.length ? `; misses: ${misses.join("; ")}` : ""}`,
+    );
     expect(PHRASES.length).toBeGreaterThanOrEqual(40);
     expect(rate).toBeGreaterThanOrEqual(0.9);
   });

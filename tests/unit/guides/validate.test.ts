@@ -51,9 +51,7 @@ describe("validator", () => {
     g.states.done.meta.cause = "gremlins";
     g.states.look.meta.colour = "red";
     const messages = validateGuide(g, { causes }).problems.map((p) => p.message);
-    expect(messages).toEqual(
-      expect.arrayContaining([expect.stringMatching(/hands-on/), expect.stringMatching(/gremlins/), expect.stringMatching(/colour/)]),
-    );
+    expect(messages).toEqual(expect.arrayContaining([expect.stringMatching(/hands-on/), expect.stringMatching(/gremlins/), expect.stringMatching(/colour/)]));
   });
 
   it.each([null, 42, "", "[]", "{", [], { states: 5 }, { states: { a: null } }, { id: "x", states: { a: { meta: { kind: "check" }, on: 7 } } }])(

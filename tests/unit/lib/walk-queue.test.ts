@@ -14,14 +14,20 @@ describe("walk queue", () => {
     r = appendEvent(r, { id: "b", stepId: "s2", answer: "NO", at: "2026-01-01T00:01:00Z" });
     saveRecord(store, r);
     const again = loadRecord(store, "c1");
-    expect(again.events.map((e) => [e.id, e.seq])).toEqual([["a", 1], ["b", 2]]);
+    expect(again.events.map((e) => [e.id, e.seq])).toEqual([
+      ["a", 1],
+      ["b", 2],
+    ]);
     expect(unsynced(again).map((e) => e.id)).toEqual(["a", "b"]);
     expect(unsynced(markSynced(again, ["a"])).map((e) => e.id)).toEqual(["b"]);
   });
 
   it("merges what the server has without doubling anything", () => {
     let r = appendEvent(loadRecord(memory(), "c1"), { id: "a", stepId: "s1", answer: "YES", at: "t" });
-    r = mergeServerEvents(r, [{ id: "a", seq: 1, stepId: "s1", answer: "YES", at: "t" }, { id: "z", seq: 2, stepId: "s2", answer: "NO", at: "t" }]);
+    r = mergeServerEvents(r, [
+      { id: "a", seq: 1, stepId: "s1", answer: "YES", at: "t" },
+      { id: "z", seq: 2, stepId: "s2", answer: "NO", at: "t" },
+    ]);
     expect(r.events.map((e) => e.id)).toEqual(["a", "z"]);
     expect(unsynced(r)).toEqual([]);
     expect(appendEvent(r, { id: "n", stepId: "s3", answer: "DONE", at: "t" }).events.at(-1)!.seq).toBe(3);

@@ -41,7 +41,14 @@ describe("exact Poisson interval (Garwood, chi-square form)", () => {
 
 describe("rigs out of line with the fleet", () => {
   const rig = (rigCode: string, failures: number, hours: number | null): RigAggregate => ({
-    rigCode, cases: failures, fixed: failures, handoff: 0, abandoned: 0, operatingHours: hours, repairHours: failures * 0.5, closedCases: failures,
+    rigCode,
+    cases: failures,
+    fixed: failures,
+    handoff: 0,
+    abandoned: 0,
+    operatingHours: hours,
+    repairHours: failures * 0.5,
+    closedCases: failures,
   });
 
   it("flags a rig whose whole interval lies above the rest of the fleet's rate, and no other", () => {
@@ -94,7 +101,10 @@ describe("repeats", () => {
   });
 
   it("uses the window it is given", () => {
-    expect(findRepeats(hits, 31).map((g) => g.cases.map((c) => c.caseId))).toEqual([["1", "2", "3"], ["6", "7"]]);
+    expect(findRepeats(hits, 31).map((g) => g.cases.map((c) => c.caseId))).toEqual([
+      ["1", "2", "3"],
+      ["6", "7"],
+    ]);
     expect(findRepeats(hits, 10)).toEqual([]);
   });
 });
