@@ -35,59 +35,11 @@ export default function Cases({ loaderData }: Route.ComponentProps) {
     <>
       <PageTitle lead={`${total.toLocaleString("en-US")} case${total === 1 ? "" : "s"} match.`}>Cases</PageTitle>
       <Form method="get" className="grid grid-cols-2 gap-3 rounded-lg border-2 border-ink bg-paper p-3 sm:grid-cols-4">
-        <label className="font-bold">
-          Rig
-          <select name="rig" defaultValue={filters.rig ?? ""} className={select}>
-            <option value="">All</option>
-            {options.rigs.map((r) => (
-              <option key={r}>{r}</option>
-            ))}
-          </select>
-        </label>
-        <label className="font-bold">
-          Guide
-          <select name="guide" defaultValue={filters.guide ?? ""} className={select}>
-            <option value="">All</option>
-            {options.guides.map((g) => (
-              <option key={g.slug} value={g.slug}>
-                {g.title}
-              </option>
-            ))}
-          </select>
-        </label>
-        <label className="font-bold">
-          Cause
-          <select name="cause" defaultValue={filters.cause ?? ""} className={select}>
-            <option value="">All</option>
-            {causes.map((c) => (
-              <option key={c.code} value={c.code}>
-                {c.name}
-              </option>
-            ))}
-          </select>
-        </label>
-        <label className="font-bold">
-          Outcome
-          <select name="outcome" defaultValue={filters.outcome ?? ""} className={select}>
-            <option value="">All</option>
-            {Object.entries(OUTCOME_LABELS).map(([k, v]) => (
-              <option key={k} value={k}>
-                {v}
-              </option>
-            ))}
-          </select>
-        </label>
-        <label className="font-bold">
-          Person
-          <select name="person" defaultValue={filters.person ?? ""} className={select}>
-            <option value="">Anyone</option>
-            {options.people.map((p) => (
-              <option key={p.id} value={p.id}>
-                {p.name}
-              </option>
-            ))}
-          </select>
-        </label>
+        <FilterSelect label="Rig" name="rig" value={filters.rig} options={options.rigs.map((r) => [r, r])} />
+        <FilterSelect label="Guide" name="guide" value={filters.guide} options={options.guides.map((g) => [g.slug, g.title])} />
+        <FilterSelect label="Cause" name="cause" value={filters.cause} options={causes.map((c) => [c.code, c.name])} />
+        <FilterSelect label="Outcome" name="outcome" value={filters.outcome} options={Object.entries(OUTCOME_LABELS)} />
+        <FilterSelect label="Person" name="person" value={filters.person} options={options.people.map((p) => [String(p.id), p.name])} all="Anyone" />
         <label className="font-bold">
           From
           <input type="date" name="from" defaultValue={filters.from ?? ""} className={select} />
@@ -175,6 +127,35 @@ export default function Cases({ loaderData }: Route.ComponentProps) {
         )}
       </nav>
     </>
+  );
+}
+
+/** One filter: a labelled select whose first choice means "no filter". */
+function FilterSelect({
+  label,
+  name,
+  value,
+  options,
+  all = "All",
+}: {
+  label: string;
+  name: string;
+  value?: string | number;
+  options: [string, string][];
+  all?: string;
+}) {
+  return (
+    <label className="font-bold">
+      {label}
+      <select name={name} defaultValue={value ?? ""} className="mt-1 block min-h-12 w-full rounded-md border-2 border-ink bg-paper px-2">
+        <option value="">{all}</option>
+        {options.map(([v, text]) => (
+          <option key={v} value={v}>
+            {text}
+          </option>
+        ))}
+      </select>
+    </label>
   );
 }
 

@@ -1,26 +1,16 @@
 import type { Page } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { GuideVersion } from "../../db/index";
-import { launchBrowser, signIn, startApp, type RunningApp } from "../helpers/app";
+import { signIn, appAndBrowserForFile } from "../helpers/app";
 
-let app: RunningApp;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
-
-beforeAll(async () => {
-  app = await startApp();
-  browser = await launchBrowser({ width: 1280, height: 900 });
-});
-afterAll(async () => {
-  await browser?.close();
-  await app?.stop();
-});
+const harness = appAndBrowserForFile({ width: 1280, height: 900 });
 
 const caution = (p: Page) => p.getByRole("note", { name: "Shut-down caution" });
 
 describe("guide desk in the browser", () => {
   it("blocks sending a draft whose hands-on step skips the safety stop, with the caution on every desk page", async () => {
-    const p = await browser.context.newPage();
-    await signIn(p, app.url, "ravi@cedarflats.example");
+    const p = await harness.browser.context.newPage();
+    await signIn(p, harness.app.url, "ravi@cedarflats.example");
     await p.getByRole("link", { name: "Guide desk" }).click();
     await caution(p).waitFor();
     await p.getByRole("link", { name: "Vibration or jumping" }).click();
@@ -52,8 +42,8 @@ describe("guide desk in the browser", () => {
   });
 
   it("previews a draft as the crew sees it, without making a case", async () => {
-    const p = await browser.context.newPage();
-    await p.goto(`${app.url}/desk`);
+    const p = await harness.browser.context.newPage();
+    await p.goto(`${harness.app.url}/desk`);
     await p.getByRole("link", { name: "Leaks" }).first().click();
     await p.getByRole("link", { name: "Preview as crew" }).first().click();
     await caution(p).waitFor();

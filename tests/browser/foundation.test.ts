@@ -1,25 +1,13 @@
 import type { Page } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { Rig } from "../../db/index";
-import { failSignIn, launchBrowser, signIn, startApp, type RunningApp } from "../helpers/app";
+import { failSignIn, signIn, appAndBrowserForFile } from "../helpers/app";
 
-let app: RunningApp;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
-let page: Page;
-
-beforeAll(async () => {
-  app = await startApp();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await app?.stop();
-});
+const harness = appAndBrowserForFile();
 
 async function freshPage() {
-  await browser.context.clearCookies();
-  page = await browser.context.newPage();
-  return page;
+  await harness.browser.context.clearCookies();
+  return harness.browser.context.newPage();
 }
 
 const navLabels = async (p: Page) => (await p.getByRole("navigation", { name: "Main" }).getByRole("link").allTextContents()).map((s) => s.trim());
@@ -32,7 +20,7 @@ describe("sign-in and navigation at 360 px", () => {
     ["june@cedarflats.example", "Admin", ["Start a fix", "Rigs", "Field math", "Guide desk", "Fault board", "Cases", "Add a rig", "Outbox"]],
   ])("%s sees the %s navigation and their company", async (email, role, expected) => {
     const p = await freshPage();
-    await signIn(p, app.url, email);
+    await signIn(p, harness.app.url, email);
     await p.getByText(`· ${role}`).waitFor();
     await p.getByText("Cedar Flats Erosion Control").waitFor();
     expect(await navLabels(p)).toEqual(expected);
@@ -42,9 +30,9 @@ describe("sign-in and navigation at 360 px", () => {
 
   it("refuses a wrong password with one message and sets no cookie", async () => {
     const p = await freshPage();
-    expect(await failSignIn(p, app.url, "dana@cedarflats.example", "not-the-password")).toBe(401);
+    expect(await failSignIn(p, harness.app.url, "dana@cedarflats.example", "not-the-password")).toBe(401);
     await expect(p.getByRole("alert").textContent()).resolves.toMatch(/do not match an account/);
-    expect((await browser.context.cookies()).filter((c) => c.name === "__tankside")).toHaveLength(0);
+    expect((await harness.browser.context.cookies()).filter((c) => c.name === "__tankside")).toHaveLength(0);
     await p.close();
   });
 });
@@ -52,8 +40,8 @@ describe("sign-in and navigation at 360 px", () => {
 describe("company and role boundaries", () => {
   it("gives crew a 404 for another company's rig", async () => {
     const p = await freshPage();
-    await signIn(p, app.url, "dana@cedarflats.example");
-    const res = await p.goto(`${app.url}/rigs/BM-01`);
+    await signIn(p, harness.app.url, "dana@cedarflats.example");
+    const res = await p.goto(`${harness.app.url}/rigs/BM-01`);
     expect(res!.status()).toBe(404);
     await p.getByRole("heading", { name: "Not found" }).waitFor();
     await p.close();
@@ -61,8 +49,8 @@ describe("company and role boundaries", () => {
 
   it("gives crew a 403 on the admin rig form", async () => {
     const p = await freshPage();
-    await signIn(p, app.url, "dana@cedarflats.example");
-    const res = await p.goto(`${app.url}/rigs/new`);
+    await signIn(p, harness.app.url, "dana@cedarflats.example");
+    const res = await p.goto(`${harness.app.url}/rigs/new`);
     expect(res!.status()).toBe(403);
     await p.getByRole("heading", { name: "Not allowed" }).waitFor();
     await p.close();
@@ -71,8 +59,8 @@ describe("company and role boundaries", () => {
   it("shows an admin each bad rig field next to it and saves nothing", async () => {
     const before = await Rig.count();
     const p = await freshPage();
-    await signIn(p, app.url, "june@cedarflats.example");
-    await p.goto(`${app.url}/rigs/new`);
+    await signIn(p, harness.app.url, "june@cedarflats.example");
+    await p.goto(`${harness.app.url}/rigs/new`);
     await p.getByLabel("Unit code").fill("no good!");
     await p.getByLabel("Tank size (US gal)").fill("20");
     await p.getByLabel("Hose inside diameter (in)").fill("9");

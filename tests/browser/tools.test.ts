@@ -1,22 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser, signIn, startApp, type RunningApp } from "../helpers/app";
+import { describe, expect, it } from "vitest";
+import { signIn, appAndBrowserForFile } from "../helpers/app";
 
-let app: RunningApp;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
-
-beforeAll(async () => {
-  app = await startApp();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await app?.stop();
-});
+const harness = appAndBrowserForFile();
 
 describe("field math at 360 px", () => {
   it("fills the load sheet from a rig and updates as the crew types", async () => {
-    const p = await browser.context.newPage();
-    await signIn(p, app.url, "dana@cedarflats.example");
+    const p = await harness.browser.context.newPage();
+    await signIn(p, harness.app.url, "dana@cedarflats.example");
     await p.getByRole("link", { name: "Field math" }).click();
     await p.getByRole("link", { name: /Load sheet/ }).click();
     await p.getByLabel("Filled from rig").selectOption("CF-07");
@@ -34,10 +24,10 @@ describe("field math at 360 px", () => {
   });
 
   it("shows the hose figure inside the short-throw guide, filled from the rig", async () => {
-    await browser.context.clearCookies();
-    const p = await browser.context.newPage();
-    await signIn(p, app.url, "dana@cedarflats.example");
-    await p.goto(`${app.url}/rigs/CF-07/fix`);
+    await harness.browser.context.clearCookies();
+    const p = await harness.browser.context.newPage();
+    await signIn(p, harness.app.url, "dana@cedarflats.example");
+    await p.goto(`${harness.app.url}/rigs/CF-07/fix`);
     await p.getByRole("button", { name: /Weak or short stream/ }).click();
     await p.waitForURL(/\/walk$/);
     for (let i = 0; i < 3; i++) await p.getByRole("button", { name: "Yes", exact: true }).click();

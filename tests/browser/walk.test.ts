@@ -1,20 +1,10 @@
 import type { Page } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it, onTestFinished } from "vitest";
+import { describe, expect, it, onTestFinished } from "vitest";
 import { Case, CaseEvent, CasePhoto } from "../../db/index";
-import { launchBrowser, signIn, startApp, type RunningApp } from "../helpers/app";
+import { signIn, appAndBrowserForFile } from "../helpers/app";
 import { outbox } from "../helpers/outbox";
 
-let app: RunningApp;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
-
-beforeAll(async () => {
-  app = await startApp();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await app?.stop();
-});
+const harness = appAndBrowserForFile();
 
 const answer = (p: Page, name: string) => p.getByRole("button", { name, exact: true }).click();
 const prompt = (p: Page) => p.locator("#step-prompt");
@@ -22,8 +12,8 @@ const caseIdOf = (p: Page) => new URL(p.url()).pathname.split("/")[2];
 const waitSynced = (p: Page) => p.locator('[data-synced="yes"]').waitFor();
 
 async function startFix(p: Page, email: string, rig: string, words: string, guideTitle: string) {
-  await browser.context.clearCookies();
-  await signIn(p, app.url, email);
+  await harness.browser.context.clearCookies();
+  await signIn(p, harness.app.url, email);
   await p
     .getByRole("link", { name: new RegExp(rig) })
     .first()
@@ -38,7 +28,7 @@ async function startFix(p: Page, email: string, rig: string, words: string, guid
 
 describe("walk-through on a phone (360×640)", () => {
   it("goes from a symptom in the crew's words to a fixed end, and the case shows every answer", async () => {
-    const p = await browser.context.newPage();
+    const p = await harness.browser.context.newPage();
     await startFix(p, "dana@cedarflats.example", "CF-07", "pump wont pick up water", "Pump loses prime");
     await expect(prompt(p).textContent()).resolves.toMatch(/water in the tank well above the sump outlet/);
     await answer(p, "No");
@@ -65,17 +55,17 @@ describe("walk-through on a phone (360×640)", () => {
     ]);
     expect(await Case.findByPk(id)).toMatchObject({ outcome: "fixed", causeCode: "low-water", engineHours: 2320 });
 
-    await p.goto(`${app.url}/cases/${id}`);
+    await p.goto(`${harness.app.url}/cases/${id}`);
     await p.getByRole("heading", { name: "Case fixed" }).waitFor();
     expect(await p.getByRole("listitem").filter({ hasText: "→" }).count()).toBe(5);
-    await p.goto(`${app.url}/rigs/CF-07`);
+    await p.goto(`${harness.app.url}/rigs/CF-07`);
     await p.getByRole("region", { name: "Recent cases" }).getByRole("link", { name: "Pump loses prime" }).first().waitFor();
     expect(await p.locator(`a[href="/cases/${id}"]`).count()).toBe(1);
     await p.close();
   });
 
   it("ends in a hand-off that e-mails Cedar Flats' supervisor and no one at Blue Mesa", async () => {
-    const p = await browser.context.newPage();
+    const p = await harness.browser.context.newPage();
     const before = (await outbox()).length;
     await startFix(p, "dana@cedarflats.example", "CF-03", "whole truck shaking", "Vibration");
     await answer(p, "No"); // shaking does not stop with the agitator in neutral
@@ -92,7 +82,7 @@ describe("walk-through on a phone (360×640)", () => {
   });
 
   it("keeps answering with no signal, makes no request while answering, and syncs once in order", async () => {
-    const p = await browser.context.newPage();
+    const p = await harness.browser.context.newPage();
     await startFix(p, "dana@cedarflats.example", "CF-07", "tank full of suds", "Foam in the tank");
     await answer(p, "Yes");
     await waitSynced(p);
@@ -101,8 +91,8 @@ describe("walk-through on a phone (360×640)", () => {
 
     const requests: string[] = [];
     p.on("request", (r) => requests.push(r.url()));
-    await browser.context.setOffline(true);
-    onTestFinished(() => browser.context.setOffline(false));
+    await harness.browser.context.setOffline(true);
+    onTestFinished(() => harness.browser.context.setOffline(false));
     await answer(p, "Can't do it"); // slow-agitator → recirc-time
     await answer(p, "No"); // recirc-time → fast-loading
     await answer(p, "Yes"); // fast-loading → antifoam-loading
@@ -114,7 +104,7 @@ describe("walk-through on a phone (360×640)", () => {
     await p.locator("#step-prompt", { hasText: /Add antifoam/ }).waitFor();
     await p.getByText(/3 answers kept on this phone/).waitFor();
 
-    await browser.context.setOffline(false);
+    await harness.browser.context.setOffline(false);
     await p.evaluate(() => window.dispatchEvent(new Event("online")));
     await waitSynced(p);
     const stored = await CaseEvent.findAll({ where: { caseId: id }, order: [["seq", "ASC"]] });
@@ -128,7 +118,7 @@ describe("walk-through on a phone (360×640)", () => {
   });
 
   it("stores a JPEG taken at a step and shows it on the case", async () => {
-    const p = await browser.context.newPage();
+    const p = await harness.browser.context.newPage();
     await startFix(p, "dana@cedarflats.example", "CF-11", "leaking at the camlock", "Leaks");
     const jpeg = await p.evaluate(() => {
       const c = document.createElement("canvas");
@@ -143,7 +133,7 @@ describe("walk-through on a phone (360×640)", () => {
     await p.getByText("coupling.jpg: saved").waitFor();
     const id = caseIdOf(p);
     expect(await CasePhoto.count({ where: { caseId: id, stepId: "at-coupling" } })).toBe(1);
-    await p.goto(`${app.url}/cases/${id}`);
+    await p.goto(`${harness.app.url}/cases/${id}`);
     const img = p.getByRole("img", { name: /Photo at step at-coupling/ });
     await img.waitFor();
     await expect.poll(() => img.evaluate((el: HTMLImageElement) => el.naturalWidth)).toBe(64);

@@ -7,6 +7,7 @@ import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { chromium, type BrowserContext, type Page } from "playwright-core";
+import { afterAll, beforeAll } from "vitest";
 import { buildIfStale } from "../../scripts/build-if-stale";
 import { freePort } from "../../scripts/free-port";
 import { resetDatabase } from "./db";
@@ -112,4 +113,21 @@ export async function failSignIn(page: Page, appUrl: string, email: string, pass
   const response = page.waitForResponse((r) => r.url().includes("/login") && r.request().method() === "POST");
   await page.getByRole("button", { name: "Sign in" }).click();
   return (await response).status();
+}
+
+/**
+ * For a browser test file: the built app and a browser for all its tests, stopped at the end.
+ * Read `.app` and `.browser` inside tests (they are set in beforeAll).
+ */
+export function appAndBrowserForFile(viewport = PHONE) {
+  const harness = {} as { app: RunningApp; browser: Awaited<ReturnType<typeof launchBrowser>> };
+  beforeAll(async () => {
+    harness.app = await startApp();
+    harness.browser = await launchBrowser(viewport);
+  });
+  afterAll(async () => {
+    await harness.browser?.close();
+    await harness.app?.stop();
+  });
+  return harness;
 }
