@@ -77,7 +77,8 @@ describe("walk-through on a phone (360×640)", () => {
     const mails = (await outbox()).slice(before);
     expect(mails.map((m) => m.to)).toEqual([["mo@cedarflats.example"]]);
     expect(mails[0].text).toMatch(/Shakes at full throttle only/);
-    expect((await outbox()).some((m) => m.to.some((t) => t.endsWith("@bluemesa.example")))).toBe(false);
+    // Other tests may mail Blue Mesa (the digest does); this hand-off reached no one there.
+    expect(mails.some((m) => m.to.some((t) => t.endsWith("@bluemesa.example")))).toBe(false);
     await p.close();
   });
 
