@@ -5,9 +5,8 @@ import { loader as shellLoader } from "~/routes/shell";
 import { loader as newRigLoader } from "~/routes/rigs.new";
 import { MAX_FAILURES } from "~/services/auth.server";
 import { resetDatabase } from "../helpers/db";
-import { requestAs, run } from "../helpers/requests";
+import { args, requestAs, run } from "../helpers/requests";
 
-const args = (request: Request) => ({ request, params: {}, context: {} }) as never;
 const signIn = (email: string, password: string) =>
   loginAction(args(new Request("http://127.0.0.1/login", { method: "POST", body: new URLSearchParams({ email, password, redirectTo: "/rigs" }) })));
 

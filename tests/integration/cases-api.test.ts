@@ -7,11 +7,10 @@ import { action as closeAction } from "~/routes/api.cases.$id.close";
 import { action as eventsAction } from "~/routes/api.cases.$id.events";
 import { resetDatabase } from "../helpers/db";
 import { outbox } from "../helpers/outbox";
-import { requestAs, run } from "../helpers/requests";
+import { args, requestAs, run } from "../helpers/requests";
 
 const DANA = "dana@cedarflats.example";
 const SAM = "sam@bluemesa.example";
-const args = (request: Request, params: Record<string, string> = {}) => ({ request, params, context: {} }) as never;
 const post = (email: string | null, path: string, body: unknown) =>
   requestAs(email, path, { method: "POST", body: JSON.stringify(body), headers: { "Content-Type": "application/json" } });
 

@@ -8,11 +8,10 @@ import { loader as walkLoader } from "~/routes/cases.$id.walk";
 import { action as fixAction, loader as fixLoader } from "~/routes/rigs.$code.fix";
 import { loader as labelLoader } from "~/routes/rigs.$code.label";
 import { resetDatabase } from "../helpers/db";
-import { requestAs, run } from "../helpers/requests";
+import { args, requestAs, run } from "../helpers/requests";
 
 const DANA = "dana@cedarflats.example";
 const SAM = "sam@bluemesa.example";
-const args = (request: Request, params: Record<string, string> = {}) => ({ request, params, context: {} }) as never;
 let caseId: string;
 
 // A real JPEG's first bytes are enough for the type check; the rest is padding.

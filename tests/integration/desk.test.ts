@@ -14,13 +14,12 @@ import { startCase } from "~/services/cases.server";
 import { usableGuides } from "~/services/guides.server";
 import { resetDatabase } from "../helpers/db";
 import { fixture } from "../helpers/guides";
-import { requestAs, run } from "../helpers/requests";
+import { args, requestAs, run } from "../helpers/requests";
 
 const CREW = "dana@cedarflats.example";
 const TRAINER = "ravi@cedarflats.example";
 const SUPERVISOR = "mo@cedarflats.example";
 const OTHER = "li@bluemesa.example";
-const args = (request: Request, params: Record<string, string> = {}) => ({ request, params, context: {} }) as never;
 const form = async (email: string, path: string, body: Record<string, string>, params: Record<string, string>) =>
   run(async () => guideAction(args(await requestAs(email, path, { form: body }), params)));
 const sessionUser = async (email: string) => {

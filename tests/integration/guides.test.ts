@@ -5,9 +5,8 @@ import { loader as searchLoader } from "~/routes/api.guides.search";
 import { importBuiltinGuides } from "../../seeds/import-guides";
 import { resetDatabase } from "../helpers/db";
 import { root, tinyGuide } from "../helpers/guides";
-import { requestAs } from "../helpers/requests";
+import { args, requestAs } from "../helpers/requests";
 
-const args = (request: Request) => ({ request, params: {}, context: {} }) as never;
 const library = loadLibrary(root);
 
 beforeAll(() => resetDatabase());

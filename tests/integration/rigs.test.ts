@@ -5,9 +5,8 @@ import { action as editAction } from "~/routes/rigs.$code.edit";
 import { action as newAction } from "~/routes/rigs.new";
 import { loader as rigsLoader } from "~/routes/rigs";
 import { resetDatabase } from "../helpers/db";
-import { requestAs, run } from "../helpers/requests";
+import { args, requestAs, run } from "../helpers/requests";
 
-const args = (request: Request, params: Record<string, string> = {}) => ({ request, params, context: {} }) as never;
 const goodRig = {
   code: "CF-21",
   name: "New trailer",

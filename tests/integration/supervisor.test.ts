@@ -9,10 +9,9 @@ import { loader as casesLoader } from "~/routes/cases";
 import { sendAllDigests } from "~/services/digest.server";
 import { resetDatabase } from "../helpers/db";
 import { outbox } from "../helpers/outbox";
-import { requestAs, run } from "../helpers/requests";
+import { args, requestAs, run } from "../helpers/requests";
 
 const MO = "mo@cedarflats.example";
-const args = (request: Request, params: Record<string, string> = {}) => ({ request, params, context: {} }) as never;
 const awkwardNote = 'He said "it\'s the clamp, again", then left';
 let handoffId: string;
 
