@@ -28,7 +28,8 @@ export async function boardAggregates(companyId: number, w: BoardWindow): Promis
   );
   const codeOf = new Map(rigRows.map((r) => [Number(r.id), String(r.code)]));
   const params = { company: companyId, from: w.from, to: w.to, rigId: w.rigCode ? (rigRows[0]?.id ?? -1) : null, days: repeatDays };
-  const rigFilter = "AND (:rigId IS NULL OR c.rig_id = :rigId)";
+  // Only when a rig is chosen: an "IS NULL OR" test would keep the optimizer off the index.
+  const rigFilter = w.rigCode ? "AND c.rig_id = :rigId" : "";
   const q = <T extends object>(sql: string) => sequelize.query<T>(sql, { replacements: params, type: QueryTypes.SELECT });
 
   const [rigs, causes, chains, weeks, people, guides, personCauses, handoffs] = await Promise.all([

@@ -5,6 +5,7 @@ import * as m003 from "./003-cases";
 import * as m004 from "./004-rig-torque-specs";
 import * as m005 from "./005-board";
 import * as m006 from "./006-board-people-index";
+import * as m007 from "./007-board-wide-index";
 
 export interface Migration {
   name: string;
@@ -20,4 +21,5 @@ export const migrations: Migration[] = [
   { name: "004-rig-torque-specs", ...m004 },
   { name: "005-board", ...m005 },
   { name: "006-board-people-index", ...m006 },
+  { name: "007-board-wide-index", ...m007 },
 ];
