@@ -176,28 +176,30 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
         />
         <details className="rounded-md border-2 border-rule bg-paper p-3" open>
           <summary className="min-h-12 cursor-pointer py-2 font-bold">Causes as a table</summary>
-          <table className="w-full border-collapse text-left">
-            <thead>
-              <tr className="border-b-2 border-ink">
-                <th scope="col">Cause</th>
-                <th scope="col">Cases</th>
-                <th scope="col">Share</th>
-                <th scope="col">Running</th>
-                <th scope="col">Downtime</th>
-              </tr>
-            </thead>
-            <tbody>
-              {board.pareto.map((p) => (
-                <tr key={p.cause} className="border-b border-rule">
-                  <td>{name(p.cause)}</td>
-                  <td>{p.count}</td>
-                  <td>{fmt(p.share * 100, 1)} %</td>
-                  <td>{fmt(p.cumulativeShare * 100, 1)} %</td>
-                  <td>{h(p.downtimeHours, 1)} h</td>
+          <div className="overflow-x-auto">
+            <table className="w-full border-collapse text-left">
+              <thead>
+                <tr className="border-b-2 border-ink">
+                  <th scope="col">Cause</th>
+                  <th scope="col">Cases</th>
+                  <th scope="col">Share</th>
+                  <th scope="col">Running</th>
+                  <th scope="col">Downtime</th>
                 </tr>
-              ))}
-            </tbody>
-          </table>
+              </thead>
+              <tbody>
+                {board.pareto.map((p) => (
+                  <tr key={p.cause} className="border-b border-rule">
+                    <td>{name(p.cause)}</td>
+                    <td>{p.count}</td>
+                    <td>{fmt(p.share * 100, 1)} %</td>
+                    <td>{fmt(p.cumulativeShare * 100, 1)} %</td>
+                    <td>{h(p.downtimeHours, 1)} h</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
         </details>
       </section>
 
