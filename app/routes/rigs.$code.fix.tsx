@@ -60,7 +60,37 @@ export default function StartFix({ loaderData }: Route.ComponentProps) {
   }, [query]);
 
   const hits = query.trim().length >= 2 ? (search.data?.results ?? []) : [];
-  const StartButton = ({ slug, title, hint }: { slug: string; title: string; hint?: string }) => (
+  return (
+    <>
+      <h1 className="text-3xl font-bold">What is {rig.code} doing?</h1>
+      <p className="mt-1 text-lg">{rig.name}</p>
+      {rig.retired ? (
+        <p className="mt-2 font-bold text-stop">This rig is retired; a fix cannot be started on it.</p>
+      ) : (
+        <FixChooser
+          query={query}
+          setQuery={setQuery}
+          hits={hits}
+          searching={search.state !== "idle"}
+          searched={!!search.data}
+          tiles={tiles}
+          busy={busy}
+          caseId={caseId}
+        />
+      )}
+    </>
+  );
+}
+
+interface Tile {
+  slug: string;
+  title: string;
+  hint?: string;
+}
+
+/** A guide to start: the phone-made case id goes with it, so a double press on a slow signal makes one case. */
+function StartGuideButton({ slug, title, hint, busy, caseId }: Tile & { busy: boolean; caseId: React.RefObject<string> }) {
+  return (
     <Form method="post" onSubmit={(e) => ((e.currentTarget.elements.namedItem("caseId") as HTMLInputElement).value = caseId.current)}>
       <input type="hidden" name="guideSlug" value={slug} />
       <input type="hidden" name="caseId" value="" />
@@ -74,12 +104,30 @@ export default function StartFix({ loaderData }: Route.ComponentProps) {
       </button>
     </Form>
   );
+}
 
+/** Say it in your own words, or tap a symptom tile. */
+function FixChooser({
+  query,
+  setQuery,
+  hits,
+  searching,
+  searched,
+  tiles,
+  busy,
+  caseId,
+}: {
+  query: string;
+  setQuery: (q: string) => void;
+  hits: Hit[];
+  searching: boolean;
+  searched: boolean;
+  tiles: Tile[];
+  busy: boolean;
+  caseId: React.RefObject<string>;
+}) {
   return (
     <>
-      <h1 className="text-3xl font-bold">What is {rig.code} doing?</h1>
-      <p className="mt-1 text-lg">{rig.name}</p>
-      {rig.retired ? <p className="mt-2 font-bold text-stop">This rig is retired; a fix cannot be started on it.</p> : null}
       <label htmlFor="symptom" className="mt-5 block text-lg font-bold">
         Say it in your own words
       </label>
@@ -95,17 +143,17 @@ export default function StartFix({ loaderData }: Route.ComponentProps) {
       {hits.length ? (
         <section aria-label="Matching guides" className="mt-3 space-y-2">
           {hits.slice(0, 3).map((h) => (
-            <StartButton key={h.slug} slug={h.slug} title={h.title} />
+            <StartGuideButton key={h.slug} slug={h.slug} title={h.title} busy={busy} caseId={caseId} />
           ))}
         </section>
-      ) : query.trim().length >= 2 && search.state === "idle" && search.data ? (
+      ) : query.trim().length >= 2 && !searching && searched ? (
         <p className="mt-2">No guide matches those words. Pick one below.</p>
       ) : null}
       <h2 className="mt-6 text-xl font-bold">Or tap what it looks like</h2>
       <ul className="mt-2 grid gap-2 sm:grid-cols-2">
         {tiles.map((t) => (
           <li key={t.slug}>
-            <StartButton {...t} />
+            <StartGuideButton {...t} busy={busy} caseId={caseId} />
           </li>
         ))}
       </ul>
