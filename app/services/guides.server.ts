@@ -44,10 +44,24 @@ export async function usableGuides(user: SessionUser): Promise<UsableGuide[]> {
     .sort((a, b) => a.title.localeCompare(b.title));
 }
 
+// Search indexes by the exact set of guide versions they cover: a new publish changes the key.
+const indexes = new Map<string, ReturnType<typeof createGuideSearch>>();
+
 export async function searchGuides(user: SessionUser, query: string): Promise<SearchHit[]> {
-  const names = new Map(causeList().map((c) => [c.code, c.name]));
   const guides = await usableGuides(user);
-  const search = createGuideSearch(
+  const key = guides.map((g) => g.versionId).join(",");
+  let search = indexes.get(key);
+  if (!search) {
+    search = buildIndex(guides);
+    if (indexes.size >= 100) indexes.delete(indexes.keys().next().value!);
+    indexes.set(key, search);
+  }
+  return search(query);
+}
+
+function buildIndex(guides: UsableGuide[]) {
+  const names = new Map(causeList().map((c) => [c.code, c.name]));
+  return createGuideSearch(
     guides.map((g) => ({
       slug: g.slug,
       title: g.title,
@@ -56,5 +70,4 @@ export async function searchGuides(user: SessionUser, query: string): Promise<Se
       causes: Object.values(g.definition.states).flatMap((s) => (s.meta.cause && names.has(s.meta.cause) ? [names.get(s.meta.cause)!] : [])),
     })),
   );
-  return search(query);
 }
