@@ -3,7 +3,7 @@ import { Op, QueryTypes } from "sequelize";
 import { compileGuide } from "~/lib/guides/compile";
 import { mainLine } from "~/lib/guides/main-line";
 import type { Guide } from "~/lib/guides/schema";
-import { validateGuide, type GuideProblem } from "~/lib/guides/validate";
+import { validateGuide } from "~/lib/guides/validate";
 import { expectedMinutes, ratioOrder } from "~/lib/stats/check-order";
 import { stepFlow, type FlowCase } from "~/lib/stats/step-flow";
 import { GuideRecord, GuideVersion, guideScope, sequelize, User } from "./db.server";
@@ -296,5 +296,3 @@ export async function learnFromCases(user: SessionUser, guideId: number) {
     },
   };
 }
-
-export type { GuideProblem };

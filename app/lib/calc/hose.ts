@@ -52,13 +52,16 @@ export function hoseFriction(input: unknown) {
   };
 }
 
+/** The smooth-bore constant: gpm = 29.7·d²·√NP (IFSTA, as quoted in fire training material). */
+const TIP_FLOW_K = 29.7;
+
 /** Smooth-bore tip flow: gpm = 29.7·d²·√NP (d in inches, NP nozzle pressure in psi). */
 export function tipFlowGpm(tipIn: number, nozzlePsi: number): number {
   const { tipIn: d, nozzlePsi: p } = parseInput(z.object({ tipIn: num("Tip diameter", 0.25, 3), nozzlePsi: num("Nozzle pressure", 0, 400) }), {
     tipIn,
     nozzlePsi,
   });
-  return 29.7 * d * d * Math.sqrt(p);
+  return TIP_FLOW_K * d * d * Math.sqrt(p);
 }
 
 /**
@@ -97,9 +100,9 @@ export function reachByHoseLength(input: unknown) {
   if (pumpPsi - rise <= 0) throw new CalcInputError({ pumpPsi: "the pump cannot lift water that high" });
   const rows = [];
   for (let lengthFt = 50; lengthFt <= maxLengthFt; lengthFt += 50) {
-    const k = (c * lengthFt * 29.7 * 29.7 * tipIn ** 4) / 1e6;
+    const k = (c * lengthFt * TIP_FLOW_K ** 2 * tipIn ** 4) / 1e6;
     const nozzlePsi = (pumpPsi - rise) / (1 + k);
-    const flowGpm = 29.7 * tipIn * tipIn * Math.sqrt(nozzlePsi);
+    const flowGpm = tipFlowGpm(tipIn, nozzlePsi);
     rows.push({ lengthFt, flowGpm, nozzlePsi, frictionLossPsi: pumpPsi - rise - nozzlePsi, reachFt: reachFt(tipIn, nozzlePsi) });
   }
   return { rows, table: probe.table, tableName: probe.tableName, source: probe.source, note: SLURRY_NOTE };

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { FT_HEAD_PER_PSI, fToC, kpaToPsi, mToFt, ftToM } from "./units";
+import { FT_HEAD_PER_PSI, fToC, kpaToPsi, ftToM } from "./units";
 import { num, parseInput } from "./validate";
 
 /**
@@ -82,5 +82,3 @@ export function suctionCheck(input: unknown) {
     vapourSource: ANTOINE_SOURCE,
   };
 }
-
-export { mToFt };
