@@ -9,6 +9,7 @@ import type { CreationAttributes } from "sequelize";
 import { simplePaths, type GuidePath } from "../app/lib/guides/graph";
 import type { Guide } from "../app/lib/guides/schema";
 import { Case, CaseEvent, Company, db, GuideRecord, GuideVersion, Rig, User } from "../db/index";
+import { rebuildBoardRollups } from "../db/board-rollups";
 import { seededRandom } from "./random";
 
 const DAY = 86_400_000;
@@ -157,6 +158,8 @@ export async function seedDemoHistory(now = new Date(), log: (line: string) => v
     for (let i = 0; i < cases.length; i += 1000) await Case.bulkCreate(cases.slice(i, i + 1000), { transaction });
     for (let i = 0; i < events.length; i += 2000) await CaseEvent.bulkCreate(events.slice(i, i + 2000), { transaction });
   });
+  // Bulk inserts skip the per-case upkeep of the board's rollups.
+  await rebuildBoardRollups(sequelize);
   log(`Seeded demo history: ${cases.length} cases, ${events.length} answers over a year.`);
   return cases.length;
 }

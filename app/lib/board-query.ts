@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { DEFAULT_REPEAT_DAYS } from "./stats/repeats";
 
 const day = z
   .string()
@@ -22,7 +23,7 @@ export const boardQuerySchema = z
       .int("repeatDays must be whole days")
       .min(1, "repeatDays must be at least 1")
       .max(365, "repeatDays must be at most 365")
-      .default(30),
+      .default(DEFAULT_REPEAT_DAYS),
   })
   .transform((q, ctx) => {
     const today = new Date();

@@ -6,6 +6,7 @@ import * as m004 from "./004-rig-torque-specs";
 import * as m005 from "./005-board";
 import * as m006 from "./006-board-people-index";
 import * as m007 from "./007-board-wide-index";
+import * as m008 from "./008-board-rollups";
 
 export interface Migration {
   name: string;
@@ -22,4 +23,5 @@ export const migrations: Migration[] = [
   { name: "005-board", ...m005 },
   { name: "006-board-people-index", ...m006 },
   { name: "007-board-wide-index", ...m007 },
+  { name: "008-board-rollups", ...m008 },
 ];

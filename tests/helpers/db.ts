@@ -1,4 +1,5 @@
 import { db } from "../../db/index";
+import { rebuildBoardRollups } from "../../db/board-rollups";
 import { migrateUp } from "../../db/migrate";
 import { seedAll } from "../../seeds/seed-all";
 
@@ -15,3 +16,6 @@ export async function resetDatabase({ seed = true } = {}) {
   });
   if (seed) await seedAll({ log: () => {} });
 }
+
+/** Cases made straight through the model skip the board's rollups, as a bulk import does; this brings them up to date. */
+export const rebuildRollups = () => rebuildBoardRollups(db());

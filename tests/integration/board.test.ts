@@ -6,7 +6,7 @@ import { byWeight, findRepeats, summariseChain } from "~/lib/stats/repeats";
 import { rigFigures, type RigAggregate } from "~/lib/stats/reliability";
 import { loader as boardApi } from "~/routes/api.board";
 import { boardAggregates } from "~/services/board.server";
-import { resetDatabase } from "../helpers/db";
+import { rebuildRollups, resetDatabase } from "../helpers/db";
 import { requestAs, run } from "../helpers/requests";
 
 const DAY = 86_400_000;
@@ -61,6 +61,7 @@ beforeAll(async () => {
       note: null,
     });
   }
+  await rebuildRollups();
 });
 
 const window = { from: new Date(start), to: new Date(start + 200 * DAY) };

@@ -7,7 +7,7 @@ import { action as caseAction } from "~/routes/cases.$id";
 import { loader as exportLoader } from "~/routes/cases.export";
 import { loader as casesLoader } from "~/routes/cases";
 import { sendAllDigests } from "~/services/digest.server";
-import { resetDatabase } from "../helpers/db";
+import { rebuildRollups, resetDatabase } from "../helpers/db";
 import { outbox } from "../helpers/outbox";
 import { args, requestAs, run } from "../helpers/requests";
 
@@ -43,6 +43,7 @@ beforeAll(async () => {
   for (let d = 1; d <= 30; d++) await add(d % 3 ? "CF-03" : "CF-07", d, "fixed", d % 2 ? "suction-air-leak" : "plug-sump");
   handoffId = await add("CF-07", 2, "handoff", null);
   await add("BM-01", 1, "fixed", "suction-air-leak");
+  await rebuildRollups();
 });
 
 describe("cases table", () => {

@@ -11,11 +11,14 @@ export interface RepeatGroup {
   cases: CauseHit[];
 }
 
+/** The repeat window unless a supervisor picks another; the board's stored rollups are kept for this one. */
+export const DEFAULT_REPEAT_DAYS = 30;
+
 /**
  * Repeats: the same cause on the same rig within `windowDays` of the previous time it was
  * found. Each chain of such cases is one group (a chain continues while the gaps stay short).
  */
-export function findRepeats(hits: CauseHit[], windowDays = 30): RepeatGroup[] {
+export function findRepeats(hits: CauseHit[], windowDays = DEFAULT_REPEAT_DAYS): RepeatGroup[] {
   const limit = windowDays * 86_400_000;
   const byKey = new Map<string, CauseHit[]>();
   for (const h of hits) {
