@@ -1,5 +1,7 @@
 import { QueryTypes } from "sequelize";
 import { buildBoard, type Board, type BoardAggregates } from "~/lib/stats/board";
+import { foldMix, foldRigWeeks } from "~/lib/stats/board-rows";
+import { DEFAULT_REPEAT_DAYS, type RepeatChain } from "~/lib/stats/repeats";
 import { sequelize } from "./db.server";
 import type { SessionUser } from "./guards.server";
 
@@ -14,123 +16,100 @@ export interface BoardWindow {
 const n = (v: unknown) => (v === null || v === undefined ? 0 : Number(v));
 const iso = (v: unknown) => (v instanceof Date ? v.toISOString() : new Date(String(v)).toISOString());
 
+/** Day ranges as the rollups store them: whole months from month rows, the days at either edge from day rows. */
+function periods(from: Date, to: Date) {
+  const ymd = (t: Date) => t.toISOString().slice(0, 10);
+  for (const t of [from, to]) if (t.getTime() % 86_400_000) throw new Error(`The board's window must start and end at midnight UTC (got ${t.toISOString()})`);
+  const firstWhole = from.getUTCDate() === 1 ? from : new Date(Date.UTC(from.getUTCFullYear(), from.getUTCMonth() + 1, 1));
+  const lastWhole = new Date(Date.UTC(to.getUTCFullYear(), to.getUTCMonth(), 1));
+  // No whole month inside: every day comes from day rows.
+  const [mFrom, mTo] = firstWhole < lastWhole ? [firstWhole, lastWhole] : [from, from];
+  return { from: ymd(from), to: ymd(to), mFrom: ymd(mFrom), mTo: ymd(mTo) };
+}
+const inPeriods =
+  "(b.span = 'month' AND b.period >= :mFrom AND b.period < :mTo OR b.span = 'day' AND (b.period >= :from AND b.period < :mFrom OR b.period >= :mTo AND b.period < :to))";
+
 /**
- * The board's aggregates in a handful of grouped queries, all scoped to the company and the
- * window, on covering indexes; the numbers are then finished by the pure stats module.
+ * The board's aggregates for one company and window, read from the rollups kept as cases
+ * open and close (db/board-rollups.ts), so the cost follows rigs, people and months rather
+ * than the number of cases; the numbers are then finished by the pure stats module.
+ * The window runs from midnight to midnight UTC.
  */
 export async function boardAggregates(companyId: number, w: BoardWindow): Promise<BoardAggregates> {
-  const repeatDays = w.repeatDays ?? 30;
-  // Rigs are few: read them once, then filter and group cases by rig id alone, so each grouped
-  // query runs on a covering index of `cases` without a join per row.
+  const repeatDays = w.repeatDays ?? DEFAULT_REPEAT_DAYS;
   const rigRows = await sequelize.query<{ id: number; code: string; has_hour_meter: number }>(
     "SELECT id, code, has_hour_meter FROM rigs WHERE company_id = :company AND (:rig IS NULL OR code = :rig) ORDER BY code",
     { replacements: { company: companyId, rig: w.rigCode ?? null }, type: QueryTypes.SELECT },
   );
   const codeOf = new Map(rigRows.map((r) => [Number(r.id), String(r.code)]));
-  const params = { company: companyId, from: w.from, to: w.to, rigId: w.rigCode ? (rigRows[0]?.id ?? -1) : null, days: repeatDays };
-  // Only when a rig is chosen: an "IS NULL OR" test would keep the optimizer off the index.
-  const rigFilter = w.rigCode ? "AND c.rig_id = :rigId" : "";
+  const params = {
+    company: companyId,
+    ...periods(w.from, w.to),
+    start: w.from,
+    end: w.to,
+    rigId: w.rigCode ? (rigRows[0]?.id ?? -1) : null,
+    days: repeatDays,
+  };
+  // Only when a rig is chosen: an "IS NULL OR" test would keep the optimizer off the key.
+  const rigFilter = w.rigCode ? "AND b.rig_id = :rigId" : "";
   const q = <T extends object>(sql: string) => sequelize.query<T>(sql, { replacements: params, type: QueryTypes.SELECT });
 
-  const [rigs, causes, chains, weeks, people, guides, personCauses, handoffs] = await Promise.all([
+  const [rigWeeks, mix, chains, handoffs] = await Promise.all([
+    // Rigs and the weekly trend from one grouped read of the rig-day rollups.
     q<Record<string, unknown>>(`
-      SELECT c.rig_id, COUNT(*) AS cases,
-        SUM(c.outcome = 'fixed') AS fixed, SUM(c.outcome = 'handoff') AS handoff, SUM(c.outcome = 'abandoned') AS abandoned,
-        MAX(c.engine_hours) - MIN(c.engine_hours) AS hours,
-        SUM(TIMESTAMPDIFF(SECOND, c.opened_at, c.closed_at)) AS repair_seconds, COUNT(c.closed_at) AS closed
-      FROM cases c
-      WHERE c.company_id = :company AND c.opened_at >= :from AND c.opened_at < :to ${rigFilter}
-      GROUP BY c.rig_id`),
+      SELECT b.rig_id, DATE_FORMAT(b.day - INTERVAL WEEKDAY(b.day) DAY, '%Y-%m-%d') AS week, SUM(b.cases) AS cases, SUM(b.fixed) AS fixed,
+        SUM(b.handoff) AS handoff, SUM(b.abandoned) AS abandoned, SUM(b.closed) AS closed, SUM(b.repair_seconds) AS repair_seconds,
+        MIN(b.min_hours) AS min_hours, MAX(b.max_hours) AS max_hours
+      FROM board_rig_days b WHERE b.company_id = :company AND b.day >= :from AND b.day < :to ${rigFilter}
+      GROUP BY b.rig_id, week`),
+    // Causes and the crew view from one grouped read of the mix rollups.
     q<Record<string, unknown>>(`
-      SELECT c.cause_code AS cause, COUNT(*) AS count, SUM(TIMESTAMPDIFF(SECOND, c.opened_at, c.closed_at)) AS downtime_seconds
-      FROM cases c
-      WHERE c.company_id = :company AND c.opened_at >= :from AND c.opened_at < :to AND c.cause_code IS NOT NULL ${rigFilter}
-      GROUP BY c.cause_code`),
-    // Repeat chains as gaps and islands: a case starts a new chain unless the same cause was
-    // found on the same rig within the window before it; only chains of two or more come back.
+      SELECT m.*, u.name, g.title FROM (
+        SELECT b.opened_by, b.guide_id, b.cause_code, SUM(b.cases) AS cases, SUM(b.handoff) AS handoffs, SUM(b.repair_seconds) AS repair_seconds
+        FROM board_mix b WHERE b.company_id = :company AND ${inPeriods} ${rigFilter}
+        GROUP BY b.opened_by, b.guide_id, b.cause_code
+      ) m JOIN guides g ON g.id = m.guide_id LEFT JOIN users u ON u.id = m.opened_by`),
+    repeatDays === DEFAULT_REPEAT_DAYS ? storedChains(params, rigFilter) : liveChains(params, w.rigCode ? "AND c.rig_id = :rigId" : ""),
+    // The newest open hand-offs first, then their names: a join first would sort them all.
     q<Record<string, unknown>>(`
-      SELECT rig_id, cause_code, COUNT(*) AS n, MIN(opened_at) AS first_at, MAX(opened_at) AS last_at,
-        GROUP_CONCAT(id ORDER BY opened_at DESC, id DESC SEPARATOR ',' LIMIT 3) AS latest_ids,
-        GROUP_CONCAT(DATE_FORMAT(opened_at, '%Y-%m-%dT%H:%i:%s.%fZ') ORDER BY opened_at DESC, id DESC SEPARATOR ',' LIMIT 3) AS latest_at
-      FROM (
-        SELECT id, rig_id, cause_code, opened_at, SUM(new_chain) OVER (PARTITION BY rig_id, cause_code ORDER BY opened_at, id) AS chain
-        FROM (
-          SELECT c.id, c.rig_id, c.cause_code, c.opened_at,
-            CASE WHEN LAG(c.opened_at) OVER (PARTITION BY c.rig_id, c.cause_code ORDER BY c.opened_at, c.id) >= c.opened_at - INTERVAL :days DAY THEN 0 ELSE 1 END AS new_chain
-          FROM cases c
-          WHERE c.company_id = :company AND c.opened_at >= :from AND c.opened_at < :to AND c.cause_code IS NOT NULL ${rigFilter}
-        ) marked
-      ) chained
-      GROUP BY rig_id, cause_code, chain HAVING COUNT(*) > 1`),
-    q<Record<string, unknown>>(`
-      SELECT DATE_FORMAT(DATE(c.opened_at) - INTERVAL WEEKDAY(c.opened_at) DAY, '%Y-%m-%d') AS week, COUNT(*) AS cases, SUM(c.outcome = 'handoff') AS handoffs
-      FROM cases c
-      WHERE c.company_id = :company AND c.opened_at >= :from AND c.opened_at < :to ${rigFilter}
-      GROUP BY week ORDER BY week`),
-    q<Record<string, unknown>>(`
-      SELECT p.uid AS id, u.name, p.cases, p.handoffs FROM (
-        SELECT c.opened_by AS uid, COUNT(*) AS cases, SUM(c.outcome = 'handoff') AS handoffs
-        FROM cases c
-        WHERE c.company_id = :company AND c.opened_at >= :from AND c.opened_at < :to ${rigFilter}
-        GROUP BY c.opened_by
-      ) p JOIN users u ON u.id = p.uid ORDER BY p.cases DESC`),
-    q<Record<string, unknown>>(`
-      SELECT p.uid, g.title, SUM(p.count) AS count FROM (
-        SELECT c.opened_by AS uid, c.guide_version_id AS vid, COUNT(*) AS count
-        FROM cases c
-        WHERE c.company_id = :company AND c.opened_at >= :from AND c.opened_at < :to ${rigFilter}
-        GROUP BY c.opened_by, c.guide_version_id
-      ) p JOIN guide_versions v ON v.id = p.vid JOIN guides g ON g.id = v.guide_id
-      GROUP BY p.uid, g.title`),
-    q<Record<string, unknown>>(`
-      SELECT c.opened_by AS uid, c.cause_code AS cause, COUNT(*) AS count
-      FROM cases c
-      WHERE c.company_id = :company AND c.opened_at >= :from AND c.opened_at < :to AND c.cause_code IS NOT NULL ${rigFilter}
-      GROUP BY c.opened_by, c.cause_code`),
-    q<Record<string, unknown>>(`
-      SELECT c.id, r.code, g.title, c.opened_at, u.name
-      FROM cases c JOIN rigs r ON r.id = c.rig_id JOIN guide_versions v ON v.id = c.guide_version_id JOIN guides g ON g.id = v.guide_id
-      LEFT JOIN users u ON u.id = c.opened_by
-      WHERE c.company_id = :company AND c.outcome = 'handoff' AND c.handoff_resolved_at IS NULL ${rigFilter}
-      ORDER BY c.opened_at DESC LIMIT 50`),
+      SELECT h.id, r.code, g.title, h.opened_at, u.name FROM (
+        SELECT c.id, c.rig_id, c.guide_version_id, c.opened_by, c.opened_at FROM cases c
+        WHERE c.company_id = :company AND c.outcome = 'handoff' AND c.handoff_resolved_at IS NULL ${w.rigCode ? "AND c.rig_id = :rigId" : ""}
+        ORDER BY c.opened_at DESC LIMIT 50
+      ) h JOIN rigs r ON r.id = h.rig_id JOIN guide_versions v ON v.id = h.guide_version_id JOIN guides g ON g.id = v.guide_id
+      LEFT JOIN users u ON u.id = h.opened_by
+      ORDER BY h.opened_at DESC`),
   ]);
+  const hours = (v: unknown) => (v === null || v === undefined ? null : Number(v));
 
-  const top = <T extends { count: number }>(xs: T[]) => xs.sort((a, b) => b.count - a.count).slice(0, 5);
   return {
-    rigs: rigRows.map((rig) => {
-      const r = rigs.find((x) => n(x.rig_id) === n(rig.id)) ?? {};
-      return {
-        rigCode: String(rig.code),
+    ...foldRigWeeks(
+      rigWeeks.map((r) => ({
+        rigId: n(r.rig_id),
+        week: String(r.week),
         cases: n(r.cases),
         fixed: n(r.fixed),
         handoff: n(r.handoff),
         abandoned: n(r.abandoned),
-        operatingHours: n(rig.has_hour_meter) && r.hours !== null && r.hours !== undefined ? n(r.hours) : null,
-        repairHours: n(r.repair_seconds) / 3600,
-        closedCases: n(r.closed),
-      };
-    }),
-    causes: causes.map((c) => ({ cause: String(c.cause), count: n(c.count), downtimeHours: n(c.downtime_seconds) / 3600 })),
-    repeatChains: chains.map((c) => {
-      const ids = String(c.latest_ids).split(",");
-      const times = String(c.latest_at).split(",");
-      return {
-        rigCode: codeOf.get(n(c.rig_id)) ?? "?",
-        cause: String(c.cause_code),
-        count: n(c.n),
-        firstAt: iso(c.first_at),
-        lastAt: iso(c.last_at),
-        latest: ids.map((caseId, i) => ({ caseId, openedAt: new Date(times[i].replace(/(\.\d{3})\d*Z$/, "$1Z")).toISOString() })),
-      };
-    }),
-    weeks: weeks.map((w) => ({ weekStart: String(w.week), cases: n(w.cases), handoffs: n(w.handoffs) })),
-    people: people.map((p) => ({
-      name: String(p.name),
-      cases: n(p.cases),
-      handoffs: n(p.handoffs),
-      guides: top(guides.filter((g) => n(g.uid) === n(p.id)).map((g) => ({ title: String(g.title), count: n(g.count) }))),
-      causes: top(personCauses.filter((c) => n(c.uid) === n(p.id)).map((c) => ({ cause: String(c.cause), count: n(c.count) }))),
-    })),
+        closed: n(r.closed),
+        repairSeconds: n(r.repair_seconds),
+        minHours: hours(r.min_hours),
+        maxHours: hours(r.max_hours),
+      })),
+      rigRows.map((r) => ({ id: Number(r.id), code: String(r.code), hasHourMeter: Boolean(n(r.has_hour_meter)) })),
+    ),
+    ...foldMix(
+      mix.map((m) => ({
+        personId: n(m.opened_by),
+        personName: m.name === null || m.name === undefined ? null : String(m.name),
+        guideTitle: String(m.title),
+        cause: m.cause_code ? String(m.cause_code) : null,
+        cases: n(m.cases),
+        handoffs: n(m.handoffs),
+        repairSeconds: n(m.repair_seconds),
+      })),
+    ),
+    repeatChains: chains.map(({ rigId, ...chain }) => ({ rigCode: codeOf.get(rigId) ?? "?", ...chain })),
     openHandoffs: handoffs.map((h) => ({
       caseId: String(h.id),
       rigCode: String(h.code),
@@ -143,4 +122,72 @@ export async function boardAggregates(companyId: number, w: BoardWindow): Promis
 
 export async function boardFor(user: SessionUser, w: BoardWindow): Promise<Board> {
   return buildBoard(await boardAggregates(user.companyId, w));
+}
+
+type ChainRow = Omit<RepeatChain, "rigCode"> & { rigId: number };
+type Params = Record<string, unknown>;
+
+/** Repeat chains for the default window, from the chain rollups; then the latest three cases of each. */
+async function storedChains(params: Params, rigFilter: string): Promise<ChainRow[]> {
+  const chains = await sequelize.query<Record<string, unknown>>(
+    `SELECT b.rig_id, b.cause_code, SUM(b.cases) AS n, MIN(b.first_at) AS first_at, MAX(b.last_at) AS last_at
+     FROM board_chains b WHERE b.company_id = :company AND ${inPeriods} ${rigFilter}
+     GROUP BY b.rig_id, b.cause_code, b.chain_at HAVING SUM(b.cases) > 1`,
+    { replacements: params, type: QueryTypes.SELECT },
+  );
+  if (!chains.length) return [];
+  // A chain's cases in the window are exactly the rig's cases of that cause between its first and last.
+  const replacements: Params = { company: params.company };
+  const latest = chains.map((c, i) => {
+    Object.assign(replacements, { [`r${i}`]: c.rig_id, [`k${i}`]: c.cause_code, [`f${i}`]: c.first_at, [`l${i}`]: c.last_at });
+    return `(SELECT ${i} AS k, id, opened_at FROM cases WHERE rig_id = :r${i} AND cause_code = :k${i} AND opened_at >= :f${i} AND opened_at <= :l${i} AND company_id = :company ORDER BY opened_at DESC, id DESC LIMIT 3)`;
+  });
+  const rows = await sequelize.query<{ k: number; id: string; opened_at: Date }>(latest.join(" UNION ALL "), { replacements, type: QueryTypes.SELECT });
+  return chains.map((c, i) => ({
+    rigId: n(c.rig_id),
+    cause: String(c.cause_code),
+    count: n(c.n),
+    firstAt: iso(c.first_at),
+    lastAt: iso(c.last_at),
+    latest: rows
+      .filter((r) => n(r.k) === i)
+      .sort((a, b) => +new Date(b.opened_at) - +new Date(a.opened_at) || (a.id < b.id ? 1 : -1))
+      .map((r) => ({ caseId: String(r.id), openedAt: iso(r.opened_at) })),
+  }));
+}
+
+/**
+ * Repeat chains for any other window, straight from the cases (gaps and islands): a case
+ * starts a new chain unless the same cause was found on the same rig within the window
+ * before it; only chains of two or more come back.
+ */
+async function liveChains(params: Params, rigFilter: string): Promise<ChainRow[]> {
+  const rows = await sequelize.query<Record<string, unknown>>(
+    `SELECT rig_id, cause_code, COUNT(*) AS n, MIN(opened_at) AS first_at, MAX(opened_at) AS last_at,
+       GROUP_CONCAT(id ORDER BY opened_at DESC, id DESC SEPARATOR ',' LIMIT 3) AS latest_ids,
+       GROUP_CONCAT(DATE_FORMAT(opened_at, '%Y-%m-%dT%H:%i:%s.%fZ') ORDER BY opened_at DESC, id DESC SEPARATOR ',' LIMIT 3) AS latest_at
+     FROM (
+       SELECT id, rig_id, cause_code, opened_at, SUM(new_chain) OVER (PARTITION BY rig_id, cause_code ORDER BY opened_at, id) AS chain
+       FROM (
+         SELECT c.id, c.rig_id, c.cause_code, c.opened_at,
+           CASE WHEN LAG(c.opened_at) OVER (PARTITION BY c.rig_id, c.cause_code ORDER BY c.opened_at, c.id) >= c.opened_at - INTERVAL :days DAY THEN 0 ELSE 1 END AS new_chain
+         FROM cases c
+         WHERE c.company_id = :company AND c.opened_at >= :start AND c.opened_at < :end AND c.cause_code IS NOT NULL ${rigFilter}
+       ) marked
+     ) chained
+     GROUP BY rig_id, cause_code, chain HAVING COUNT(*) > 1`,
+    { replacements: params, type: QueryTypes.SELECT },
+  );
+  return rows.map((c) => {
+    const ids = String(c.latest_ids).split(",");
+    const times = String(c.latest_at).split(",");
+    return {
+      rigId: n(c.rig_id),
+      cause: String(c.cause_code),
+      count: n(c.n),
+      firstAt: iso(c.first_at),
+      lastAt: iso(c.last_at),
+      latest: ids.map((caseId, i) => ({ caseId, openedAt: new Date(times[i].replace(/(\.\d{3})\d*Z$/, "$1Z")).toISOString() })),
+    };
+  });
 }
