@@ -1,4 +1,4 @@
-import { QueryTypes, type Sequelize, type Transaction } from "sequelize";
+import { QueryTypes, Transaction, type Sequelize } from "sequelize";
 import { DEFAULT_REPEAT_DAYS } from "../app/lib/stats/repeats";
 
 /**
@@ -89,34 +89,38 @@ async function refreshDays(sequelize: Sequelize, s: Scope, from: Date, to: Date)
 
   await run("DELETE FROM board_chains WHERE company_id = :company AND span = 'day' AND period >= :from AND period < :to", days);
   await run(
-    `INSERT INTO board_chains (company_id, span, period, rig_id, cause_code, chain_at, cases, first_at, last_at)
-     SELECT c.company_id, 'day', DATE(c.opened_at), c.rig_id, c.cause_code, c.repeat_chain_at, COUNT(*), MIN(c.opened_at), MAX(c.opened_at)
+    `INSERT INTO board_chains (company_id, span, period, rig_id, cause_code, chain_at, cases, first_at, last_at, latest)
+     SELECT c.company_id, 'day', DATE(c.opened_at), c.rig_id, c.cause_code, c.repeat_chain_at, COUNT(*), MIN(c.opened_at), MAX(c.opened_at),
+       GROUP_CONCAT(c.id, '@', DATE_FORMAT(c.opened_at, '%Y-%m-%dT%H:%i:%s.%fZ') ORDER BY c.opened_at DESC, c.id DESC SEPARATOR ',' LIMIT 3)
      FROM cases c WHERE ${caseDays} AND c.cause_code IS NOT NULL AND c.repeat_chain_at IS NOT NULL
      GROUP BY c.company_id, DATE(c.opened_at), c.rig_id, c.cause_code, c.repeat_chain_at`,
     days,
   );
   await run("DELETE FROM board_chains WHERE company_id = :company AND span = 'month' AND period >= :from AND period < :to", months);
   await run(
-    `INSERT INTO board_chains (company_id, span, period, rig_id, cause_code, chain_at, cases, first_at, last_at)
-     SELECT company_id, 'month', DATE_FORMAT(period, '%Y-%m-01'), rig_id, cause_code, chain_at, SUM(cases), MIN(first_at), MAX(last_at)
+    `INSERT INTO board_chains (company_id, span, period, rig_id, cause_code, chain_at, cases, first_at, last_at, latest)
+     SELECT company_id, 'month', DATE_FORMAT(period, '%Y-%m-01'), rig_id, cause_code, chain_at, SUM(cases), MIN(first_at), MAX(last_at),
+       SUBSTRING_INDEX(GROUP_CONCAT(latest ORDER BY period DESC SEPARATOR ',' LIMIT 3), ',', 3)
      FROM board_chains WHERE company_id = :company AND span = 'day' AND period >= :from AND period < :to
      GROUP BY company_id, DATE_FORMAT(period, '%Y-%m-01'), rig_id, cause_code, chain_at`,
     months,
   );
 }
 
-/**
- * Keeps the rollups right after one case opened or closed. Call it inside the transaction
- * that changed the case: it takes the company's row lock so two closes of the same company
- * cannot interleave their recomputations.
- */
-export async function refreshBoardForCase(
-  sequelize: Sequelize,
-  c: { companyId: number; rigId: number; causeCode: string | null; openedAt: Date },
-  transaction: Transaction,
-): Promise<void> {
+export interface CaseKey {
+  companyId: number;
+  rigId: number;
+  causeCode: string | null;
+  openedAt: Date;
+}
+
+/** The company's row lock, serialising rollup upkeep per company. Take it first: an insert's foreign-key check holds a shared lock on the same row. */
+const lockCompany = (sequelize: Sequelize, companyId: number, transaction: Transaction) =>
+  sequelize.query("SELECT id FROM companies WHERE id = :company FOR UPDATE", { replacements: { company: companyId }, transaction });
+
+/** Recomputes the rollups one case touches: its day and month and, once it has a cause, its repeat chain and what that moved. */
+async function refreshForCase(sequelize: Sequelize, c: CaseKey, transaction: Transaction): Promise<void> {
   const s = { companyId: c.companyId, transaction };
-  await sequelize.query("SELECT id FROM companies WHERE id = :company FOR UPDATE", { replacements: { company: c.companyId }, transaction });
   const from = dayOf(c.openedAt);
   let to = new Date(from.getTime() + DAY);
   if (c.causeCode) {
@@ -127,6 +131,20 @@ export async function refreshBoardForCase(
   await refreshDays(sequelize, s, from, to);
 }
 
+/**
+ * Opens or closes a case and keeps the board's rollups right in the same transaction:
+ * `change` writes the case and returns which one it was. Read committed, so the
+ * recomputation sees what other closes of the company have committed before it.
+ */
+export async function changeCase<T extends CaseKey>(sequelize: Sequelize, companyId: number, change: (transaction: Transaction) => Promise<T>): Promise<T> {
+  return sequelize.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED }, async (transaction) => {
+    await lockCompany(sequelize, companyId, transaction);
+    const changed = await change(transaction);
+    await refreshForCase(sequelize, changed, transaction);
+    return changed;
+  });
+}
+
 /** Rebuilds every rollup from the cases: after seeding, bulk imports, or when in doubt. Only the given company when one is named. */
 export async function rebuildBoardRollups(sequelize: Sequelize, companyId?: number): Promise<void> {
   const companies =
@@ -135,7 +153,7 @@ export async function rebuildBoardRollups(sequelize: Sequelize, companyId?: numb
       : [companyId];
   for (const id of companies) {
     await sequelize.transaction(async (transaction) => {
-      await sequelize.query("SELECT id FROM companies WHERE id = :company FOR UPDATE", { replacements: { company: id }, transaction });
+      await lockCompany(sequelize, id, transaction);
       await markChains(sequelize, { companyId: id, transaction, all: true });
       // Everything, including rows of days that no longer have cases.
       await refreshDays(sequelize, { companyId: id, transaction }, new Date(Date.UTC(1000, 0, 1)), new Date(Date.UTC(9999, 0, 1)));

@@ -127,32 +127,34 @@ export async function boardFor(user: SessionUser, w: BoardWindow): Promise<Board
 type ChainRow = Omit<RepeatChain, "rigCode"> & { rigId: number };
 type Params = Record<string, unknown>;
 
-/** Repeat chains for the default window, from the chain rollups; then the latest three cases of each. */
+/** The stored form of a chain's latest cases, "id@time" newest first (times with microseconds, as MariaDB formats them). */
+const latestCases = (list: unknown) =>
+  String(list)
+    .split(",")
+    .map((entry) => {
+      const [caseId, at] = entry.split("@");
+      return { caseId, openedAt: new Date(at.replace(/(\.\d{3})\d*Z$/, "$1Z")).toISOString() };
+    });
+
+/**
+ * Repeat chains for the default window, from the chain rollups. Periods never overlap, so
+ * the latest three cases are among the newest three periods' own latest three.
+ */
 async function storedChains(params: Params, rigFilter: string): Promise<ChainRow[]> {
   const chains = await sequelize.query<Record<string, unknown>>(
-    `SELECT b.rig_id, b.cause_code, SUM(b.cases) AS n, MIN(b.first_at) AS first_at, MAX(b.last_at) AS last_at
+    `SELECT b.rig_id, b.cause_code, SUM(b.cases) AS n, MIN(b.first_at) AS first_at, MAX(b.last_at) AS last_at,
+       SUBSTRING_INDEX(GROUP_CONCAT(b.latest ORDER BY b.period DESC SEPARATOR ',' LIMIT 3), ',', 3) AS latest
      FROM board_chains b WHERE b.company_id = :company AND ${inPeriods} ${rigFilter}
      GROUP BY b.rig_id, b.cause_code, b.chain_at HAVING SUM(b.cases) > 1`,
     { replacements: params, type: QueryTypes.SELECT },
   );
-  if (!chains.length) return [];
-  // A chain's cases in the window are exactly the rig's cases of that cause between its first and last.
-  const replacements: Params = { company: params.company };
-  const latest = chains.map((c, i) => {
-    Object.assign(replacements, { [`r${i}`]: c.rig_id, [`k${i}`]: c.cause_code, [`f${i}`]: c.first_at, [`l${i}`]: c.last_at });
-    return `(SELECT ${i} AS k, id, opened_at FROM cases WHERE rig_id = :r${i} AND cause_code = :k${i} AND opened_at >= :f${i} AND opened_at <= :l${i} AND company_id = :company ORDER BY opened_at DESC, id DESC LIMIT 3)`;
-  });
-  const rows = await sequelize.query<{ k: number; id: string; opened_at: Date }>(latest.join(" UNION ALL "), { replacements, type: QueryTypes.SELECT });
-  return chains.map((c, i) => ({
+  return chains.map((c) => ({
     rigId: n(c.rig_id),
     cause: String(c.cause_code),
     count: n(c.n),
     firstAt: iso(c.first_at),
     lastAt: iso(c.last_at),
-    latest: rows
-      .filter((r) => n(r.k) === i)
-      .sort((a, b) => +new Date(b.opened_at) - +new Date(a.opened_at) || (a.id < b.id ? 1 : -1))
-      .map((r) => ({ caseId: String(r.id), openedAt: iso(r.opened_at) })),
+    latest: latestCases(c.latest),
   }));
 }
 
@@ -164,8 +166,7 @@ async function storedChains(params: Params, rigFilter: string): Promise<ChainRow
 async function liveChains(params: Params, rigFilter: string): Promise<ChainRow[]> {
   const rows = await sequelize.query<Record<string, unknown>>(
     `SELECT rig_id, cause_code, COUNT(*) AS n, MIN(opened_at) AS first_at, MAX(opened_at) AS last_at,
-       GROUP_CONCAT(id ORDER BY opened_at DESC, id DESC SEPARATOR ',' LIMIT 3) AS latest_ids,
-       GROUP_CONCAT(DATE_FORMAT(opened_at, '%Y-%m-%dT%H:%i:%s.%fZ') ORDER BY opened_at DESC, id DESC SEPARATOR ',' LIMIT 3) AS latest_at
+       GROUP_CONCAT(id, '@', DATE_FORMAT(opened_at, '%Y-%m-%dT%H:%i:%s.%fZ') ORDER BY opened_at DESC, id DESC SEPARATOR ',' LIMIT 3) AS latest
      FROM (
        SELECT id, rig_id, cause_code, opened_at, SUM(new_chain) OVER (PARTITION BY rig_id, cause_code ORDER BY opened_at, id) AS chain
        FROM (
@@ -178,16 +179,12 @@ async function liveChains(params: Params, rigFilter: string): Promise<ChainRow[]
      GROUP BY rig_id, cause_code, chain HAVING COUNT(*) > 1`,
     { replacements: params, type: QueryTypes.SELECT },
   );
-  return rows.map((c) => {
-    const ids = String(c.latest_ids).split(",");
-    const times = String(c.latest_at).split(",");
-    return {
-      rigId: n(c.rig_id),
-      cause: String(c.cause_code),
-      count: n(c.n),
-      firstAt: iso(c.first_at),
-      lastAt: iso(c.last_at),
-      latest: ids.map((caseId, i) => ({ caseId, openedAt: new Date(times[i].replace(/(\.\d{3})\d*Z$/, "$1Z")).toISOString() })),
-    };
-  });
+  return rows.map((c) => ({
+    rigId: n(c.rig_id),
+    cause: String(c.cause_code),
+    count: n(c.n),
+    firstAt: iso(c.first_at),
+    lastAt: iso(c.last_at),
+    latest: latestCases(c.latest),
+  }));
 }

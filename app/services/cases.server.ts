@@ -1,9 +1,9 @@
 import { randomUUID } from "node:crypto";
-import { Op, Transaction, UniqueConstraintError } from "sequelize";
+import { Op, UniqueConstraintError } from "sequelize";
 import type { CaseEventInput, CloseCaseInput } from "~/lib/case-schema";
 import { answerFits } from "~/lib/guides/walk";
 import { isFinalKind, type Guide } from "~/lib/guides/schema";
-import { Case, CaseEvent, CasePhoto, GuideRecord, GuideVersion, refreshBoardForCase, Rig, sequelize, User } from "./db.server";
+import { Case, CaseEvent, CasePhoto, changeCase, GuideRecord, GuideVersion, Rig, sequelize, User } from "./db.server";
 import { fail, notFound, type SessionUser } from "./guards.server";
 import { usableGuides } from "./guides.server";
 import { notifyHandoff } from "./handoff.server";
@@ -21,16 +21,15 @@ export async function startCase(user: SessionUser, input: { id?: string; rigCode
     if (existing.rigId !== rig.id) fail(409, "That case id belongs to a case on another rig.");
     return { id, created: false };
   }
-  const openedAt = new Date();
-  await sequelize.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED }, async (transaction) => {
-    await Case.create(
+  await changeCase(sequelize, user.companyId, async (transaction) => {
+    const created = await Case.create(
       {
         id,
         companyId: user.companyId,
         rigId: rig.id,
         guideVersionId: guide.versionId,
         openedBy: user.id,
-        openedAt,
+        openedAt: new Date(),
         closedAt: null,
         engineHours: null,
         finalStep: null,
@@ -40,7 +39,7 @@ export async function startCase(user: SessionUser, input: { id?: string; rigCode
       },
       { transaction },
     );
-    await refreshBoardForCase(sequelize, { companyId: user.companyId, rigId: rig.id, causeCode: null, openedAt }, transaction);
+    return { companyId: user.companyId, rigId: rig.id, causeCode: null, openedAt: created.openedAt };
   });
   return { id, created: true };
 }
@@ -117,8 +116,7 @@ export async function closeCase(user: SessionUser, caseId: string, input: CloseC
     causeCode = step.meta.cause ?? null;
   }
   const closedAt = input.at ? new Date(input.at) : new Date();
-  // Read committed: the board's rollups are recomputed from what other closes have committed.
-  await sequelize.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED }, async (transaction) => {
+  await changeCase(sequelize, found.companyId, async (transaction) => {
     await found.update(
       {
         outcome: input.outcome,
@@ -133,7 +131,7 @@ export async function closeCase(user: SessionUser, caseId: string, input: CloseC
     if (input.engineHours !== undefined) {
       await Rig.update({ engineHours: input.engineHours }, { where: { id: found.rigId, engineHours: { [Op.lt]: input.engineHours } }, transaction });
     }
-    await refreshBoardForCase(sequelize, { companyId: found.companyId, rigId: found.rigId, causeCode, openedAt: found.openedAt }, transaction);
+    return { companyId: found.companyId, rigId: found.rigId, causeCode, openedAt: found.openedAt };
   });
   let notified: string[] = [];
   let mailFailed = false;

@@ -16,7 +16,7 @@ const period = { type: DataTypes.DATEONLY, allowNull: false };
 export async function up(qi: QueryInterface) {
   // The first case of the repeat chain a case belongs to (same rig and cause, each within the default repeat window of the one before).
   await qi.addColumn("cases", "repeat_chain_at", { type: DataTypes.DATE(3), allowNull: true });
-  // A chain's latest cases: read backwards along (opened_at, id) and stop after three.
+  // One rig-and-cause sequence in time order, to re-mark its chains when a case closes.
   await qi.addIndex("cases", ["rig_id", "cause_code", "opened_at"], { name: "cases_repeat_chain" });
   // The newest open hand-offs without sorting all of them.
   await qi.addIndex("cases", ["company_id", "outcome", "handoff_resolved_at", "opened_at"], { name: "cases_open_handoffs_newest" });
@@ -60,6 +60,8 @@ export async function up(qi: QueryInterface) {
     cases: count,
     first_at: { type: DataTypes.DATE(3), allowNull: false },
     last_at: { type: DataTypes.DATE(3), allowNull: false },
+    // The period's three latest cases, newest first: "id@time,…".
+    latest: { type: DataTypes.STRING(255), allowNull: false },
   });
 
   await rebuildBoardRollups(qi.sequelize);

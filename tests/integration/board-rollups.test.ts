@@ -1,6 +1,6 @@
 import { randomUUID } from "node:crypto";
 import { beforeAll, describe, expect, it } from "vitest";
-import { refreshBoardForCase } from "../../db/board-rollups";
+import { changeCase } from "../../db/board-rollups";
 import { Case, Company, db, GuideRecord, GuideVersion, Rig, User } from "../../db/index";
 import type { BoardAggregates } from "~/lib/stats/board";
 import { findRepeats, summariseChain } from "~/lib/stats/repeats";
@@ -48,32 +48,35 @@ beforeAll(async () => {
     const day = random.next() < 0.5 ? random.int(0, 90) : random.int(150, 300);
     const at = new Date(start + day * DAY + random.int(6, 17) * 3_600_000 + random.int(0, 59) * 60_000);
     const rig = rigs[random.int(0, 1)];
-    const id = randomUUID();
-    const opener = random.pick(crew);
-    // As startCase does, but at a chosen time in the past.
-    await sequelize.transaction(async (transaction) => {
-      await Case.create(
-        {
-          id,
-          companyId: cedar.id,
-          rigId: rig.id,
-          guideVersionId: version.id,
-          openedBy: opener.id,
-          openedAt: at,
-          closedAt: null,
-          engineHours: null,
-          finalStep: null,
-          causeCode: null,
-          safetyAckAt: null,
-          note: null,
-        },
-        { transaction },
-      );
-      await refreshBoardForCase(sequelize, { companyId: cedar.id, rigId: rig.id, causeCode: null, openedAt: at }, transaction);
-    });
-    opened.push({ id, at });
+    opened.push({ id: await openAt(at, rig.id, random.pick(crew).id, version.id), at });
   }
 });
+
+/** As startCase does, but at a chosen time in the past. */
+async function openAt(at: Date, rigId: number, openedBy: number, guideVersionId: number): Promise<string> {
+  const id = randomUUID();
+  await changeCase(sequelize, cedar.id, async (transaction) => {
+    await Case.create(
+      {
+        id,
+        companyId: cedar.id,
+        rigId,
+        guideVersionId,
+        openedBy,
+        openedAt: at,
+        closedAt: null,
+        engineHours: null,
+        finalStep: null,
+        causeCode: null,
+        safetyAckAt: null,
+        note: null,
+      },
+      { transaction },
+    );
+    return { companyId: cedar.id, rigId, causeCode: null, openedAt: at };
+  });
+  return id;
+}
 
 describe("rollup upkeep", () => {
   it("leaves the same rows as a full rebuild, closing cases in a shuffled order (late closes join chains)", async () => {
@@ -105,6 +108,22 @@ describe("rollup upkeep", () => {
     const [chains] = await sequelize.query("SELECT COUNT(DISTINCT rig_id, cause_code, repeat_chain_at) AS n FROM cases WHERE cause_code IS NOT NULL");
     // Enough chains to mean something: the gaps split each rig and cause more than once.
     expect(Number((chains as { n: number }[])[0].n)).toBeGreaterThan(6);
+  });
+
+  it("stays right when several crews close at the same moment", async () => {
+    const rig = (await Rig.findOne({ where: { companyId: cedar.id }, order: [["code", "ASC"]] }))!;
+    const version = (await Case.findOne({ where: { companyId: cedar.id } }))!.guideVersionId;
+    const at = (k: number) => new Date(start + 40 * DAY + k * 3_600_000);
+    const ids = await Promise.all([0, 1, 2, 3, 4, 5].map((k) => openAt(at(k), rig.id, crew[k % crew.length].id, version)));
+    const results = await Promise.allSettled(
+      ids.map((id, k) =>
+        closeCase(crew[k % crew.length], id, { outcome: "fixed", finalStep: "fixed-air-leak", at: new Date(at(k).getTime() + 1_200_000).toISOString() }),
+      ),
+    );
+    expect(results.map((r) => r.status)).toEqual(Array(6).fill("fulfilled"));
+    const kept = await snapshot();
+    await rebuildRollups();
+    expect(await snapshot()).toEqual(kept);
   });
 });
 
