@@ -2,6 +2,7 @@ import { type RouteConfig, index, layout, route } from "@react-router/dev/routes
 
 export default [
   route("login", "routes/login.tsx"),
+  route("join/:token", "routes/join.$token.tsx"),
   route("logout", "routes/logout.tsx"),
   route("healthz", "routes/healthz.ts"),
   route("api/guides/search", "routes/api.guides.search.ts"),
@@ -29,6 +30,7 @@ export default [
     route("cases/:id", "routes/cases.$id.tsx"),
     route("cases/:id/walk", "routes/cases.$id.walk.tsx"),
     route("admin/outbox", "routes/admin.outbox.tsx"),
+    route("admin/people", "routes/admin.people.tsx"),
     route("desk", "routes/desk.tsx", [
       index("routes/desk._index.tsx"),
       route(":guideId", "routes/desk.$guideId.tsx"),

@@ -34,6 +34,22 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare failedLogins: CreationOptional<number>;
   declare firstFailedAt: Date | null;
   declare lockedUntil: Date | null;
+  /** Set when an admin turns the person's sign-in off. */
+  declare accessRemovedAt: CreationOptional<Date | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+export class Invite extends Model<InferAttributes<Invite>, InferCreationAttributes<Invite>> {
+  declare id: CreationOptional<number>;
+  declare companyId: ForeignKey<Company["id"]>;
+  declare email: string;
+  declare name: string;
+  declare role: Role;
+  declare tokenHash: string;
+  declare invitedBy: number | null;
+  declare expiresAt: Date;
+  declare acceptedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -168,9 +184,24 @@ export function initModels(sequelize: Sequelize) {
       failedLogins: { type: DataTypes.INTEGER.UNSIGNED, defaultValue: 0 },
       firstFailedAt: DataTypes.DATE,
       lockedUntil: DataTypes.DATE,
+      accessRemovedAt: DataTypes.DATE,
       ...timestamps,
     },
     { sequelize, tableName: "users" },
+  );
+  Invite.init(
+    {
+      id,
+      email: DataTypes.STRING(254),
+      name: DataTypes.STRING(120),
+      role: DataTypes.ENUM(...ROLES),
+      tokenHash: DataTypes.CHAR(64),
+      invitedBy: DataTypes.INTEGER.UNSIGNED,
+      expiresAt: DataTypes.DATE,
+      acceptedAt: DataTypes.DATE,
+      ...timestamps,
+    },
+    { sequelize, tableName: "invites" },
   );
   Rig.init(
     {
@@ -276,6 +307,7 @@ export function initModels(sequelize: Sequelize) {
   User.belongsTo(Company, { foreignKey: "companyId" });
   Company.hasMany(Rig, { foreignKey: "companyId" });
   Rig.belongsTo(Company, { foreignKey: "companyId" });
+  Invite.belongsTo(Company, { foreignKey: "companyId" });
   GuideRecord.hasMany(GuideVersion, { foreignKey: "guideId", as: "versions" });
   GuideVersion.belongsTo(GuideRecord, { foreignKey: "guideId", as: "guide" });
   Case.belongsTo(Rig, { foreignKey: "rigId", as: "rig" });

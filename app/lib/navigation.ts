@@ -15,6 +15,7 @@ export const NAV_ITEMS: NavItem[] = [
   { to: "/board", label: "Fault board", minRole: "supervisor" },
   { to: "/cases", label: "Cases", minRole: "supervisor" },
   { to: "/rigs/new", label: "Add a rig", minRole: "admin" },
+  { to: "/admin/people", label: "People", minRole: "admin" },
   { to: "/admin/outbox", label: "Outbox", minRole: "admin" },
 ];
 

@@ -1,6 +1,6 @@
 import { PageTitle } from "~/components/ui/page-title";
 import { formatDateTime } from "~/lib/format";
-import { User } from "~/services/db.server";
+import { Invite, User } from "~/services/db.server";
 import { notFound, requireRole } from "~/services/guards.server";
 import { readOutbox } from "~/services/outbox.server";
 import type { Route } from "./+types/admin.outbox";
@@ -9,8 +9,12 @@ export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireRole(request, "admin");
   const messages = await readOutbox();
   if (!messages) notFound("The local outbox (the app is sending through a real mail provider)");
-  // The fake server holds every company's mail; an admin sees only mail to their own people.
-  const people = new Set((await User.findAll({ where: { companyId: user.companyId }, attributes: ["email"] })).map((u) => u.email));
+  // The fake server holds every company's mail; an admin sees only mail to their own people and invitees.
+  const [users, invites] = await Promise.all([
+    User.findAll({ where: { companyId: user.companyId }, attributes: ["email"] }),
+    Invite.findAll({ where: { companyId: user.companyId }, attributes: ["email"] }),
+  ]);
+  const people = new Set([...users, ...invites].map((u) => u.email));
   return { messages: messages.filter((m) => m.to.some((t) => people.has(t))) };
 }
 

@@ -52,6 +52,8 @@ async function verify(form: FormData): Promise<number> {
     if (user) await recordFailure(user, now);
     throw new SignInError(WRONG, 401);
   }
+  // Said only after the right password, so it does not tell strangers who has an account.
+  if (user.accessRemovedAt) throw new SignInError("Your company's admin has turned this sign-in off. Ask them if you need it back.", 403);
   if (user.failedLogins > 0 || user.lockedUntil) {
     await user.update({ failedLogins: 0, firstFailedAt: null, lockedUntil: null });
   }

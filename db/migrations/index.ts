@@ -7,6 +7,7 @@ import * as m005 from "./005-board";
 import * as m006 from "./006-board-people-index";
 import * as m007 from "./007-board-wide-index";
 import * as m008 from "./008-board-rollups";
+import * as m009 from "./009-people";
 
 export interface Migration {
   name: string;
@@ -24,4 +25,5 @@ export const migrations: Migration[] = [
   { name: "006-board-people-index", ...m006 },
   { name: "007-board-wide-index", ...m007 },
   { name: "008-board-rollups", ...m008 },
+  { name: "009-people", ...m009 },
 ];

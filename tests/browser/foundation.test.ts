@@ -17,7 +17,7 @@ describe("sign-in and navigation at 360 px", () => {
     ["dana@cedarflats.example", "Crew", ["Start a fix", "Rigs", "Field math"]],
     ["ravi@cedarflats.example", "Trainer", ["Start a fix", "Rigs", "Field math", "Guide desk"]],
     ["mo@cedarflats.example", "Supervisor", ["Start a fix", "Rigs", "Field math", "Guide desk", "Fault board", "Cases"]],
-    ["june@cedarflats.example", "Admin", ["Start a fix", "Rigs", "Field math", "Guide desk", "Fault board", "Cases", "Add a rig", "Outbox"]],
+    ["june@cedarflats.example", "Admin", ["Start a fix", "Rigs", "Field math", "Guide desk", "Fault board", "Cases", "Add a rig", "People", "Outbox"]],
   ])("%s sees the %s navigation and their company", async (email, role, expected) => {
     const p = await freshPage();
     await signIn(p, harness.app.url, email);

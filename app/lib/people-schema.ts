@@ -1,0 +1,45 @@
+import { z } from "zod";
+import { ROLES } from "./roles";
+
+/** At least 10 characters and nothing else demanded (NIST SP 800-63B: length over composition rules). */
+export const MIN_PASSWORD = 10;
+
+const role = z.enum(ROLES, { error: "Pick a role: crew, trainer, supervisor or admin." });
+const personId = z.coerce.number({ error: "personId must be a number" }).int().positive("personId must be a person's number");
+
+export const inviteSchema = z.object({
+  name: z.string({ error: "Enter the person's name." }).trim().min(1, "Enter the person's name.").max(120, "Keep the name under 120 characters."),
+  email: z
+    .string({ error: "Enter their e-mail." })
+    .trim()
+    .toLowerCase()
+    .min(1, "Enter their e-mail.")
+    .max(254, "That e-mail is too long.")
+    .email("Enter a whole e-mail address, like name@company.com."),
+  role,
+});
+
+/** What the people page can be asked to do with someone already there or invited. */
+export const personActionSchema = z.discriminatedUnion(
+  "intent",
+  [
+    z.object({ intent: z.literal("role"), personId, role }),
+    z.object({ intent: z.literal("remove-access"), personId }),
+    z.object({ intent: z.literal("restore-access"), personId }),
+    z.object({ intent: z.literal("cancel-invite"), inviteId: z.coerce.number({ error: "inviteId must be a number" }).int().positive() }),
+  ],
+  { error: "Say what to do: role, remove-access, restore-access or cancel-invite." },
+);
+
+export const joinSchema = z
+  .object({
+    password: z
+      .string({ error: "Choose a password." })
+      .min(MIN_PASSWORD, `Use at least ${MIN_PASSWORD} characters; a few words strung together make a good one.`)
+      .max(200, "That password is too long."),
+    confirm: z.string({ error: "Type the password again." }),
+  })
+  .refine((v) => v.password === v.confirm, { path: ["confirm"], message: "The two passwords are not the same." });
+
+export type InviteInput = z.infer<typeof inviteSchema>;
+export type PersonAction = z.infer<typeof personActionSchema>;

@@ -1,0 +1,172 @@
+import { getFormProps, getInputProps, getSelectProps, useForm } from "@conform-to/react";
+import { parseWithZod } from "@conform-to/zod/v4";
+import { data, Form, useNavigation } from "react-router";
+import { FormField, inputClass } from "~/components/form-field";
+import { PageTitle } from "~/components/ui/page-title";
+import { toFieldErrors } from "~/lib/form-errors";
+import { formatDateTime } from "~/lib/format";
+import { inviteSchema, personActionSchema } from "~/lib/people-schema";
+import { ROLE_LABELS, ROLES } from "~/lib/roles";
+import { requireRole } from "~/services/guards.server";
+import { actOnPerson, invitePerson, listPeople } from "~/services/people.server";
+import type { Route } from "./+types/admin.people";
+
+export async function loader({ request }: Route.LoaderArgs) {
+  const user = await requireRole(request, "admin");
+  const { people, invites } = await listPeople(user);
+  return {
+    people: people.map((p) => ({ ...p, accessRemovedAt: p.accessRemovedAt?.toISOString() ?? null, createdAt: p.createdAt.toISOString() })),
+    invites: invites.map((i) => ({ ...i, expiresAt: i.expiresAt.toISOString(), createdAt: i.createdAt.toISOString() })),
+  };
+}
+
+export async function action({ request }: Route.ActionArgs) {
+  const user = await requireRole(request, "admin");
+  const form = await request.formData();
+  if (form.get("intent") === "invite") {
+    const submission = parseWithZod(form, { schema: inviteSchema });
+    if (submission.status !== "success") return data({ invite: submission.reply(), message: null }, { status: 400 });
+    const sent = await invitePerson(user, submission.value);
+    if (!sent.ok) return data({ invite: submission.reply({ fieldErrors: toFieldErrors(sent.fieldErrors) }), message: null }, { status: 400 });
+    return { invite: submission.reply({ resetForm: true }), message: `Invitation sent to ${sent.email}. The link works once, for a week.` };
+  }
+  const parsed = personActionSchema.safeParse(Object.fromEntries(form));
+  if (!parsed.success) return data({ invite: null, message: `Nothing changed: ${parsed.error.issues.map((i) => i.message).join(" ")}` }, { status: 400 });
+  return { invite: null, message: await actOnPerson(user, parsed.data) };
+}
+
+const ROLE_HINTS: Record<(typeof ROLES)[number], string> = {
+  crew: "starts fixes, walks guides, field math",
+  trainer: "crew, plus writes guides on the desk",
+  supervisor: "trainer, plus fault board, cases, publishing",
+  admin: "supervisor, plus people and rigs",
+};
+
+const buttonClass = "min-h-12 rounded-md border-2 border-ink bg-paper px-4 font-bold";
+
+export default function People({ loaderData, actionData }: Route.ComponentProps) {
+  const busy = useNavigation().state !== "idle";
+  const [form, fields] = useForm({
+    lastResult: actionData?.invite,
+    defaultValue: { role: "crew" },
+    onValidate: ({ formData }) => parseWithZod(formData, { schema: inviteSchema }),
+    shouldValidate: "onSubmit",
+    shouldRevalidate: "onInput",
+  });
+  const { people, invites } = loaderData;
+
+  return (
+    <>
+      <PageTitle lead="Invite people by e-mail, set what each may do, and turn a sign-in off when someone leaves. Their cases stay either way.">
+        People
+      </PageTitle>
+      {actionData?.message ? (
+        <p role="status" className="mb-4 rounded-md border-2 border-ink bg-paper p-3 font-bold">
+          {actionData.message}
+        </p>
+      ) : null}
+
+      <section aria-labelledby="invite-h" className="rounded-lg border-2 border-ink bg-paper p-4">
+        <h2 id="invite-h" className="text-2xl font-bold">
+          Invite someone
+        </h2>
+        <Form method="post" {...getFormProps(form)} className="mt-3 space-y-4">
+          <input type="hidden" name="intent" value="invite" />
+          <FormField field={fields.name} label="Name">
+            <input {...getInputProps(fields.name, { type: "text" })} className={inputClass} autoComplete="off" />
+          </FormField>
+          <FormField field={fields.email} label="E-mail" hint="They get a link to choose their own password.">
+            <input {...getInputProps(fields.email, { type: "email" })} className={inputClass} autoComplete="off" />
+          </FormField>
+          <FormField field={fields.role} label="Role">
+            <select {...getSelectProps(fields.role)} className={inputClass}>
+              {ROLES.map((r) => (
+                <option key={r} value={r}>
+                  {ROLE_LABELS[r]} — {ROLE_HINTS[r]}
+                </option>
+              ))}
+            </select>
+          </FormField>
+          <button type="submit" disabled={busy} className="min-h-14 w-full rounded-md bg-go text-lg font-bold text-white sm:w-auto sm:px-6">
+            Send invitation
+          </button>
+        </Form>
+      </section>
+
+      <section aria-labelledby="people-h" className="mt-6">
+        <h2 id="people-h" className="text-2xl font-bold">
+          Your people
+        </h2>
+        <ul className="mt-2 space-y-3">
+          {people.map((p) => (
+            <li key={p.id} className={`rounded-lg border-2 bg-paper p-4 ${p.accessRemovedAt ? "border-dashed border-rule" : "border-ink"}`}>
+              <p className="text-lg font-bold">
+                {p.name}
+                {p.you ? " (you)" : ""}
+              </p>
+              <p className="break-all">{p.email}</p>
+              <p>
+                {ROLE_LABELS[p.role]}
+                {p.accessRemovedAt ? ` · sign-in off since ${formatDateTime(p.accessRemovedAt)} UTC` : ""}
+              </p>
+              {p.you ? (
+                <p className="mt-2 text-sm">Another admin can change your role or sign-in.</p>
+              ) : (
+                <div className="mt-3 flex flex-wrap items-end gap-3">
+                  <Form method="post" className="flex flex-wrap items-end gap-2">
+                    <input type="hidden" name="personId" value={p.id} />
+                    <label className="block">
+                      <span className="block font-bold">Role</span>
+                      <select name="role" defaultValue={p.role} className="mt-1 min-h-12 rounded-md border-2 border-ink bg-paper px-2">
+                        {ROLES.map((r) => (
+                          <option key={r} value={r}>
+                            {ROLE_LABELS[r]}
+                          </option>
+                        ))}
+                      </select>
+                    </label>
+                    <button name="intent" value="role" disabled={busy} className={buttonClass}>
+                      Save role
+                    </button>
+                  </Form>
+                  <Form method="post">
+                    <input type="hidden" name="personId" value={p.id} />
+                    <button name="intent" value={p.accessRemovedAt ? "restore-access" : "remove-access"} disabled={busy} className={buttonClass}>
+                      {p.accessRemovedAt ? "Turn sign-in back on" : "Turn sign-in off"}
+                    </button>
+                  </Form>
+                </div>
+              )}
+            </li>
+          ))}
+        </ul>
+      </section>
+
+      <section aria-labelledby="invites-h" className="mt-6">
+        <h2 id="invites-h" className="text-2xl font-bold">
+          Invitations not yet used
+        </h2>
+        {invites.length === 0 ? <p className="mt-2">None.</p> : null}
+        <ul className="mt-2 space-y-3">
+          {invites.map((i) => (
+            <li key={i.id} className="rounded-lg border-2 border-ink bg-paper p-4">
+              <p className="text-lg font-bold">{i.name}</p>
+              <p className="break-all">{i.email}</p>
+              <p>
+                {ROLE_LABELS[i.role]} · {i.expired ? "expired — invite them again for a new link" : `link works until ${formatDateTime(i.expiresAt)} UTC`}
+              </p>
+              <Form method="post" className="mt-3">
+                <input type="hidden" name="inviteId" value={i.id} />
+                <button name="intent" value="cancel-invite" disabled={busy} className={buttonClass}>
+                  Cancel invitation
+                </button>
+              </Form>
+            </li>
+          ))}
+        </ul>
+      </section>
+    </>
+  );
+}
+
+export const meta: Route.MetaFunction = () => [{ title: "People · Tankside" }];

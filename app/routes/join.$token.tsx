@@ -1,0 +1,80 @@
+import { getFormProps, getInputProps, useForm } from "@conform-to/react";
+import { parseWithZod } from "@conform-to/zod/v4";
+import { data, Form, Link, redirect, useNavigation } from "react-router";
+import { FormField, inputClass } from "~/components/form-field";
+import { joinSchema, MIN_PASSWORD } from "~/lib/people-schema";
+import { ROLE_LABELS } from "~/lib/roles";
+import { acceptInvite, checkInvite } from "~/services/people.server";
+import { getSession, sessionStorage } from "~/services/session.server";
+import type { Route } from "./+types/join.$token";
+
+/** Where an invitation link lands: choose a password once, then straight in. */
+export async function loader({ params }: Route.LoaderArgs) {
+  const check = await checkInvite(params.token);
+  if (!check.ok) return data({ invite: null, message: check.message }, { status: 410 });
+  const { name, email, role } = check.invite;
+  return { invite: { name, email, role, company: check.company }, message: null };
+}
+
+export async function action({ request, params }: Route.ActionArgs) {
+  const submission = parseWithZod(await request.formData(), { schema: joinSchema });
+  if (submission.status !== "success") return data({ result: submission.reply({ hideFields: ["password", "confirm"] }), message: null }, { status: 400 });
+  const joined = await acceptInvite(params.token, submission.value.password);
+  if (!joined.ok) return data({ result: null, message: joined.message }, { status: 410 });
+  const session = await getSession(request);
+  session.set("userId", joined.userId);
+  return redirect("/", { headers: { "Set-Cookie": await sessionStorage.commitSession(session) } });
+}
+
+export default function Join({ loaderData, actionData }: Route.ComponentProps) {
+  const busy = useNavigation().state !== "idle";
+  const [form, fields] = useForm({
+    lastResult: actionData?.result,
+    onValidate: ({ formData }) => parseWithZod(formData, { schema: joinSchema }),
+    shouldValidate: "onSubmit",
+    shouldRevalidate: "onInput",
+  });
+  const invite = loaderData.invite;
+  const message = actionData?.message ?? loaderData.message;
+  return (
+    <main className="mx-auto max-w-md px-4 py-8">
+      <h1 className="text-3xl font-bold">Tankside</h1>
+      {message ? (
+        <p role="alert" className="mt-4 rounded-md border-2 border-stop bg-paper p-3 font-bold text-stop">
+          {message}
+        </p>
+      ) : null}
+      {invite && !actionData?.message ? (
+        <>
+          <p className="mt-1 text-lg">
+            Welcome, {invite.name}. {invite.company} has added you as {ROLE_LABELS[invite.role].toLowerCase()}; choose a password to sign in with{" "}
+            <span className="break-all">{invite.email}</span>.
+          </p>
+          <Form method="post" {...getFormProps(form)} className="mt-6 space-y-4 rounded-lg border-2 border-ink bg-paper p-5">
+            <FormField
+              field={fields.password}
+              label="Password"
+              hint={`At least ${MIN_PASSWORD} characters. A few words strung together are easy to type with gloves off.`}
+            >
+              <input {...getInputProps(fields.password, { type: "password" })} autoComplete="new-password" className={inputClass} />
+            </FormField>
+            <FormField field={fields.confirm} label="The same password again">
+              <input {...getInputProps(fields.confirm, { type: "password" })} autoComplete="new-password" className={inputClass} />
+            </FormField>
+            <button type="submit" disabled={busy} className="min-h-14 w-full rounded-md bg-go text-lg font-bold text-white">
+              {busy ? "Setting up…" : "Choose password and sign in"}
+            </button>
+          </Form>
+        </>
+      ) : (
+        <p className="mt-4">
+          <Link to="/login" className="font-bold underline">
+            Go to sign-in
+          </Link>
+        </p>
+      )}
+    </main>
+  );
+}
+
+export const meta: Route.MetaFunction = () => [{ title: "Join · Tankside" }, { name: "referrer", content: "no-referrer" }];
