@@ -136,6 +136,16 @@ const latestCases = (list: unknown) =>
       return { caseId, openedAt: new Date(at.replace(/(\.\d{3})\d*Z$/, "$1Z")).toISOString() };
     });
 
+/** One chain as both chain queries answer it: rig, cause, count, first and last opening, latest cases. */
+const chainRow = (c: Record<string, unknown>): ChainRow => ({
+  rigId: n(c.rig_id),
+  cause: String(c.cause_code),
+  count: n(c.n),
+  firstAt: iso(c.first_at),
+  lastAt: iso(c.last_at),
+  latest: latestCases(c.latest),
+});
+
 /**
  * Repeat chains for the default window, from the chain rollups. Periods never overlap, so
  * the latest three cases are among the newest three periods' own latest three.
@@ -148,14 +158,7 @@ async function storedChains(params: Params, rigFilter: string): Promise<ChainRow
      GROUP BY b.rig_id, b.cause_code, b.chain_at HAVING SUM(b.cases) > 1`,
     { replacements: params, type: QueryTypes.SELECT },
   );
-  return chains.map((c) => ({
-    rigId: n(c.rig_id),
-    cause: String(c.cause_code),
-    count: n(c.n),
-    firstAt: iso(c.first_at),
-    lastAt: iso(c.last_at),
-    latest: latestCases(c.latest),
-  }));
+  return chains.map(chainRow);
 }
 
 /**
@@ -179,12 +182,5 @@ async function liveChains(params: Params, rigFilter: string): Promise<ChainRow[]
      GROUP BY rig_id, cause_code, chain HAVING COUNT(*) > 1`,
     { replacements: params, type: QueryTypes.SELECT },
   );
-  return rows.map((c) => ({
-    rigId: n(c.rig_id),
-    cause: String(c.cause_code),
-    count: n(c.n),
-    firstAt: iso(c.first_at),
-    lastAt: iso(c.last_at),
-    latest: latestCases(c.latest),
-  }));
+  return rows.map(chainRow);
 }
