@@ -3,6 +3,8 @@ import { type RouteConfig, index, layout, route } from "@react-router/dev/routes
 export default [
   route("login", "routes/login.tsx"),
   route("join/:token", "routes/join.$token.tsx"),
+  route("forgot", "routes/forgot.tsx"),
+  route("reset/:token", "routes/reset.$token.tsx"),
   route("logout", "routes/logout.tsx"),
   route("healthz", "routes/healthz.ts"),
   route("api/guides/search", "routes/api.guides.search.ts"),

@@ -40,6 +40,16 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare updatedAt: CreationOptional<Date>;
 }
 
+export class PasswordReset extends Model<InferAttributes<PasswordReset>, InferCreationAttributes<PasswordReset>> {
+  declare id: CreationOptional<number>;
+  declare userId: ForeignKey<User["id"]>;
+  declare tokenHash: string;
+  declare expiresAt: Date;
+  declare usedAt: CreationOptional<Date | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
 export class Invite extends Model<InferAttributes<Invite>, InferCreationAttributes<Invite>> {
   declare id: CreationOptional<number>;
   declare companyId: ForeignKey<Company["id"]>;
@@ -189,6 +199,10 @@ export function initModels(sequelize: Sequelize) {
     },
     { sequelize, tableName: "users" },
   );
+  PasswordReset.init(
+    { id, tokenHash: DataTypes.CHAR(64), expiresAt: DataTypes.DATE, usedAt: DataTypes.DATE, ...timestamps },
+    { sequelize, tableName: "password_resets" },
+  );
   Invite.init(
     {
       id,
@@ -308,6 +322,7 @@ export function initModels(sequelize: Sequelize) {
   Company.hasMany(Rig, { foreignKey: "companyId" });
   Rig.belongsTo(Company, { foreignKey: "companyId" });
   Invite.belongsTo(Company, { foreignKey: "companyId" });
+  PasswordReset.belongsTo(User, { foreignKey: "userId" });
   GuideRecord.hasMany(GuideVersion, { foreignKey: "guideId", as: "versions" });
   GuideVersion.belongsTo(GuideRecord, { foreignKey: "guideId", as: "guide" });
   Case.belongsTo(Rig, { foreignKey: "rigId", as: "rig" });

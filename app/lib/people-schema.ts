@@ -31,7 +31,7 @@ export const personActionSchema = z.discriminatedUnion(
   { error: "Say what to do: role, remove-access, restore-access or cancel-invite." },
 );
 
-export const joinSchema = z
+export const choosePasswordSchema = z
   .object({
     password: z
       .string({ error: "Choose a password." })

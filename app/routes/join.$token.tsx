@@ -1,8 +1,7 @@
-import { getFormProps, getInputProps, useForm } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
-import { data, Form, Link, redirect, useNavigation } from "react-router";
-import { FormField, inputClass } from "~/components/form-field";
-import { joinSchema, MIN_PASSWORD } from "~/lib/people-schema";
+import { data, Link, redirect } from "react-router";
+import { ChoosePasswordForm } from "~/components/choose-password-form";
+import { choosePasswordSchema } from "~/lib/people-schema";
 import { ROLE_LABELS } from "~/lib/roles";
 import { acceptInvite, checkInvite } from "~/services/people.server";
 import { getSession, sessionStorage } from "~/services/session.server";
@@ -17,7 +16,7 @@ export async function loader({ params }: Route.LoaderArgs) {
 }
 
 export async function action({ request, params }: Route.ActionArgs) {
-  const submission = parseWithZod(await request.formData(), { schema: joinSchema });
+  const submission = parseWithZod(await request.formData(), { schema: choosePasswordSchema });
   if (submission.status !== "success") return data({ result: submission.reply({ hideFields: ["password", "confirm"] }), message: null }, { status: 400 });
   const joined = await acceptInvite(params.token, submission.value.password);
   if (!joined.ok) return data({ result: null, message: joined.message }, { status: 410 });
@@ -27,13 +26,6 @@ export async function action({ request, params }: Route.ActionArgs) {
 }
 
 export default function Join({ loaderData, actionData }: Route.ComponentProps) {
-  const busy = useNavigation().state !== "idle";
-  const [form, fields] = useForm({
-    lastResult: actionData?.result,
-    onValidate: ({ formData }) => parseWithZod(formData, { schema: joinSchema }),
-    shouldValidate: "onSubmit",
-    shouldRevalidate: "onInput",
-  });
   const invite = loaderData.invite;
   const message = actionData?.message ?? loaderData.message;
   return (
@@ -50,21 +42,7 @@ export default function Join({ loaderData, actionData }: Route.ComponentProps) {
             Welcome, {invite.name}. {invite.company} has added you as {ROLE_LABELS[invite.role].toLowerCase()}; choose a password to sign in with{" "}
             <span className="break-all">{invite.email}</span>.
           </p>
-          <Form method="post" {...getFormProps(form)} className="mt-6 space-y-4 rounded-lg border-2 border-ink bg-paper p-5">
-            <FormField
-              field={fields.password}
-              label="Password"
-              hint={`At least ${MIN_PASSWORD} characters. A few words strung together are easy to type with gloves off.`}
-            >
-              <input {...getInputProps(fields.password, { type: "password" })} autoComplete="new-password" className={inputClass} />
-            </FormField>
-            <FormField field={fields.confirm} label="The same password again">
-              <input {...getInputProps(fields.confirm, { type: "password" })} autoComplete="new-password" className={inputClass} />
-            </FormField>
-            <button type="submit" disabled={busy} className="min-h-14 w-full rounded-md bg-go text-lg font-bold text-white">
-              {busy ? "Setting up…" : "Choose password and sign in"}
-            </button>
-          </Form>
+          <ChoosePasswordForm lastResult={actionData?.result} submitLabel="Choose password and sign in" />
         </>
       ) : (
         <p className="mt-4">

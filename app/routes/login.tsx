@@ -1,4 +1,4 @@
-import { data, Form, redirect, useNavigation } from "react-router";
+import { data, Form, Link, redirect, useNavigation } from "react-router";
 import { DEMO_PASSWORD, DEMO_PEOPLE } from "../../seeds/demo-people";
 import { authenticator, SignInError } from "~/services/auth.server";
 import { env } from "~/services/env.server";
@@ -94,6 +94,11 @@ export default function Login({ loaderData, actionData }: Route.ComponentProps) 
         <button type="submit" disabled={busy} className="min-h-14 w-full rounded-md bg-go text-lg font-bold text-white">
           {busy ? "Signing in…" : "Sign in"}
         </button>
+        <p>
+          <Link to="/forgot" className="font-bold underline">
+            Forgot your password?
+          </Link>
+        </p>
       </Form>
       {loaderData.demo ? (
         <section aria-labelledby="demo-heading" className="mt-6 rounded-lg border-2 border-dashed border-rule bg-paper p-4">

@@ -43,7 +43,7 @@ async function verify(form: FormData): Promise<number> {
   if (user?.lockedUntil && user.lockedUntil.getTime() > now) {
     const minutes = Math.ceil((user.lockedUntil.getTime() - now) / 60_000);
     throw new SignInError(
-      `This account is locked for ${minutes} more minute${minutes === 1 ? "" : "s"} after too many failed sign-ins. Ask your admin if you need in sooner.`,
+      `This account is locked for ${minutes} more minute${minutes === 1 ? "" : "s"} after too many failed sign-ins. Choosing a new password (“Forgot your password?”) opens it at once.`,
       423,
     );
   }

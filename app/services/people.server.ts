@@ -1,4 +1,3 @@
-import { createHash, randomBytes } from "node:crypto";
 import { Op, UniqueConstraintError } from "sequelize";
 import { inviteMail } from "~/lib/invite-mail";
 import { hashPassword } from "~/lib/password";
@@ -7,9 +6,9 @@ import { Company, Invite, sequelize, User } from "./db.server";
 import { env } from "./env.server";
 import { fail, notFound, type SessionUser } from "./guards.server";
 import { sendMail } from "./mail.server";
+import { hashToken, newToken } from "./tokens.server";
 
 export const INVITE_DAYS = 7;
-const hashToken = (token: string) => createHash("sha256").update(token).digest("hex");
 
 /** The company's people (removed ones last) and the invitations not yet used. */
 export async function listPeople(user: SessionUser) {
@@ -46,12 +45,12 @@ export async function invitePerson(user: SessionUser, input: InviteInput): Promi
   if (await User.findOne({ where: { email: input.email }, attributes: ["id"] })) {
     return { ok: false, fieldErrors: { email: "This e-mail already signs in to Tankside. Each person needs their own address." } };
   }
-  const token = randomBytes(32).toString("base64url");
+  const { token, hash } = newToken();
   const expiresAt = new Date(Date.now() + INVITE_DAYS * 86_400_000);
   await sequelize.transaction(async (transaction) => {
     await Invite.destroy({ where: { companyId: user.companyId, email: input.email, acceptedAt: null }, transaction });
     await Invite.create(
-      { companyId: user.companyId, email: input.email, name: input.name, role: input.role, tokenHash: hashToken(token), invitedBy: user.id, expiresAt },
+      { companyId: user.companyId, email: input.email, name: input.name, role: input.role, tokenHash: hash, invitedBy: user.id, expiresAt },
       { transaction },
     );
   });

@@ -8,6 +8,7 @@ import * as m006 from "./006-board-people-index";
 import * as m007 from "./007-board-wide-index";
 import * as m008 from "./008-board-rollups";
 import * as m009 from "./009-people";
+import * as m010 from "./010-password-resets";
 
 export interface Migration {
   name: string;
@@ -26,4 +27,5 @@ export const migrations: Migration[] = [
   { name: "007-board-wide-index", ...m007 },
   { name: "008-board-rollups", ...m008 },
   { name: "009-people", ...m009 },
+  { name: "010-password-resets", ...m010 },
 ];

@@ -1,0 +1,33 @@
+import { getFormProps, getInputProps, useForm, type SubmissionResult } from "@conform-to/react";
+import { parseWithZod } from "@conform-to/zod/v4";
+import { Form, useNavigation } from "react-router";
+import { choosePasswordSchema, MIN_PASSWORD } from "~/lib/people-schema";
+import { FormField, inputClass } from "./form-field";
+
+/** A new password typed twice, checked by the same schema here and on the server (joining and resetting). */
+export function ChoosePasswordForm({ lastResult, submitLabel }: { lastResult?: SubmissionResult<string[]> | null; submitLabel: string }) {
+  const busy = useNavigation().state !== "idle";
+  const [form, fields] = useForm({
+    lastResult,
+    onValidate: ({ formData }) => parseWithZod(formData, { schema: choosePasswordSchema }),
+    shouldValidate: "onSubmit",
+    shouldRevalidate: "onInput",
+  });
+  return (
+    <Form method="post" {...getFormProps(form)} className="mt-6 space-y-4 rounded-lg border-2 border-ink bg-paper p-5">
+      <FormField
+        field={fields.password}
+        label="Password"
+        hint={`At least ${MIN_PASSWORD} characters. A few words strung together are easy to type with gloves off.`}
+      >
+        <input {...getInputProps(fields.password, { type: "password" })} autoComplete="new-password" className={inputClass} />
+      </FormField>
+      <FormField field={fields.confirm} label="The same password again">
+        <input {...getInputProps(fields.confirm, { type: "password" })} autoComplete="new-password" className={inputClass} />
+      </FormField>
+      <button type="submit" disabled={busy} className="min-h-14 w-full rounded-md bg-go text-lg font-bold text-white">
+        {busy ? "Saving…" : submitLabel}
+      </button>
+    </Form>
+  );
+}

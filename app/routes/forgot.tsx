@@ -1,0 +1,72 @@
+import { data, Form, Link, useNavigation } from "react-router";
+import { z } from "zod";
+import { RESET_MINUTES } from "~/lib/reset-mail";
+import { requestReset } from "~/services/password-reset.server";
+import type { Route } from "./+types/forgot";
+
+const emailSchema = z.object({
+  email: z
+    .string()
+    .trim()
+    .toLowerCase()
+    .min(1, "Enter your e-mail.")
+    .max(254, "That e-mail is too long.")
+    .email("Enter a whole e-mail address, like name@company.com."),
+});
+
+export async function action({ request }: Route.ActionArgs) {
+  const form = await request.formData();
+  const parsed = emailSchema.safeParse({ email: form.get("email") ?? "" });
+  if (!parsed.success) return data({ error: parsed.error.issues[0].message, sent: false }, { status: 400 });
+  await requestReset(parsed.data.email);
+  // The same answer whether or not the address has a sign-in.
+  return { error: null, sent: true };
+}
+
+export default function Forgot({ actionData }: Route.ComponentProps) {
+  const busy = useNavigation().state !== "idle";
+  return (
+    <main className="mx-auto max-w-md px-4 py-8">
+      <h1 className="text-3xl font-bold">Forgot your password?</h1>
+      {actionData?.sent ? (
+        <p role="status" className="mt-4 rounded-md border-2 border-ink bg-paper p-3 text-lg">
+          If that address signs in to Tankside, a link to choose a new password is on its way. It works once, for {RESET_MINUTES} minutes. No mail? Ask your
+          company's admin.
+        </p>
+      ) : (
+        <Form method="post" className="mt-6 space-y-4 rounded-lg border-2 border-ink bg-paper p-5" noValidate>
+          <p>Enter the e-mail you sign in with; we send a link to choose a new one.</p>
+          <div>
+            <label htmlFor="email" className="block font-bold">
+              E-mail
+            </label>
+            <input
+              id="email"
+              name="email"
+              type="email"
+              autoComplete="username"
+              aria-invalid={actionData?.error ? true : undefined}
+              aria-describedby={actionData?.error ? "email-error" : undefined}
+              className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink px-3 text-lg"
+            />
+            {actionData?.error ? (
+              <p id="email-error" className="mt-1 font-bold text-stop">
+                {actionData.error}
+              </p>
+            ) : null}
+          </div>
+          <button type="submit" disabled={busy} className="min-h-14 w-full rounded-md bg-go text-lg font-bold text-white">
+            Send me a link
+          </button>
+        </Form>
+      )}
+      <p className="mt-4">
+        <Link to="/login" className="font-bold underline">
+          Back to sign-in
+        </Link>
+      </p>
+    </main>
+  );
+}
+
+export const meta: Route.MetaFunction = () => [{ title: "Forgot your password · Tankside" }];
