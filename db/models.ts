@@ -36,6 +36,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare lockedUntil: Date | null;
   /** Set when an admin turns the person's sign-in off. */
   declare accessRemovedAt: CreationOptional<Date | null>;
+  /** Moves on when the password changes or the sign-in is turned off: older session cookies stop working. */
+  declare sessionEpoch: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -195,6 +197,7 @@ export function initModels(sequelize: Sequelize) {
       firstFailedAt: DataTypes.DATE,
       lockedUntil: DataTypes.DATE,
       accessRemovedAt: DataTypes.DATE,
+      sessionEpoch: { type: DataTypes.INTEGER.UNSIGNED, defaultValue: 0 },
       ...timestamps,
     },
     { sequelize, tableName: "users" },

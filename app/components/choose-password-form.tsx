@@ -1,15 +1,24 @@
 import { getFormProps, getInputProps, useForm, type SubmissionResult } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
 import { Form, useNavigation } from "react-router";
-import { choosePasswordSchema, MIN_PASSWORD } from "~/lib/people-schema";
+import { changePasswordSchema, choosePasswordSchema, MIN_PASSWORD } from "~/lib/people-schema";
 import { FormField, inputClass } from "./form-field";
 
-/** A new password typed twice, checked by the same schema here and on the server (joining and resetting). */
-export function ChoosePasswordForm({ lastResult, submitLabel }: { lastResult?: SubmissionResult<string[]> | null; submitLabel: string }) {
+/** A new password typed twice, checked by the same schema here and on the server (joining, resetting, changing). */
+export function ChoosePasswordForm({
+  lastResult,
+  submitLabel,
+  askCurrent = false,
+}: {
+  lastResult?: SubmissionResult<string[]> | null;
+  submitLabel: string;
+  /** Signed in and changing it: the current password comes first. */
+  askCurrent?: boolean;
+}) {
   const busy = useNavigation().state !== "idle";
-  const [form, fields] = useForm({
+  const [form, fields] = useForm<{ current?: string; password: string; confirm: string }>({
     lastResult,
-    onValidate: ({ formData }) => parseWithZod(formData, { schema: choosePasswordSchema }),
+    onValidate: ({ formData }) => parseWithZod(formData, { schema: askCurrent ? changePasswordSchema : choosePasswordSchema }),
     shouldValidate: "onSubmit",
     shouldRevalidate: "onInput",
   });

@@ -31,15 +31,23 @@ export const personActionSchema = z.discriminatedUnion(
   { error: "Say what to do: role, remove-access, restore-access or cancel-invite." },
 );
 
-export const choosePasswordSchema = z
-  .object({
-    password: z
-      .string({ error: "Choose a password." })
-      .min(MIN_PASSWORD, `Use at least ${MIN_PASSWORD} characters; a few words strung together make a good one.`)
-      .max(200, "That password is too long."),
-    confirm: z.string({ error: "Type the password again." }),
-  })
-  .refine((v) => v.password === v.confirm, { path: ["confirm"], message: "The two passwords are not the same." });
+const newPassword = {
+  password: z
+    .string({ error: "Choose a password." })
+    .min(MIN_PASSWORD, `Use at least ${MIN_PASSWORD} characters; a few words strung together make a good one.`)
+    .max(200, "That password is too long."),
+  confirm: z.string({ error: "Type the password again." }),
+};
+const sameTwice = (v: { password: string; confirm: string }) => v.password === v.confirm;
+const notSame = { path: ["confirm"], message: "The two passwords are not the same." };
+
+/** A first password (joining) or a new one from an e-mailed link. */
+export const choosePasswordSchema = z.object(newPassword).refine(sameTwice, notSame);
+
+/** A new password while signed in: the current one first, so a borrowed phone cannot change it. */
+export const changePasswordSchema = z
+  .object({ current: z.string({ error: "Enter your current password." }).min(1, "Enter your current password."), ...newPassword })
+  .refine(sameTwice, notSame);
 
 export type InviteInput = z.infer<typeof inviteSchema>;
 export type PersonAction = z.infer<typeof personActionSchema>;

@@ -4,7 +4,7 @@ import { ChoosePasswordForm } from "~/components/choose-password-form";
 import { choosePasswordSchema } from "~/lib/people-schema";
 import { ROLE_LABELS } from "~/lib/roles";
 import { acceptInvite, checkInvite } from "~/services/people.server";
-import { getSession, sessionStorage } from "~/services/session.server";
+import { signInCookie } from "~/services/session.server";
 import type { Route } from "./+types/join.$token";
 
 /** Where an invitation link lands: choose a password once, then straight in. */
@@ -20,9 +20,7 @@ export async function action({ request, params }: Route.ActionArgs) {
   if (submission.status !== "success") return data({ result: submission.reply({ hideFields: ["password", "confirm"] }), message: null }, { status: 400 });
   const joined = await acceptInvite(params.token, submission.value.password);
   if (!joined.ok) return data({ result: null, message: joined.message }, { status: 410 });
-  const session = await getSession(request);
-  session.set("userId", joined.userId);
-  return redirect("/", { headers: { "Set-Cookie": await sessionStorage.commitSession(session) } });
+  return redirect("/", { headers: await signInCookie(request, joined.userId) });
 }
 
 export default function Join({ loaderData, actionData }: Route.ComponentProps) {

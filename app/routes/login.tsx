@@ -3,7 +3,7 @@ import { DEMO_PASSWORD, DEMO_PEOPLE } from "../../seeds/demo-people";
 import { authenticator, SignInError } from "~/services/auth.server";
 import { env } from "~/services/env.server";
 import { getUser } from "~/services/guards.server";
-import { getSession, sessionStorage } from "~/services/session.server";
+import { signInCookie } from "~/services/session.server";
 import type { Route } from "./+types/login";
 
 /** Only same-site paths: never send a person to another host after sign-in. */
@@ -25,11 +25,7 @@ export async function action({ request }: Route.ActionArgs) {
   const form = await request.clone().formData();
   try {
     const userId = await authenticator.authenticate("form", request);
-    const session = await getSession(request);
-    session.set("userId", userId);
-    return redirect(safeRedirect(form.get("redirectTo")), {
-      headers: { "Set-Cookie": await sessionStorage.commitSession(session) },
-    });
+    return redirect(safeRedirect(form.get("redirectTo")), { headers: await signInCookie(request, userId) });
   } catch (error) {
     if (error instanceof SignInError) {
       return data({ error: error.message, fields: error.fields, email: String(form.get("email") ?? "") }, { status: error.status });

@@ -3,7 +3,7 @@ import { data, Link, redirect } from "react-router";
 import { ChoosePasswordForm } from "~/components/choose-password-form";
 import { choosePasswordSchema } from "~/lib/people-schema";
 import { checkReset, completeReset } from "~/services/password-reset.server";
-import { getSession, sessionStorage } from "~/services/session.server";
+import { signInCookie } from "~/services/session.server";
 import type { Route } from "./+types/reset.$token";
 
 /** Where a "forgot your password" link lands: a new password once, then straight in. */
@@ -18,9 +18,7 @@ export async function action({ request, params }: Route.ActionArgs) {
   if (submission.status !== "success") return data({ result: submission.reply({ hideFields: ["password", "confirm"] }), message: null }, { status: 400 });
   const done = await completeReset(params.token, submission.value.password);
   if (!done.ok) return data({ result: null, message: done.message }, { status: 410 });
-  const session = await getSession(request);
-  session.set("userId", done.userId);
-  return redirect("/", { headers: { "Set-Cookie": await sessionStorage.commitSession(session) } });
+  return redirect("/", { headers: await signInCookie(request, done.userId) });
 }
 
 export default function Reset({ loaderData, actionData }: Route.ComponentProps) {

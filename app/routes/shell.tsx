@@ -1,4 +1,4 @@
-import { Form, NavLink, Outlet } from "react-router";
+import { Form, Link, NavLink, Outlet } from "react-router";
 import { ErrorPanel } from "~/root";
 import { navFor } from "~/lib/navigation";
 import { ROLE_LABELS } from "~/lib/roles";
@@ -22,7 +22,10 @@ export default function Shell({ loaderData }: Route.ComponentProps) {
             Tankside
           </a>
           <p className="truncate text-right text-sm leading-tight">
-            {user.name} · {ROLE_LABELS[user.role]}
+            <Link to="/account" className="font-bold text-white underline" aria-label={`Your account: ${user.name}`}>
+              {user.name}
+            </Link>{" "}
+            · {ROLE_LABELS[user.role]}
             <span className="sr-only"> at </span>
             <span className="block">{user.companyName}</span>
           </p>

@@ -19,11 +19,11 @@ export async function getUser(request: Request): Promise<SessionUser | null> {
   const userId = session.get("userId");
   if (!userId) return null;
   const user = await User.findByPk(userId, {
-    attributes: ["id", "name", "email", "role", "companyId", "accessRemovedAt"],
+    attributes: ["id", "name", "email", "role", "companyId", "accessRemovedAt", "sessionEpoch"],
     include: [{ model: Company, attributes: ["name"] }],
   });
-  // A sign-in turned off by an admin ends at once, on every device.
-  if (!user || user.accessRemovedAt) return null;
+  // A sign-in turned off by an admin ends at once, on every device; so does every session from before a new password.
+  if (!user || user.accessRemovedAt || (session.get("epoch") ?? 0) !== user.sessionEpoch) return null;
   const company = (user as User & { Company: Company }).Company;
   return { id: user.id, name: user.name, email: user.email, role: user.role, companyId: user.companyId, companyName: company.name };
 }

@@ -47,7 +47,8 @@ export async function completeReset(token: string, password: string): Promise<{ 
     });
     const user = reset ? await User.findByPk(reset.userId, { transaction }) : null;
     if (!reset || !user || user.accessRemovedAt) return { ok: false as const, message: UNUSABLE };
-    await user.update({ passwordHash, failedLogins: 0, firstFailedAt: null, lockedUntil: null }, { transaction });
+    // A new epoch: whoever else held a session (perhaps the reason for the reset) is signed out.
+    await user.update({ passwordHash, failedLogins: 0, firstFailedAt: null, lockedUntil: null, sessionEpoch: user.sessionEpoch + 1 }, { transaction });
     await PasswordReset.update({ usedAt: new Date() }, { where: { userId: user.id, usedAt: null }, transaction });
     return { ok: true as const, userId: user.id };
   });

@@ -83,7 +83,8 @@ export async function actOnPerson(user: SessionUser, action: PersonAction): Prom
     return `${person.name} is now ${action.role}.`;
   }
   const removed = action.intent === "remove-access";
-  await person.update({ accessRemovedAt: removed ? new Date() : null });
+  // Turning it back on does not revive old sessions: the person signs in afresh.
+  await person.update(removed ? { accessRemovedAt: new Date(), sessionEpoch: person.sessionEpoch + 1 } : { accessRemovedAt: null });
   return removed ? `${person.name} can no longer sign in; their cases stay as they are.` : `${person.name} can sign in again with their old password.`;
 }
 

@@ -9,6 +9,7 @@ import * as m007 from "./007-board-wide-index";
 import * as m008 from "./008-board-rollups";
 import * as m009 from "./009-people";
 import * as m010 from "./010-password-resets";
+import * as m011 from "./011-session-epoch";
 
 export interface Migration {
   name: string;
@@ -28,4 +29,5 @@ export const migrations: Migration[] = [
   { name: "008-board-rollups", ...m008 },
   { name: "009-people", ...m009 },
   { name: "010-password-resets", ...m010 },
+  { name: "011-session-epoch", ...m011 },
 ];

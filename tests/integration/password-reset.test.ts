@@ -3,16 +3,23 @@ import { PasswordReset, User } from "../../db/index";
 import { action as forgotAction } from "~/routes/forgot";
 import { action as loginAction } from "~/routes/login";
 import { action as resetAction, loader as resetLoader } from "~/routes/reset.$token";
+import { loader as rigsLoader } from "~/routes/rigs";
 import { RESETS_PER_HOUR } from "~/services/password-reset.server";
 import { DEMO_PASSWORD } from "../../seeds/demo-people";
 import { resetDatabase } from "../helpers/db";
 import { outbox } from "../helpers/outbox";
-import { args, run } from "../helpers/requests";
+import { args, run, type Outcome } from "../helpers/requests";
 
 const form = (path: string, fields: Record<string, string>) => new Request(`http://127.0.0.1${path}`, { method: "POST", body: new URLSearchParams(fields) });
 const forgot = (email: string) => run(() => forgotAction(args(form("/forgot", { email }))));
 const reset = (token: string, password: string, confirm = password) => run(() => resetAction(args(form(`/reset/${token}`, { password, confirm }), { token })));
-const signIn = (email: string, password: string) => run(() => loginAction(args(form("/login", { email, password, redirectTo: "/" }))));
+/** Signs in through the real form; a success also hands back the session cookie. */
+async function signIn(email: string, password: string): Promise<Outcome & { cookie?: string }> {
+  const answer = await run(() => loginAction(args(form("/login", { email, password, redirectTo: "/" }))));
+  if (answer.status !== 302) return answer;
+  const res = (await loginAction(args(form("/login", { email, password, redirectTo: "/" })))) as Response;
+  return { ...answer, cookie: res.headers.get("Set-Cookie")!.split(";")[0] };
+}
 // The outbox is shared by every test file: only reset mails sent since this file began count.
 let mark = 0;
 const mailsTo = async (to: string) => (await outbox()).slice(mark).filter((m) => m.to.includes(to) && m.subject === "Choose a new Tankside password");
@@ -62,12 +69,15 @@ describe("forgot your password", () => {
     expect(again.data.message).toMatch(/expired or has already been used/);
   });
 
-  it("spends every other outstanding link, refuses an expired one, and sends at most three an hour", async () => {
+  it("signs out every session from before, spends every other outstanding link, refuses an expired one, and sends at most three an hour", async () => {
+    const before = (await signIn("mo@cedarflats.example", DEMO_PASSWORD)).cookie!;
+    expect((await run(() => rigsLoader(args(new Request("http://127.0.0.1/rigs", { headers: { Cookie: before } }))))).status).toBe(200);
     await forgot("mo@cedarflats.example");
     const first = await tokenFor("mo@cedarflats.example");
     await forgot("mo@cedarflats.example");
     const second = await tokenFor("mo@cedarflats.example");
     expect((await reset(second, "slurry in the tank")).status).toBe(302);
+    expect((await run(() => rigsLoader(args(new Request("http://127.0.0.1/rigs", { headers: { Cookie: before } }))))).status).toBe(302);
     expect((await reset(first, "slurry in the tank again")).status).toBe(410);
 
     await forgot("mo@cedarflats.example");
