@@ -24,9 +24,14 @@ export function ChoosePasswordForm({
   });
   return (
     <Form method="post" {...getFormProps(form)} className="mt-6 space-y-4 rounded-lg border-2 border-ink bg-paper p-5">
+      {askCurrent ? (
+        <FormField field={fields.current} label="Current password">
+          <input {...getInputProps(fields.current, { type: "password" })} autoComplete="current-password" className={inputClass} />
+        </FormField>
+      ) : null}
       <FormField
         field={fields.password}
-        label="Password"
+        label={askCurrent ? "New password" : "Password"}
         hint={`At least ${MIN_PASSWORD} characters. A few words strung together are easy to type with gloves off.`}
       >
         <input {...getInputProps(fields.password, { type: "password" })} autoComplete="new-password" className={inputClass} />

@@ -23,8 +23,8 @@ describe("people on a phone (360 px)", () => {
     expect(link.startsWith(harness.app.url)).toBe(true);
 
     // The invitee, on their own phone: not signed in.
-    const context = await harness.browser.context.browser()!.newContext({ viewport: { width: 360, height: 640 } });
-    const nell = await context.newPage();
+    await harness.browser.context.clearCookies();
+    const nell = await harness.browser.context.newPage();
     await nell.goto(link);
     await nell.getByText("Welcome, Nell Ostrander.", { exact: false }).waitFor();
     await nell.getByLabel("Password", { exact: true }).fill("short");
@@ -37,6 +37,33 @@ describe("people on a phone (360 px)", () => {
     await nell.getByRole("heading", { name: "Hi Nell. Which rig?" }).waitFor();
     // A trainer sees the guide desk in the menu.
     await nell.getByRole("link", { name: "Guide desk" }).waitFor();
-    await context.close();
+
+    // Her name at the top opens her account, where she changes the password.
+    await nell.getByRole("link", { name: "Your account: Nell Ostrander" }).click();
+    await nell.getByLabel("Current password").fill("mulch over every slope");
+    await nell.getByLabel("New password").fill("tackifier in the mix");
+    await nell.getByLabel("The same password again").fill("tackifier in the mix");
+    await nell.getByRole("button", { name: "Change password" }).click();
+    await nell.getByRole("status").getByText("Password changed.", { exact: false }).waitFor();
+    expect(await nell.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(360);
+    await nell.close();
+  });
+
+  it("the sign-in page leads to a new-password link by e-mail", async () => {
+    await harness.browser.context.clearCookies();
+    const p = await harness.browser.context.newPage();
+    await p.goto(`${harness.app.url}/login`);
+    await p.getByRole("link", { name: "Forgot your password?" }).click();
+    await p.getByLabel("E-mail").fill("dana@cedarflats.example");
+    const before = (await outbox()).length;
+    await p.getByRole("button", { name: "Send me a link" }).click();
+    await p.getByRole("status").getByText("a link to choose a new password is on its way", { exact: false }).waitFor();
+    const mail = (await outbox()).slice(before).find((m) => m.to.includes("dana@cedarflats.example") && m.subject === "Choose a new Tankside password")!;
+    await p.goto(mail.text.match(/http:\/\/\S+\/reset\/\S+/)![0]);
+    await p.getByLabel("Password", { exact: true }).fill("hose reel wound tight");
+    await p.getByLabel("The same password again").fill("hose reel wound tight");
+    await p.getByRole("button", { name: "Save password and sign in" }).click();
+    await p.getByRole("heading", { name: "Hi Dana. Which rig?" }).waitFor();
+    await p.close();
   });
 });
