@@ -1,6 +1,7 @@
 import { parseWithZod } from "@conform-to/zod/v4";
 import { data } from "react-router";
 import { ChoosePasswordForm } from "~/components/choose-password-form";
+import { DoneNote } from "~/components/ui/done-note";
 import { PageTitle } from "~/components/ui/page-title";
 import { toFieldErrors } from "~/lib/form-errors";
 import { changePasswordSchema } from "~/lib/people-schema";
@@ -35,11 +36,7 @@ export default function Account({ loaderData, actionData }: Route.ComponentProps
       <PageTitle lead={`${loaderData.email} · ${ROLE_LABELS[loaderData.role]} at ${loaderData.company}. Your admin can change your role.`}>
         {loaderData.name}
       </PageTitle>
-      {actionData?.message ? (
-        <p role="status" className="mb-4 rounded-md border-2 border-ink bg-paper p-3 font-bold">
-          {actionData.message}
-        </p>
-      ) : null}
+      <DoneNote message={actionData?.message} />
       <h2 className="text-2xl font-bold">Change your password</h2>
       <ChoosePasswordForm lastResult={actionData?.result} submitLabel="Change password" askCurrent />
     </>

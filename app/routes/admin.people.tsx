@@ -2,6 +2,7 @@ import { getFormProps, getInputProps, getSelectProps, useForm } from "@conform-t
 import { parseWithZod } from "@conform-to/zod/v4";
 import { data, Form, useNavigation } from "react-router";
 import { FormField, inputClass } from "~/components/form-field";
+import { DoneNote } from "~/components/ui/done-note";
 import { PageTitle } from "~/components/ui/page-title";
 import { toFieldErrors } from "~/lib/form-errors";
 import { formatDateTime } from "~/lib/format";
@@ -60,11 +61,7 @@ export default function People({ loaderData, actionData }: Route.ComponentProps)
       <PageTitle lead="Invite people by e-mail, set what each may do, and turn a sign-in off when someone leaves. Their cases stay either way.">
         People
       </PageTitle>
-      {actionData?.message ? (
-        <p role="status" className="mb-4 rounded-md border-2 border-ink bg-paper p-3 font-bold">
-          {actionData.message}
-        </p>
-      ) : null}
+      <DoneNote message={actionData?.message} />
 
       <section aria-labelledby="invite-h" className="rounded-lg border-2 border-ink bg-paper p-4">
         <h2 id="invite-h" className="text-2xl font-bold">

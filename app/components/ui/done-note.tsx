@@ -1,0 +1,8 @@
+/** What an action just did, said once at the top of the page (read out by screen readers). */
+export function DoneNote({ message }: { message: string | null | undefined }) {
+  return message ? (
+    <p role="status" className="mb-4 rounded-md border-2 border-ink bg-paper p-3 font-bold">
+      {message}
+    </p>
+  ) : null;
+}
