@@ -29,7 +29,12 @@ export async function action({ request }: Route.ActionArgs) {
     if (submission.status !== "success") return data({ invite: submission.reply(), message: null }, { status: 400 });
     const sent = await invitePerson(user, submission.value);
     if (!sent.ok) return data({ invite: submission.reply({ fieldErrors: toFieldErrors(sent.fieldErrors) }), message: null }, { status: 400 });
-    return { invite: submission.reply({ resetForm: true }), message: `Invitation sent to ${sent.email}. The link works once, for a week.` };
+    return {
+      invite: submission.reply({ resetForm: true }),
+      message: sent.mailFailed
+        ? `The invitation to ${sent.email} is saved, but the mail server did not take the message. Invite them again to resend it.`
+        : `Invitation sent to ${sent.email}. The link works once, for a week.`,
+    };
   }
   const parsed = personActionSchema.safeParse(Object.fromEntries(form));
   if (!parsed.success) return data({ invite: null, message: `Nothing changed: ${parsed.error.issues.map((i) => i.message).join(" ")}` }, { status: 400 });

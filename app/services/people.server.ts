@@ -34,7 +34,7 @@ export async function listPeople(user: SessionUser) {
   };
 }
 
-export type InviteResult = { ok: true; email: string } | { ok: false; fieldErrors: Partial<Record<keyof InviteInput, string>> };
+export type InviteResult = { ok: true; email: string; mailFailed: boolean } | { ok: false; fieldErrors: Partial<Record<keyof InviteInput, string>> };
 
 /**
  * Invites someone by e-mail: a link with a random token (only its hash is stored) that lets
@@ -62,8 +62,13 @@ export async function invitePerson(user: SessionUser, input: InviteInput): Promi
     link: new URL(`/join/${token}`, env().APP_URL).toString(),
     expiresAt,
   });
-  await sendMail({ to: [input.email], ...mail });
-  return { ok: true, email: input.email };
+  try {
+    await sendMail({ to: [input.email], ...mail });
+  } catch (error) {
+    console.warn(`Invitation mail to ${input.email} failed: ${error instanceof Error ? error.message : error}`);
+    return { ok: true, email: input.email, mailFailed: true };
+  }
+  return { ok: true, email: input.email, mailFailed: false };
 }
 
 /** Changes a role, or turns a sign-in off or on, for someone in the admin's company; never the admin's own. */
