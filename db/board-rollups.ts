@@ -19,36 +19,24 @@ interface Scope {
 }
 
 /**
- * Marks each case with the first case of its repeat chain: same rig and cause, each case
- * within the default repeat window of the one before (gaps and islands, as the board's
- * live query does it). Returns the opening time of the last case whose mark changed.
+ * Marks every case of the company with the first case of its repeat chain: same rig and
+ * cause, each case within the default repeat window of the one before (gaps and islands, as
+ * the board's live query does it). For the full rebuild; a single close uses markChainOf.
  */
-async function markChains(sequelize: Sequelize, s: Scope & { rigId?: number; causeCode?: string; all?: boolean }): Promise<{ last: Date } | null> {
-  const only = s.rigId === undefined ? "" : "AND rig_id = :rigId AND cause_code = :causeCode";
+async function markAllChains(sequelize: Sequelize, s: Scope) {
   // Each chain's first case through FIRST_VALUE over a running chain number (a running MAX of starts was quadratic on MariaDB 10.11).
   const chained = `
     SELECT id, FIRST_VALUE(opened_at) OVER (PARTITION BY rig_id, cause_code, chain ORDER BY opened_at, id) AS chain_at FROM (
       SELECT id, rig_id, cause_code, opened_at, SUM(starts) OVER (PARTITION BY rig_id, cause_code ORDER BY opened_at, id) AS chain FROM (
         SELECT id, rig_id, cause_code, opened_at,
           CASE WHEN LAG(opened_at) OVER (PARTITION BY rig_id, cause_code ORDER BY opened_at, id) >= opened_at - INTERVAL :days DAY THEN 0 ELSE 1 END AS starts
-        FROM cases WHERE company_id = :company AND cause_code IS NOT NULL ${only}
+        FROM cases WHERE company_id = :company AND cause_code IS NOT NULL
       ) marked
     ) numbered`;
-  const replacements = { company: s.companyId, rigId: s.rigId ?? null, causeCode: s.causeCode ?? null, days: DEFAULT_REPEAT_DAYS };
-  const update = () =>
-    sequelize.query(`UPDATE cases c JOIN (${chained}) d ON d.id = c.id SET c.repeat_chain_at = d.chain_at WHERE NOT (c.repeat_chain_at <=> d.chain_at)`, {
-      replacements,
-      transaction: s.transaction,
-    });
-  // A full rebuild refreshes every day anyway, so it need not learn which moved.
-  if (s.all) return update().then(() => null);
-  const [changed] = await sequelize.query<{ last: Date | null }>(
-    `SELECT MAX(c.opened_at) AS last FROM cases c JOIN (${chained}) d ON d.id = c.id WHERE NOT (c.repeat_chain_at <=> d.chain_at)`,
-    { replacements, type: QueryTypes.SELECT, transaction: s.transaction },
-  );
-  if (!changed?.last) return null;
-  await update();
-  return { last: new Date(changed.last) };
+  await sequelize.query(`UPDATE cases c JOIN (${chained}) d ON d.id = c.id SET c.repeat_chain_at = d.chain_at WHERE NOT (c.repeat_chain_at <=> d.chain_at)`, {
+    replacements: { company: s.companyId, days: DEFAULT_REPEAT_DAYS },
+    transaction: s.transaction,
+  });
 }
 
 /** Recomputes every rollup row for the days from `from` up to (not including) `to`, and the months that hold them. */
@@ -108,6 +96,7 @@ async function refreshDays(sequelize: Sequelize, s: Scope, from: Date, to: Date)
 }
 
 export interface CaseKey {
+  id: string;
   companyId: number;
   rigId: number;
   causeCode: string | null;
@@ -118,14 +107,57 @@ export interface CaseKey {
 const lockCompany = (sequelize: Sequelize, companyId: number, transaction: Transaction) =>
   sequelize.query("SELECT id FROM companies WHERE id = :company FOR UPDATE", { replacements: { company: companyId }, transaction });
 
+interface Neighbour {
+  id: string;
+  opened_at: Date;
+  repeat_chain_at: Date | null;
+}
+
+/**
+ * Marks one case that has just got its cause, looking only at its neighbours in time on the
+ * same rig and cause. Its chain is the one before it if that is close enough, else its own.
+ * The only other change it can make: the chain that starts right after it, if close enough,
+ * now continues its chain, so that whole chain takes its mark. (A case at the very same
+ * millisecond needs no care: the mark is a time, and such twins always share it.)
+ */
+async function markChainOf(sequelize: Sequelize, c: CaseKey & { causeCode: string }, transaction: Transaction): Promise<{ last: Date } | null> {
+  const replacements = { rig: c.rigId, cause: c.causeCode, t: c.openedAt, id: c.id };
+  const q = <T extends object>(sql: string, extra: Record<string, unknown> = {}) =>
+    sequelize.query<T>(sql, { replacements: { ...replacements, ...extra }, type: QueryTypes.SELECT, transaction });
+  const seq = "rig_id = :rig AND cause_code = :cause AND id <> :id";
+  const [before, after] = await Promise.all([
+    q<Neighbour>(`SELECT id, opened_at, repeat_chain_at FROM cases WHERE ${seq} AND opened_at < :t ORDER BY opened_at DESC, id DESC LIMIT 1`),
+    q<Neighbour>(`SELECT id, opened_at, repeat_chain_at FROM cases WHERE ${seq} AND opened_at > :t ORDER BY opened_at, id LIMIT 1`),
+  ]);
+
+  const limit = DEFAULT_REPEAT_DAYS * DAY;
+  const t = c.openedAt.getTime();
+  const prev = before[0];
+  const next = after[0];
+  const mark = prev && t - new Date(prev.opened_at).getTime() <= limit && prev.repeat_chain_at ? new Date(prev.repeat_chain_at) : c.openedAt;
+  await sequelize.query("UPDATE cases SET repeat_chain_at = :mark WHERE id = :id", { replacements: { mark, id: c.id }, transaction });
+  if (!next || new Date(next.opened_at).getTime() - t > limit || !next.repeat_chain_at || new Date(next.repeat_chain_at).getTime() === mark.getTime())
+    return null;
+  // The next case started a chain of its own; now it continues this one, and so does the rest of its chain.
+  const old = new Date(next.repeat_chain_at);
+  const [{ last }] = await q<{ last: Date }>(
+    "SELECT MAX(opened_at) AS last FROM cases WHERE rig_id = :rig AND cause_code = :cause AND repeat_chain_at = :old",
+    { old },
+  );
+  await sequelize.query("UPDATE cases SET repeat_chain_at = :mark WHERE rig_id = :rig AND cause_code = :cause AND repeat_chain_at = :old", {
+    replacements: { ...replacements, mark, old },
+    transaction,
+  });
+  return { last: new Date(last) };
+}
+
 /** Recomputes the rollups one case touches: its day and month and, once it has a cause, its repeat chain and what that moved. */
 async function refreshForCase(sequelize: Sequelize, c: CaseKey, transaction: Transaction): Promise<void> {
   const s = { companyId: c.companyId, transaction };
   const from = dayOf(c.openedAt);
   let to = new Date(from.getTime() + DAY);
   if (c.causeCode) {
-    // A late close can join the chain after it to the one before; only cases after this one can move.
-    const moved = await markChains(sequelize, { ...s, rigId: c.rigId, causeCode: c.causeCode });
+    const moved = await markChainOf(sequelize, { ...c, causeCode: c.causeCode }, transaction);
     if (moved) to = new Date(Math.max(to.getTime(), dayOf(moved.last).getTime() + DAY));
   }
   await refreshDays(sequelize, s, from, to);
@@ -154,7 +186,7 @@ export async function rebuildBoardRollups(sequelize: Sequelize, companyId?: numb
   for (const id of companies) {
     await sequelize.transaction(async (transaction) => {
       await lockCompany(sequelize, id, transaction);
-      await markChains(sequelize, { companyId: id, transaction, all: true });
+      await markAllChains(sequelize, { companyId: id, transaction });
       // Everything, including rows of days that no longer have cases.
       await refreshDays(sequelize, { companyId: id, transaction }, new Date(Date.UTC(1000, 0, 1)), new Date(Date.UTC(9999, 0, 1)));
     });

@@ -9,7 +9,7 @@
 import { randomUUID } from "node:crypto";
 import path from "node:path";
 import { performance } from "node:perf_hooks";
-import type { CreationAttributes } from "sequelize";
+import { QueryTypes, type CreationAttributes } from "sequelize";
 import { Case, closeDb, Company, db, GuideRecord, GuideVersion, Rig, User } from "../db/index";
 import { startLocalMariadb } from "../db/local-mariadb";
 import { migrateUp } from "../db/migrate";
@@ -46,22 +46,9 @@ const CAUSES = [
 
 async function reset() {
   await sequelize.query("SET FOREIGN_KEY_CHECKS = 0");
-  for (const t of [
-    "board_chains",
-    "board_mix",
-    "board_rig_days",
-    "case_photos",
-    "case_events",
-    "cases",
-    "guide_versions",
-    "guides",
-    "rigs",
-    "users",
-    "companies",
-    "schema_migrations",
-  ]) {
-    await sequelize.query(`DROP TABLE IF EXISTS \`${t}\``);
-  }
+  // Every table, whatever later migrations add: the bench always starts from an empty schema.
+  const tables = (await sequelize.query<Record<string, string>>("SHOW TABLES", { type: QueryTypes.SELECT })).map((r) => Object.values(r)[0]);
+  for (const t of tables) await sequelize.query(`DROP TABLE IF EXISTS \`${t}\``);
   await sequelize.query("SET FOREIGN_KEY_CHECKS = 1");
   await migrateUp(sequelize);
   await importBuiltinGuides(loadLibrary());
@@ -144,12 +131,12 @@ async function timeBoard(companyId: number, runs = 15): Promise<number> {
 
 /** What a close adds: the rollup upkeep for one case (its day, its month, its repeat chain), median of 25. */
 async function timeUpkeep(companyId: number): Promise<number> {
-  const picks = await Case.findAll({ where: { companyId }, order: sequelize.random(), limit: 25, attributes: ["rigId", "causeCode", "openedAt"] });
+  const picks = await Case.findAll({ where: { companyId }, order: sequelize.random(), limit: 25, attributes: ["id", "rigId", "causeCode", "openedAt"] });
   const times: number[] = [];
   for (const c of picks) {
     const t = performance.now();
     // The same lock and recomputation as a close, around an unchanged case.
-    await changeCase(sequelize, companyId, async () => ({ companyId, rigId: c.rigId, causeCode: c.causeCode, openedAt: c.openedAt }));
+    await changeCase(sequelize, companyId, async () => ({ id: c.id, companyId, rigId: c.rigId, causeCode: c.causeCode, openedAt: c.openedAt }));
     times.push(performance.now() - t);
   }
   times.sort((a, b) => a - b);

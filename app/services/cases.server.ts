@@ -39,7 +39,7 @@ export async function startCase(user: SessionUser, input: { id?: string; rigCode
       },
       { transaction },
     );
-    return { companyId: user.companyId, rigId: rig.id, causeCode: null, openedAt: created.openedAt };
+    return { id, companyId: user.companyId, rigId: rig.id, causeCode: null, openedAt: created.openedAt };
   });
   return { id, created: true };
 }
@@ -131,7 +131,7 @@ export async function closeCase(user: SessionUser, caseId: string, input: CloseC
     if (input.engineHours !== undefined) {
       await Rig.update({ engineHours: input.engineHours }, { where: { id: found.rigId, engineHours: { [Op.lt]: input.engineHours } }, transaction });
     }
-    return { companyId: found.companyId, rigId: found.rigId, causeCode, openedAt: found.openedAt };
+    return { id: found.id, companyId: found.companyId, rigId: found.rigId, causeCode, openedAt: found.openedAt };
   });
   let notified: string[] = [];
   let mailFailed = false;

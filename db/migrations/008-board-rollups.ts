@@ -16,7 +16,7 @@ const period = { type: DataTypes.DATEONLY, allowNull: false };
 export async function up(qi: QueryInterface) {
   // The first case of the repeat chain a case belongs to (same rig and cause, each within the default repeat window of the one before).
   await qi.addColumn("cases", "repeat_chain_at", { type: DataTypes.DATE(3), allowNull: true });
-  // One rig-and-cause sequence in time order, to re-mark its chains when a case closes.
+  // A closing case's neighbours in time on the same rig and cause, to mark its repeat chain.
   await qi.addIndex("cases", ["rig_id", "cause_code", "opened_at"], { name: "cases_repeat_chain" });
   // The newest open hand-offs without sorting all of them.
   await qi.addIndex("cases", ["company_id", "outcome", "handoff_resolved_at", "opened_at"], { name: "cases_open_handoffs_newest" });

@@ -22,7 +22,7 @@ const start = Date.UTC(2026, 0, 1);
 const sequelize = db();
 let cedar: Company;
 let crew: SessionUser[];
-const opened: { id: string; at: Date }[] = [];
+const opened: { id: string; at: Date; rigId: number }[] = [];
 
 const snapshot = async () => {
   const out: Record<string, unknown[]> = {};
@@ -48,8 +48,10 @@ beforeAll(async () => {
     const day = random.next() < 0.5 ? random.int(0, 90) : random.int(150, 300);
     const at = new Date(start + day * DAY + random.int(6, 17) * 3_600_000 + random.int(0, 59) * 60_000);
     const rig = rigs[random.int(0, 1)];
-    opened.push({ id: await openAt(at, rig.id, random.pick(crew).id, version.id), at });
+    opened.push({ id: await openAt(at, rig.id, random.pick(crew).id, version.id), at, rigId: rig.id });
   }
+  // Two more at the very same millisecond as earlier ones: their order in time is a tie.
+  for (const twin of opened.slice(0, 2)) opened.push({ id: await openAt(twin.at, twin.rigId, crew[0].id, version.id), at: twin.at, rigId: twin.rigId });
 });
 
 /** As startCase does, but at a chosen time in the past. */
@@ -73,7 +75,7 @@ async function openAt(at: Date, rigId: number, openedBy: number, guideVersionId:
       },
       { transaction },
     );
-    return { companyId: cedar.id, rigId, causeCode: null, openedAt: at };
+    return { id, companyId: cedar.id, rigId, causeCode: null, openedAt: at };
   });
   return id;
 }
