@@ -4,18 +4,22 @@ import { ROLES } from "./roles";
 /** At least 10 characters and nothing else demanded (NIST SP 800-63B: length over composition rules). */
 export const MIN_PASSWORD = 10;
 
+/** An e-mail address as every form takes it: trimmed, lower-cased, whole. */
+export const emailAddress = (whose: "your" | "their") =>
+  z
+    .string({ error: `Enter ${whose} e-mail.` })
+    .trim()
+    .toLowerCase()
+    .min(1, `Enter ${whose} e-mail.`)
+    .max(254, "That e-mail is too long.")
+    .email("Enter a whole e-mail address, like name@company.com.");
+
 const role = z.enum(ROLES, { error: "Pick a role: crew, trainer, supervisor or admin." });
 const personId = z.coerce.number({ error: "personId must be a number" }).int().positive("personId must be a person's number");
 
 export const inviteSchema = z.object({
   name: z.string({ error: "Enter the person's name." }).trim().min(1, "Enter the person's name.").max(120, "Keep the name under 120 characters."),
-  email: z
-    .string({ error: "Enter their e-mail." })
-    .trim()
-    .toLowerCase()
-    .min(1, "Enter their e-mail.")
-    .max(254, "That e-mail is too long.")
-    .email("Enter a whole e-mail address, like name@company.com."),
+  email: emailAddress("their"),
   role,
 });
 

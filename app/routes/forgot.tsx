@@ -1,18 +1,12 @@
 import { data, Form, Link, useNavigation } from "react-router";
+import { EmailField } from "~/components/email-field";
 import { z } from "zod";
+import { emailAddress } from "~/lib/people-schema";
 import { RESET_MINUTES } from "~/lib/reset-mail";
 import { requestReset } from "~/services/password-reset.server";
 import type { Route } from "./+types/forgot";
 
-const emailSchema = z.object({
-  email: z
-    .string()
-    .trim()
-    .toLowerCase()
-    .min(1, "Enter your e-mail.")
-    .max(254, "That e-mail is too long.")
-    .email("Enter a whole e-mail address, like name@company.com."),
-});
+const emailSchema = z.object({ email: emailAddress("your") });
 
 export async function action({ request }: Route.ActionArgs) {
   const form = await request.formData();
@@ -36,25 +30,7 @@ export default function Forgot({ actionData }: Route.ComponentProps) {
       ) : (
         <Form method="post" className="mt-6 space-y-4 rounded-lg border-2 border-ink bg-paper p-5" noValidate>
           <p>Enter the e-mail you sign in with; we send a link to choose a new one.</p>
-          <div>
-            <label htmlFor="email" className="block font-bold">
-              E-mail
-            </label>
-            <input
-              id="email"
-              name="email"
-              type="email"
-              autoComplete="username"
-              aria-invalid={actionData?.error ? true : undefined}
-              aria-describedby={actionData?.error ? "email-error" : undefined}
-              className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink px-3 text-lg"
-            />
-            {actionData?.error ? (
-              <p id="email-error" className="mt-1 font-bold text-stop">
-                {actionData.error}
-              </p>
-            ) : null}
-          </div>
+          <EmailField error={actionData?.error} />
           <button type="submit" disabled={busy} className="min-h-14 w-full rounded-md bg-go text-lg font-bold text-white">
             Send me a link
           </button>

@@ -1,5 +1,6 @@
 import { data, Form, Link, redirect, useNavigation } from "react-router";
 import { DEMO_PASSWORD, DEMO_PEOPLE } from "../../seeds/demo-people";
+import { EmailField } from "~/components/email-field";
 import { authenticator, SignInError } from "~/services/auth.server";
 import { env } from "~/services/env.server";
 import { getUser } from "~/services/guards.server";
@@ -48,26 +49,7 @@ export default function Login({ loaderData, actionData }: Route.ComponentProps) 
             {actionData.error}
           </p>
         ) : null}
-        <div>
-          <label htmlFor="email" className="block font-bold">
-            E-mail
-          </label>
-          <input
-            id="email"
-            name="email"
-            type="email"
-            autoComplete="username"
-            defaultValue={actionData?.email}
-            aria-invalid={fields.email ? true : undefined}
-            aria-describedby={fields.email ? "email-error" : undefined}
-            className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink px-3 text-lg"
-          />
-          {fields.email ? (
-            <p id="email-error" className="mt-1 font-bold text-stop">
-              {fields.email}
-            </p>
-          ) : null}
-        </div>
+        <EmailField error={fields.email} defaultValue={actionData?.email} />
         <div>
           <label htmlFor="password" className="block font-bold">
             Password

@@ -2,6 +2,7 @@ import { Authenticator } from "remix-auth";
 import { FormStrategy } from "remix-auth-form";
 import { z } from "zod";
 import { checkPassword, hashPassword } from "~/lib/password";
+import { emailAddress } from "~/lib/people-schema";
 import { User } from "./db.server";
 
 export const MAX_FAILURES = 10;
@@ -25,7 +26,7 @@ const WRONG = "That e-mail and password do not match an account. Check both and 
 let dummyHash: Promise<string> | undefined;
 
 const credentials = z.object({
-  email: z.string().trim().toLowerCase().min(1, "Enter your e-mail.").email("Enter a whole e-mail address, like name@company.com."),
+  email: emailAddress("your"),
   password: z.string().min(1, "Enter your password.").max(200, "That password is too long."),
 });
 
