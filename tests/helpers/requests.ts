@@ -26,7 +26,11 @@ export interface Outcome {
   // eslint-disable-next-line @typescript-eslint/no-explicit-any -- tests read whatever the route answered
   data: any;
   location?: string | null;
+  /** The session cookie the answer set, as a request's Cookie header would carry it. */
+  cookie?: string;
 }
+
+const cookieOf = (headers: HeadersInit | undefined) => new Headers(headers).get("Set-Cookie")?.split(";")[0];
 
 /** Calls a loader or action and returns what it threw or returned: status, body (JSON parsed) and redirect. */
 export async function run<T>(fn: () => Promise<T>): Promise<Outcome> {
@@ -40,11 +44,16 @@ export async function run<T>(fn: () => Promise<T>): Promise<Outcome> {
 async function describe(value: unknown): Promise<Outcome> {
   if (value instanceof Response) {
     const type = value.headers.get("Content-Type") ?? "";
-    return { status: value.status, data: type.includes("json") ? await value.json() : undefined, location: value.headers.get("Location") };
+    return {
+      status: value.status,
+      data: type.includes("json") ? await value.json() : undefined,
+      location: value.headers.get("Location"),
+      cookie: cookieOf(value.headers),
+    };
   }
   if (value && typeof value === "object" && "type" in value && (value as { type: string }).type === "DataWithResponseInit") {
     const d = value as unknown as { data: unknown; init: ResponseInit | null };
-    return { status: d.init?.status ?? 200, data: d.data };
+    return { status: d.init?.status ?? 200, data: d.data, cookie: cookieOf(d.init?.headers) };
   }
   if (value instanceof Error) throw value;
   return { status: 200, data: value };

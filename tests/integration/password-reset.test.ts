@@ -8,18 +8,13 @@ import { RESETS_PER_HOUR } from "~/services/password-reset.server";
 import { DEMO_PASSWORD } from "../../seeds/demo-people";
 import { resetDatabase } from "../helpers/db";
 import { outbox } from "../helpers/outbox";
-import { args, run, type Outcome } from "../helpers/requests";
+import { args, run } from "../helpers/requests";
 
 const form = (path: string, fields: Record<string, string>) => new Request(`http://127.0.0.1${path}`, { method: "POST", body: new URLSearchParams(fields) });
 const forgot = (email: string) => run(() => forgotAction(args(form("/forgot", { email }))));
 const reset = (token: string, password: string, confirm = password) => run(() => resetAction(args(form(`/reset/${token}`, { password, confirm }), { token })));
 /** Signs in through the real form; a success also hands back the session cookie. */
-async function signIn(email: string, password: string): Promise<Outcome & { cookie?: string }> {
-  const answer = await run(() => loginAction(args(form("/login", { email, password, redirectTo: "/" }))));
-  if (answer.status !== 302) return answer;
-  const res = (await loginAction(args(form("/login", { email, password, redirectTo: "/" })))) as Response;
-  return { ...answer, cookie: res.headers.get("Set-Cookie")!.split(";")[0] };
-}
+const signIn = (email: string, password: string) => run(() => loginAction(args(form("/login", { email, password, redirectTo: "/" }))));
 // The outbox is shared by every test file: only reset mails sent since this file began count.
 let mark = 0;
 const mailsTo = async (to: string) => (await outbox()).slice(mark).filter((m) => m.to.includes(to) && m.subject === "Choose a new Tankside password");
