@@ -9,6 +9,7 @@ import { closeCase } from "~/services/cases.server";
 import type { SessionUser } from "~/services/guards.server";
 import { seededRandom } from "../../seeds/random";
 import { rebuildRollups, resetDatabase } from "../helpers/db";
+import { caseRow } from "../helpers/cases";
 
 /*
  * The board reads rollups kept as cases open and close. Two checks keep them honest:
@@ -58,23 +59,7 @@ beforeAll(async () => {
 async function openAt(at: Date, rigId: number, openedBy: number, guideVersionId: number): Promise<string> {
   const id = randomUUID();
   await changeCase(sequelize, cedar.id, async (transaction) => {
-    await Case.create(
-      {
-        id,
-        companyId: cedar.id,
-        rigId,
-        guideVersionId,
-        openedBy,
-        openedAt: at,
-        closedAt: null,
-        engineHours: null,
-        finalStep: null,
-        causeCode: null,
-        safetyAckAt: null,
-        note: null,
-      },
-      { transaction },
-    );
+    await Case.create(caseRow({ id, companyId: cedar.id, rigId, guideVersionId, openedBy, openedAt: at }), { transaction });
     return { id, companyId: cedar.id, rigId, causeCode: null, openedAt: at };
   });
   return id;

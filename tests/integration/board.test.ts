@@ -7,6 +7,7 @@ import { rigFigures, type RigAggregate } from "~/lib/stats/reliability";
 import { loader as boardApi } from "~/routes/api.board";
 import { boardAggregates } from "~/services/board.server";
 import { rebuildRollups, resetDatabase } from "../helpers/db";
+import { caseRow } from "../helpers/cases";
 import { requestAs, run } from "../helpers/requests";
 
 const DAY = 86_400_000;
@@ -45,21 +46,20 @@ beforeAll(async () => {
     const id = randomUUID();
     ids.set(row, id);
     const openedAt = new Date(start + row.day * DAY + 15 * 3_600_000);
-    await Case.create({
-      id,
-      companyId: rig.companyId,
-      rigId: rig.id,
-      guideVersionId: version!.id,
-      openedBy: opener!.id,
-      openedAt,
-      closedAt: new Date(openedAt.getTime() + row.minutes * 60_000),
-      engineHours: row.hours,
-      outcome: row.outcome,
-      finalStep: null,
-      causeCode: row.cause,
-      safetyAckAt: null,
-      note: null,
-    });
+    await Case.create(
+      caseRow({
+        id,
+        companyId: rig.companyId,
+        rigId: rig.id,
+        guideVersionId: version!.id,
+        openedBy: opener!.id,
+        openedAt,
+        closedAt: new Date(openedAt.getTime() + row.minutes * 60_000),
+        engineHours: row.hours,
+        outcome: row.outcome,
+        causeCode: row.cause,
+      }),
+    );
   }
   await rebuildRollups();
 });

@@ -8,6 +8,7 @@ import { loader as walkLoader } from "~/routes/cases.$id.walk";
 import { action as fixAction, loader as fixLoader } from "~/routes/rigs.$code.fix";
 import { loader as labelLoader } from "~/routes/rigs.$code.label";
 import { resetDatabase } from "../helpers/db";
+import { caseRow } from "../helpers/cases";
 import { args, requestAs, run } from "../helpers/requests";
 
 const DANA = "dana@cedarflats.example";
@@ -34,20 +35,7 @@ beforeAll(async () => {
   const dana = await User.findOne({ where: { email: DANA } });
   const version = await GuideVersion.findOne();
   caseId = randomUUID();
-  await Case.create({
-    id: caseId,
-    companyId: cedar!.id,
-    rigId: rig!.id,
-    guideVersionId: version!.id,
-    openedBy: dana!.id,
-    openedAt: new Date(),
-    closedAt: null,
-    engineHours: null,
-    finalStep: null,
-    causeCode: null,
-    safetyAckAt: null,
-    note: null,
-  });
+  await Case.create(caseRow({ id: caseId, companyId: cedar!.id, rigId: rig!.id, guideVersionId: version!.id, openedBy: dana!.id, openedAt: new Date() }));
 });
 
 describe("photos", () => {

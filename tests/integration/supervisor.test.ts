@@ -8,6 +8,7 @@ import { loader as exportLoader } from "~/routes/cases.export";
 import { loader as casesLoader } from "~/routes/cases";
 import { sendAllDigests } from "~/services/digest.server";
 import { rebuildRollups, resetDatabase } from "../helpers/db";
+import { caseRow } from "../helpers/cases";
 import { outbox } from "../helpers/outbox";
 import { args, requestAs, run } from "../helpers/requests";
 
@@ -23,21 +24,21 @@ beforeAll(async () => {
     const opener = (await User.findOne({ where: { companyId: rig.companyId, role: "crew" } }))!;
     const id = randomUUID();
     const openedAt = new Date(Date.now() - day * 86_400_000);
-    await Case.create({
-      id,
-      companyId: rig.companyId,
-      rigId: rig.id,
-      guideVersionId: version!.id,
-      openedBy: opener.id,
-      openedAt,
-      closedAt: new Date(openedAt.getTime() + 600_000),
-      engineHours: 100 + day,
-      outcome,
-      finalStep: null,
-      causeCode: cause,
-      safetyAckAt: null,
-      note: awkwardNote,
-    });
+    await Case.create(
+      caseRow({
+        id,
+        companyId: rig.companyId,
+        rigId: rig.id,
+        guideVersionId: version!.id,
+        openedBy: opener.id,
+        openedAt,
+        closedAt: new Date(openedAt.getTime() + 600_000),
+        engineHours: 100 + day,
+        outcome,
+        causeCode: cause,
+        note: awkwardNote,
+      }),
+    );
     return id;
   };
   for (let d = 1; d <= 30; d++) await add(d % 3 ? "CF-03" : "CF-07", d, "fixed", d % 2 ? "suction-air-leak" : "plug-sump");

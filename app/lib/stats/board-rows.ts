@@ -33,15 +33,19 @@ export interface MixRow {
 
 export function foldRigWeeks(rows: RigWeekRow[], rigs: { id: number; code: string; hasHourMeter: boolean }[]): Pick<BoardAggregates, "rigs" | "weeks"> {
   const weeks = new Map<string, { weekStart: string; cases: number; handoffs: number }>();
+  const byRig = new Map<number, RigWeekRow[]>();
   for (const r of rows) {
     const w = weeks.get(r.week) ?? { weekStart: r.week, cases: 0, handoffs: 0 };
     w.cases += r.cases;
     w.handoffs += r.handoff;
     weeks.set(r.week, w);
+    const mine = byRig.get(r.rigId) ?? [];
+    mine.push(r);
+    byRig.set(r.rigId, mine);
   }
   return {
     rigs: rigs.map((rig) => {
-      const mine = rows.filter((r) => r.rigId === rig.id);
+      const mine = byRig.get(rig.id) ?? [];
       const sum = (key: "cases" | "fixed" | "handoff" | "abandoned" | "closed" | "repairSeconds") => mine.reduce((s, r) => s + r[key], 0);
       const lows = mine.flatMap((r) => (r.minHours === null ? [] : [r.minHours]));
       const highs = mine.flatMap((r) => (r.maxHours === null ? [] : [r.maxHours]));
