@@ -2,6 +2,7 @@ import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAtt
 
 import type { Guide } from "../app/lib/guides/schema";
 import { ROLES, type Role } from "../app/lib/roles";
+import { ANSWERS, OUTCOMES, VERSION_STATUSES, type Answer, type Outcome, type VersionStatus } from "../app/lib/vocabulary";
 
 export { ROLES, type Role };
 
@@ -87,8 +88,7 @@ export class Rig extends Model<InferAttributes<Rig>, InferCreationAttributes<Rig
   declare updatedAt: CreationOptional<Date>;
 }
 
-export const GUIDE_STATUSES = ["draft", "in_review", "published", "retired"] as const;
-export type GuideStatus = (typeof GUIDE_STATUSES)[number];
+export type GuideStatus = VersionStatus;
 
 /** A guide's identity: built-in (companyId null) or a company's own. Its steps live in versions. */
 export class GuideRecord extends Model<InferAttributes<GuideRecord>, InferCreationAttributes<GuideRecord>> {
@@ -120,10 +120,7 @@ export class GuideVersion extends Model<InferAttributes<GuideVersion>, InferCrea
   declare updatedAt: CreationOptional<Date>;
 }
 
-export const CASE_OUTCOMES = ["open", "fixed", "handoff", "abandoned"] as const;
-export type CaseOutcome = (typeof CASE_OUTCOMES)[number];
-export const CASE_ANSWERS = ["YES", "NO", "DONE", "CANT", "ACK", "BACK"] as const;
-export type CaseAnswer = (typeof CASE_ANSWERS)[number];
+export type CaseOutcome = Outcome;
 
 /** One walk-through on one rig; it keeps the guide version it started with. */
 export class Case extends Model<InferAttributes<Case>, InferCreationAttributes<Case>> {
@@ -152,7 +149,7 @@ export class CaseEvent extends Model<InferAttributes<CaseEvent>, InferCreationAt
   declare caseId: string;
   declare seq: number;
   declare stepId: string;
-  declare answer: CaseAnswer;
+  declare answer: Answer;
   declare at: Date;
   declare note: string | null;
   declare createdAt: CreationOptional<Date>;
@@ -259,7 +256,7 @@ export function initModels(sequelize: Sequelize) {
     {
       id,
       number: DataTypes.INTEGER.UNSIGNED,
-      status: DataTypes.ENUM(...GUIDE_STATUSES),
+      status: DataTypes.ENUM(...VERSION_STATUSES),
       definition: DataTypes.JSON,
       sourceHash: DataTypes.CHAR(64),
       authorId: DataTypes.INTEGER.UNSIGNED,
@@ -282,7 +279,7 @@ export function initModels(sequelize: Sequelize) {
       openedAt: DataTypes.DATE(3),
       closedAt: DataTypes.DATE(3),
       engineHours: decimal(8, 1, "engineHours"),
-      outcome: { type: DataTypes.ENUM(...CASE_OUTCOMES), defaultValue: "open" },
+      outcome: { type: DataTypes.ENUM(...OUTCOMES), defaultValue: "open" },
       finalStep: DataTypes.STRING(80),
       causeCode: DataTypes.STRING(60),
       safetyAckAt: DataTypes.DATE(3),
@@ -299,7 +296,7 @@ export function initModels(sequelize: Sequelize) {
       caseId: DataTypes.CHAR(36),
       seq: DataTypes.INTEGER.UNSIGNED,
       stepId: DataTypes.STRING(80),
-      answer: DataTypes.ENUM(...CASE_ANSWERS),
+      answer: DataTypes.ENUM(...ANSWERS),
       at: DataTypes.DATE(3),
       note: DataTypes.TEXT,
       createdAt: DataTypes.DATE,

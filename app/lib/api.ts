@@ -6,9 +6,3 @@ export function fieldErrors(error: z.ZodError): Record<string, string> {
   for (const issue of error.issues) out[issue.path.join(".") || "body"] ??= issue.message;
   return out;
 }
-
-/** The JSON body of a 400: a sentence naming the bad fields, and each field's message. */
-export function badRequestBody(error: z.ZodError) {
-  const fields = fieldErrors(error);
-  return { error: `Check ${Object.keys(fields).join(", ")}.`, fields };
-}

@@ -6,18 +6,12 @@ const day = z
   .regex(/^\d{4}-\d{2}-\d{2}$/, "use a date like 2026-06-01")
   .refine((s) => !Number.isNaN(Date.parse(s)), "not a real date");
 
-/** The board's window from a query string: ?from=YYYY-MM-DD&to=YYYY-MM-DD&rig=CF-03&repeatDays=30 (default: the last 365 days). */
+/** The board's window from a query string (blank values already dropped: "All rigs" means no filter): ?from=YYYY-MM-DD&to=YYYY-MM-DD&rig=CF-03&repeatDays=30 (default: the last 365 days). */
 export const boardQuerySchema = z
   .object({
     from: day.optional(),
     to: day.optional(),
-    rig: z
-      .string()
-      .trim()
-      .toUpperCase()
-      .max(16)
-      .optional()
-      .or(z.literal("").transform(() => undefined)),
+    rig: z.string().trim().toUpperCase().max(16).optional(),
     repeatDays: z.coerce
       .number({ error: "repeatDays must be a number" })
       .int("repeatDays must be whole days")

@@ -1,19 +1,19 @@
 import { z } from "zod";
+import { OUTCOMES } from "./vocabulary";
 
 const day = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, "use a date like 2026-06-01");
-const blank = z.literal("").transform(() => undefined);
 
 export const CASE_SORTS = ["opened", "duration", "rig", "guide", "cause", "outcome", "person"] as const;
 
-/** The cases table's query string: filters, sort and page. Unknown values are named, not ignored. */
+/** The cases table's query string (blank values already dropped: "All" means no filter): filters, sort and page. Unknown values are named, not ignored. */
 export const caseFiltersSchema = z.object({
-  rig: z.string().trim().toUpperCase().max(16).optional().or(blank),
-  guide: z.string().trim().max(80).optional().or(blank),
-  cause: z.string().trim().max(60).optional().or(blank),
-  outcome: z.enum(["open", "fixed", "handoff", "abandoned"], { error: "outcome must be open, fixed, handoff or abandoned" }).optional().or(blank),
-  person: z.coerce.number().int().positive().optional().or(blank),
-  from: day.optional().or(blank),
-  to: day.optional().or(blank),
+  rig: z.string().trim().toUpperCase().max(16).optional(),
+  guide: z.string().trim().max(80).optional(),
+  cause: z.string().trim().max(60).optional(),
+  outcome: z.enum(OUTCOMES, { error: `outcome must be one of ${OUTCOMES.join(", ")}` }).optional(),
+  person: z.coerce.number().int().positive().optional(),
+  from: day.optional(),
+  to: day.optional(),
   sort: z.enum(CASE_SORTS, { error: `sort must be one of ${CASE_SORTS.join(", ")}` }).default("opened"),
   dir: z.enum(["asc", "desc"]).default("desc"),
   page: z.coerce.number().int().min(1).max(100_000).default(1),

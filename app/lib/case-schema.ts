@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { ANSWERS, CLOSE_OUTCOMES } from "./vocabulary";
 
 const uuid = z.string().uuid("must be a UUID");
 const isoTime = z.iso.datetime({ offset: true, message: "must be an ISO 8601 time, like 2026-06-01T14:05:00Z" });
@@ -13,7 +14,7 @@ export const caseEventSchema = z.strictObject({
   id: uuid,
   seq: z.number({ error: "seq must be a number" }).int().min(1, "seq starts at 1").max(10_000),
   stepId: z.string().min(1).max(80),
-  answer: z.enum(["YES", "NO", "DONE", "CANT", "ACK", "BACK"], { error: "answer must be YES, NO, DONE, CANT, ACK or BACK" }),
+  answer: z.enum(ANSWERS, { error: `answer must be one of ${ANSWERS.join(", ")}` }),
   at: isoTime,
   note: z.string().max(2000, "keep a note under 2,000 characters").optional(),
 });
@@ -23,7 +24,7 @@ export const eventBatchSchema = z.strictObject({
 });
 
 export const closeCaseSchema = z.strictObject({
-  outcome: z.enum(["fixed", "handoff", "abandoned"], { error: "outcome must be fixed, handoff or abandoned" }),
+  outcome: z.enum(CLOSE_OUTCOMES, { error: `outcome must be one of ${CLOSE_OUTCOMES.join(", ")}` }),
   finalStep: z.string().min(1).max(80).optional(),
   engineHours: z.number().min(0, "engine hours cannot be negative").max(100_000, "engine hours over 100,000 are not plausible").optional(),
   note: z.string().max(2000).optional(),

@@ -16,14 +16,3 @@ export function formatDuration(ms: number): string {
   const h = Math.floor(m / 60);
   return `${h} h ${m % 60} min`;
 }
-
-export const ANSWER_LABELS: Record<string, string> = {
-  YES: "Yes",
-  NO: "No",
-  DONE: "Done",
-  CANT: "Can't do it",
-  ACK: "Shut down and locked out",
-  BACK: "Went back a step",
-};
-
-export const OUTCOME_LABELS: Record<string, string> = { open: "Open", fixed: "Fixed", handoff: "Handed off", abandoned: "Abandoned" };

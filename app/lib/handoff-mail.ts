@@ -1,4 +1,5 @@
 import type { Guide } from "./guides/schema";
+import { answerLabel } from "./vocabulary";
 
 export interface HandoffFacts {
   rig: { code: string; name: string };
@@ -12,8 +13,6 @@ export interface HandoffFacts {
   photoUrls: string[];
 }
 
-const ANSWER_WORDS: Record<string, string> = { YES: "Yes", NO: "No", DONE: "Done", CANT: "Can't", ACK: "Shut down (acknowledged)", BACK: "Went back" };
-
 const plain = (markdown: string) => markdown.replace(/\*\*|__|`/g, "");
 
 /** The hand-off e-mail to supervisors: what the crew saw and answered, in order. */
@@ -21,7 +20,7 @@ export function handoffMail(f: HandoffFacts): { subject: string; text: string } 
   const lines = f.events.map((e) => {
     const prompt = plain(f.guide.definition.states[e.stepId]?.meta.prompt ?? e.stepId);
     const time = new Date(e.at).toISOString().slice(11, 16);
-    return `  ${time} UTC  ${prompt}\n           → ${ANSWER_WORDS[e.answer] ?? e.answer}${e.note ? `  (note: ${e.note})` : ""}`;
+    return `  ${time} UTC  ${prompt}\n           → ${answerLabel(e.answer)}${e.note ? `  (note: ${e.note})` : ""}`;
   });
   const end = f.finalStep ? plain(f.guide.definition.states[f.finalStep]?.meta.prompt ?? "") : "";
   const text = [

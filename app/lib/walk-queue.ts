@@ -1,3 +1,5 @@
+import type { Answer, CloseOutcome } from "./vocabulary";
+
 /**
  * What the phone keeps for one walk-through: every answer (with the phone-made id that makes
  * resends harmless), which of them the server has confirmed, and a close waiting to be sent.
@@ -7,13 +9,13 @@ export interface QueuedEvent {
   id: string;
   seq: number;
   stepId: string;
-  answer: "YES" | "NO" | "DONE" | "CANT" | "ACK" | "BACK";
+  answer: Answer;
   at: string;
   note?: string;
 }
 
 export interface QueuedClose {
-  outcome: "fixed" | "handoff" | "abandoned";
+  outcome: CloseOutcome;
   finalStep?: string;
   engineHours?: number;
   note?: string;

@@ -1,7 +1,7 @@
 import { CALCULATORS, isCalculator } from "~/lib/calc";
 import { CalcInputError } from "~/lib/calc/validate";
 import { fail, notFound, requireUser } from "~/services/guards.server";
-import { requirePost } from "~/services/json-body.server";
+import { requirePost } from "~/services/read-request.server";
 import type { Route } from "./+types/api.calc.$kind";
 
 /** POST /api/calc/{hose|suction|load|torque}: JSON in, JSON out; a bad field is named in a 400. */

@@ -1,7 +1,7 @@
 import { closeCaseSchema } from "~/lib/case-schema";
 import { closeCase } from "~/services/cases.server";
 import { requireUser } from "~/services/guards.server";
-import { readJson, requirePost } from "~/services/json-body.server";
+import { readJson, requirePost } from "~/services/read-request.server";
 import type { Route } from "./+types/api.cases.$id.close";
 
 export async function action({ request, params }: Route.ActionArgs) {

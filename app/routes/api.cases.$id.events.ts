@@ -1,7 +1,7 @@
 import { eventBatchSchema } from "~/lib/case-schema";
 import { storeEvents } from "~/services/cases.server";
 import { requireUser } from "~/services/guards.server";
-import { readJson, requirePost } from "~/services/json-body.server";
+import { readJson, requirePost } from "~/services/read-request.server";
 import type { Route } from "./+types/api.cases.$id.events";
 
 export async function action({ request, params }: Route.ActionArgs) {

@@ -1,7 +1,7 @@
 import { FormDataParseError, MaxFileSizeExceededError, parseFormData } from "@remix-run/form-data-parser";
 import { z } from "zod";
 import { fail, requireUser } from "~/services/guards.server";
-import { requirePost } from "~/services/json-body.server";
+import { requirePost } from "~/services/read-request.server";
 import { addPhoto, MAX_PHOTO_BYTES } from "~/services/photos.server";
 import type { Route } from "./+types/api.cases.$id.photos";
 

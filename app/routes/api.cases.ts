@@ -1,7 +1,7 @@
 import { startCaseSchema } from "~/lib/case-schema";
 import { startCase } from "~/services/cases.server";
 import { requireUser } from "~/services/guards.server";
-import { readJson, requirePost } from "~/services/json-body.server";
+import { readJson, requirePost } from "~/services/read-request.server";
 import type { Route } from "./+types/api.cases";
 
 export async function action({ request }: Route.ActionArgs) {

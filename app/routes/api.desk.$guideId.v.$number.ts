@@ -2,7 +2,7 @@ import { z } from "zod";
 import { saveDraft } from "~/services/desk.server";
 import { deskParams } from "~/services/desk-params.server";
 import { requireRole } from "~/services/guards.server";
-import { readJson, requirePost } from "~/services/json-body.server";
+import { readJson, requirePost } from "~/services/read-request.server";
 import type { Route } from "./+types/api.desk.$guideId.v.$number";
 
 const body = z.object({ definition: z.unknown() });

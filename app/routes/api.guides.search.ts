@@ -1,6 +1,6 @@
 import { z } from "zod";
-import { badRequestBody } from "~/lib/api";
 import { requireUser } from "~/services/guards.server";
+import { readQuery } from "~/services/read-request.server";
 import { searchGuides } from "~/services/guides.server";
 import type { Route } from "./+types/api.guides.search";
 
@@ -14,7 +14,6 @@ const query = z.object({
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);
-  const parsed = query.safeParse(Object.fromEntries(new URL(request.url).searchParams));
-  if (!parsed.success) return Response.json(badRequestBody(parsed.error), { status: 400 });
-  return Response.json({ results: await searchGuides(user, parsed.data.q) });
+  const { q } = readQuery(request, query);
+  return Response.json({ results: await searchGuides(user, q) });
 }

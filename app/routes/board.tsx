@@ -6,16 +6,15 @@ import { fmt } from "~/lib/calc/units";
 import { formatDateTime } from "~/lib/format";
 import { boardFor } from "~/services/board.server";
 import { sendDigest } from "~/services/digest.server";
-import { fail, requireRole } from "~/services/guards.server";
+import { requireRole } from "~/services/guards.server";
+import { readQuery } from "~/services/read-request.server";
 import { causeList } from "~/services/guides.server";
 import { listRigs } from "~/services/rigs.server";
 import type { Route } from "./+types/board";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireRole(request, "supervisor");
-  const parsed = boardQuerySchema.safeParse(Object.fromEntries(new URL(request.url).searchParams));
-  if (!parsed.success) fail(400, `Check the window: ${parsed.error.issues.map((i) => `${i.path.join(".")} ${i.message}`).join("; ")}.`);
-  const q = parsed.data;
+  const q = readQuery(request, boardQuerySchema, "the window");
   const [board, rigs] = await Promise.all([boardFor(user, q), listRigs(user, { includeRetired: true })]);
   return {
     board,

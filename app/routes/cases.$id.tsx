@@ -1,7 +1,8 @@
 import { Form, Link } from "react-router";
 import { hasRole } from "~/lib/roles";
 import { PageTitle } from "~/components/ui/page-title";
-import { ANSWER_LABELS, formatDateTime, formatDuration, formatTime, OUTCOME_LABELS } from "~/lib/format";
+import { formatDateTime, formatDuration, formatTime } from "~/lib/format";
+import { answerLabel, outcomeLabel } from "~/lib/vocabulary";
 import { caseDetail, resolveHandoff } from "~/services/cases.server";
 import { fail, requireRole, requireUser } from "~/services/guards.server";
 import { causeList } from "~/services/guides.server";
@@ -44,14 +45,14 @@ export default function CasePage({ loaderData: c }: Route.ComponentProps) {
     ["Opened", `${formatDateTime(c.openedAt)} UTC`],
     ["Closed", c.closedAt ? `${formatDateTime(c.closedAt)} UTC` : "—"],
     ["Time taken", duration],
-    ["Outcome", OUTCOME_LABELS[c.outcome]],
+    ["Outcome", outcomeLabel(c.outcome)],
     ["Cause", c.cause ? `${c.cause.name} (${c.cause.component})` : "—"],
     ["Shut-down acknowledged", c.safetyAckAt ? `${formatTime(c.safetyAckAt)} UTC` : "no hands-on step reached"],
     ["Engine hours", c.engineHours !== null ? `${c.engineHours} h` : "—"],
   ];
   return (
     <>
-      <PageTitle lead={`${c.rig.code} · ${c.guide.title}`}>Case {OUTCOME_LABELS[c.outcome].toLowerCase()}</PageTitle>
+      <PageTitle lead={`${c.rig.code} · ${c.guide.title}`}>Case {outcomeLabel(c.outcome).toLowerCase()}</PageTitle>
       {c.outcome === "open" ? (
         <Link to={`/cases/${c.id}/walk`} className="mb-4 flex min-h-14 items-center justify-center rounded-md bg-go text-lg font-bold text-white no-underline">
           Continue the walk-through
@@ -98,7 +99,7 @@ export default function CasePage({ loaderData: c }: Route.ComponentProps) {
                 {e.seq}. {formatTime(e.at)} UTC · +{formatDuration(gap)}
               </p>
               <p className="font-bold">{e.prompt.replace(/\*\*/g, "")}</p>
-              <p>→ {ANSWER_LABELS[e.answer] ?? e.answer}</p>
+              <p>→ {answerLabel(e.answer)}</p>
               {e.note ? <p className="mt-1 italic">Note: {e.note}</p> : null}
             </li>
           );

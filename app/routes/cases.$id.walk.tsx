@@ -5,6 +5,7 @@ import { stepsToEnd } from "~/lib/guides/graph";
 import { caseDetail } from "~/services/cases.server";
 import { requireUser } from "~/services/guards.server";
 import { causeList } from "~/services/guides.server";
+import type { Answer } from "~/lib/vocabulary";
 import type { Route } from "./+types/cases.$id.walk";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
@@ -22,7 +23,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
         .filter((c) => codes.has(c.code))
         .map((c) => [c.code, c.name]),
     ),
-    events: detail.events.map((e) => ({ id: e.id, seq: e.seq, stepId: e.stepId, answer: e.answer as "YES", at: e.at, ...(e.note ? { note: e.note } : {}) })),
+    events: detail.events.map((e) => ({ id: e.id, seq: e.seq, stepId: e.stepId, answer: e.answer as Answer, at: e.at, ...(e.note ? { note: e.note } : {}) })),
   };
 }
 

@@ -1,16 +1,15 @@
 import { stringify } from "csv-stringify/sync";
 import { caseFiltersSchema } from "~/lib/case-filters";
 import { listCases } from "~/services/case-list.server";
-import { fail, requireRole } from "~/services/guards.server";
+import { requireRole } from "~/services/guards.server";
+import { readQuery } from "~/services/read-request.server";
 import { causeList } from "~/services/guides.server";
 import type { Route } from "./+types/cases.export";
 
 /** The filtered cases as CSV (the same filters as the table, every page). */
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireRole(request, "supervisor");
-  const parsed = caseFiltersSchema.safeParse(Object.fromEntries(new URL(request.url).searchParams));
-  if (!parsed.success) fail(400, "Check the filters.");
-  const { rows } = await listCases(user, parsed.data, { all: true });
+  const { rows } = await listCases(user, readQuery(request, caseFiltersSchema, "the filters"), { all: true });
   const names = new Map(causeList().map((c) => [c.code, c.name]));
   const csv = stringify(
     rows.map((r) => [

@@ -1,17 +1,17 @@
 import { Form, Link } from "react-router";
 import { PageTitle } from "~/components/ui/page-title";
 import { caseFiltersSchema, filtersToSearch, PAGE_SIZE, type CaseFilters } from "~/lib/case-filters";
-import { formatDateTime, formatDuration, OUTCOME_LABELS } from "~/lib/format";
+import { formatDateTime, formatDuration } from "~/lib/format";
+import { OUTCOME_LABELS, outcomeLabel } from "~/lib/vocabulary";
 import { caseFilterOptions, listCases } from "~/services/case-list.server";
-import { fail, requireRole } from "~/services/guards.server";
+import { requireRole } from "~/services/guards.server";
+import { readQuery } from "~/services/read-request.server";
 import { causeList } from "~/services/guides.server";
 import type { Route } from "./+types/cases";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireRole(request, "supervisor");
-  const parsed = caseFiltersSchema.safeParse(Object.fromEntries(new URL(request.url).searchParams));
-  if (!parsed.success) fail(400, `Check the filters: ${parsed.error.issues.map((i) => `${i.path.join(".")} ${i.message}`).join("; ")}.`);
-  const filters = parsed.data;
+  const filters = readQuery(request, caseFiltersSchema, "the filters");
   const [{ rows, total }, options] = await Promise.all([listCases(user, filters), caseFilterOptions(user)]);
   return { rows, total, filters, options, causes: causeList().map((c) => ({ code: c.code, name: c.name })) };
 }
@@ -85,7 +85,7 @@ export default function Cases({ loaderData }: Route.ComponentProps) {
                   <Link to={`/cases/${r.id}`}>{r.guideTitle}</Link>
                 </td>
                 <td className="p-2">{r.causeCode ? (causeName.get(r.causeCode) ?? r.causeCode) : "—"}</td>
-                <td className="p-2">{OUTCOME_LABELS[r.outcome]}</td>
+                <td className="p-2">{outcomeLabel(r.outcome)}</td>
                 <td className="p-2">{r.person ?? "—"}</td>
                 <td className="p-2">{formatDateTime(r.openedAt)}</td>
                 <td className="p-2">{r.durationSeconds === null ? "open" : formatDuration(r.durationSeconds * 1000)}</td>

@@ -7,6 +7,7 @@ import { hasRole } from "~/lib/roles";
 import { GuideVersion } from "~/services/db.server";
 import { deskGuide, learnFromCases, openDraft, reviewVersion, submitDraft } from "~/services/desk.server";
 import { fail, requireRole } from "~/services/guards.server";
+import { statusLabel } from "~/lib/vocabulary";
 import type { Route } from "./+types/desk.$guideId";
 
 const guideIdOf = (params: { guideId: string }) => {
@@ -71,8 +72,6 @@ export async function action({ request, params }: Route.ActionArgs) {
   return { done: a.intent === "approve" ? `Version ${a.number} published: new cases use it.` : `Version ${a.number} sent back to draft.` };
 }
 
-const STATUS: Record<string, string> = { draft: "Draft", in_review: "In review", published: "Published", retired: "Retired" };
-
 export default function DeskGuide({ loaderData, actionData }: Route.ComponentProps) {
   const { guide, versions, canPublish, learning } = loaderData;
   const input = "mt-1 block min-h-12 w-full rounded-md border-2 border-ink px-2";
@@ -102,7 +101,7 @@ export default function DeskGuide({ loaderData, actionData }: Route.ComponentPro
         {versions.map((v, i) => (
           <li key={v.number} className="rounded-lg border-2 border-ink bg-paper p-3">
             <p className="font-bold">
-              Version {v.number}: {STATUS[v.status]} <span className="font-normal">· {formatDateTime(v.updatedAt)} UTC</span>
+              Version {v.number}: {statusLabel(v.status)} <span className="font-normal">· {formatDateTime(v.updatedAt)} UTC</span>
             </p>
             {v.changeNote ? <p>Change: {v.changeNote}</p> : null}
             {v.reviewComment ? <p>Review: {v.reviewComment}</p> : null}

@@ -1,5 +1,6 @@
 import { data, Form, Link, redirect } from "react-router";
 import { PageTitle } from "~/components/ui/page-title";
+import { statusLabel } from "~/lib/vocabulary";
 import { createGuide, deskList, importGuide } from "~/services/desk.server";
 import { requireRole } from "~/services/guards.server";
 import type { Route } from "./+types/desk._index";
@@ -44,8 +45,6 @@ export async function action({ request }: Route.ActionArgs) {
   return data({ error: "Unknown action.", problems: [] as string[] }, { status: 400 });
 }
 
-const STATUS: Record<string, string> = { draft: "draft", in_review: "in review", published: "published", retired: "retired" };
-
 export default function Desk({ loaderData, actionData }: Route.ComponentProps) {
   const own = loaderData.guides.filter((g) => !g.builtIn);
   const builtIn = loaderData.guides.filter((g) => g.builtIn);
@@ -58,7 +57,7 @@ export default function Desk({ loaderData, actionData }: Route.ComponentProps) {
         {g.publishedVersion ? `Crews use version ${g.publishedVersion}` : "Not published yet"}
         {g.replacedByCompanyCopy ? " · replaced by your company's copy" : ""}
         {" · "}
-        {g.versions.map((v) => `v${v.number} ${STATUS[v.status]}`).join(", ")}
+        {g.versions.map((v) => `v${v.number} ${statusLabel(v.status).toLowerCase()}`).join(", ")}
       </p>
     </li>
   );

@@ -1,7 +1,8 @@
 import { Form, Link } from "react-router";
 import { PageTitle } from "~/components/ui/page-title";
 import { fmt, ftToM, galToL, inToMm } from "~/lib/calc/units";
-import { formatDateTime, OUTCOME_LABELS } from "~/lib/format";
+import { formatDateTime } from "~/lib/format";
+import { outcomeLabel } from "~/lib/vocabulary";
 import { recentRigCases } from "~/services/cases.server";
 import { requireRole, requireUser } from "~/services/guards.server";
 import { findRig, setRigRetired } from "~/services/rigs.server";
@@ -106,7 +107,7 @@ export default function RigPage({ loaderData }: Route.ComponentProps) {
                   {c.guideTitle}
                 </Link>
                 <p>
-                  {OUTCOME_LABELS[c.outcome]} · {formatDateTime(c.openedAt)} UTC · {c.openedBy ?? "—"}
+                  {outcomeLabel(c.outcome)} · {formatDateTime(c.openedAt)} UTC · {c.openedBy ?? "—"}
                 </p>
               </li>
             ))}

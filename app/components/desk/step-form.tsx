@@ -1,5 +1,6 @@
 import { Markdown } from "~/components/ui/markdown";
-import { CALC_WIDGETS, EVENTS_BY_KIND, STEP_KINDS, type StepKind } from "~/lib/guides/schema";
+import { CALC_WIDGETS, STEP_KINDS, type StepKind } from "~/lib/guides/schema";
+import { ANSWERS_BY_KIND } from "~/lib/vocabulary";
 
 export interface LooseStep {
   type?: "final";
@@ -31,7 +32,7 @@ export function StepForm({
   const meta = step.meta;
   const set = (change: Partial<LooseStep["meta"]>) => onChange({ ...step, meta: { ...meta, ...change } });
   const setKind = (kind: StepKind) => {
-    const events: readonly string[] = EVENTS_BY_KIND[kind];
+    const events: readonly string[] = ANSWERS_BY_KIND[kind];
     const on = Object.fromEntries(events.map((e) => [e, step.on?.[e] ?? ""]));
     const final = events.length === 0;
     onChange({
@@ -122,7 +123,7 @@ export function StepForm({
           </select>
         </label>
       ) : null}
-      {(EVENTS_BY_KIND[meta.kind] as readonly string[]).map((answer) => (
+      {(ANSWERS_BY_KIND[meta.kind] as readonly string[]).map((answer) => (
         <label key={answer} className="block font-bold">
           On {answer} go to
           <select

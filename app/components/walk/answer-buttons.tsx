@@ -1,32 +1,34 @@
 import type { StepKind } from "~/lib/guides/schema";
+import { ANSWER_LABELS, ANSWER_MARKS, ANSWERS_BY_KIND, type StepAnswer } from "~/lib/vocabulary";
 
-const LABELS: Record<string, { answer: string; label: string; primary: boolean }[]> = {
-  check: [
-    { answer: "YES", label: "Yes", primary: true },
-    { answer: "NO", label: "No", primary: true },
-  ],
-  task: [
-    { answer: "DONE", label: "Done", primary: true },
-    { answer: "CANT", label: "Can't do it", primary: false },
-  ],
-  safety: [{ answer: "ACK", label: "Machine is shut down and locked out", primary: true }],
+/**
+ * Each answer has its own shade as well as its own word and mark, so a glance in glare (or a
+ * colour-blind eye) tells Yes from No: the first of a pair is filled, the second outlined.
+ */
+const SHADE: Record<StepAnswer, string> = {
+  YES: "border-go bg-go text-white",
+  DONE: "border-go bg-go text-white",
+  NO: "border-ink bg-paper text-ink",
+  CANT: "border-ink bg-paper text-ink",
+  ACK: "border-ink bg-ink text-white",
 };
 
 /** The answers for a step's kind, big and at the bottom of the screen where a thumb reaches. */
-export function AnswerButtons({ kind, onAnswer }: { kind: StepKind; onAnswer: (answer: string) => void }) {
-  const buttons = LABELS[kind] ?? [];
+export function AnswerButtons({ kind, onAnswer }: { kind: StepKind; onAnswer: (answer: StepAnswer) => void }) {
+  const answers: readonly StepAnswer[] = ANSWERS_BY_KIND[kind];
   return (
-    <div className={`grid gap-3 ${buttons.length === 2 ? "grid-cols-2" : "grid-cols-1"}`}>
-      {buttons.map((b) => (
+    <div className={`grid gap-3 ${answers.length === 2 ? "grid-cols-2" : "grid-cols-1"}`}>
+      {answers.map((a) => (
         <button
-          key={b.answer}
+          key={a}
           type="button"
-          onClick={() => onAnswer(b.answer)}
-          className={`min-h-16 rounded-lg border-4 px-3 text-xl font-bold ${
-            kind === "safety" ? "border-ink bg-ink text-white" : b.primary ? "border-go bg-go text-white" : "border-ink bg-paper text-ink"
-          }`}
+          onClick={() => onAnswer(a)}
+          className={`flex min-h-16 items-center justify-center gap-2 rounded-lg border-4 px-3 text-xl font-bold ${SHADE[a]}`}
         >
-          {b.label}
+          <span aria-hidden="true" className="text-2xl leading-none">
+            {ANSWER_MARKS[a]}
+          </span>
+          {ANSWER_LABELS[a]}
         </button>
       ))}
     </div>

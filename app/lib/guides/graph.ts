@@ -1,4 +1,5 @@
-import { EVENTS_BY_KIND, type Guide } from "./schema";
+import { ANSWERS_BY_KIND } from "../vocabulary";
+import type { Guide } from "./schema";
 
 /** The targets each step's answers lead to, in answer order (only targets that exist). */
 export function edges(guide: Guide): Map<string, string[]> {
@@ -32,7 +33,7 @@ export function stepsToEnd(guide: Guide): Record<string, number> {
   const dist: Record<string, number> = Object.fromEntries(Object.keys(guide.states).map((id) => [id, Infinity]));
   const queue: string[] = [];
   for (const [id, step] of Object.entries(guide.states)) {
-    if (EVENTS_BY_KIND[step.meta.kind].length === 0) {
+    if (ANSWERS_BY_KIND[step.meta.kind].length === 0) {
       dist[id] = 0;
       queue.push(id);
     }
@@ -61,7 +62,7 @@ export function simplePaths(guide: Guide, limit = 10_000): GuidePath[] {
     if (paths.length >= limit) return;
     const step = guide.states[id];
     if (!step) return;
-    if (EVENTS_BY_KIND[step.meta.kind].length === 0) {
+    if (ANSWERS_BY_KIND[step.meta.kind].length === 0) {
       paths.push({ steps: [...steps, id], answers });
       return;
     }

@@ -1,5 +1,6 @@
 import { reachable } from "./graph";
-import { EVENTS_BY_KIND, type Guide } from "./schema";
+import { ANSWERS_BY_KIND } from "../vocabulary";
+import type { Guide } from "./schema";
 
 export interface LineCheck {
   stepId: string;
@@ -28,7 +29,7 @@ export function mainLine(guide: Guide): LineCheck[] {
   while (at && !seen.has(at)) {
     seen.add(at);
     const step: Guide["states"][string] = guide.states[at];
-    const events = EVENTS_BY_KIND[step.meta.kind] as readonly string[];
+    const events = ANSWERS_BY_KIND[step.meta.kind] as readonly string[];
     if (events.length === 0) break;
     if (step.meta.kind === "safety") {
       guard = { id: at, minutes: step.meta.minutes ?? 0 };

@@ -1,19 +1,9 @@
 import { z } from "zod";
-
-/** The events each step kind answers with; final kinds answer nothing. */
-export const EVENTS_BY_KIND = {
-  check: ["YES", "NO"],
-  task: ["DONE", "CANT"],
-  safety: ["ACK"],
-  fixed: [],
-  handoff: [],
-} as const;
+import { STEP_ANSWERS } from "../vocabulary";
 
 export const STEP_KINDS = ["check", "task", "safety", "fixed", "handoff"] as const;
 export type StepKind = (typeof STEP_KINDS)[number];
 export const FINAL_KINDS: readonly StepKind[] = ["fixed", "handoff"];
-export const ANSWERS = ["YES", "NO", "DONE", "CANT", "ACK"] as const;
-export type Answer = (typeof ANSWERS)[number];
 
 /** Field-math widgets a step may show (built by the field-math screens). */
 export const CALC_WIDGETS = ["hose-friction", "suction-head", "load-sheet", "torque"] as const;
@@ -35,7 +25,7 @@ export const stepMetaSchema = z.strictObject({
 
 export const stepSchema = z.strictObject({
   type: z.literal("final").optional(),
-  on: z.partialRecord(z.enum(ANSWERS), z.string()).optional(),
+  on: z.partialRecord(z.enum(STEP_ANSWERS), z.string()).optional(),
   meta: stepMetaSchema,
 });
 

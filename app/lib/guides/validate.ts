@@ -1,7 +1,8 @@
 import type { Cause } from "./causes";
 import { findDuplicateKeys } from "./duplicate-keys";
 import { reachable, stepsToEnd } from "./graph";
-import { EVENTS_BY_KIND, guideSchema, isFinalKind, STEP_KINDS, type Guide, type StepKind } from "./schema";
+import { ANSWERS_BY_KIND } from "../vocabulary";
+import { guideSchema, isFinalKind, STEP_KINDS, type Guide, type StepKind } from "./schema";
 
 export interface GuideProblem {
   guide: string;
@@ -100,7 +101,7 @@ function checkStructure(raw: Loose, causes: Cause[], add: (message: string, step
 
   for (const [id, step] of Object.entries(steps)) {
     const kind = step.meta.kind;
-    const needed: readonly string[] = EVENTS_BY_KIND[kind];
+    const needed: readonly string[] = ANSWERS_BY_KIND[kind];
     const given = Object.keys(step.on ?? {});
     for (const event of needed) if (!given.includes(event)) add(`a ${kind} step needs a ${event} answer`, id);
     for (const event of given) {

@@ -1,6 +1,7 @@
 import { transition } from "xstate";
 import type { GuideMachine } from "./compile";
-import { EVENTS_BY_KIND, type Guide } from "./schema";
+import { ANSWERS_BY_KIND } from "../vocabulary";
+import type { Guide } from "./schema";
 
 export interface WalkAnswer {
   seq: number;
@@ -13,7 +14,7 @@ export function answerFits(guide: Guide, stepId: string, answer: string): string
   const step = guide.states[stepId];
   if (!step) return `step "${stepId}" is not in this guide version`;
   if (answer === "BACK") return null;
-  const allowed: readonly string[] = EVENTS_BY_KIND[step.meta.kind];
+  const allowed: readonly string[] = ANSWERS_BY_KIND[step.meta.kind];
   if (!allowed.includes(answer)) {
     return allowed.length ? `a ${step.meta.kind} step takes ${allowed.join(" or ")}, not ${answer}` : `step "${stepId}" is an end and takes no answers`;
   }

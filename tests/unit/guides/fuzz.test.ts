@@ -2,7 +2,8 @@ import { createMachine } from "xstate";
 import { getShortestPaths } from "xstate/graph";
 import { describe, expect, it } from "vitest";
 import { loadLibrary } from "~/lib/guides/files";
-import { ANSWERS, EVENTS_BY_KIND, type Guide } from "~/lib/guides/schema";
+import type { Guide } from "~/lib/guides/schema";
+import { ANSWERS_BY_KIND, STEP_ANSWERS as ANSWERS } from "~/lib/vocabulary";
 import { validateGuide } from "~/lib/guides/validate";
 import { causes, root, tinyGuide } from "../../helpers/guides";
 
@@ -47,11 +48,11 @@ function breaksARule(g: Guide): string | null {
     createMachine({
       initial,
       states: Object.fromEntries(
-        Object.entries(g.states).map(([id, s]) => [id, EVENTS_BY_KIND[s.meta.kind].length === 0 || stopAt(id) ? { type: "final" as const } : { on: s.on }]),
+        Object.entries(g.states).map(([id, s]) => [id, ANSWERS_BY_KIND[s.meta.kind].length === 0 || stopAt(id) ? { type: "final" as const } : { on: s.on }]),
       ),
     });
   for (const [id, s] of Object.entries(g.states)) {
-    const needed = [...EVENTS_BY_KIND[s.meta.kind]].sort().join();
+    const needed = [...ANSWERS_BY_KIND[s.meta.kind]].sort().join();
     if (
       Object.keys(s.on ?? {})
         .sort()

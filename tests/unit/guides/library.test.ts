@@ -5,7 +5,8 @@ import { describe, expect, it } from "vitest";
 import { compileGuide } from "~/lib/guides/compile";
 import { checkGuideFiles, guideFilesIn, loadLibrary } from "~/lib/guides/files";
 import { simplePaths } from "~/lib/guides/graph";
-import { ANSWERS, EVENTS_BY_KIND, type Guide } from "~/lib/guides/schema";
+import { ANSWERS_BY_KIND as EVENTS_BY_KIND, STEP_ANSWERS as ANSWERS } from "~/lib/vocabulary";
+import type { Guide } from "~/lib/guides/schema";
 import { causes, root } from "../../helpers/guides";
 
 const library = loadLibrary(root);

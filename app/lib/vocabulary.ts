@@ -1,0 +1,50 @@
+/**
+ * Tankside's one vocabulary: the answers a crew gives, the outcomes of a case and the statuses of
+ * a guide version, each with the words people read. Buttons, case pages, e-mails, CSV, the desk,
+ * zod schemas and the database enums all take them from here.
+ */
+
+/** Every answer a walk-through stores; BACK undoes the one before it. */
+export const ANSWERS = ["YES", "NO", "DONE", "CANT", "ACK", "BACK"] as const;
+export type Answer = (typeof ANSWERS)[number];
+
+/** The answers a guide step can take (BACK is the walk's, not a step's). */
+export const STEP_ANSWERS = ["YES", "NO", "DONE", "CANT", "ACK"] as const;
+export type StepAnswer = (typeof STEP_ANSWERS)[number];
+
+/** Which answers each step kind takes, in the order they are offered; final kinds take none. */
+export const ANSWERS_BY_KIND = {
+  check: ["YES", "NO"],
+  task: ["DONE", "CANT"],
+  safety: ["ACK"],
+  fixed: [],
+  handoff: [],
+} as const satisfies Record<string, readonly StepAnswer[]>;
+
+/** One label for each answer, wherever it is shown: button, case page, e-mail, CSV, desk. */
+export const ANSWER_LABELS: Record<Answer, string> = {
+  YES: "Yes",
+  NO: "No",
+  DONE: "Done",
+  CANT: "Can't do it",
+  ACK: "Machine is shut down and locked out",
+  BACK: "Went back a step",
+};
+
+/** The mark beside each answer, so Yes and No differ in more than their place and colour. */
+export const ANSWER_MARKS: Record<Answer, string> = { YES: "✓", NO: "✕", DONE: "✓", CANT: "✕", ACK: "■", BACK: "↩" };
+
+export const answerLabel = (answer: string) => ANSWER_LABELS[answer as Answer] ?? answer;
+
+export const OUTCOMES = ["open", "fixed", "handoff", "abandoned"] as const;
+export type Outcome = (typeof OUTCOMES)[number];
+/** The outcomes a close may set. */
+export const CLOSE_OUTCOMES = ["fixed", "handoff", "abandoned"] as const;
+export type CloseOutcome = (typeof CLOSE_OUTCOMES)[number];
+export const OUTCOME_LABELS: Record<Outcome, string> = { open: "Open", fixed: "Fixed", handoff: "Handed off", abandoned: "Abandoned" };
+export const outcomeLabel = (outcome: string) => OUTCOME_LABELS[outcome as Outcome] ?? outcome;
+
+export const VERSION_STATUSES = ["draft", "in_review", "published", "retired"] as const;
+export type VersionStatus = (typeof VERSION_STATUSES)[number];
+export const STATUS_LABELS: Record<VersionStatus, string> = { draft: "Draft", in_review: "In review", published: "Published", retired: "Retired" };
+export const statusLabel = (status: string) => STATUS_LABELS[status as VersionStatus] ?? status;
