@@ -33,6 +33,7 @@ export default [
     route("cases/:id/walk", "routes/cases.$id.walk.tsx"),
     route("admin/outbox", "routes/admin.outbox.tsx"),
     route("admin/people", "routes/admin.people.tsx"),
+    route("admin/company", "routes/admin.company.tsx"),
     route("account", "routes/account.tsx"),
     route("desk", "routes/desk.tsx", [
       index("routes/desk._index.tsx"),

@@ -21,6 +21,8 @@ export class Company extends Model<InferAttributes<Company>, InferCreationAttrib
   declare id: CreationOptional<number>;
   declare name: string;
   declare slug: string;
+  /** IANA zone the company works in: screens, mail and the digest show its local times. */
+  declare timeZone: CreationOptional<string>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -139,6 +141,10 @@ export class Case extends Model<InferAttributes<Case>, InferCreationAttributes<C
   declare note: string | null;
   declare handoffResolvedAt: CreationOptional<Date | null>;
   declare handoffResolvedBy: CreationOptional<number | null>;
+  declare handoffResolvedNote: CreationOptional<string | null>;
+  /** When the hand-off mail left and to whom (names): set once, so the mail goes once. */
+  declare handoffMailedAt: CreationOptional<Date | null>;
+  declare handoffMailedTo: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -182,7 +188,10 @@ const decimal = (precision: number, scale: number, field: string) => ({
 
 /** Binds every model to the one Sequelize instance. Called once, by db/index.ts. */
 export function initModels(sequelize: Sequelize) {
-  Company.init({ id, name: DataTypes.STRING(120), slug: DataTypes.STRING(60), ...timestamps }, { sequelize, tableName: "companies" });
+  Company.init(
+    { id, name: DataTypes.STRING(120), slug: DataTypes.STRING(60), timeZone: { type: DataTypes.STRING(64), defaultValue: "America/Denver" }, ...timestamps },
+    { sequelize, tableName: "companies" },
+  );
   User.init(
     {
       id,
@@ -286,6 +295,9 @@ export function initModels(sequelize: Sequelize) {
       note: DataTypes.TEXT,
       handoffResolvedAt: DataTypes.DATE(3),
       handoffResolvedBy: DataTypes.INTEGER.UNSIGNED,
+      handoffResolvedNote: DataTypes.STRING(1000),
+      handoffMailedAt: DataTypes.DATE(3),
+      handoffMailedTo: DataTypes.STRING(1000),
       ...timestamps,
     },
     { sequelize, tableName: "cases" },

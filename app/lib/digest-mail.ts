@@ -1,8 +1,17 @@
 import { fmt } from "./calc/units";
+import { formatDateTime, isoInZone } from "./format";
 import type { Board } from "./stats/board";
 
 /** The weekly digest for a company's supervisors: what to look at, in plain text. */
-export function digestMail(company: string, board: Board, window: { from: string; to: string }, causeName: (code: string) => string, appUrl: string) {
+export function digestMail(
+  company: string,
+  board: Board,
+  window: { from: string; to: string },
+  causeName: (code: string) => string,
+  appUrl: string,
+  timeZone: string,
+) {
+  const day = (iso: string) => isoInZone(iso, timeZone).slice(0, 10);
   const flagged = board.rigs.filter((r) => r.outOfLine);
   const lines = [
     `Tankside weekly digest for ${company}, ${window.from} to ${window.to}.`,
@@ -19,12 +28,12 @@ export function digestMail(company: string, board: Board, window: { from: string
     "",
     "Repeats (same cause on the same rig):",
     ...(board.repeats.length
-      ? board.repeats.slice(0, 10).map((g) => `  ${g.rigCode}: ${causeName(g.cause)}, ${g.count} times (${g.firstAt.slice(0, 10)} to ${g.lastAt.slice(0, 10)})`)
+      ? board.repeats.slice(0, 10).map((g) => `  ${g.rigCode}: ${causeName(g.cause)}, ${g.count} times (${day(g.firstAt)} to ${day(g.lastAt)})`)
       : ["  none"]),
     "",
     "Open hand-offs:",
     ...(board.openHandoffs.length
-      ? board.openHandoffs.slice(0, 10).map((o) => `  ${o.rigCode} ${o.guideTitle} (${o.openedAt.slice(0, 10)}): ${appUrl}/cases/${o.caseId}`)
+      ? board.openHandoffs.slice(0, 10).map((o) => `  ${o.rigCode} ${o.guideTitle} (${formatDateTime(o.openedAt, timeZone)}): ${appUrl}/cases/${o.caseId}`)
       : ["  none"]),
     "",
     `The fault board: ${appUrl}/board`,

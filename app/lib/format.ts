@@ -1,10 +1,52 @@
-/** Times and durations for people, in UTC unless a zone is given (the server does not know the crew's). */
-export function formatDateTime(iso: string, timeZone = "UTC"): string {
-  return new Date(iso).toLocaleString("en-US", { timeZone, month: "short", day: "numeric", year: "numeric", hour: "numeric", minute: "2-digit" });
+/**
+ * Times and durations for people, always in the company's time zone and always naming it
+ * ("Jun 1, 2026, 8:05 AM MDT"), so a reader never wonders which clock a time is on.
+ */
+export function formatDateTime(iso: string | Date, timeZone: string): string {
+  return new Date(iso).toLocaleString("en-US", {
+    timeZone,
+    month: "short",
+    day: "numeric",
+    year: "numeric",
+    hour: "numeric",
+    minute: "2-digit",
+    timeZoneName: "short",
+  });
 }
 
-export function formatTime(iso: string, timeZone = "UTC"): string {
-  return new Date(iso).toLocaleTimeString("en-US", { timeZone, hour: "numeric", minute: "2-digit", second: "2-digit" });
+export function formatTime(iso: string | Date, timeZone: string): string {
+  return new Date(iso).toLocaleTimeString("en-US", { timeZone, hour: "numeric", minute: "2-digit", second: "2-digit", timeZoneName: "short" });
+}
+
+/** ISO 8601 in the zone's local time with its offset, e.g. 2026-06-01T08:05:00-06:00 (for CSV files). */
+export function isoInZone(iso: string | Date, timeZone: string): string {
+  const parts = Object.fromEntries(
+    new Intl.DateTimeFormat("en-US", {
+      timeZone,
+      hourCycle: "h23",
+      year: "numeric",
+      month: "2-digit",
+      day: "2-digit",
+      hour: "2-digit",
+      minute: "2-digit",
+      second: "2-digit",
+      timeZoneName: "longOffset",
+    })
+      .formatToParts(new Date(iso))
+      .map((p) => [p.type, p.value]),
+  );
+  const offset = parts.timeZoneName === "GMT" ? "+00:00" : parts.timeZoneName.replace("GMT", "");
+  return `${parts.year}-${parts.month}-${parts.day}T${parts.hour}:${parts.minute}:${parts.second}${offset}`;
+}
+
+/** Is this an IANA zone this runtime knows? */
+export function isTimeZone(zone: string): boolean {
+  try {
+    new Intl.DateTimeFormat("en-US", { timeZone: zone });
+    return true;
+  } catch {
+    return false;
+  }
 }
 
 export function formatDuration(ms: number): string {

@@ -1,4 +1,5 @@
 import type { Guide } from "./guides/schema";
+import { formatDateTime, formatTime } from "./format";
 import { answerLabel } from "./vocabulary";
 
 export interface HandoffFacts {
@@ -11,6 +12,8 @@ export interface HandoffFacts {
   note: string | null;
   caseUrl: string;
   photoUrls: string[];
+  /** The company's zone: every time in the mail is local and names its zone. */
+  timeZone: string;
 }
 
 const plain = (markdown: string) => markdown.replace(/\*\*|__|`/g, "");
@@ -19,8 +22,7 @@ const plain = (markdown: string) => markdown.replace(/\*\*|__|`/g, "");
 export function handoffMail(f: HandoffFacts): { subject: string; text: string } {
   const lines = f.events.map((e) => {
     const prompt = plain(f.guide.definition.states[e.stepId]?.meta.prompt ?? e.stepId);
-    const time = new Date(e.at).toISOString().slice(11, 16);
-    return `  ${time} UTC  ${prompt}\n           → ${answerLabel(e.answer)}${e.note ? `  (note: ${e.note})` : ""}`;
+    return `  ${formatTime(e.at, f.timeZone)}  ${prompt}\n           → ${answerLabel(e.answer)}${e.note ? `  (note: ${e.note})` : ""}`;
   });
   const end = f.finalStep ? plain(f.guide.definition.states[f.finalStep]?.meta.prompt ?? "") : "";
   const text = [
@@ -29,7 +31,7 @@ export function handoffMail(f: HandoffFacts): { subject: string; text: string } 
     end ? `Where it stopped: ${end}` : "",
     f.note ? `Crew note: ${f.note}` : "",
     "",
-    `Answers so far (guide version ${f.guide.version}, started ${f.openedAt.slice(0, 16).replace("T", " ")} UTC):`,
+    `Answers so far (guide version ${f.guide.version}, started ${formatDateTime(f.openedAt, f.timeZone)}):`,
     ...lines,
     "",
     f.photoUrls.length ? `Photos:\n${f.photoUrls.map((u) => `  ${u}`).join("\n")}` : "No photos.",

@@ -1,3 +1,4 @@
+import { formatDateTime } from "./format";
 import { ROLE_LABELS, type Role } from "./roles";
 
 const WHAT_THEY_DO: Record<Role, string> = {
@@ -8,7 +9,7 @@ const WHAT_THEY_DO: Record<Role, string> = {
 };
 
 /** The invitation e-mail: who asked, what the role lets them do, the link and when it stops working. */
-export function inviteMail(f: { name: string; company: string; invitedBy: string; role: Role; link: string; expiresAt: Date }): {
+export function inviteMail(f: { name: string; company: string; invitedBy: string; role: Role; link: string; expiresAt: Date; timeZone: string }): {
   subject: string;
   text: string;
 } {
@@ -22,7 +23,7 @@ export function inviteMail(f: { name: string; company: string; invitedBy: string
       "Choose your password here (the link works once):",
       f.link,
       "",
-      `It stops working on ${f.expiresAt.toISOString().slice(0, 16).replace("T", " ")} UTC. If it has, ask ${f.invitedBy} for a new one.`,
+      `It stops working on ${formatDateTime(f.expiresAt, f.timeZone)}. If it has, ask ${f.invitedBy} for a new one.`,
       "If you did not expect this, ignore it: nothing happens until the link is used.",
     ].join("\n"),
   };

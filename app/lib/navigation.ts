@@ -17,6 +17,7 @@ export const NAV_ITEMS: NavItem[] = [
   { to: "/rigs/new", label: "Add a rig", minRole: "admin" },
   { to: "/admin/people", label: "People", minRole: "admin" },
   { to: "/admin/outbox", label: "Outbox", minRole: "admin" },
+  { to: "/admin/company", label: "Company", minRole: "admin" },
 ];
 
 export const navFor = (role: Role) => NAV_ITEMS.filter((item) => hasRole(role, item.minRole));

@@ -27,7 +27,7 @@ export interface WalkRecord {
   events: QueuedEvent[];
   synced: string[];
   close?: QueuedClose;
-  closeResult?: { notified: string[]; mailFailed?: boolean };
+  closeResult?: { notified: string[]; mailedAt?: string | null; mailFailed?: boolean };
   rejected?: string;
 }
 

@@ -1,8 +1,8 @@
 import { PageTitle } from "~/components/ui/page-title";
-import { formatDateTime } from "~/lib/format";
 import { Invite, User } from "~/services/db.server";
 import { notFound, requireRole } from "~/services/guards.server";
 import { readOutbox } from "~/services/outbox.server";
+import { useTimes } from "~/components/use-time-zone";
 import type { Route } from "./+types/admin.outbox";
 
 export async function loader({ request }: Route.LoaderArgs) {
@@ -19,6 +19,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 }
 
 export default function Outbox({ loaderData }: Route.ComponentProps) {
+  const times = useTimes();
   return (
     <>
       <PageTitle lead="Mail the app sent to your people while running with the local fake mail server (development only).">Outbox</PageTitle>
@@ -27,7 +28,7 @@ export default function Outbox({ loaderData }: Route.ComponentProps) {
         {loaderData.messages.map((m) => (
           <li key={m.file} className="rounded-lg border-2 border-ink bg-paper p-4">
             <p className="text-sm">
-              {formatDateTime(m.receivedAt)} UTC · to {m.to.join(", ")}
+              {times.dateTime(m.receivedAt)} · to {m.to.join(", ")}
             </p>
             <p className="text-lg font-bold">{m.subject}</p>
             <details className="mt-2">

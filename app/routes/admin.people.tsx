@@ -5,11 +5,11 @@ import { FormField, inputClass } from "~/components/form-field";
 import { DoneNote } from "~/components/ui/done-note";
 import { PageTitle } from "~/components/ui/page-title";
 import { toFieldErrors } from "~/lib/form-errors";
-import { formatDateTime } from "~/lib/format";
 import { inviteSchema, personActionSchema } from "~/lib/people-schema";
 import { ROLE_LABELS, ROLES } from "~/lib/roles";
 import { requireRole } from "~/services/guards.server";
 import { actOnPerson, invitePerson, listPeople } from "~/services/people.server";
+import { useTimes } from "~/components/use-time-zone";
 import type { Route } from "./+types/admin.people";
 
 export async function loader({ request }: Route.LoaderArgs) {
@@ -51,6 +51,7 @@ const ROLE_HINTS: Record<(typeof ROLES)[number], string> = {
 const buttonClass = "min-h-12 rounded-md border-2 border-ink bg-paper px-4 font-bold";
 
 export default function People({ loaderData, actionData }: Route.ComponentProps) {
+  const times = useTimes();
   const busy = useNavigation().state !== "idle";
   const [form, fields] = useForm({
     lastResult: actionData?.invite,
@@ -109,7 +110,7 @@ export default function People({ loaderData, actionData }: Route.ComponentProps)
               <p className="break-all">{p.email}</p>
               <p>
                 {ROLE_LABELS[p.role]}
-                {p.accessRemovedAt ? ` · sign-in off since ${formatDateTime(p.accessRemovedAt)} UTC` : ""}
+                {p.accessRemovedAt ? ` · sign-in off since ${times.dateTime(p.accessRemovedAt)}` : ""}
               </p>
               {p.you ? (
                 <p className="mt-2 text-sm">Another admin can change your role or sign-in.</p>
@@ -155,7 +156,7 @@ export default function People({ loaderData, actionData }: Route.ComponentProps)
               <p className="text-lg font-bold">{i.name}</p>
               <p className="break-all">{i.email}</p>
               <p>
-                {ROLE_LABELS[i.role]} · {i.expired ? "expired — invite them again for a new link" : `link works until ${formatDateTime(i.expiresAt)} UTC`}
+                {ROLE_LABELS[i.role]} · {i.expired ? "expired — invite them again for a new link" : `link works until ${times.dateTime(i.expiresAt)}`}
               </p>
               <Form method="post" className="mt-3">
                 <input type="hidden" name="inviteId" value={i.id} />

@@ -3,13 +3,13 @@ import { ParetoChart, TrendChart } from "~/components/board/charts";
 import { PageTitle } from "~/components/ui/page-title";
 import { boardQuerySchema } from "~/lib/board-query";
 import { fmt } from "~/lib/calc/units";
-import { formatDateTime } from "~/lib/format";
 import { boardFor } from "~/services/board.server";
 import { sendDigest } from "~/services/digest.server";
 import { requireRole } from "~/services/guards.server";
 import { readQuery } from "~/services/read-request.server";
 import { causeList } from "~/services/guides.server";
 import { listRigs } from "~/services/rigs.server";
+import { useTimes } from "~/components/use-time-zone";
 import type { Route } from "./+types/board";
 
 export async function loader({ request }: Route.LoaderArgs) {
@@ -34,6 +34,7 @@ export async function action({ request }: Route.ActionArgs) {
 const h = (v: number | null, digits = 0) => (v === null ? "—" : fmt(v, digits));
 
 export default function BoardPage({ loaderData, actionData }: Route.ComponentProps) {
+  const times = useTimes();
   const { board, window, rigs, causeNames, canSendDigest } = loaderData;
   const busy = useNavigation().state !== "idle";
   const name = (code: string) => causeNames[code] ?? code;
@@ -286,7 +287,8 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
               <Link to={`/cases/${o.caseId}`}>
                 {o.rigCode} · {o.guideTitle}
               </Link>{" "}
-              — {formatDateTime(o.openedAt)} UTC{o.openedBy ? `, ${o.openedBy}` : ""}
+              — {times.dateTime(o.openedAt)}
+              {o.openedBy ? `, ${o.openedBy}` : ""}
             </li>
           ))}
         </ul>

@@ -1,11 +1,12 @@
 import { Form, Link } from "react-router";
 import { hasRole } from "~/lib/roles";
 import { PageTitle } from "~/components/ui/page-title";
-import { formatDateTime, formatDuration, formatTime } from "~/lib/format";
+import { formatDuration } from "~/lib/format";
 import { answerLabel, outcomeLabel } from "~/lib/vocabulary";
 import { caseDetail, resolveHandoff } from "~/services/cases.server";
 import { fail, requireRole, requireUser } from "~/services/guards.server";
 import { causeList } from "~/services/guides.server";
+import { useTimes } from "~/components/use-time-zone";
 import type { Route } from "./+types/cases.$id";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
@@ -32,6 +33,7 @@ export async function action({ request, params }: Route.ActionArgs) {
 }
 
 export default function CasePage({ loaderData: c }: Route.ComponentProps) {
+  const times = useTimes();
   const duration = c.closedAt ? formatDuration(Date.parse(c.closedAt) - Date.parse(c.openedAt)) : "still open";
   const facts: [string, React.ReactNode][] = [
     [
@@ -42,12 +44,12 @@ export default function CasePage({ loaderData: c }: Route.ComponentProps) {
     ],
     ["Guide", `${c.guide.title} (version ${c.guide.version})`],
     ["Started by", c.openedBy ?? "—"],
-    ["Opened", `${formatDateTime(c.openedAt)} UTC`],
-    ["Closed", c.closedAt ? `${formatDateTime(c.closedAt)} UTC` : "—"],
+    ["Opened", `${times.dateTime(c.openedAt)}`],
+    ["Closed", c.closedAt ? `${times.dateTime(c.closedAt)}` : "—"],
     ["Time taken", duration],
     ["Outcome", outcomeLabel(c.outcome)],
     ["Cause", c.cause ? `${c.cause.name} (${c.cause.component})` : "—"],
-    ["Shut-down acknowledged", c.safetyAckAt ? `${formatTime(c.safetyAckAt)} UTC` : "no hands-on step reached"],
+    ["Shut-down acknowledged", c.safetyAckAt ? `${times.time(c.safetyAckAt)}` : "no hands-on step reached"],
     ["Engine hours", c.engineHours !== null ? `${c.engineHours} h` : "—"],
   ];
   return (
@@ -78,7 +80,7 @@ export default function CasePage({ loaderData: c }: Route.ComponentProps) {
       ) : null}
       {c.outcome === "handoff" ? (
         c.handoffResolvedAt ? (
-          <p className="mt-2 font-bold">Hand-off dealt with {formatDateTime(c.handoffResolvedAt)} UTC.</p>
+          <p className="mt-2 font-bold">Hand-off dealt with {times.dateTime(c.handoffResolvedAt)}.</p>
         ) : c.canResolve ? (
           <Form method="post" className="mt-3">
             <button name="intent" value="resolve-handoff" className="min-h-14 rounded-md bg-go px-4 text-lg font-bold text-white">
@@ -96,7 +98,7 @@ export default function CasePage({ loaderData: c }: Route.ComponentProps) {
           return (
             <li key={e.id} className={`rounded-md border-2 p-3 ${e.kind === "safety" ? "border-ink bg-caution" : "border-rule bg-paper"}`}>
               <p className="text-sm">
-                {e.seq}. {formatTime(e.at)} UTC · +{formatDuration(gap)}
+                {e.seq}. {times.time(e.at)} · +{formatDuration(gap)}
               </p>
               <p className="font-bold">{e.prompt.replace(/\*\*/g, "")}</p>
               <p>→ {answerLabel(e.answer)}</p>

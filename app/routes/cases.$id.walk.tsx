@@ -14,7 +14,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   const codes = new Set(Object.values(detail.guide.definition.states).flatMap((s) => (s.meta.cause ? [s.meta.cause] : [])));
   return {
     caseId: detail.id,
-    closed: detail.outcome !== "open",
+    closedAs: detail.outcome === "open" ? null : detail.outcome,
     guide: detail.guide,
     rig: detail.rig,
     stepsToEnd: stepsToEnd(detail.guide.definition),
@@ -39,7 +39,7 @@ export default function Walk({ loaderData }: Route.ComponentProps) {
       stepsToEnd={d.stepsToEnd}
       causeNames={d.causeNames}
       serverEvents={d.events}
-      closed={d.closed}
+      closedAs={d.closedAs}
       offlineReady={offlineReady}
       renderCalc={(calc) => <CalcWidget calc={calc} rig={d.rig} />}
     />

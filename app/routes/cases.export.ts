@@ -1,5 +1,7 @@
 import { stringify } from "csv-stringify/sync";
 import { caseFiltersSchema } from "~/lib/case-filters";
+import { isoInZone } from "~/lib/format";
+import { outcomeLabel } from "~/lib/vocabulary";
 import { listCases } from "~/services/case-list.server";
 import { requireRole } from "~/services/guards.server";
 import { readQuery } from "~/services/read-request.server";
@@ -18,12 +20,12 @@ export async function loader({ request }: Route.LoaderArgs) {
       r.guideTitle,
       r.causeCode ?? "",
       r.causeCode ? (names.get(r.causeCode) ?? "") : "",
-      r.outcome,
+      outcomeLabel(r.outcome),
       r.person ?? "",
-      r.openedAt,
+      isoInZone(r.openedAt, user.timeZone),
       r.durationSeconds ?? "",
     ]),
-    { header: true, columns: ["case_id", "rig", "guide", "cause_code", "cause", "outcome", "opened_by", "opened_at_utc", "duration_seconds"] },
+    { header: true, columns: ["case_id", "rig", "guide", "cause_code", "cause", "outcome", "opened_by", "opened_at", "duration_seconds"] },
   );
   const stamp = new Date().toISOString().slice(0, 10);
   return new Response(csv, {

@@ -1,12 +1,13 @@
 import { Form, Link } from "react-router";
 import { PageTitle } from "~/components/ui/page-title";
 import { caseFiltersSchema, filtersToSearch, PAGE_SIZE, type CaseFilters } from "~/lib/case-filters";
-import { formatDateTime, formatDuration } from "~/lib/format";
+import { formatDuration } from "~/lib/format";
 import { OUTCOME_LABELS, outcomeLabel } from "~/lib/vocabulary";
 import { caseFilterOptions, listCases } from "~/services/case-list.server";
 import { requireRole } from "~/services/guards.server";
 import { readQuery } from "~/services/read-request.server";
 import { causeList } from "~/services/guides.server";
+import { useTimes } from "~/components/use-time-zone";
 import type { Route } from "./+types/cases";
 
 export async function loader({ request }: Route.LoaderArgs) {
@@ -22,11 +23,12 @@ const COLUMNS: { key: CaseFilters["sort"]; label: string }[] = [
   { key: "cause", label: "Cause" },
   { key: "outcome", label: "Outcome" },
   { key: "person", label: "Who" },
-  { key: "opened", label: "Opened (UTC)" },
+  { key: "opened", label: "Opened" },
   { key: "duration", label: "Took" },
 ];
 
 export default function Cases({ loaderData }: Route.ComponentProps) {
+  const times = useTimes();
   const { rows, total, filters, options, causes } = loaderData;
   const pages = Math.max(1, Math.ceil(total / PAGE_SIZE));
   const causeName = new Map(causes.map((c) => [c.code, c.name]));
@@ -87,7 +89,7 @@ export default function Cases({ loaderData }: Route.ComponentProps) {
                 <td className="p-2">{r.causeCode ? (causeName.get(r.causeCode) ?? r.causeCode) : "—"}</td>
                 <td className="p-2">{outcomeLabel(r.outcome)}</td>
                 <td className="p-2">{r.person ?? "—"}</td>
-                <td className="p-2">{formatDateTime(r.openedAt)}</td>
+                <td className="p-2">{times.dateTime(r.openedAt)}</td>
                 <td className="p-2">{r.durationSeconds === null ? "open" : formatDuration(r.durationSeconds * 1000)}</td>
               </tr>
             ))}

@@ -2,12 +2,12 @@ import { data, Form, Link, redirect } from "react-router";
 import { z } from "zod";
 import { PageTitle } from "~/components/ui/page-title";
 import { fmt } from "~/lib/calc/units";
-import { formatDateTime } from "~/lib/format";
 import { hasRole } from "~/lib/roles";
 import { GuideVersion } from "~/services/db.server";
 import { deskGuide, learnFromCases, openDraft, reviewVersion, submitDraft } from "~/services/desk.server";
 import { fail, requireRole } from "~/services/guards.server";
 import { statusLabel } from "~/lib/vocabulary";
+import { useTimes } from "~/components/use-time-zone";
 import type { Route } from "./+types/desk.$guideId";
 
 const guideIdOf = (params: { guideId: string }) => {
@@ -73,6 +73,7 @@ export async function action({ request, params }: Route.ActionArgs) {
 }
 
 export default function DeskGuide({ loaderData, actionData }: Route.ComponentProps) {
+  const times = useTimes();
   const { guide, versions, canPublish, learning } = loaderData;
   const input = "mt-1 block min-h-12 w-full rounded-md border-2 border-ink px-2";
   return (
@@ -101,7 +102,7 @@ export default function DeskGuide({ loaderData, actionData }: Route.ComponentPro
         {versions.map((v, i) => (
           <li key={v.number} className="rounded-lg border-2 border-ink bg-paper p-3">
             <p className="font-bold">
-              Version {v.number}: {statusLabel(v.status)} <span className="font-normal">· {formatDateTime(v.updatedAt)} UTC</span>
+              Version {v.number}: {statusLabel(v.status)} <span className="font-normal">· {times.dateTime(v.updatedAt)}</span>
             </p>
             {v.changeNote ? <p>Change: {v.changeNote}</p> : null}
             {v.reviewComment ? <p>Review: {v.reviewComment}</p> : null}

@@ -1,4 +1,5 @@
-import { useEffect, useRef, useState } from "react";
+import { randomUUID } from "node:crypto";
+import { useEffect, useState } from "react";
 import { Form, redirect, useFetcher, useNavigation } from "react-router";
 import { z } from "zod";
 import { startCase } from "~/services/cases.server";
@@ -14,6 +15,8 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   return {
     rig: { code: rig.code, name: rig.name, retired: rig.retired },
     tiles: guides.map((g) => ({ slug: g.slug, title: g.title, hint: g.definition.symptoms[0] })),
+    // Made with the page, so even a tap before the scripts load (or a double tap) starts one case.
+    caseId: randomUUID(),
   };
 }
 
@@ -41,15 +44,12 @@ interface Hit {
 }
 
 export default function StartFix({ loaderData }: Route.ComponentProps) {
-  const { rig, tiles } = loaderData;
+  const { rig, tiles, caseId } = loaderData;
   const search = useFetcher<{ results?: Hit[]; error?: string }>();
   const [query, setQuery] = useState("");
-  const busy = useNavigation().state !== "idle";
-  // The case id is made on the phone, so pressing twice on a slow signal still makes one case.
-  const caseId = useRef<string>("");
-  useEffect(() => {
-    caseId.current = crypto.randomUUID();
-  }, []);
+  const navigation = useNavigation();
+  // The tapped guide shows at once that it was taken, before the server answers on a slow link.
+  const opening = navigation.state !== "idle" ? (navigation.formData?.get("guideSlug")?.toString() ?? "") : null;
 
   useEffect(() => {
     const q = query.trim();
@@ -74,7 +74,7 @@ export default function StartFix({ loaderData }: Route.ComponentProps) {
           searching={search.state !== "idle"}
           searched={!!search.data}
           tiles={tiles}
-          busy={busy}
+          opening={opening}
           caseId={caseId}
         />
       )}
@@ -89,18 +89,26 @@ interface Tile {
 }
 
 /** A guide to start: the phone-made case id goes with it, so a double press on a slow signal makes one case. */
-function StartGuideButton({ slug, title, hint, busy, caseId }: Tile & { busy: boolean; caseId: React.RefObject<string> }) {
+function StartGuideButton({ slug, title, hint, opening, caseId }: Tile & { opening: string | null; caseId: string }) {
+  const mine = opening === slug;
   return (
-    <Form method="post" onSubmit={(e) => ((e.currentTarget.elements.namedItem("caseId") as HTMLInputElement).value = caseId.current)}>
+    <Form method="post">
       <input type="hidden" name="guideSlug" value={slug} />
-      <input type="hidden" name="caseId" value="" />
+      <input type="hidden" name="caseId" value={caseId} />
       <button
         type="submit"
-        disabled={busy}
-        className="flex min-h-16 w-full flex-col items-start justify-center rounded-lg border-2 border-ink bg-paper px-4 py-2 text-left"
+        disabled={opening !== null}
+        aria-busy={mine}
+        className={`flex min-h-16 w-full flex-col items-start justify-center rounded-lg border-2 px-4 py-2 text-left ${
+          mine ? "border-4 border-go bg-caution text-ink" : "border-ink bg-paper"
+        }`}
       >
-        <span className="text-xl font-bold">{title}</span>
-        {hint ? <span className="text-base">“{hint}”</span> : null}
+        <span className="text-xl font-bold">{mine ? `Opening ${title}…` : title}</span>
+        {mine ? (
+          <span className="text-base">Taken. Waiting for the server — keep this screen open.</span>
+        ) : hint ? (
+          <span className="text-base">“{hint}”</span>
+        ) : null}
       </button>
     </Form>
   );
@@ -114,7 +122,7 @@ function FixChooser({
   searching,
   searched,
   tiles,
-  busy,
+  opening,
   caseId,
 }: {
   query: string;
@@ -123,8 +131,8 @@ function FixChooser({
   searching: boolean;
   searched: boolean;
   tiles: Tile[];
-  busy: boolean;
-  caseId: React.RefObject<string>;
+  opening: string | null;
+  caseId: string;
 }) {
   return (
     <>
@@ -143,7 +151,7 @@ function FixChooser({
       {hits.length ? (
         <section aria-label="Matching guides" className="mt-3 space-y-2">
           {hits.slice(0, 3).map((h) => (
-            <StartGuideButton key={h.slug} slug={h.slug} title={h.title} busy={busy} caseId={caseId} />
+            <StartGuideButton key={h.slug} slug={h.slug} title={h.title} opening={opening} caseId={caseId} />
           ))}
         </section>
       ) : query.trim().length >= 2 && !searching && searched ? (
@@ -153,7 +161,7 @@ function FixChooser({
       <ul className="mt-2 grid gap-2 sm:grid-cols-2">
         {tiles.map((t) => (
           <li key={t.slug}>
-            <StartGuideButton {...t} busy={busy} caseId={caseId} />
+            <StartGuideButton {...t} opening={opening} caseId={caseId} />
           </li>
         ))}
       </ul>

@@ -1,11 +1,11 @@
 import { Form, Link } from "react-router";
 import { PageTitle } from "~/components/ui/page-title";
 import { fmt, ftToM, galToL, inToMm } from "~/lib/calc/units";
-import { formatDateTime } from "~/lib/format";
 import { outcomeLabel } from "~/lib/vocabulary";
 import { recentRigCases } from "~/services/cases.server";
 import { requireRole, requireUser } from "~/services/guards.server";
 import { findRig, setRigRetired } from "~/services/rigs.server";
+import { useTimes } from "~/components/use-time-zone";
 import type { Route } from "./+types/rigs.$code";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
@@ -26,6 +26,7 @@ export async function action({ request, params }: Route.ActionArgs) {
 }
 
 export default function RigPage({ loaderData }: Route.ComponentProps) {
+  const times = useTimes();
   const { rig, canEdit, cases } = loaderData;
   const specs: [string, string][] = [
     ["Mount", rig.mount],
@@ -107,7 +108,7 @@ export default function RigPage({ loaderData }: Route.ComponentProps) {
                   {c.guideTitle}
                 </Link>
                 <p>
-                  {outcomeLabel(c.outcome)} · {formatDateTime(c.openedAt)} UTC · {c.openedBy ?? "—"}
+                  {outcomeLabel(c.outcome)} · {times.dateTime(c.openedAt)} · {c.openedBy ?? "—"}
                 </p>
               </li>
             ))}

@@ -3,10 +3,11 @@ import { Op, UniqueConstraintError } from "sequelize";
 import type { CaseEventInput, CloseCaseInput } from "~/lib/case-schema";
 import { answerFits } from "~/lib/guides/walk";
 import { isFinalKind, type Guide } from "~/lib/guides/schema";
+import { outcomeLabel, type Outcome } from "~/lib/vocabulary";
 import { Case, CaseEvent, CasePhoto, changeCase, GuideRecord, GuideVersion, Rig, sequelize, User } from "./db.server";
 import { fail, notFound, type SessionUser } from "./guards.server";
 import { usableGuides } from "./guides.server";
-import { notifyHandoff } from "./handoff.server";
+import { mailHandoffOnce, NO_MAIL } from "./handoff.server";
 
 /** Starts a case on one of the company's active rigs with the guide's newest published version. Resending the same id is harmless. */
 export async function startCase(user: SessionUser, input: { id?: string; rigCode: string; guideSlug: string }) {
@@ -66,6 +67,12 @@ export async function storeEvents(user: SessionUser, caseId: string, events: Cas
     return why ? [`event ${e.seq}: ${why}`] : [];
   });
   if (misfits.length) fail(422, `Nothing stored: ${misfits.join("; ")}.`);
+  if (found.outcome !== "open") {
+    // A closed case takes no more answers; a resend of answers it already holds is still a harmless duplicate.
+    const held = await CaseEvent.count({ where: { caseId, id: events.map((e) => e.id) } });
+    if (held === new Set(events.map((e) => e.id)).size) return { stored: 0, duplicates: events.length };
+    fail(409, `Nothing stored: this case was closed as ${outcomeLabel(found.outcome).toLowerCase()} and takes no more answers.`);
+  }
 
   return sequelize.transaction(async (transaction) => {
     const known = await CaseEvent.findAll({
@@ -103,7 +110,7 @@ export async function closeCase(user: SessionUser, caseId: string, input: CloseC
   const { found, guide } = await findCaseWithGuide(user, caseId);
   if (found.outcome !== "open") {
     if (found.outcome === input.outcome && found.finalStep === (input.finalStep ?? null))
-      return { outcome: found.outcome, alreadyClosed: true, notified: [], mailFailed: false };
+      return { outcome: found.outcome, alreadyClosed: true, ...(found.outcome === "handoff" ? await mailHandoffOnce(user, caseId) : NO_MAIL) };
     fail(409, `This case is already closed as ${found.outcome}.`);
   }
   let causeCode: string | null = null;
@@ -133,23 +140,13 @@ export async function closeCase(user: SessionUser, caseId: string, input: CloseC
     }
     return { id: found.id, companyId: found.companyId, rigId: found.rigId, causeCode, openedAt: found.openedAt };
   });
-  let notified: string[] = [];
-  let mailFailed = false;
-  if (input.outcome === "handoff") {
-    // The case is closed either way; a mail server that is down must not lose the crew's answers.
-    try {
-      notified = await notifyHandoff(user, caseId);
-    } catch (error) {
-      mailFailed = true;
-      console.warn(`Hand-off mail for case ${caseId} failed: ${error instanceof Error ? error.message : error}`);
-    }
-  }
-  return { outcome: input.outcome, alreadyClosed: false, notified, mailFailed };
+  // The case is closed either way; a mail server that is down must not lose the crew's answers.
+  return { outcome: input.outcome, alreadyClosed: false, ...(input.outcome === "handoff" ? await mailHandoffOnce(user, caseId) : NO_MAIL) };
 }
 
 export interface CaseDetail {
   id: string;
-  outcome: string;
+  outcome: Outcome;
   openedAt: string;
   closedAt: string | null;
   engineHours: number | null;

@@ -127,7 +127,7 @@ export async function createGuide(user: SessionUser, title: string): Promise<{ g
     states: {
       "first-check": { on: { YES: "fixed-end", NO: "handoff-end" }, meta: { kind: "check", prompt: "Is the first likely cause the problem?", minutes: 1 } },
       "fixed-end": { type: "final", meta: { kind: "fixed", prompt: "Fixed.", cause: causeList()[0].code, component: causeList()[0].component } },
-      "handoff-end": { type: "final", meta: { kind: "handoff", prompt: "Your supervisor has been told." } },
+      "handoff-end": { type: "final", meta: { kind: "handoff", prompt: "This needs more than the crew can do on site: hand it to the supervisor." } },
     },
   };
   const guide = await GuideRecord.create({ companyId: user.companyId, scope, slug, title, publishedVersion: null, basedOnGuideId: null });

@@ -10,7 +10,7 @@ const DIGEST_DAYS = 30;
 
 /** Sends one company's digest to its supervisors (its admins if it has none); returns who got it. */
 export async function sendDigest(companyId: number, now = new Date()): Promise<string[]> {
-  const company = await Company.findByPk(companyId, { attributes: ["name"] });
+  const company = await Company.findByPk(companyId, { attributes: ["name", "timeZone"] });
   if (!company) return [];
   const to = new Date(Date.UTC(now.getUTCFullYear(), now.getUTCMonth(), now.getUTCDate()) + 86_400_000);
   const from = new Date(to.getTime() - DIGEST_DAYS * 86_400_000);
@@ -24,6 +24,7 @@ export async function sendDigest(companyId: number, now = new Date()): Promise<s
     { from: from.toISOString().slice(0, 10), to: new Date(to.getTime() - 86_400_000).toISOString().slice(0, 10) },
     (c) => names.get(c) ?? c,
     env().APP_URL,
+    company.timeZone,
   );
   await sendMail({ to: people.map((p) => p.email), ...mail });
   return people.map((p) => p.name);

@@ -10,6 +10,8 @@ export interface SessionUser {
   role: Role;
   companyId: number;
   companyName: string;
+  /** The company's IANA time zone: every time a person reads is shown in it. */
+  timeZone: string;
 }
 
 const isApi = (request: Request) => new URL(request.url).pathname.startsWith("/api/");
@@ -20,12 +22,12 @@ export async function getUser(request: Request): Promise<SessionUser | null> {
   if (!userId) return null;
   const user = await User.findByPk(userId, {
     attributes: ["id", "name", "email", "role", "companyId", "accessRemovedAt", "sessionEpoch"],
-    include: [{ model: Company, attributes: ["name"] }],
+    include: [{ model: Company, attributes: ["name", "timeZone"] }],
   });
   // A sign-in turned off by an admin ends at once, on every device; so does every session from before a new password.
   if (!user || user.accessRemovedAt || (session.get("epoch") ?? 0) !== user.sessionEpoch) return null;
   const company = (user as User & { Company: Company }).Company;
-  return { id: user.id, name: user.name, email: user.email, role: user.role, companyId: user.companyId, companyName: company.name };
+  return { id: user.id, name: user.name, email: user.email, role: user.role, companyId: user.companyId, companyName: company.name, timeZone: company.timeZone };
 }
 
 /** The signed-in person, or a redirect to sign-in (401 JSON for API routes). */

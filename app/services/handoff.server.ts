@@ -1,15 +1,25 @@
 import { handoffMail } from "~/lib/handoff-mail";
 import { caseDetail } from "./cases.server";
-import { User } from "./db.server";
+import { Case, User } from "./db.server";
 import { env } from "./env.server";
 import type { SessionUser } from "./guards.server";
 import { sendMail } from "./mail.server";
 
+/** What the phone is told about a hand-off's mail: only what has happened. */
+export interface HandoffMailResult {
+  notified: string[];
+  mailedAt: string | null;
+  mailFailed: boolean;
+}
+
+export const NO_MAIL: HandoffMailResult = { notified: [], mailedAt: null, mailFailed: false };
+
 /** Mails the company's supervisors (its admins if it has none) about a handed-off case; returns who was told. */
-export async function notifyHandoff(user: SessionUser, caseId: string): Promise<string[]> {
+async function notifyHandoff(user: SessionUser, caseId: string): Promise<string[]> {
   const detail = await caseDetail(user, caseId);
-  let people = await User.findAll({ where: { companyId: user.companyId, role: "supervisor" }, attributes: ["name", "email"] });
-  if (people.length === 0) people = await User.findAll({ where: { companyId: user.companyId, role: "admin" }, attributes: ["name", "email"] });
+  let people = await User.findAll({ where: { companyId: user.companyId, role: "supervisor", accessRemovedAt: null }, attributes: ["name", "email"] });
+  if (people.length === 0)
+    people = await User.findAll({ where: { companyId: user.companyId, role: "admin", accessRemovedAt: null }, attributes: ["name", "email"] });
   const base = env().APP_URL;
   const mail = handoffMail({
     rig: detail.rig,
@@ -20,8 +30,35 @@ export async function notifyHandoff(user: SessionUser, caseId: string): Promise<
     events: detail.events,
     note: detail.note,
     caseUrl: `${base}/cases/${caseId}`,
+    timeZone: user.timeZone,
     photoUrls: detail.photos.map((p) => `${base}/cases/${caseId}/photos/${p.id}`),
   });
   await sendMail({ to: people.map((p) => p.email), ...mail });
   return people.map((p) => p.name);
+}
+
+/**
+ * Sends a case's hand-off mail at most once, however many closes arrive (a resend, two phones):
+ * the first to claim the case's mail slot sends; the others report what the case records.
+ * A failed send frees the slot, so the next resend of the close tries again.
+ */
+export async function mailHandoffOnce(user: SessionUser, caseId: string): Promise<HandoffMailResult> {
+  const where = { id: caseId, companyId: user.companyId };
+  const [claimed] = await Case.update({ handoffMailedAt: new Date() }, { where: { ...where, handoffMailedAt: null } });
+  if (!claimed) {
+    const c = await Case.findOne({ where, attributes: ["handoffMailedAt", "handoffMailedTo"] });
+    // Still being sent by another request: nothing to claim yet, and nothing failed.
+    if (!c?.handoffMailedTo) return NO_MAIL;
+    return { notified: c.handoffMailedTo.split(", "), mailedAt: c.handoffMailedAt?.toISOString() ?? null, mailFailed: false };
+  }
+  try {
+    const names = await notifyHandoff(user, caseId);
+    const mailedAt = new Date();
+    await Case.update({ handoffMailedAt: mailedAt, handoffMailedTo: names.join(", ") }, { where });
+    return { notified: names, mailedAt: mailedAt.toISOString(), mailFailed: false };
+  } catch (error) {
+    console.warn(`Hand-off mail for case ${caseId} failed: ${error instanceof Error ? error.message : error}`);
+    await Case.update({ handoffMailedAt: null }, { where });
+    return { notified: [], mailedAt: null, mailFailed: true };
+  }
 }

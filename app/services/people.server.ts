@@ -61,6 +61,7 @@ export async function invitePerson(user: SessionUser, input: InviteInput): Promi
     role: input.role,
     link: new URL(`/join/${token}`, env().APP_URL).toString(),
     expiresAt,
+    timeZone: user.timeZone,
   });
   try {
     await sendMail({ to: [input.email], ...mail });

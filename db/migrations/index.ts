@@ -10,6 +10,7 @@ import * as m008 from "./008-board-rollups";
 import * as m009 from "./009-people";
 import * as m010 from "./010-password-resets";
 import * as m011 from "./011-session-epoch";
+import * as m012 from "./012-time-zone-and-handoff-record";
 
 export interface Migration {
   name: string;
@@ -30,4 +31,5 @@ export const migrations: Migration[] = [
   { name: "009-people", ...m009 },
   { name: "010-password-resets", ...m010 },
   { name: "011-session-epoch", ...m011 },
+  { name: "012-time-zone-and-handoff-record", ...m012 },
 ];

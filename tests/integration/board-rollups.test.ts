@@ -40,7 +40,15 @@ beforeAll(async () => {
   await resetDatabase();
   cedar = (await Company.findOne({ where: { slug: "cedar-flats" } }))!;
   const people = await User.findAll({ where: { companyId: cedar.id, role: ["crew", "supervisor"] }, order: [["id", "ASC"]] });
-  crew = people.map((u) => ({ id: u.id, name: u.name, email: u.email, role: u.role, companyId: cedar.id, companyName: cedar.name }));
+  crew = people.map((u) => ({
+    id: u.id,
+    name: u.name,
+    email: u.email,
+    role: u.role,
+    companyId: cedar.id,
+    companyName: cedar.name,
+    timeZone: "America/Denver",
+  }));
   const rigs = await Rig.findAll({ where: { companyId: cedar.id }, order: [["code", "ASC"]] });
   const version = (await GuideVersion.findOne({ include: [{ model: GuideRecord, as: "guide", where: { slug: "lost-prime" } }] }))!;
   const random = seededRandom(2026);

@@ -45,7 +45,7 @@ describe("demo history", () => {
 
   it("feeds the guide desk: how crews went through lost-prime, and a check order no slower than the guide's", async () => {
     const mo = (await User.findOne({ where: { email: "mo@cedarflats.example" } }))!;
-    const user = { id: mo.id, name: mo.name, email: mo.email, role: mo.role, companyId: mo.companyId, companyName: "" };
+    const user = { id: mo.id, name: mo.name, email: mo.email, role: mo.role, companyId: mo.companyId, companyName: "", timeZone: "America/Denver" };
     const guide = (await GuideRecord.findOne({ where: { scope: "builtin", slug: "lost-prime" } }))!;
     const learned = (await learnFromCases(user, guide.id))!;
     const companyCases = await Case.count({

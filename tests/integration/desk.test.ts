@@ -24,7 +24,7 @@ const form = async (email: string, path: string, body: Record<string, string>, p
   run(async () => guideAction(args(await requestAs(email, path, { form: body }), params)));
 const sessionUser = async (email: string) => {
   const u = (await User.findOne({ where: { email } }))!;
-  return { id: u.id, name: u.name, email, role: u.role, companyId: u.companyId, companyName: "" };
+  return { id: u.id, name: u.name, email, role: u.role, companyId: u.companyId, companyName: "", timeZone: "America/Denver" };
 };
 let builtinFoaming: GuideRecord;
 

@@ -2,6 +2,17 @@ import { useState } from "react";
 import { Markdown } from "~/components/ui/markdown";
 import type { StepMeta } from "~/lib/guides/schema";
 import type { QueuedClose, WalkRecord } from "~/lib/walk-queue";
+import { useTimes } from "../use-time-zone";
+
+/** What the crew is told about the hand-off mail: what will happen until the server says what did. */
+function handoffNews(record: WalkRecord, finished: boolean, online: boolean, time: (iso: string) => string): string {
+  const result = record.closeResult;
+  if (result?.mailFailed) return "The e-mail to your supervisor could not be sent. Call your supervisor.";
+  if (result?.notified.length) return `E-mailed to ${result.notified.join(", ")}${result.mailedAt ? ` at ${time(result.mailedAt)}` : ""}.`;
+  if (result) return "The case is closed; the e-mail to your supervisor is not confirmed yet. Call if it is urgent.";
+  if (!finished) return "When you finish, your supervisor will be e-mailed with your answers.";
+  return online ? "Sending… your supervisor will be e-mailed when the server has the case." : "Your supervisor will be e-mailed when this phone has signal.";
+}
 
 /** The end of a walk-through: what was found (or who is told), engine hours, and Finish. */
 export function EndCard({
@@ -9,17 +20,20 @@ export function EndCard({
   causeName,
   record,
   hourMeter,
+  online,
   onFinish,
 }: {
   meta: StepMeta;
   causeName?: string;
   record: WalkRecord;
   hourMeter: { has: boolean; current: number };
+  online: boolean;
   onFinish: (close: Omit<QueuedClose, "at" | "outcome" | "finalStep">) => void;
 }) {
   const [hours, setHours] = useState(hourMeter.has ? String(hourMeter.current) : "");
   const [note, setNote] = useState("");
   const [error, setError] = useState<string | null>(null);
+  const { time } = useTimes();
   const fixed = meta.kind === "fixed";
   const finished = !!record.close;
 
@@ -36,7 +50,7 @@ export function EndCard({
 
   return (
     <section aria-labelledby="end-title" className={`rounded-lg border-4 p-4 ${fixed ? "border-go bg-paper" : "border-stop bg-paper"}`}>
-      <h1 id="end-title" className={`text-2xl font-bold ${fixed ? "text-go" : "text-stop"}`}>
+      <h1 id="end-title" tabIndex={-1} data-step-heading className={`text-2xl font-bold ${fixed ? "text-go" : "text-stop"}`}>
         {fixed ? "Fixed" : "Handed off"}
       </h1>
       <Markdown className="mt-2 text-xl">{meta.prompt}</Markdown>
@@ -46,15 +60,10 @@ export function EndCard({
           {meta.component ? ` (${meta.component})` : ""}
         </p>
       ) : null}
+      {meta.help ? <Markdown className="mt-3 text-lg">{meta.help}</Markdown> : null}
       {!fixed ? (
-        <p className="mt-2 text-lg font-bold">
-          {record.closeResult
-            ? record.closeResult.notified.length
-              ? `Told by e-mail: ${record.closeResult.notified.join(", ")}.`
-              : "The e-mail could not be sent. Call your supervisor."
-            : finished
-              ? "Your supervisor will be e-mailed as soon as this phone has signal."
-              : "When you finish, your supervisor is e-mailed with your answers."}
+        <p className="mt-3 text-lg font-bold" data-testid="handoff-mail">
+          {handoffNews(record, finished, online, time)}
         </p>
       ) : null}
       {finished ? (

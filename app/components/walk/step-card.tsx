@@ -47,7 +47,7 @@ export function StepCard({
           {meta.minutes ? ` · about ${meta.minutes < 1 ? "½" : meta.minutes} min` : ""}
           {meta.handsOn ? " · hands-on" : ""}
         </h1>
-        <div id="step-prompt" className={`mt-1 leading-snug ${safety ? "text-xl" : "text-[1.45rem] font-bold"}`}>
+        <div id="step-prompt" tabIndex={-1} data-step-heading className={`mt-1 leading-snug ${safety ? "text-xl" : "text-[1.45rem] font-bold"}`}>
           <Markdown>{meta.prompt}</Markdown>
         </div>
         {meta.help && safety ? <Markdown className="mt-3 text-base">{meta.help}</Markdown> : null}

@@ -53,8 +53,8 @@ export function useWalkSync(record: WalkRecord, update: (change: (r: WalkRecord)
         if (closePending(latest.current) && unsynced(latest.current).length === 0) {
           const res = await post(`/api/cases/${caseId}/close`, latest.current.close, keepalive);
           if (!res.ok) return void (await refuse(res));
-          const result = (await res.json()) as { notified: string[]; mailFailed?: boolean };
-          update((r) => ({ ...r, closeResult: { notified: result.notified ?? [], mailFailed: result.mailFailed } }));
+          const result = (await res.json()) as { notified: string[]; mailedAt?: string | null; mailFailed?: boolean };
+          update((r) => ({ ...r, closeResult: { notified: result.notified ?? [], mailedAt: result.mailedAt ?? null, mailFailed: result.mailFailed } }));
         }
       } catch {
         // No connection after all: the timer tries again.

@@ -1,7 +1,9 @@
-import { useCallback, useEffect, useMemo, useState } from "react";
+import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from "react";
+import { Link } from "react-router";
 import { compileGuide } from "~/lib/guides/compile";
 import type { Guide } from "~/lib/guides/schema";
 import { replayWalk } from "~/lib/guides/walk";
+import { outcomeLabel, type Outcome } from "~/lib/vocabulary";
 import { appendEvent, loadRecord, mergeServerEvents, saveRecord, type QueuedEvent, type WalkRecord } from "~/lib/walk-queue";
 import { EndCard } from "./end-card";
 import { PhotoPicker } from "./photo-picker";
@@ -17,13 +19,14 @@ export interface WalkScreenProps {
   stepsToEnd: Record<string, number>;
   causeNames: Record<string, string>;
   serverEvents: QueuedEvent[];
-  closed: boolean;
+  /** How the server has the case closed, or null while it is open. */
+  closedAs: Outcome | null;
   offlineReady?: boolean;
   renderCalc?: (calc: string) => React.ReactNode;
 }
 
 /** The crew's walk-through: state lives on the phone, the server hears about it in batches. */
-export function WalkScreen({ caseId, guide, guideTitle, rig, stepsToEnd, causeNames, serverEvents, closed, offlineReady, renderCalc }: WalkScreenProps) {
+export function WalkScreen({ caseId, guide, guideTitle, rig, stepsToEnd, causeNames, serverEvents, closedAs, offlineReady, renderCalc }: WalkScreenProps) {
   const machine = useMemo(() => compileGuide(guide), [guide]);
   const [record, setRecord] = useState<WalkRecord>(() => mergeServerEvents({ caseId, events: [], synced: [] }, serverEvents));
   const [note, setNote] = useState("");
@@ -46,12 +49,30 @@ export function WalkScreen({ caseId, guide, guideTitle, rig, stepsToEnd, causeNa
   const here = path[path.length - 1];
   const meta = guide.states[here].meta;
   const atEnd = meta.kind === "fixed" || meta.kind === "handoff";
+  // Closed on the server and not by this phone (another phone finished it): read-only.
+  const closedElsewhere = closedAs !== null && !record.close;
+
+  // Every step opens at its top with its prompt in focus: a shut-down stop below the fold is no stop.
+  const top = useRef<HTMLDivElement>(null);
+  const stepKey = `${here}-${path.length}`;
+  const firstStep = useRef(true);
+  useEffect(() => {
+    const root = document.documentElement;
+    const before = root.style.overflowAnchor;
+    root.style.overflowAnchor = "none"; // the browser's scroll anchoring would push the new step down
+    return () => void (root.style.overflowAnchor = before);
+  }, []);
+  useLayoutEffect(() => {
+    if (firstStep.current) return void (firstStep.current = false);
+    window.scrollTo({ top: 0, left: 0, behavior: "instant" });
+    top.current?.querySelector<HTMLElement>("[data-step-heading]")?.focus({ preventScroll: true });
+  }, [stepKey]);
 
   const record_ = (answer: QueuedEvent["answer"], stepId: string) =>
     update((r) => appendEvent(r, { id: crypto.randomUUID(), stepId, answer, at: new Date().toISOString(), ...(note.trim() ? { note: note.trim() } : {}) }));
 
   return (
-    <div className="flex flex-col gap-3">
+    <div ref={top} className="flex flex-col gap-3">
       <header className="flex flex-wrap items-baseline justify-between gap-2">
         <p className="text-lg">
           <strong>{rig.code}</strong> · {guideTitle}
@@ -61,13 +82,15 @@ export function WalkScreen({ caseId, guide, guideTitle, rig, stepsToEnd, causeNa
           {atEnd ? " · end" : ` · at least ${stepsToEnd[here]} more to an end`}
         </p>
       </header>
-      {closed && !record.close ? <p className="font-bold">This case is already closed.</p> : null}
-      {atEnd ? (
+      {closedElsewhere ? (
+        <ClosedCard outcome={closedAs} />
+      ) : atEnd ? (
         <EndCard
           meta={meta}
           causeName={meta.cause ? causeNames[meta.cause] : undefined}
           record={record}
           hourMeter={{ has: rig.hasHourMeter, current: rig.engineHours }}
+          online={sync.online}
           onFinish={(close) => {
             update((r) => ({ ...r, close: { ...close, outcome: meta.kind as "fixed" | "handoff", finalStep: here, at: new Date().toISOString() } }));
             setTimeout(sync.flushNow, 0);
@@ -75,7 +98,7 @@ export function WalkScreen({ caseId, guide, guideTitle, rig, stepsToEnd, causeNa
         />
       ) : (
         <StepCard
-          key={`${here}-${path.length}`}
+          key={stepKey}
           machine={machine}
           stepId={here}
           note={note}
@@ -91,12 +114,12 @@ export function WalkScreen({ caseId, guide, guideTitle, rig, stepsToEnd, causeNa
       )}
       <SyncBadge online={sync.online} waiting={sync.waiting} rejected={record.rejected} />
       {offlineReady ? <p className="text-base">This walk-through is kept on this phone: it opens again even with no signal.</p> : null}
-      {path.length > 1 && !record.close ? (
+      {path.length > 1 && !record.close && !closedElsewhere ? (
         <button type="button" onClick={() => record_("BACK", here)} className="min-h-14 rounded-lg border-2 border-ink bg-paper text-lg font-bold">
           Back one step
         </button>
       ) : null}
-      {!atEnd && !record.close ? (
+      {!atEnd && !record.close && !closedElsewhere ? (
         <button
           type="button"
           onClick={() => {
@@ -111,5 +134,22 @@ export function WalkScreen({ caseId, guide, guideTitle, rig, stepsToEnd, causeNa
       ) : null}
       {record.close?.outcome === "abandoned" ? <p className="font-bold">Stopped. The case is saved as abandoned.</p> : null}
     </div>
+  );
+}
+
+/** A case another phone (or a supervisor) has closed: shown as it ended, with nothing to answer. */
+function ClosedCard({ outcome }: { outcome: Outcome }) {
+  return (
+    <section aria-labelledby="closed-title" className="rounded-lg border-4 border-ink bg-paper p-4">
+      <h1 id="closed-title" tabIndex={-1} data-step-heading className="text-2xl font-bold">
+        This case is closed ({outcomeLabel(outcome).toLowerCase()})
+      </h1>
+      <p className="mt-2 text-lg">It was finished on another phone and takes no more answers. If the rig still acts up, start a new fix.</p>
+      <p className="mt-4">
+        <Link to="/" className="text-lg font-bold">
+          Start a new fix
+        </Link>
+      </p>
+    </section>
   );
 }
