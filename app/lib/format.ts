@@ -18,6 +18,18 @@ export function formatTime(iso: string | Date, timeZone: string): string {
   return new Date(iso).toLocaleTimeString("en-US", { timeZone, hour: "numeric", minute: "2-digit", second: "2-digit", timeZoneName: "short" });
 }
 
+export function formatDate(iso: string | Date, timeZone: string): string {
+  return new Date(iso).toLocaleDateString("en-US", { timeZone, month: "short", day: "numeric", year: "numeric" });
+}
+
+/** A label cut at a word boundary (never mid-word), with an ellipsis when cut. */
+export function shortLabel(text: string, max: number): string {
+  if (text.length <= max) return text;
+  const cut = text.slice(0, max - 1);
+  const space = cut.lastIndexOf(" ");
+  return `${(space > max / 3 ? cut.slice(0, space) : cut).replace(/[,;:]$/, "")}…`;
+}
+
 /** ISO 8601 in the zone's local time with its offset, e.g. 2026-06-01T08:05:00-06:00 (for CSV files). */
 export function isoInZone(iso: string | Date, timeZone: string): string {
   const parts = Object.fromEntries(

@@ -28,7 +28,7 @@ export const personActionSchema = z.discriminatedUnion(
   "intent",
   [
     z.object({ intent: z.literal("role"), personId, role }),
-    z.object({ intent: z.literal("remove-access"), personId }),
+    z.object({ intent: z.literal("remove-access"), personId, confirmed: z.literal("yes", { error: "Confirm turning the sign-in off." }) }),
     z.object({ intent: z.literal("restore-access"), personId }),
     z.object({ intent: z.literal("cancel-invite"), inviteId: z.coerce.number({ error: "inviteId must be a number" }).int().positive() }),
   ],

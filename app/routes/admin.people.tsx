@@ -2,6 +2,7 @@ import { getFormProps, getInputProps, getSelectProps, useForm } from "@conform-t
 import { parseWithZod } from "@conform-to/zod/v4";
 import { data, Form, useNavigation } from "react-router";
 import { FormField, inputClass } from "~/components/form-field";
+import { ConfirmAction } from "~/components/ui/confirm-action";
 import { DoneNote } from "~/components/ui/done-note";
 import { PageTitle } from "~/components/ui/page-title";
 import { toFieldErrors } from "~/lib/form-errors";
@@ -132,12 +133,23 @@ export default function People({ loaderData, actionData }: Route.ComponentProps)
                       Save role
                     </button>
                   </Form>
-                  <Form method="post">
-                    <input type="hidden" name="personId" value={p.id} />
-                    <button name="intent" value={p.accessRemovedAt ? "restore-access" : "remove-access"} disabled={busy} className={buttonClass}>
-                      {p.accessRemovedAt ? "Turn sign-in back on" : "Turn sign-in off"}
-                    </button>
-                  </Form>
+                  {p.accessRemovedAt ? (
+                    <Form method="post">
+                      <input type="hidden" name="personId" value={p.id} />
+                      <button name="intent" value="restore-access" disabled={busy} className={buttonClass}>
+                        Turn sign-in back on
+                      </button>
+                    </Form>
+                  ) : (
+                    <ConfirmAction
+                      label="Turn sign-in off"
+                      question={`${p.name} will be signed out on every device at once and cannot sign in until it is turned back on. Their cases keep their name.`}
+                      confirmLabel={`Yes, turn ${p.name}'s sign-in off`}
+                      intent="remove-access"
+                      hidden={{ personId: String(p.id) }}
+                      disabled={busy}
+                    />
+                  )}
                 </div>
               )}
             </li>

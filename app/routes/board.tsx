@@ -3,6 +3,7 @@ import { ParetoChart, TrendChart } from "~/components/board/charts";
 import { PageTitle } from "~/components/ui/page-title";
 import { boardQuerySchema } from "~/lib/board-query";
 import { fmt } from "~/lib/calc/units";
+import { shortLabel } from "~/lib/format";
 import { boardFor } from "~/services/board.server";
 import { sendDigest } from "~/services/digest.server";
 import { requireRole } from "~/services/guards.server";
@@ -77,6 +78,29 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
         </div>
       </section>
 
+      <section aria-labelledby="handoffs-h" className="mt-4">
+        <h2 id="handoffs-h" className="text-2xl font-bold">
+          Open hand-offs{board.openHandoffs.length ? ` (${board.openHandoffs.length})` : ""}
+        </h2>
+        {board.openHandoffs.length === 0 ? <p>None waiting.</p> : null}
+        <ul className="mt-2 space-y-2">
+          {board.openHandoffs.slice(0, 15).map((o) => (
+            <li key={o.caseId} className="rounded-md border-2 border-rule bg-paper p-3">
+              <Link to={`/cases/${o.caseId}`}>
+                {o.rigCode} · {o.guideTitle}
+              </Link>{" "}
+              — {times.dateTime(o.openedAt)}
+              {o.openedBy ? `, ${o.openedBy}` : ""}
+            </li>
+          ))}
+        </ul>
+        {board.openHandoffs.length > 15 ? (
+          <p className="mt-1">
+            …and {board.openHandoffs.length - 15} more: <Link to="/cases?outcome=handoff">every hand-off</Link>.
+          </p>
+        ) : null}
+      </section>
+
       <Form method="get" className="mt-4 grid grid-cols-2 gap-3 rounded-lg border-2 border-ink bg-paper p-3 sm:grid-cols-5">
         <label className="font-bold">
           From
@@ -113,7 +137,7 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
         <h2 id="rigs-h" className="text-2xl font-bold">
           Rigs
         </h2>
-        <div className="mt-2 overflow-x-auto rounded-lg border-2 border-ink bg-paper">
+        <div className="mt-2 overflow-x-auto rounded-lg border-2 border-ink bg-paper" tabIndex={0} role="region" aria-label="Rigs table">
           <table className="w-full min-w-[46rem] border-collapse text-left">
             <thead>
               <tr className="border-b-2 border-ink">
@@ -172,12 +196,12 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
         <ParetoChart
           rows={board.pareto
             .slice(0, 12)
-            .map((p) => ({ label: name(p.cause).split(" (")[0].slice(0, 28), count: p.count, cumulative: Math.round(p.cumulativeShare * 1000) / 10 }))}
+            .map((p) => ({ label: shortLabel(name(p.cause).split(" (")[0], 26), count: p.count, cumulative: Math.round(p.cumulativeShare * 1000) / 10 }))}
         />
         <details className="rounded-md border-2 border-rule bg-paper p-3" open>
           <summary className="min-h-12 cursor-pointer py-2 font-bold">Causes as a table</summary>
-          <div className="overflow-x-auto">
-            <table className="w-full border-collapse text-left">
+          <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Causes table">
+            <table className="w-full min-w-[30rem] border-collapse text-left [&_td]:p-2 [&_th]:p-2">
               <thead>
                 <tr className="border-b-2 border-ink">
                   <th scope="col">Cause</th>
@@ -215,11 +239,11 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
                 {g.rigCode}: {name(g.cause)} — {g.count} times
               </p>
               <p className="text-sm">
-                {g.firstAt.slice(0, 10)} to {g.lastAt.slice(0, 10)}. Latest:{" "}
+                {times.date(g.firstAt)} to {times.date(g.lastAt)}. Latest:{" "}
                 {g.latest.map((c, i) => (
                   <span key={c.caseId}>
                     {i ? ", " : ""}
-                    <Link to={`/cases/${c.caseId}`}>{c.openedAt.slice(0, 10)}</Link>
+                    <Link to={`/cases/${c.caseId}`}>{times.date(c.openedAt)}</Link>
                   </span>
                 ))}
                 . <Link to={`/cases?rig=${g.rigCode}&cause=${g.cause}&from=${g.firstAt.slice(0, 10)}&to=${g.lastAt.slice(0, 10)}`}>All of them</Link>
@@ -237,7 +261,7 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
         <TrendChart weeks={board.weeks} />
         <details className="rounded-md border-2 border-rule bg-paper p-3">
           <summary className="min-h-12 cursor-pointer py-2 font-bold">Weeks as a table</summary>
-          <table className="w-full text-left">
+          <table className="w-full text-left [&_td]:p-1 [&_th]:p-1">
             <thead>
               <tr>
                 <th scope="col">Week of</th>
@@ -276,23 +300,6 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
         </ul>
       </section>
 
-      <section aria-labelledby="handoffs-h" className="mt-6">
-        <h2 id="handoffs-h" className="text-2xl font-bold">
-          Open hand-offs
-        </h2>
-        {board.openHandoffs.length === 0 ? <p>None waiting.</p> : null}
-        <ul className="mt-2 space-y-1">
-          {board.openHandoffs.slice(0, 15).map((o) => (
-            <li key={o.caseId}>
-              <Link to={`/cases/${o.caseId}`}>
-                {o.rigCode} · {o.guideTitle}
-              </Link>{" "}
-              — {times.dateTime(o.openedAt)}
-              {o.openedBy ? `, ${o.openedBy}` : ""}
-            </li>
-          ))}
-        </ul>
-      </section>
 
       <p className="mt-6">
         <a href={`/api/board?from=${window.from}&to=${window.to}${window.rig ? `&rig=${window.rig}` : ""}&repeatDays=${window.repeatDays}`}>

@@ -1,4 +1,6 @@
-import { Form, Link } from "react-router";
+import { Link } from "react-router";
+import { z } from "zod";
+import { ConfirmAction } from "~/components/ui/confirm-action";
 import { hasRole } from "~/lib/roles";
 import { PageTitle } from "~/components/ui/page-title";
 import { formatDuration } from "~/lib/format";
@@ -24,11 +26,23 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   };
 }
 
+const resolveHandoffSchema = z.object({
+  intent: z.literal("resolve-handoff", { error: "Say what to do: resolve-handoff." }),
+  confirmed: z.literal("yes", { error: "Confirm marking the hand-off dealt with." }),
+  note: z
+    .string()
+    .trim()
+    .max(1000, "Keep the note under 1,000 characters.")
+    .optional()
+    .transform((v) => v || undefined),
+});
+
 export async function action({ request, params }: Route.ActionArgs) {
   const user = await requireRole(request, "supervisor");
   const form = await request.formData();
-  if (form.get("intent") !== "resolve-handoff") fail(400, "Unknown action.");
-  await resolveHandoff(user, params.id);
+  const parsed = resolveHandoffSchema.safeParse(Object.fromEntries(form));
+  if (!parsed.success) fail(400, `Nothing changed: ${parsed.error.issues.map((i) => i.message).join(" ")}`);
+  await resolveHandoff(user, params.id, parsed.data.note ?? null);
   return { ok: true };
 }
 
@@ -80,13 +94,24 @@ export default function CasePage({ loaderData: c }: Route.ComponentProps) {
       ) : null}
       {c.outcome === "handoff" ? (
         c.handoffResolvedAt ? (
-          <p className="mt-2 font-bold">Hand-off dealt with {times.dateTime(c.handoffResolvedAt)}.</p>
+          <p className="mt-2 font-bold">
+            Hand-off dealt with {times.dateTime(c.handoffResolvedAt)}
+            {c.handoffResolvedBy ? ` by ${c.handoffResolvedBy}` : ""}.{c.handoffResolvedNote ? ` Note: ${c.handoffResolvedNote}` : ""}
+          </p>
         ) : c.canResolve ? (
-          <Form method="post" className="mt-3">
-            <button name="intent" value="resolve-handoff" className="min-h-14 rounded-md bg-go px-4 text-lg font-bold text-white">
-              Mark this hand-off dealt with
-            </button>
-          </Form>
+          <div className="mt-3">
+            <ConfirmAction
+              label="Mark this hand-off dealt with"
+              question="It leaves the board's open hand-offs. This cannot be undone."
+              confirmLabel="Yes, mark it dealt with"
+              intent="resolve-handoff"
+            >
+              <label className="block font-bold">
+                What was done (optional)
+                <textarea name="note" rows={2} maxLength={1000} className="mt-1 block w-full rounded-md border-2 border-ink p-2 font-normal" />
+              </label>
+            </ConfirmAction>
+          </div>
         ) : (
           <p className="mt-2 font-bold">Waiting for a supervisor.</p>
         )

@@ -1,6 +1,8 @@
 import { Link } from "react-router";
 import { PageTitle } from "~/components/ui/page-title";
-import { hasRole } from "~/lib/roles";
+import { navFor } from "~/lib/navigation";
+import { ROLE_LABELS } from "~/lib/roles";
+import { env } from "~/services/env.server";
 import { lastRigIdFor } from "~/services/cases.server";
 import { requireUser } from "~/services/guards.server";
 import { listRigs } from "~/services/rigs.server";
@@ -11,11 +13,12 @@ export async function loader({ request }: Route.LoaderArgs) {
   const [rigs, lastRigId] = await Promise.all([listRigs(user), lastRigIdFor(user)]);
   // The rig this person worked on last comes first: it is usually the one acting up again.
   rigs.sort((a, b) => Number(b.id === lastRigId) - Number(a.id === lastRigId));
-  return { role: user.role, firstName: user.name.split(" ")[0], rigs, lastRigId };
+  return { role: user.role, firstName: user.name.split(" ")[0], rigs, lastRigId, hidden: env().MAIL_OUTBOX_DIR ? [] : ["/admin/outbox"] };
 }
 
 export default function Home({ loaderData }: Route.ComponentProps) {
-  const { rigs, role, firstName, lastRigId } = loaderData;
+  const { rigs, role, firstName, lastRigId, hidden } = loaderData;
+  const more = navFor(role).filter((item) => item.minRole !== "crew" && !hidden.includes(item.to));
   return (
     <>
       <PageTitle lead="Pick the rig that is acting up.">Hi {firstName}. Which rig?</PageTitle>
@@ -41,16 +44,21 @@ export default function Home({ loaderData }: Route.ComponentProps) {
           ))}
         </ul>
       )}
-      {hasRole(role, "trainer") ? (
-        <section className="mt-8 rounded-lg bg-paper p-4">
-          <h2 className="text-xl font-bold">For {role === "trainer" ? "trainers" : role === "admin" ? "admins" : "supervisors"}</h2>
-          <p className="mt-1">
-            {role === "admin"
-              ? "Add, edit and retire rigs from the Rigs page."
-              : role === "trainer"
-                ? "The guide desk, where you write and version the troubleshooting guides, is coming next."
-                : "The fault board and the case list, for recurring faults by rig, are coming next."}
-          </p>
+      {more.length ? (
+        <section aria-labelledby="more-h" className="mt-8 rounded-lg bg-paper p-4">
+          <h2 id="more-h" className="text-xl font-bold">
+            Also yours as {ROLE_LABELS[role].toLowerCase()}
+          </h2>
+          <ul className="mt-2 space-y-2">
+            {more.map((item) => (
+              <li key={item.to}>
+                <Link to={item.to} className="text-lg font-bold">
+                  {item.label}
+                </Link>
+                <span className="block">{item.about}</span>
+              </li>
+            ))}
+          </ul>
         </section>
       ) : null}
     </>

@@ -4,20 +4,18 @@ import { EmailField } from "~/components/email-field";
 import { authenticator, SignInError } from "~/services/auth.server";
 import { env } from "~/services/env.server";
 import { getUser } from "~/services/guards.server";
+import { landingFor } from "~/lib/navigation";
+import { safeRedirect } from "~/lib/safe-redirect";
 import { signInCookie } from "~/services/session.server";
 import type { Route } from "./+types/login";
 
-/** Only same-site paths: never send a person to another host after sign-in. */
-function safeRedirect(to: FormDataEntryValue | string | null): string {
-  return typeof to === "string" && to.startsWith("/") && !to.startsWith("//") ? to : "/";
-}
-
 export async function loader({ request }: Route.LoaderArgs) {
-  if (await getUser(request)) throw redirect("/");
+  const user = await getUser(request);
+  if (user) throw redirect(landingFor(user.role));
   const e = env();
   const showDemo = e.SHOW_DEMO_SIGNINS === "1" || (e.NODE_ENV !== "production" && e.SHOW_DEMO_SIGNINS !== "0");
   return {
-    redirectTo: safeRedirect(new URL(request.url).searchParams.get("redirectTo")),
+    redirectTo: safeRedirect(new URL(request.url).searchParams.get("redirectTo")) ?? "",
     demo: showDemo ? { password: DEMO_PASSWORD, people: DEMO_PEOPLE.map(({ email, role }) => ({ email, role })) } : null,
   };
 }
@@ -25,8 +23,9 @@ export async function loader({ request }: Route.LoaderArgs) {
 export async function action({ request }: Route.ActionArgs) {
   const form = await request.clone().formData();
   try {
-    const userId = await authenticator.authenticate("form", request);
-    return redirect(safeRedirect(form.get("redirectTo")), { headers: await signInCookie(request, userId) });
+    const person = await authenticator.authenticate("form", request);
+    // Where they were going, else where their role starts the day (the board for supervisors).
+    return redirect(safeRedirect(form.get("redirectTo")) ?? landingFor(person.role), { headers: await signInCookie(request, person.id) });
   } catch (error) {
     if (error instanceof SignInError) {
       return data({ error: error.message, fields: error.fields, email: String(form.get("email") ?? "") }, { status: error.status });

@@ -3,7 +3,8 @@ import { PageTitle } from "~/components/ui/page-title";
 import { fmt, ftToM, galToL, inToMm } from "~/lib/calc/units";
 import { outcomeLabel } from "~/lib/vocabulary";
 import { recentRigCases } from "~/services/cases.server";
-import { requireRole, requireUser } from "~/services/guards.server";
+import { fail, requireRole, requireUser } from "~/services/guards.server";
+import { ConfirmAction } from "~/components/ui/confirm-action";
 import { findRig, setRigRetired } from "~/services/rigs.server";
 import { useTimes } from "~/components/use-time-zone";
 import type { Route } from "./+types/rigs.$code";
@@ -18,9 +19,8 @@ export async function action({ request, params }: Route.ActionArgs) {
   const user = await requireRole(request, "admin");
   const form = await request.formData();
   const intent = form.get("intent");
-  if (intent !== "retire" && intent !== "reinstate") {
-    return new Response("Unknown action.", { status: 400 });
-  }
+  if (intent !== "retire" && intent !== "reinstate") fail(400, "Say what to do: retire or reinstate.");
+  if (intent === "retire" && form.get("confirmed") !== "yes") fail(400, "Confirm retiring the rig.");
   await setRigRetired(user, params.code, intent === "retire");
   return { ok: true };
 }
@@ -122,11 +122,20 @@ export default function RigPage({ loaderData }: Route.ComponentProps) {
           <Link to="edit" className="flex min-h-14 items-center rounded-md bg-go px-5 font-bold text-white no-underline">
             Edit rig
           </Link>
-          <Form method="post">
-            <button name="intent" value={rig.retired ? "reinstate" : "retire"} className="min-h-14 rounded-md border-2 border-ink bg-paper px-5 font-bold">
-              {rig.retired ? "Put back in service" : "Retire rig"}
-            </button>
-          </Form>
+          {rig.retired ? (
+            <Form method="post">
+              <button name="intent" value="reinstate" className="min-h-14 rounded-md border-2 border-ink bg-paper px-5 font-bold">
+                Put back in service
+              </button>
+            </Form>
+          ) : (
+            <ConfirmAction
+              label="Retire rig"
+              question={`Retire ${rig.code}? Crews can no longer start a fix on it; its cases stay on the board.`}
+              confirmLabel={`Yes, retire ${rig.code}`}
+              intent="retire"
+            />
+          )}
         </div>
       ) : null}
     </>

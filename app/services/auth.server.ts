@@ -3,6 +3,7 @@ import { FormStrategy } from "remix-auth-form";
 import { z } from "zod";
 import { checkPassword, hashPassword } from "~/lib/password";
 import { emailAddress } from "~/lib/people-schema";
+import type { Role } from "~/lib/roles";
 import { User } from "./db.server";
 
 export const MAX_FAILURES = 10;
@@ -30,7 +31,7 @@ const credentials = z.object({
   password: z.string().min(1, "Enter your password.").max(200, "That password is too long."),
 });
 
-async function verify(form: FormData): Promise<number> {
+async function verify(form: FormData): Promise<SignedIn> {
   const parsed = credentials.safeParse({ email: form.get("email") ?? "", password: form.get("password") ?? "" });
   if (!parsed.success) {
     // The first problem per field is the one worth saying.
@@ -58,7 +59,7 @@ async function verify(form: FormData): Promise<number> {
   if (user.failedLogins > 0 || user.lockedUntil) {
     await user.update({ failedLogins: 0, firstFailedAt: null, lockedUntil: null });
   }
-  return user.id;
+  return { id: user.id, role: user.role };
 }
 
 async function recordFailure(user: User, now: number) {
@@ -71,5 +72,11 @@ async function recordFailure(user: User, now: number) {
   });
 }
 
-export const authenticator = new Authenticator<number>();
+/** Who signed in, and their role (where their day starts). */
+export interface SignedIn {
+  id: number;
+  role: Role;
+}
+
+export const authenticator = new Authenticator<SignedIn>();
 authenticator.use(new FormStrategy(({ form }) => verify(form)), "form");

@@ -155,6 +155,8 @@ export interface CaseDetail {
   safetyAckAt: string | null;
   note: string | null;
   handoffResolvedAt: string | null;
+  handoffResolvedBy: string | null;
+  handoffResolvedNote: string | null;
   rig: {
     code: string;
     name: string;
@@ -175,10 +177,11 @@ export interface CaseDetail {
 
 export async function caseDetail(user: SessionUser, caseId: string): Promise<CaseDetail> {
   const { found, guide, version } = await findCaseWithGuide(user, caseId);
-  const [rig, record, opener, events, photos] = await Promise.all([
+  const [rig, record, opener, resolver, events, photos] = await Promise.all([
     Rig.findByPk(found.rigId),
     GuideRecord.findByPk(version.guideId, { attributes: ["slug", "title"] }),
     found.openedBy ? User.findByPk(found.openedBy, { attributes: ["name"] }) : null,
+    found.handoffResolvedBy ? User.findByPk(found.handoffResolvedBy, { attributes: ["name"] }) : null,
     CaseEvent.findAll({ where: { caseId }, order: [["seq", "ASC"]] }),
     CasePhoto.findAll({ where: { caseId }, attributes: ["id", "stepId", "contentType"], order: [["id", "ASC"]] }),
   ]);
@@ -193,6 +196,8 @@ export async function caseDetail(user: SessionUser, caseId: string): Promise<Cas
     safetyAckAt: found.safetyAckAt?.toISOString() ?? null,
     note: found.note,
     handoffResolvedAt: found.handoffResolvedAt?.toISOString() ?? null,
+    handoffResolvedBy: resolver?.name ?? null,
+    handoffResolvedNote: found.handoffResolvedNote,
     rig: {
       code: rig!.code,
       name: rig!.name,
@@ -246,8 +251,8 @@ export async function lastRigIdFor(user: SessionUser): Promise<number | null> {
 }
 
 /** A supervisor marks a hand-off as dealt with, so it leaves the board's open list. */
-export async function resolveHandoff(user: SessionUser, caseId: string) {
+export async function resolveHandoff(user: SessionUser, caseId: string, note: string | null) {
   const { found } = await findCaseWithGuide(user, caseId);
   if (found.outcome !== "handoff") fail(409, "Only a handed-off case can be marked dealt with.");
-  if (!found.handoffResolvedAt) await found.update({ handoffResolvedAt: new Date(), handoffResolvedBy: user.id });
+  if (!found.handoffResolvedAt) await found.update({ handoffResolvedAt: new Date(), handoffResolvedBy: user.id, handoffResolvedNote: note });
 }

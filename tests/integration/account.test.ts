@@ -56,7 +56,7 @@ describe("your account", () => {
     const dana = (await User.findOne({ where: { email: "dana@cedarflats.example" } }))!;
     const admin = (fields: Record<string, string>) =>
       run(async () => peopleAction(args(await requestAs("june@cedarflats.example", "/admin/people", { form: fields }))));
-    await admin({ intent: "remove-access", personId: String(dana.id) });
+    await admin({ intent: "remove-access", personId: String(dana.id), confirmed: "yes" });
     await admin({ intent: "restore-access", personId: String(dana.id) });
     expect(await canSee(old)).toBe(false);
     expect(await canSee(await signedIn("dana@cedarflats.example", DEMO_PASSWORD))).toBe(true);

@@ -5,7 +5,7 @@ import { loader as searchLoader } from "~/routes/api.guides.search";
 import { importBuiltinGuides } from "../../seeds/import-guides";
 import { resetDatabase } from "../helpers/db";
 import { root, tinyGuide } from "../helpers/guides";
-import { args, requestAs } from "../helpers/requests";
+import { args, requestAs, run } from "../helpers/requests";
 
 const library = loadLibrary(root);
 
@@ -41,8 +41,8 @@ describe("guide storage", () => {
 
 describe("GET /api/guides/search", () => {
   const search = async (email: string | null, q: string) => {
-    const res = (await searchLoader(args(await requestAs(email, `/api/guides/search?q=${encodeURIComponent(q)}`)))) as Response;
-    return { status: res.status, body: await res.json() };
+    const out = await run(async () => searchLoader(args(await requestAs(email, `/api/guides/search?q=${encodeURIComponent(q)}`))));
+    return { status: out.status, body: out.data };
   };
 
   it("answers a signed-in person, best first, at most 10", async () => {

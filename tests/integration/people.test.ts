@@ -123,7 +123,7 @@ describe("roles and sign-ins", () => {
 
     const june = (await User.findOne({ where: { email: JUNE } }))!;
     expect((await post(JUNE, { intent: "role", personId: String(june.id), role: "crew" })).status).toBe(409);
-    expect((await post(JUNE, { intent: "remove-access", personId: String(june.id) })).status).toBe(409);
+    expect((await post(JUNE, { intent: "remove-access", personId: String(june.id), confirmed: "yes" })).status).toBe(409);
     expect((await User.findByPk(june.id))!.role).toBe("admin");
 
     const sam = (await User.findOne({ where: { email: "sam@bluemesa.example" } }))!;
@@ -140,7 +140,7 @@ describe("roles and sign-ins", () => {
     const session = await requestAs("dana@cedarflats.example", "/rigs");
     expect((await run(() => rigsLoader(args(session.clone())))).status).toBe(200);
 
-    await post(JUNE, { intent: "remove-access", personId: String(dana.id) });
+    await post(JUNE, { intent: "remove-access", personId: String(dana.id), confirmed: "yes" });
     const after = await run(() => rigsLoader(args(session.clone())));
     expect(after.status).toBe(302);
     expect(after.location).toMatch(/^\/login/);

@@ -38,7 +38,7 @@ describe("rigs are scoped to the company", () => {
     expect((await run(async () => rigLoader(args(await requestAs("dana@cedarflats.example", "/rigs/BM-01"), { code: "BM-01" })))).status).toBe(404);
     expect((await run(async () => rigLoader(args(await requestAs("june@cedarflats.example", "/rigs/BM-01"), { code: "BM-01" })))).status).toBe(404);
     const retire = await run(async () =>
-      rigAction(args(await requestAs("june@cedarflats.example", "/rigs/BM-01", { form: { intent: "retire" } }), { code: "BM-01" })),
+      rigAction(args(await requestAs("june@cedarflats.example", "/rigs/BM-01", { form: { intent: "retire", confirmed: "yes" } }), { code: "BM-01" })),
     );
     expect(retire.status).toBe(404);
     expect((await Rig.findOne({ where: { code: "BM-01" } }))!.retired).toBe(false);
@@ -84,10 +84,10 @@ describe("admins add, edit and retire rigs", () => {
     expect(edit.status).toBe(302);
     expect((await Rig.findOne({ where: { code: "CF-21" } }))!.tankGal).toBe(1200);
     const crew = await run(async () =>
-      rigAction(args(await requestAs("dana@cedarflats.example", "/rigs/CF-21", { form: { intent: "retire" } }), { code: "CF-21" })),
+      rigAction(args(await requestAs("dana@cedarflats.example", "/rigs/CF-21", { form: { intent: "retire", confirmed: "yes" } }), { code: "CF-21" })),
     );
     expect(crew.status).toBe(403);
-    await run(async () => rigAction(args(await requestAs("june@cedarflats.example", "/rigs/CF-21", { form: { intent: "retire" } }), { code: "CF-21" })));
+    await run(async () => rigAction(args(await requestAs("june@cedarflats.example", "/rigs/CF-21", { form: { intent: "retire", confirmed: "yes" } }), { code: "CF-21" })));
     expect((await Rig.findOne({ where: { code: "CF-21" } }))!.retired).toBe(true);
   });
 });

@@ -3,9 +3,10 @@ import { parse } from "csv-parse/sync";
 import { beforeAll, describe, expect, it } from "vitest";
 import { Case, Company, GuideVersion, Rig, User } from "../../db/index";
 import { action as boardAction, loader as boardLoader } from "~/routes/board";
-import { action as caseAction } from "~/routes/cases.$id";
+import { action as caseAction, loader as caseLoader } from "~/routes/cases.$id";
 import { loader as exportLoader } from "~/routes/cases.export";
 import { loader as casesLoader } from "~/routes/cases";
+import { loader as apiBoardLoader } from "~/routes/api.board";
 import { sendAllDigests } from "~/services/digest.server";
 import { rebuildRollups, resetDatabase } from "../helpers/db";
 import { caseRow } from "../helpers/cases";
@@ -90,6 +91,45 @@ describe("cases table", () => {
     expect((await run(async () => exportLoader(args(await requestAs("dana@cedarflats.example", "/cases/export"))))).status).toBe(403);
   });
 
+  it("reads a blank value of every query parameter as no filter, on the table, the CSV, the board and its API", async () => {
+    const blank = "rig=&guide=&cause=&outcome=&person=&from=&to=&sort=&dir=&page=";
+    const table = await run(async () => casesLoader(args(await requestAs(MO, `/cases?${blank}`))));
+    expect(table.status).toBe(200);
+    expect(table.data.total).toBe(31);
+    const csv = parse(await ((await exportLoader(args(await requestAs(MO, `/cases/export?${blank}`)))) as Response).text(), { columns: true });
+    expect(csv).toHaveLength(table.data.total);
+    // Each parameter on its own, blank, answers as if it were missing.
+    for (const name of blank.split("&").map((p) => p.slice(0, -1))) {
+      const one = await run(async () => casesLoader(args(await requestAs(MO, `/cases?${name}=`))));
+      expect(one.data.total, name).toBe(31);
+    }
+    const boardBlank = "from=&to=&rig=&repeatDays=";
+    const plain = await run(async () => boardLoader(args(await requestAs(MO, "/board"))));
+    const blanked = await run(async () => boardLoader(args(await requestAs(MO, `/board?${boardBlank}`))));
+    expect(blanked.data.board).toEqual(plain.data.board);
+    expect(plain.data.board.fleet.cases).toBe(31);
+    expect(plain.data.board.rigs.length).toBeGreaterThan(0);
+    const api = (await apiBoardLoader(args(await requestAs(MO, `/api/board?${boardBlank}`)))) as Response;
+    const apiBody = await api.json();
+    expect(apiBody.fleet.cases).toBe(31);
+    expect(apiBody.window.rig).toBeNull();
+    expect(apiBody.repeats.every((r: { rigCode: string }) => r.rigCode !== "?")).toBe(true);
+    // A bad value is still named.
+    const bad = await run(async () => casesLoader(args(await requestAs(MO, "/cases?from=June"))));
+    expect(bad.status).toBe(400);
+    expect(bad.data.error).toMatch(/from/);
+  });
+
+  it("writes CSV times in the company's zone with their offset", async () => {
+    const rows = parse(await ((await exportLoader(args(await requestAs(MO, "/cases/export")))) as Response).text(), { columns: true }) as Record<string, string>[];
+    // The demo companies work in America/Denver: UTC−7 in winter, UTC−6 in summer.
+    for (const r of rows) {
+      expect(r.opened_at).toMatch(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}-0[67]:00$/);
+    }
+    const first = (await Case.findByPk(rows[0].case_id))!;
+    expect(new Date(rows[0].opened_at).getTime()).toBe(Math.floor(first.openedAt.getTime() / 1000) * 1000);
+  });
+
   it("escapes a quote and a comma in a CSV field (guide titles and names go through the CSV writer)", async () => {
     const mo = await User.findOne({ where: { email: MO } });
     await mo!.update({ name: 'Mo "Boss", Brennan' });
@@ -114,15 +154,27 @@ describe("board page, hand-offs and the digest", () => {
 
   it("lets a supervisor mark a hand-off dealt with, and another company gets 404", async () => {
     expect(
-      (await run(async () => caseAction(args(await requestAs("li@bluemesa.example", "/x", { form: { intent: "resolve-handoff" } }), { id: handoffId }))))
+      (await run(async () => caseAction(args(await requestAs("li@bluemesa.example", "/x", { form: { intent: "resolve-handoff", confirmed: "yes" } }), { id: handoffId }))))
         .status,
     ).toBe(404);
     expect(
-      (await run(async () => caseAction(args(await requestAs("dana@cedarflats.example", "/x", { form: { intent: "resolve-handoff" } }), { id: handoffId }))))
+      (await run(async () => caseAction(args(await requestAs("dana@cedarflats.example", "/x", { form: { intent: "resolve-handoff", confirmed: "yes" } }), { id: handoffId }))))
         .status,
     ).toBe(403);
-    await run(async () => caseAction(args(await requestAs(MO, "/x", { form: { intent: "resolve-handoff" } }), { id: handoffId })));
-    expect((await Case.findByPk(handoffId))!.handoffResolvedAt).not.toBeNull();
+    // One tap without the confirmation changes nothing.
+    const unconfirmed = await run(async () => caseAction(args(await requestAs(MO, "/x", { form: { intent: "resolve-handoff" } }), { id: handoffId })));
+    expect(unconfirmed.status).toBe(400);
+    expect(unconfirmed.data.error).toMatch(/Confirm/);
+    expect((await Case.findByPk(handoffId))!.handoffResolvedAt).toBeNull();
+    await run(async () =>
+      caseAction(args(await requestAs(MO, "/x", { form: { intent: "resolve-handoff", confirmed: "yes", note: "New suction gasket fitted at the yard." } }), { id: handoffId })),
+    );
+    const resolved = (await Case.findByPk(handoffId))!;
+    expect(resolved.handoffResolvedAt).not.toBeNull();
+    expect(resolved.handoffResolvedNote).toBe("New suction gasket fitted at the yard.");
+    const page = await run(async () => caseLoader(args(await requestAs(MO, `/cases/${handoffId}`), { id: handoffId })));
+    expect(page.data.handoffResolvedBy).toBe('Mo "Boss", Brennan');
+    expect(page.data.handoffResolvedNote).toBe("New suction gasket fitted at the yard.");
     const board = await run(async () => boardLoader(args(await requestAs(MO, "/board"))));
     expect(board.data.board.openHandoffs).toEqual([]);
   });
