@@ -1,5 +1,5 @@
 import { getFormProps, getInputProps, useForm, type SubmissionResult } from "@conform-to/react";
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/form-parse";
 import { Form, useNavigation } from "react-router";
 import { changePasswordSchema, choosePasswordSchema, MIN_PASSWORD } from "~/lib/people-schema";
 import { FormField, inputClass } from "./form-field";
@@ -18,7 +18,7 @@ export function ChoosePasswordForm({
   const busy = useNavigation().state !== "idle";
   const [form, fields] = useForm<{ current?: string; password: string; confirm: string }>({
     lastResult,
-    onValidate: ({ formData }) => parseWithZod(formData, { schema: askCurrent ? changePasswordSchema : choosePasswordSchema }),
+    onValidate: ({ formData }) => parseForm(formData, askCurrent ? changePasswordSchema : choosePasswordSchema),
     shouldValidate: "onSubmit",
     shouldRevalidate: "onInput",
   });

@@ -1,5 +1,5 @@
 import { getFormProps, getInputProps, getSelectProps, getTextareaProps, useForm, type SubmissionResult } from "@conform-to/react";
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/form-parse";
 import { Form } from "react-router";
 import { rigInputSchema, type RigInput } from "~/lib/rig-schema";
 import { FormField, inputClass } from "./form-field";
@@ -17,7 +17,7 @@ export function RigForm({
   const [form, fields] = useForm({
     lastResult,
     defaultValue: defaultValue ?? { mount: "truck", hasHourMeter: true, engineHours: 0, yardElevationFt: 0, nozzleTips: [], torqueSpecs: [] },
-    onValidate: ({ formData }) => parseWithZod(formData, { schema: rigInputSchema }),
+    onValidate: ({ formData }) => parseForm(formData, rigInputSchema),
     // Not on blur: a message appearing as focus leaves would move the Save button under the thumb.
     shouldValidate: "onSubmit",
     shouldRevalidate: "onInput",

@@ -1,4 +1,4 @@
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/form-parse";
 import { data } from "react-router";
 import { ChoosePasswordForm } from "~/components/choose-password-form";
 import { DoneNote } from "~/components/ui/done-note";
@@ -18,7 +18,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 export async function action({ request }: Route.ActionArgs) {
   const user = await requireUser(request);
-  const submission = parseWithZod(await request.formData(), { schema: changePasswordSchema });
+  const submission = parseForm(await request.formData(), changePasswordSchema);
   const hidden = { hideFields: ["current", "password", "confirm"] };
   if (submission.status !== "success") return data({ result: submission.reply(hidden), message: null }, { status: 400 });
   const changed = await changePassword(user, submission.value.current, submission.value.password);

@@ -1,5 +1,5 @@
 import { getFormProps, getSelectProps, useForm } from "@conform-to/react";
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/form-parse";
 import { data, Form } from "react-router";
 import { FormField, inputClass } from "~/components/form-field";
 import { DoneNote } from "~/components/ui/done-note";
@@ -16,7 +16,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 export async function action({ request }: Route.ActionArgs) {
   const user = await requireRole(request, "admin");
-  const submission = parseWithZod(await request.formData(), { schema: companySettingsSchema });
+  const submission = parseForm(await request.formData(), companySettingsSchema);
   if (submission.status !== "success") return data({ result: submission.reply(), message: null }, { status: 400 });
   await saveCompanySettings(user, submission.value);
   return { result: submission.reply(), message: `Saved. Times now show in ${submission.value.timeZone}.` };
@@ -27,7 +27,7 @@ export default function CompanyPage({ loaderData, actionData }: Route.ComponentP
   const [form, fields] = useForm({
     lastResult: actionData?.result,
     defaultValue: { timeZone: company.timeZone },
-    onValidate: ({ formData }) => parseWithZod(formData, { schema: companySettingsSchema }),
+    onValidate: ({ formData }) => parseForm(formData, companySettingsSchema),
     shouldValidate: "onSubmit",
     shouldRevalidate: "onInput",
   });

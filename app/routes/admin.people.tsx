@@ -1,5 +1,5 @@
 import { getFormProps, getInputProps, getSelectProps, useForm } from "@conform-to/react";
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/form-parse";
 import { data, Form, useNavigation } from "react-router";
 import { FormField, inputClass } from "~/components/form-field";
 import { ConfirmAction } from "~/components/ui/confirm-action";
@@ -26,7 +26,7 @@ export async function action({ request }: Route.ActionArgs) {
   const user = await requireRole(request, "admin");
   const form = await request.formData();
   if (form.get("intent") === "invite") {
-    const submission = parseWithZod(form, { schema: inviteSchema });
+    const submission = parseForm(form, inviteSchema);
     if (submission.status !== "success") return data({ invite: submission.reply(), message: null }, { status: 400 });
     const sent = await invitePerson(user, submission.value);
     if (!sent.ok) return data({ invite: submission.reply({ fieldErrors: toFieldErrors(sent.fieldErrors) }), message: null }, { status: 400 });
@@ -57,7 +57,7 @@ export default function People({ loaderData, actionData }: Route.ComponentProps)
   const [form, fields] = useForm({
     lastResult: actionData?.invite,
     defaultValue: { role: "crew" },
-    onValidate: ({ formData }) => parseWithZod(formData, { schema: inviteSchema }),
+    onValidate: ({ formData }) => parseForm(formData, inviteSchema),
     shouldValidate: "onSubmit",
     shouldRevalidate: "onInput",
   });

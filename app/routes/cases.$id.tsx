@@ -21,6 +21,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     canResolve: hasRole(user.role, "supervisor"),
     guide: { slug: detail.guide.slug, title: detail.guide.title, version: detail.guide.version },
     cause,
+    stepPrompts: Object.fromEntries(Object.entries(states).map(([id, s]) => [id, s.meta.prompt])),
     finalPrompt: detail.finalStep ? (states[detail.finalStep]?.meta.prompt ?? null) : null,
     events: detail.events.map((e) => ({ ...e, prompt: states[e.stepId]?.meta.prompt ?? e.stepId, kind: states[e.stepId]?.meta.kind ?? "check" })),
   };
@@ -46,8 +47,11 @@ export async function action({ request, params }: Route.ActionArgs) {
   return { ok: true };
 }
 
+const plainPrompt = (prompt: string | undefined) => prompt?.replace(/\*\*|__|`/g, "");
+
 export default function CasePage({ loaderData: c }: Route.ComponentProps) {
   const times = useTimes();
+  const states = c.stepPrompts;
   const duration = c.closedAt ? formatDuration(Date.parse(c.closedAt) - Date.parse(c.openedAt)) : "still open";
   const facts: [string, React.ReactNode][] = [
     [
@@ -141,7 +145,7 @@ export default function CasePage({ loaderData: c }: Route.ComponentProps) {
               <a href={`/cases/${c.id}/photos/${p.id}`}>
                 <img
                   src={`/cases/${c.id}/photos/${p.id}`}
-                  alt={`Photo at step ${p.stepId ?? "—"}`}
+                  alt={`Photo at “${plainPrompt(p.stepId ? states[p.stepId] : undefined) ?? "no step"}”, ${times.dateTime(p.takenAt)}`}
                   className="h-28 w-28 rounded border-2 border-ink object-cover"
                 />
               </a>

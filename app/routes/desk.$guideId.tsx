@@ -5,8 +5,9 @@ import { fmt } from "~/lib/calc/units";
 import { hasRole } from "~/lib/roles";
 import { GuideVersion } from "~/services/db.server";
 import { deskGuide, learnFromCases, openDraft, reviewVersion, submitDraft } from "~/services/desk.server";
-import { fail, requireRole } from "~/services/guards.server";
-import { statusLabel } from "~/lib/vocabulary";
+import { fail, requireRole, unlessRefused } from "~/services/guards.server";
+import { ADVISOR_MIN_CASES } from "~/lib/stats/check-order";
+import { answerLabel, statusLabel } from "~/lib/vocabulary";
 import { useTimes } from "~/components/use-time-zone";
 import type { Route } from "./+types/desk.$guideId";
 
@@ -57,18 +58,20 @@ export async function action({ request, params }: Route.ActionArgs) {
   const user = await requireRole(request, "trainer");
   const guideId = guideIdOf(params);
   const parsed = actionSchema.safeParse(Object.fromEntries(await request.formData()));
-  if (!parsed.success) return data({ error: parsed.error.issues.map((i) => i.message).join(" ") }, { status: 400 });
+  if (!parsed.success) return data({ error: parsed.error.issues.map((i) => i.message).join(" "), problems: [] as string[], number: null }, { status: 400 });
   const a = parsed.data;
   if (a.intent === "edit") {
     const draft = await openDraft(user, guideId);
     return redirect(`/desk/${draft.guideId}/v/${draft.number}`);
   }
   if (a.intent === "submit") {
-    await submitDraft(user, guideId, a.number, a.changeNote);
+    const refused = await unlessRefused(() => submitDraft(user, guideId, a.number, a.changeNote));
+    if (refused) return data({ error: refused.error, problems: Object.values(refused.fields), number: a.number }, { status: refused.status });
     return { done: `Version ${a.number} sent for review.` };
   }
   await requireRole(request, "supervisor");
-  await reviewVersion(user, guideId, a.number, a.intent === "approve" ? "approve" : "return", a.comment ?? null);
+  const refused = await unlessRefused(() => reviewVersion(user, guideId, a.number, a.intent === "approve" ? "approve" : "return", a.comment ?? null));
+  if (refused) return data({ error: refused.error, problems: Object.values(refused.fields), number: null }, { status: refused.status });
   return { done: a.intent === "approve" ? `Version ${a.number} published: new cases use it.` : `Version ${a.number} sent back to draft.` };
 }
 
@@ -82,9 +85,23 @@ export default function DeskGuide({ loaderData, actionData }: Route.ComponentPro
         {guide.title}
       </PageTitle>
       {actionData && "error" in actionData ? (
-        <p role="alert" className="mb-3 font-bold text-stop">
-          {actionData.error}
-        </p>
+        <div role="alert" className="mb-3 rounded-md border-4 border-stop bg-paper p-3">
+          <p className="font-bold text-stop">{actionData.error}</p>
+          {actionData.problems.length ? (
+            <ul className="mt-2 list-disc space-y-1 pl-6">
+              {actionData.problems.map((p) => (
+                <li key={p}>{p}</li>
+              ))}
+            </ul>
+          ) : null}
+          {actionData.number ? (
+            <p className="mt-2">
+              <Link to={`v/${actionData.number}`} className="font-bold">
+                Open version {actionData.number} in the editor to fix them
+              </Link>
+            </p>
+          ) : null}
+        </div>
       ) : null}
       {actionData && "done" in actionData ? (
         <p role="status" className="mb-3 font-bold text-go">
@@ -177,11 +194,11 @@ export default function DeskGuide({ loaderData, actionData }: Route.ComponentPro
               <tbody>
                 {learning.flow.map((f) => (
                   <tr key={f.stepId} className="border-b border-rule">
-                    <td className="p-2">{f.stepId}</td>
+                    <td className="p-2">{learning.prompts[f.stepId] ?? f.stepId}</td>
                     <td className="p-2">{f.reached}</td>
                     <td className="p-2">
                       {Object.entries(f.answers)
-                        .map(([a, n]) => `${a} ${n}`)
+                        .map(([a, n]) => `${answerLabel(a)} ${n}`)
                         .join(", ") || "—"}
                     </td>
                     <td className="p-2">
@@ -195,19 +212,29 @@ export default function DeskGuide({ loaderData, actionData }: Route.ComponentPro
             </table>
           </div>
           <h2 className="mt-6 text-xl font-bold">Check-order advisor</h2>
-          <p>
-            From {learning.advisor.foundCases} past causes and each check's minutes, checking in this order would find the fault in about{" "}
-            <strong>{fmt(learning.advisor.suggestedMinutes, 1)} min</strong> on average, against <strong>{fmt(learning.advisor.currentMinutes, 1)} min</strong>{" "}
-            in the guide's order now (highest chance per minute first). A safety stop moves with the check it guards.
-          </p>
-          <ol className="mt-2 list-decimal space-y-1 pl-6">
-            {learning.advisor.suggested.map((c) => (
-              <li key={c.id}>
-                <strong>{c.id}</strong>
-                {c.guard ? ` (after its stop “${c.guard}”)` : ""}: {c.probability} cases, {fmt(c.minutes, 1)} min
-              </li>
-            ))}
-          </ol>
+          {learning.advisor.foundCases < ADVISOR_MIN_CASES ? (
+            <p>
+              The advisor needs at least {ADVISOR_MIN_CASES} past cases on this version whose cause was found before it suggests an order; it has{" "}
+              {learning.advisor.foundCases}. With fewer, one or two unusual cases would decide the order rather than the pattern of faults.
+            </p>
+          ) : (
+            <>
+              <p>
+                From {learning.advisor.foundCases} past causes and each check's minutes, checking in this order would find the fault in about{" "}
+                <strong>{fmt(learning.advisor.suggestedMinutes, 1)} min</strong> on average, against{" "}
+                <strong>{fmt(learning.advisor.currentMinutes, 1)} min</strong> in the guide's order now (highest chance per minute first). A safety stop moves
+                with the check it guards.
+              </p>
+              <ol className="mt-2 list-decimal space-y-1 pl-6">
+                {learning.advisor.suggested.map((c) => (
+                  <li key={c.id}>
+                    <strong>{learning.prompts[c.id] ?? c.id}</strong>
+                    {c.guard ? ` (after its stop “${learning.prompts[c.guard] ?? c.guard}”)` : ""}: {c.probability} cases, {fmt(c.minutes, 1)} min
+                  </li>
+                ))}
+              </ol>
+            </>
+          )}
         </>
       ) : null}
     </>

@@ -1,11 +1,13 @@
-import { Link } from "react-router";
+import { data, Form, Link, redirect } from "react-router";
+import { z } from "zod";
 import { GuideEditor, type Draft } from "~/components/desk/guide-editor";
 import { ProblemsPanel } from "~/components/desk/problems-panel";
 import { TreeDrawing } from "~/components/desk/tree-drawing";
 import { PageTitle } from "~/components/ui/page-title";
-import { checkDefinition, versionFor } from "~/services/desk.server";
+import { checkDefinition, submitDraft, versionFor } from "~/services/desk.server";
 import { deskParams } from "~/services/desk-params.server";
-import { requireRole } from "~/services/guards.server";
+import { requireRole, unlessRefused } from "~/services/guards.server";
+import { readForm } from "~/services/read-request.server";
 import { causeList } from "~/services/guides.server";
 import type { Route } from "./+types/desk.$guideId.v.$number";
 
@@ -16,7 +18,23 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   return { ...v, editable: v.version.status === "draft" && !v.guide.builtIn, causes: causeList(), problems: checkDefinition(v.version.definition) };
 }
 
-export default function EditVersion({ loaderData }: Route.ComponentProps) {
+const submitSchema = z.object({
+  intent: z.literal("submit", { error: "Say what to do: submit." }),
+  changeNote: z.string({ error: "Say what changed (at least 3 characters)." }).trim().min(3, "Say what changed (at least 3 characters).").max(1000),
+});
+
+/** Sending the draft for review from the editor: problems keep the trainer here, listed. */
+export async function action({ request, params }: Route.ActionArgs) {
+  const user = await requireRole(request, "trainer");
+  const { guideId, number } = deskParams(params);
+  const parsed = submitSchema.safeParse(Object.fromEntries(await readForm(request)));
+  if (!parsed.success) return data({ error: parsed.error.issues.map((i) => i.message).join(" "), problems: [] as string[] }, { status: 400 });
+  const refused = await unlessRefused(() => submitDraft(user, guideId, number, parsed.data.changeNote));
+  if (refused) return data({ error: refused.error, problems: Object.values(refused.fields) }, { status: refused.status });
+  return redirect(`/desk/${guideId}`);
+}
+
+export default function EditVersion({ loaderData, actionData }: Route.ComponentProps) {
   const { guide, version, editable, causes, problems } = loaderData;
   return (
     <>
@@ -34,7 +52,32 @@ export default function EditVersion({ loaderData }: Route.ComponentProps) {
         <p className="mb-3 rounded-md border-2 border-ink bg-caution p-3 font-bold">Reviewer: {version.reviewComment}</p>
       ) : null}
       {editable ? (
-        <GuideEditor initial={version.definition as unknown as Draft} causes={causes} saveUrl={`/api/desk/${guide.id}/v/${version.number}`} />
+        <>
+          <GuideEditor initial={version.definition as unknown as Draft} causes={causes} saveUrl={`/api/desk/${guide.id}/v/${version.number}`} />
+          <Form method="post" className="mt-6 space-y-2 rounded-lg border-2 border-ink bg-paper p-3">
+            <h2 className="text-xl font-bold">Send for review</h2>
+            <p>Save first: the saved draft is what goes to the reviewer.</p>
+            {actionData ? (
+              <div role="alert" className="rounded-md border-4 border-stop p-3">
+                <p className="font-bold text-stop">{actionData.error}</p>
+                {actionData.problems.length ? (
+                  <ul className="mt-2 list-disc space-y-1 pl-6">
+                    {actionData.problems.map((p) => (
+                      <li key={p}>{p}</li>
+                    ))}
+                  </ul>
+                ) : null}
+              </div>
+            ) : null}
+            <label className="block font-bold">
+              Change note for the reviewer
+              <input name="changeNote" required minLength={3} maxLength={1000} className="mt-1 block min-h-12 w-full rounded-md border-2 border-ink px-2" />
+            </label>
+            <button name="intent" value="submit" className="min-h-12 rounded-md border-2 border-ink bg-paper px-4 font-bold">
+              Send for review
+            </button>
+          </Form>
+        </>
       ) : (
         <div className="space-y-3">
           <p>This version is {version.status.replace("_", " ")} and is never changed. Open a draft from the versions page to change the guide.</p>

@@ -1,4 +1,4 @@
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/form-parse";
 import { data, redirect } from "react-router";
 import { RigForm } from "~/components/rig-form";
 import { PageTitle } from "~/components/ui/page-title";
@@ -34,7 +34,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
 
 export async function action({ request, params }: Route.ActionArgs) {
   const user = await requireRole(request, "admin");
-  const submission = parseWithZod(await request.formData(), { schema: rigInputSchema });
+  const submission = parseForm(await request.formData(), rigInputSchema);
   if (submission.status !== "success") return data(submission.reply(), { status: 400 });
   const saved = await updateRig(user, params.code, submission.value);
   if (!saved.ok) return data(submission.reply({ fieldErrors: toFieldErrors(saved.fieldErrors) }), { status: 400 });

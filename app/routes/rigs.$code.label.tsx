@@ -16,13 +16,19 @@ export async function loader({ request, params }: Route.LoaderArgs) {
 export default function RigLabel({ loaderData }: Route.ComponentProps) {
   const { code, name, company, url, svg } = loaderData;
   return (
-    <main className="mx-auto max-w-sm bg-white p-6 text-black">
-      <div className="rounded-xl border-8 border-black p-5 text-center">
+    <main className="mx-auto max-w-sm bg-white p-3 text-black sm:p-6">
+      <div className="overflow-hidden rounded-xl border-8 border-black p-3 text-center sm:p-5">
         <p className="text-lg font-bold">{company}</p>
-        <p className="text-6xl font-bold tracking-wide">{code}</p>
+        <h1 className="text-5xl font-bold tracking-wide break-all sm:text-6xl">{code}</h1>
         <p className="text-xl">{name}</p>
         {/* The SVG comes from the QR library, built from our own URL; no user text is in it. */}
-        <div className="mx-auto my-4 w-64" role="img" aria-label={`QR code for ${url}`} dangerouslySetInnerHTML={{ __html: svg }} />
+        <div
+          className="mx-auto my-4 w-full max-w-64 [&_svg]:block [&_svg]:h-auto [&_svg]:w-full"
+          data-testid="rig-qr"
+          role="img"
+          aria-label={`QR code for ${url}`}
+          dangerouslySetInnerHTML={{ __html: svg }}
+        />
         <p className="text-lg font-bold">Rig acting up? Scan to start a fix.</p>
         <p className="mt-1 text-sm break-all">{url}</p>
       </div>

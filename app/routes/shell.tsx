@@ -1,5 +1,5 @@
-import { Form, Link, NavLink, Outlet } from "react-router";
-import { ErrorPanel } from "~/root";
+import { Form, Link, NavLink, Outlet, useRouteLoaderData } from "react-router";
+import { ErrorPanel } from "~/components/error-panel";
 import { navFor } from "~/lib/navigation";
 import { ROLE_LABELS } from "~/lib/roles";
 import { env } from "~/services/env.server";
@@ -13,7 +13,22 @@ export async function loader({ request }: Route.LoaderArgs) {
 }
 
 export default function Shell({ loaderData }: Route.ComponentProps) {
-  const { user, hidden } = loaderData;
+  return (
+    <ShellFrame {...loaderData}>
+      <Outlet />
+    </ShellFrame>
+  );
+}
+
+/** An error inside the app keeps the app around it: the header and navigation, then the error. */
+export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
+  const shell = useRouteLoaderData<typeof loader>("routes/shell");
+  const panel = <ErrorPanel error={error} />;
+  if (!shell) return <main className="mx-auto max-w-xl p-4">{panel}</main>;
+  return <ShellFrame {...shell}>{panel}</ShellFrame>;
+}
+
+function ShellFrame({ user, hidden, children }: Awaited<ReturnType<typeof loader>> & { children: React.ReactNode }) {
   return (
     <div className="min-h-dvh">
       <header className="no-print bg-go text-white">
@@ -57,13 +72,7 @@ export default function Shell({ loaderData }: Route.ComponentProps) {
           </ul>
         </nav>
       </header>
-      <main className="mx-auto max-w-3xl px-3 py-4">
-        <Outlet />
-      </main>
+      <main className="mx-auto max-w-3xl px-3 py-4">{children}</main>
     </div>
   );
-}
-
-export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
-  return <ErrorPanel error={error} />;
 }

@@ -172,7 +172,7 @@ export interface CaseDetail {
   guide: { slug: string; title: string; version: number; definition: Guide };
   openedBy: string | null;
   events: { id: string; seq: number; stepId: string; answer: string; at: string; note: string | null }[];
-  photos: { id: number; stepId: string | null; contentType: string }[];
+  photos: { id: number; stepId: string | null; contentType: string; takenAt: string }[];
 }
 
 export async function caseDetail(user: SessionUser, caseId: string): Promise<CaseDetail> {
@@ -183,7 +183,7 @@ export async function caseDetail(user: SessionUser, caseId: string): Promise<Cas
     found.openedBy ? User.findByPk(found.openedBy, { attributes: ["name"] }) : null,
     found.handoffResolvedBy ? User.findByPk(found.handoffResolvedBy, { attributes: ["name"] }) : null,
     CaseEvent.findAll({ where: { caseId }, order: [["seq", "ASC"]] }),
-    CasePhoto.findAll({ where: { caseId }, attributes: ["id", "stepId", "contentType"], order: [["id", "ASC"]] }),
+    CasePhoto.findAll({ where: { caseId }, attributes: ["id", "stepId", "contentType", "createdAt"], order: [["id", "ASC"]] }),
   ]);
   return {
     id: found.id,
@@ -213,7 +213,7 @@ export async function caseDetail(user: SessionUser, caseId: string): Promise<Cas
     guide: { slug: record!.slug, title: record!.title, version: version.number, definition: guide },
     openedBy: opener?.name ?? null,
     events: events.map((e) => ({ id: e.id, seq: e.seq, stepId: e.stepId, answer: e.answer, at: e.at.toISOString(), note: e.note })),
-    photos: photos.map((p) => ({ id: p.id, stepId: p.stepId, contentType: p.contentType })),
+    photos: photos.map((p) => ({ id: p.id, stepId: p.stepId, contentType: p.contentType, takenAt: p.createdAt.toISOString() })),
   };
 }
 

@@ -162,7 +162,10 @@ export async function submitDraft(user: SessionUser, guideId: number, number: nu
   const { guide, version } = await deskVersion(user, guideId, number);
   if (guide.companyId !== user.companyId || version.status !== "draft") fail(409, "Only a draft can be sent for review.");
   const problems = checkDefinition(version.definition);
-  if (problems.length) fail(422, `Fix ${problems.length} problem${problems.length === 1 ? "" : "s"} before sending this for review.`);
+  if (problems.length) {
+    const listed = Object.fromEntries(problems.map((p, i) => [String(i + 1), `${p.step ? `Step “${p.step}”: ` : ""}${p.message}`]));
+    fail(422, `Fix ${problems.length} problem${problems.length === 1 ? "" : "s"} before sending this for review.`, listed);
+  }
   await version.update({ status: "in_review", changeNote, authorId: version.authorId ?? user.id });
 }
 
@@ -287,6 +290,8 @@ export async function learnFromCases(user: SessionUser, guideId: number) {
     version: version.number,
     cases: cases.size,
     flow,
+    // Trainers read steps by what they ask, not by their ids.
+    prompts: Object.fromEntries(Object.entries(definition.states).map(([id, s]) => [id, s.meta.prompt.replace(/\*\*|__|`/g, "")])),
     advisor: {
       current: checks,
       suggested,

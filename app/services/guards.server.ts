@@ -57,3 +57,23 @@ export function fail(status: number, message: string, fields?: Record<string, st
 export function notFound(what = "That record"): never {
   fail(404, `${what} was not found.`);
 }
+
+/** What `fail` threw, read back, so a page can show a refusal in place instead of an error page; null for anything else. */
+export function refusal(thrown: unknown): { status: number; error: string; fields: Record<string, string> } | null {
+  if (!thrown || typeof thrown !== "object" || (thrown as { type?: string }).type !== "DataWithResponseInit") return null;
+  const { data: body, init } = thrown as { data: { error?: unknown; fields?: Record<string, string> }; init: ResponseInit | null };
+  if (typeof body?.error !== "string") return null;
+  return { status: init?.status ?? 400, error: body.error, fields: body.fields ?? {} };
+}
+
+/** Runs a service call that may refuse; its refusal comes back as a value (see `refusal`), anything else is rethrown. */
+export async function unlessRefused(work: () => Promise<unknown>) {
+  try {
+    await work();
+    return null;
+  } catch (thrown) {
+    const refused = refusal(thrown);
+    if (refused) return refused;
+    throw thrown;
+  }
+}

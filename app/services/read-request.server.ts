@@ -39,6 +39,15 @@ export function readQuery<S extends z.ZodType>(request: Request, schema: S, what
   return parsed.data;
 }
 
+/** The form body of a page action; a body that is not a form (JSON, broken multipart) stops with 400 instead of a 500. */
+export async function readForm(request: Request): Promise<FormData> {
+  try {
+    return await request.formData();
+  } catch {
+    fail(400, "Send this as a form (the body could not be read).");
+  }
+}
+
 export function requirePost(request: Request) {
   if (request.method !== "POST") fail(405, "Use POST.");
 }

@@ -56,7 +56,7 @@ export function NumberField({
           aria-describedby={error ? `${id}-error` : undefined}
           className="block min-h-14 w-full min-w-0 rounded-md border-2 border-ink bg-paper px-3 text-lg aria-[invalid=true]:border-4 aria-[invalid=true]:border-stop"
         />
-        <span className="w-16 shrink-0 text-base">{unit}</span>
+        <span className="min-w-10 shrink-0 text-base">{unit}</span>
       </div>
       {beside ? <p className="text-sm">{beside}</p> : null}
       {error ? (

@@ -89,8 +89,8 @@ export function LoadSheetCalc({ rig, compact = false }: { rig?: RigSpecs; compac
             <legend className="px-1 font-bold">Materials at the spec rate</legend>
             {errors.materials ? <p className="font-bold text-stop">{errors.materials}</p> : null}
             {rows.map((row, i) => (
-              <div key={row.key} className="grid grid-cols-2 gap-2 border-b border-rule pb-3">
-                <label className="col-span-2 font-bold">
+              <div key={row.key} className="grid grid-cols-1 gap-2 border-b border-rule pb-3 sm:grid-cols-2">
+                <label className="font-bold sm:col-span-2">
                   Material {i + 1}
                   <input
                     value={row.name}

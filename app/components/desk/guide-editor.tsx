@@ -1,4 +1,5 @@
-import { useMemo, useState } from "react";
+import { useEffect, useMemo, useState } from "react";
+import { useBlocker } from "react-router";
 import { type Cause } from "~/lib/guides/causes";
 import { validateGuide } from "~/lib/guides/validate";
 import { ProblemsPanel } from "./problems-panel";
@@ -28,6 +29,7 @@ export function GuideEditor({ initial, causes, saveUrl }: { initial: Draft; caus
   const [selected, setSelected] = useState<string | null>(initial.initial in initial.states ? initial.initial : null);
   const [saved, setSaved] = useState<"saved" | "unsaved" | "saving" | "failed">("saved");
   const problems = useMemo(() => validateGuide(draft, { causes }).problems, [draft, causes]);
+  useWarnBeforeLeaving(saved !== "saved");
   const ids = Object.keys(draft.states);
 
   const change = (next: Draft) => {
@@ -199,4 +201,20 @@ export function GuideEditor({ initial, causes, saveUrl }: { initial: Draft; caus
       </div>
     </div>
   );
+}
+
+/** Asks before leaving the editor with changes not yet saved: links in the app, reloads and closing the tab. */
+function useWarnBeforeLeaving(dirty: boolean) {
+  const blocker = useBlocker(({ currentLocation, nextLocation }) => dirty && currentLocation.pathname !== nextLocation.pathname);
+  useEffect(() => {
+    if (blocker.state !== "blocked") return;
+    if (window.confirm("Leave the editor? Your changes to this draft are not saved.")) blocker.proceed();
+    else blocker.reset();
+  }, [blocker]);
+  useEffect(() => {
+    if (!dirty) return;
+    const warn = (e: BeforeUnloadEvent) => e.preventDefault();
+    window.addEventListener("beforeunload", warn);
+    return () => window.removeEventListener("beforeunload", warn);
+  }, [dirty]);
 }

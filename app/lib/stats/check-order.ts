@@ -3,6 +3,12 @@
  * probability ÷ time-to-check minimises the expected time to find it (the classic
  * sequential-inspection ratio rule); brute force over every order is the test oracle.
  */
+/**
+ * Past cases with a found cause the advisor needs before it suggests an order: with fewer, one or
+ * two unusual cases would decide the order (a judgement for this product, not a published figure).
+ */
+export const ADVISOR_MIN_CASES = 20;
+
 export interface Check {
   id: string;
   probability: number;

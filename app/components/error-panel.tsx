@@ -1,0 +1,48 @@
+import { isRouteErrorResponse } from "react-router";
+
+/** Each status in words a crew member or supervisor can act on; never a raw code or a router message. */
+const SAID: Record<number, { title: string; detail: string }> = {
+  400: { title: "That did not go through", detail: "Something in what was sent was not right. Go back and try again." },
+  401: { title: "Sign in first", detail: "Your sign-in has ended. Sign in again to carry on." },
+  403: { title: "Not for your role", detail: "Your role does not open this page. Ask your company's admin if you need it." },
+  404: { title: "Not found", detail: "There is nothing here, or it belongs to another company." },
+  405: { title: "That did not go through", detail: "This page does not take that. Go back and try again." },
+  409: { title: "Already changed", detail: "Someone (or another phone) changed this first. Go back to see it as it is now." },
+  413: { title: "Too large", detail: "That file is too large." },
+  415: { title: "Wrong kind of file", detail: "That kind of file is not taken here." },
+  422: { title: "That did not go through", detail: "What was sent does not fit. Go back and check it." },
+  429: { title: "Too many tries", detail: "Wait a little, then try again." },
+  503: { title: "Tankside is not answering", detail: "Its database is not reachable right now. Try again in a minute." },
+};
+
+/** The title and sentence for an error a route threw; the server's own message (`{ error }`) is used when it gave one. */
+export function describeError(error: unknown): { title: string; detail: string } {
+  if (isRouteErrorResponse(error)) {
+    const said = SAID[error.status] ?? { title: "Something went wrong", detail: "Try again. If it keeps happening, tell your supervisor." };
+    // Only our own `{ error }` messages are shown: the router's own texts are for developers.
+    const message = (error.data as { error?: unknown } | null)?.error;
+    return { title: said.title, detail: typeof message === "string" && message ? message : said.detail };
+  }
+  if (import.meta.env.DEV && error instanceof Error) return { title: "Something went wrong", detail: error.message };
+  return { title: "Something went wrong", detail: "Try again. If it keeps happening, tell your supervisor." };
+}
+
+/** The one error screen: a page title, a heading, a plain sentence and ways back. */
+export function ErrorPanel({ error }: { error: unknown }) {
+  const { title, detail } = describeError(error);
+  return (
+    <div role="alert" className="rounded-lg border-2 border-ink bg-paper p-5">
+      <title>{`${title} · Tankside`}</title>
+      <h1 className="text-2xl font-bold">{title}</h1>
+      <p className="mt-2 text-lg">{detail}</p>
+      <p className="mt-4 flex flex-wrap gap-x-6 gap-y-2">
+        <a href="/" className="text-lg font-bold">
+          Back to the start
+        </a>
+        <button type="button" onClick={() => history.back()} className="min-h-12 text-lg font-bold text-link underline">
+          Go back a page
+        </button>
+      </p>
+    </div>
+  );
+}

@@ -1,0 +1,37 @@
+import { describe, expect, it } from "vitest";
+import { parseForm } from "~/lib/form-parse";
+import { rigInputSchema } from "~/lib/rig-schema";
+
+const form = (fields: Record<string, string>) => {
+  const f = new FormData();
+  for (const [k, v] of Object.entries(fields)) f.set(k, v);
+  return f;
+};
+const rig = {
+  code: "CF-21",
+  name: "Test rig",
+  mount: "truck",
+  pumpKind: "Centrifugal",
+  engineHours: "12.5",
+  hoseLengthFt: "300",
+  hoseDiameterIn: "1.5",
+  yardElevationFt: "420",
+};
+
+describe("reading a page form", () => {
+  it("accepts thousands separators in numbers, as people type them", () => {
+    for (const typed of ["1,200", "1200", " 1,200 ", "1 200"]) {
+      const parsed = parseForm(form({ ...rig, tankGal: typed }), rigInputSchema);
+      expect(parsed.status, typed).toBe("success");
+      expect(parsed.status === "success" && parsed.value.tankGal).toBe(1200);
+    }
+  });
+
+  it("still names a number that is not one", () => {
+    for (const typed of ["12OO", "1.2.0", "-", "   "]) {
+      const parsed = parseForm(form({ ...rig, tankGal: typed }), rigInputSchema);
+      expect(parsed.status, typed).toBe("error");
+      expect(parsed.status === "error" && parsed.error?.tankGal?.[0], typed).toMatch(/tank size/);
+    }
+  });
+});
