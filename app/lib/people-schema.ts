@@ -35,11 +35,19 @@ export const personActionSchema = z.discriminatedUnion(
   { error: "Say what to do: role, remove-access, restore-access or cancel-invite." },
 );
 
+/**
+ * bcrypt reads only the first 72 bytes of a password (UTF-8): anything past them would not count,
+ * so a longer password is refused rather than silently cut.
+ */
+export const MAX_PASSWORD_BYTES = 72;
+export const fitsBcrypt = (password: string) => new TextEncoder().encode(password).length <= MAX_PASSWORD_BYTES;
+export const TOO_LONG = `Keep the password to ${MAX_PASSWORD_BYTES} bytes (72 plain letters; accented letters and symbols count 2–4 each): anything longer would be cut short when stored.`;
+
 const newPassword = {
   password: z
     .string({ error: "Choose a password." })
     .min(MIN_PASSWORD, `Use at least ${MIN_PASSWORD} characters; a few words strung together make a good one.`)
-    .max(200, "That password is too long."),
+    .refine(fitsBcrypt, TOO_LONG),
   confirm: z.string({ error: "Type the password again." }),
 };
 const sameTwice = (v: { password: string; confirm: string }) => v.password === v.confirm;

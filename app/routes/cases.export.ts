@@ -1,5 +1,5 @@
-import { stringify } from "csv-stringify/sync";
 import { caseFiltersSchema } from "~/lib/case-filters";
+import { toCsv } from "~/lib/csv";
 import { isoInZone } from "~/lib/format";
 import { outcomeLabel } from "~/lib/vocabulary";
 import { listCases } from "~/services/case-list.server";
@@ -13,7 +13,7 @@ export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireRole(request, "supervisor");
   const { rows } = await listCases(user, readQuery(request, caseFiltersSchema, "the filters"), { all: true });
   const names = new Map(causeList().map((c) => [c.code, c.name]));
-  const csv = stringify(
+  const csv = toCsv(
     rows.map((r) => [
       r.id,
       r.rigCode,
@@ -25,7 +25,7 @@ export async function loader({ request }: Route.LoaderArgs) {
       isoInZone(r.openedAt, user.timeZone),
       r.durationSeconds ?? "",
     ]),
-    { header: true, columns: ["case_id", "rig", "guide", "cause_code", "cause", "outcome", "opened_by", "opened_at", "duration_seconds"] },
+    ["case_id", "rig", "guide", "cause_code", "cause", "outcome", "opened_by", "opened_at", "duration_seconds"],
   );
   const stamp = new Date().toISOString().slice(0, 10);
   return new Response(csv, {

@@ -61,7 +61,7 @@ export default function Cases({ loaderData }: Route.ComponentProps) {
           Download these {total.toLocaleString("en-US")} cases as CSV
         </a>
       </p>
-      <div className="mt-3 overflow-x-auto rounded-lg border-2 border-ink bg-paper">
+      <div className="mt-3 overflow-x-auto rounded-lg border-2 border-ink bg-paper" tabIndex={0} role="region" aria-label="Cases table">
         <table className="w-full min-w-[44rem] border-collapse text-left">
           <thead>
             <tr className="border-b-2 border-ink">

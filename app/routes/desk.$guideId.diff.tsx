@@ -62,10 +62,10 @@ export default function Diff({ loaderData: d }: Route.ComponentProps) {
             {c.step}: {c.fields.join(", ")}
           </p>
           <div className="mt-2 grid gap-2 sm:grid-cols-2">
-            <pre className="overflow-x-auto rounded bg-field p-2 text-sm whitespace-pre-wrap" aria-label={`${c.step} before`}>
+            <pre tabIndex={0} className="overflow-x-auto rounded bg-field p-2 text-sm whitespace-pre-wrap" aria-label={`${c.step} before`}>
               {JSON.stringify(c.before, null, 1)}
             </pre>
-            <pre className="overflow-x-auto rounded bg-field p-2 text-sm whitespace-pre-wrap" aria-label={`${c.step} after`}>
+            <pre tabIndex={0} className="overflow-x-auto rounded bg-field p-2 text-sm whitespace-pre-wrap" aria-label={`${c.step} after`}>
               {JSON.stringify(c.after, null, 1)}
             </pre>
           </div>

@@ -170,7 +170,12 @@ export default function DeskGuide({ loaderData, actionData }: Route.ComponentPro
           <h2 className="mt-6 text-xl font-bold">
             How crews went through version {learning.version} ({learning.cases} cases)
           </h2>
-          <div className="mt-2 overflow-x-auto rounded-lg border-2 border-ink bg-paper">
+          <div
+            className="mt-2 overflow-x-auto rounded-lg border-2 border-ink bg-paper"
+            tabIndex={0}
+            role="region"
+            aria-label="How crews went through this version"
+          >
             <table className="w-full min-w-[36rem] text-left">
               <thead>
                 <tr className="border-b-2 border-ink">

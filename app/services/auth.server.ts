@@ -2,7 +2,7 @@ import { Authenticator } from "remix-auth";
 import { FormStrategy } from "remix-auth-form";
 import { z } from "zod";
 import { checkPassword, hashPassword } from "~/lib/password";
-import { emailAddress } from "~/lib/people-schema";
+import { emailAddress, fitsBcrypt, TOO_LONG } from "~/lib/people-schema";
 import type { Role } from "~/lib/roles";
 import { User } from "./db.server";
 
@@ -28,7 +28,7 @@ let dummyHash: Promise<string> | undefined;
 
 const credentials = z.object({
   email: emailAddress("your"),
-  password: z.string().min(1, "Enter your password.").max(200, "That password is too long."),
+  password: z.string().min(1, "Enter your password.").refine(fitsBcrypt, TOO_LONG),
 });
 
 async function verify(form: FormData): Promise<SignedIn> {

@@ -26,7 +26,7 @@ export async function sendDigest(companyId: number, now = new Date()): Promise<s
     env().APP_URL,
     company.timeZone,
   );
-  await sendMail({ to: people.map((p) => p.email), ...mail });
+  await sendMail({ companyId, to: people.map((p) => p.email), ...mail });
   return people.map((p) => p.name);
 }
 

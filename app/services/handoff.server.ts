@@ -33,7 +33,7 @@ async function notifyHandoff(user: SessionUser, caseId: string): Promise<string[
     timeZone: user.timeZone,
     photoUrls: detail.photos.map((p) => `${base}/cases/${caseId}/photos/${p.id}`),
   });
-  await sendMail({ to: people.map((p) => p.email), ...mail });
+  await sendMail({ companyId: user.companyId, to: people.map((p) => p.email), ...mail });
   return people.map((p) => p.name);
 }
 

@@ -11,7 +11,12 @@ function transporter(): Transporter {
   return (transport ??= nodemailer.createTransport(local ? ({ url, secure: false, ignoreTLS: true } as never) : url));
 }
 
+/** The header each message carries naming the company that sent it (the local outbox shows an admin only their own). */
+export const COMPANY_HEADER = "X-Tankside-Company";
+
 export interface Mail {
+  /** The company the mail is sent for. */
+  companyId: number;
   to: string[];
   subject: string;
   text: string;
@@ -20,5 +25,12 @@ export interface Mail {
 
 export async function sendMail(mail: Mail): Promise<void> {
   if (mail.to.length === 0) return;
-  await transporter().sendMail({ from: env().MAIL_FROM, to: mail.to.join(", "), subject: mail.subject, text: mail.text, html: mail.html });
+  await transporter().sendMail({
+    from: env().MAIL_FROM,
+    to: mail.to.join(", "),
+    subject: mail.subject,
+    text: mail.text,
+    html: mail.html,
+    headers: { [COMPANY_HEADER]: String(mail.companyId) },
+  });
 }

@@ -14,14 +14,18 @@ export const RESETS_PER_HOUR = 3;
  * The caller answers the same either way, so the form does not tell who has an account.
  */
 export async function requestReset(email: string): Promise<void> {
-  const user = await User.findOne({ where: { email, accessRemovedAt: null }, attributes: ["id", "name", "email"] });
+  const user = await User.findOne({ where: { email, accessRemovedAt: null }, attributes: ["id", "name", "email", "companyId"] });
   if (!user) return;
   const recent = await PasswordReset.count({ where: { userId: user.id, createdAt: { [Op.gt]: new Date(Date.now() - 3_600_000) } } });
   if (recent >= RESETS_PER_HOUR) return;
   const { token, hash } = newToken();
   await PasswordReset.create({ userId: user.id, tokenHash: hash, expiresAt: new Date(Date.now() + RESET_MINUTES * 60_000) });
   try {
-    await sendMail({ to: [user.email], ...resetMail({ name: user.name, link: new URL(`/reset/${token}`, env().APP_URL).toString(), minutes: RESET_MINUTES }) });
+    await sendMail({
+      companyId: user.companyId,
+      to: [user.email],
+      ...resetMail({ name: user.name, link: new URL(`/reset/${token}`, env().APP_URL).toString(), minutes: RESET_MINUTES }),
+    });
   } catch (error) {
     // The page answers the same either way (it must not tell who has an account); the log says it.
     console.warn(`Password link mail to user ${user.id} failed: ${error instanceof Error ? error.message : error}`);

@@ -64,7 +64,7 @@ export async function invitePerson(user: SessionUser, input: InviteInput): Promi
     timeZone: user.timeZone,
   });
   try {
-    await sendMail({ to: [input.email], ...mail });
+    await sendMail({ companyId: user.companyId, to: [input.email], ...mail });
   } catch (error) {
     console.warn(`Invitation mail to ${input.email} failed: ${error instanceof Error ? error.message : error}`);
     return { ok: true, email: input.email, mailFailed: true };

@@ -11,7 +11,7 @@ describe("guide desk in the browser", () => {
   it("blocks sending a draft whose hands-on step skips the safety stop, with the caution on every desk page", async () => {
     const p = await harness.browser.context.newPage();
     await signIn(p, harness.app.url, "ravi@cedarflats.example");
-    await p.getByRole("link", { name: "Guide desk" }).click();
+    await p.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Guide desk" }).click();
     await caution(p).waitFor();
     await p.getByRole("link", { name: "Vibration or jumping" }).click();
     await caution(p).waitFor();

@@ -17,7 +17,11 @@ describe("sign-in and navigation at 360 px", () => {
     ["dana@cedarflats.example", "Crew", ["Start a fix", "Rigs", "Field math"]],
     ["ravi@cedarflats.example", "Trainer", ["Start a fix", "Rigs", "Field math", "Guide desk"]],
     ["mo@cedarflats.example", "Supervisor", ["Start a fix", "Rigs", "Field math", "Guide desk", "Fault board", "Cases"]],
-    ["june@cedarflats.example", "Admin", ["Start a fix", "Rigs", "Field math", "Guide desk", "Fault board", "Cases", "Add a rig", "People", "Outbox"]],
+    [
+      "june@cedarflats.example",
+      "Admin",
+      ["Start a fix", "Rigs", "Field math", "Guide desk", "Fault board", "Cases", "Add a rig", "People", "Outbox", "Company"],
+    ],
   ])("%s sees the %s navigation and their company", async (email, role, expected) => {
     const p = await freshPage();
     await signIn(p, harness.app.url, email);
@@ -52,7 +56,7 @@ describe("company and role boundaries", () => {
     await signIn(p, harness.app.url, "dana@cedarflats.example");
     const res = await p.goto(`${harness.app.url}/rigs/new`);
     expect(res!.status()).toBe(403);
-    await p.getByRole("heading", { name: "Not allowed" }).waitFor();
+    await p.getByRole("heading", { name: "Not for your role" }).waitFor();
     await p.close();
   });
 

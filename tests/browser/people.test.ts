@@ -36,7 +36,7 @@ describe("people on a phone (360 px)", () => {
     await nell.getByRole("button", { name: "Choose password and sign in" }).click();
     await nell.getByRole("heading", { name: "Hi Nell. Which rig?" }).waitFor();
     // A trainer sees the guide desk in the menu.
-    await nell.getByRole("link", { name: "Guide desk" }).waitFor();
+    await nell.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Guide desk" }).waitFor();
 
     // Her name at the top opens her account, where she changes the password.
     await nell.getByRole("link", { name: "Your account: Nell Ostrander" }).click();

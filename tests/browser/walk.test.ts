@@ -73,7 +73,10 @@ describe("walk-through on a phone (360×640)", () => {
     await p.getByRole("heading", { name: "Handed off" }).waitFor();
     await p.getByLabel("Note for the case (optional)").fill("Shakes at full throttle only");
     await answer(p, "Finish");
-    await p.getByText("Told by e-mail: Mo Brennan.").waitFor();
+    await p
+      .getByTestId("handoff-mail")
+      .filter({ hasText: /^E-mailed to Mo Brennan at \d{1,2}:\d{2}:\d{2} [AP]M M[DS]T\.$/ })
+      .waitFor();
     const mails = (await outbox()).slice(before);
     expect(mails.map((m) => m.to)).toEqual([["mo@cedarflats.example"]]);
     expect(mails[0].text).toMatch(/Shakes at full throttle only/);
@@ -135,7 +138,7 @@ describe("walk-through on a phone (360×640)", () => {
     const id = caseIdOf(p);
     expect(await CasePhoto.count({ where: { caseId: id, stepId: "at-coupling" } })).toBe(1);
     await p.goto(`${harness.app.url}/cases/${id}`);
-    const img = p.getByRole("img", { name: /Photo at step at-coupling/ });
+    const img = p.getByRole("img", { name: /^Photo at “Is the leak at a hose cam-lock coupling\?”, \w{3} \d+, \d{4}, \d+:\d{2} [AP]M M[DS]T$/ });
     await img.waitFor();
     await expect.poll(() => img.evaluate((el: HTMLImageElement) => el.naturalWidth)).toBe(64);
     await p.close();

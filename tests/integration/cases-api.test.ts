@@ -135,8 +135,44 @@ describe("closing a case", () => {
     expect(mails[0].text).toMatch(/Crew note: Gasket seat cracked/);
     expect(mails[0].text).toMatch(/Is the leak at a hose cam-lock coupling\?\n\s+→ Yes/);
     expect(mails[0].text).toContain(`/cases/${id}`);
-    expect((await close()).data).toMatchObject({ alreadyClosed: true });
+    // A resend of the close is told the truth: who was mailed, and when.
+    const again = (await close()).data;
+    expect(again).toMatchObject({ alreadyClosed: true, notified: ["Mo Brennan"], mailFailed: false });
+    expect(again.mailedAt).toBe((await Case.findByPk(id))!.handoffMailedAt!.toISOString());
     expect((await outbox()).length).toBe(before + 1);
+    // Times in the mail are the company's (America/Denver in the demo), named with the zone.
+    expect(mails[0].text).toMatch(/ 8:0[1-3]:00 AM MDT {2}Is the leak at a hose cam-lock coupling\?/);
+  });
+
+  it("sends one hand-off mail for twenty closes arriving at once", async () => {
+    const id = randomUUID();
+    await start(DANA, "CF-07", "leaks", id);
+    await sendEvents(DANA, id, [ev(1, "at-coupling", "YES"), ev(2, "stop-coupling", "ACK"), ev(3, "fix-coupling", "CANT")]);
+    const before = (await outbox()).length;
+    const results = await Promise.all(
+      Array.from({ length: 20 }, async () =>
+        run(async () => closeAction(args(await post(DANA, `/api/cases/${id}/close`, { outcome: "handoff", finalStep: "handoff-leak" }), { id }))),
+      ),
+    );
+    expect(results.map((r) => r.status)).toEqual(Array(20).fill(200));
+    await new Promise((r) => setTimeout(r, 300));
+    expect((await outbox()).slice(before).filter((m) => m.text.includes(`/cases/${id}`))).toHaveLength(1);
+    expect((await Case.findByPk(id))!.handoffMailedTo).toBe("Mo Brennan");
+  });
+
+  it("takes no new answers once closed (409, nothing stored), while a resend of earlier ones is still a duplicate", async () => {
+    const id = randomUUID();
+    await start(DANA, "CF-07", "lost-prime", id);
+    const answered = [ev(1, "water-level", "NO"), ev(2, "add-water", "DONE"), ev(3, "holds-after-water", "YES")];
+    await sendEvents(DANA, id, answered);
+    await run(async () => closeAction(args(await post(DANA, `/api/cases/${id}/close`, { outcome: "fixed", finalStep: "fixed-low-water" }), { id })));
+    const late = await sendEvents(DANA, id, [ev(4, "holds-after-water", "BACK")]);
+    expect(late.status).toBe(409);
+    expect(late.data.error).toMatch(/closed as fixed and takes no more answers/);
+    const mixed = await sendEvents(DANA, id, [answered[2], ev(5, "holds-after-water", "BACK")]);
+    expect(mixed.status).toBe(409);
+    expect(await CaseEvent.count({ where: { caseId: id } })).toBe(3);
+    expect((await sendEvents(DANA, id, answered)).data).toEqual({ stored: 0, duplicates: 3 });
   });
 });
 

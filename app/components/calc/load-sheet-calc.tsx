@@ -183,7 +183,7 @@ export function LoadSheetCalc({ rig, compact = false }: { rig?: RigSpecs; compac
           {compact ? null : (
             <p className="text-sm">Rates in metric: {rows.map((row) => `${row.name} ${fmt(lbPerAcreToKgPerHa(toNumber(row.rate) || 0))} kg/ha`).join("; ")}.</p>
           )}
-          <h3 className="mt-3 font-bold">Loading order</h3>
+          <h2 className="mt-3 font-bold">Loading order</h2>
           <ol className="list-decimal pl-6">
             {r.loadingOrder.map((step) => (
               <li key={step}>{step}</li>

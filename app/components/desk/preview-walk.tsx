@@ -21,7 +21,7 @@ export function PreviewWalk({ guide }: { guide: Guide }) {
       </p>
       {end ? (
         <section className={`rounded-lg border-4 bg-paper p-4 ${meta.kind === "fixed" ? "border-go" : "border-stop"}`}>
-          <h1 className="text-2xl font-bold">{meta.kind === "fixed" ? "Fixed" : "Handed off"}</h1>
+          <h2 className="text-2xl font-bold">{meta.kind === "fixed" ? "Fixed" : "Handed off"}</h2>
           <Markdown className="mt-2 text-xl">{meta.prompt}</Markdown>
         </section>
       ) : (
@@ -32,6 +32,7 @@ export function PreviewWalk({ guide }: { guide: Guide }) {
           note=""
           onNoteChange={() => {}}
           onAdvance={(_answer, to) => setPath([...path, to])}
+          headingLevel={2}
         />
       )}
       <div className="mt-3 grid grid-cols-2 gap-2">

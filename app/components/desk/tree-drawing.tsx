@@ -15,7 +15,13 @@ export function TreeDrawing({
 }) {
   const tree = useMemo(() => layoutTree(states), [states]);
   return (
-    <div className="overflow-auto rounded-lg border-2 border-ink bg-paper" style={{ maxHeight: 520 }}>
+    <div
+      className="overflow-auto rounded-lg border-2 border-ink bg-paper"
+      style={{ maxHeight: 520 }}
+      tabIndex={0}
+      role="region"
+      aria-label="Drawing of the guide"
+    >
       <svg width={tree.width} height={tree.height} role="img" aria-label="Decision tree of this guide">
         <defs>
           <marker id="arrow" viewBox="0 0 10 10" refX="9" refY="5" markerWidth="7" markerHeight="7" orient="auto-start-reverse">

@@ -17,6 +17,7 @@ export function StepCard({
   onNoteChange,
   onAdvance,
   children,
+  headingLevel = 1,
 }: {
   machine: GuideMachine;
   stepId: string;
@@ -24,7 +25,10 @@ export function StepCard({
   onNoteChange: (note: string) => void;
   onAdvance: (answer: string, to: string) => void;
   children?: React.ReactNode;
+  /** 1 on the walk (the step is the page); 2 inside the desk's preview, under the page's own title. */
+  headingLevel?: 1 | 2;
 }) {
+  const Heading = headingLevel === 1 ? "h1" : "h2";
   const [snapshot, send, actor] = useMachine(machine, { snapshot: machine.resolveState({ value: stepId }) });
   const [showHelp, setShowHelp] = useState(false);
   const [showNote, setShowNote] = useState(note !== "");
@@ -42,11 +46,11 @@ export function StepCard({
     <section aria-labelledby="step-prompt" className="flex flex-1 flex-col gap-4">
       {safety ? <SafetyCaution compact /> : null}
       <div className={`rounded-lg border-2 p-4 ${safety ? "border-ink bg-caution" : "border-ink bg-paper"}`}>
-        <h1 className="text-sm font-bold tracking-wide uppercase">
+        <Heading className="text-sm font-bold tracking-wide uppercase">
           {safety ? "Shut-down stop" : meta.kind === "check" ? "Check" : "Do this"}
           {meta.minutes ? ` · about ${meta.minutes < 1 ? "½" : meta.minutes} min` : ""}
           {meta.handsOn ? " · hands-on" : ""}
-        </h1>
+        </Heading>
         <div id="step-prompt" tabIndex={-1} data-step-heading className={`mt-1 leading-snug ${safety ? "text-xl" : "text-[1.45rem] font-bold"}`}>
           <Markdown>{meta.prompt}</Markdown>
         </div>
