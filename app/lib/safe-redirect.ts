@@ -7,6 +7,7 @@ const BASE = "http://tankside.invalid";
  */
 export function safeRedirect(to: unknown): string | null {
   if (typeof to !== "string" || !to.startsWith("/") || to.startsWith("//")) return null;
+  // eslint-disable-next-line no-control-regex -- control characters are exactly what must be refused
   if (/[\\\u0000-\u001f\u007f]/.test(to)) return null;
   let url: URL;
   try {

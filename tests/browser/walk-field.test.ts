@@ -75,7 +75,7 @@ describe("every shut-down stop opens in view (360×640)", () => {
     expect(stops.length).toBeGreaterThanOrEqual(20);
   });
 
-  it.each(stops.map((s) => [`${s.guide.id} › ${s.stop}`, s] as const))("%s", async (_name, { guide, stop, before }) => {
+  it.each(stops.map((s) => [`${s.guide.id} › ${s.stop}`, s] as const))("%s", async (_name, { guide, before }) => {
     const p = await crewPage();
     await startWalk(p, guide.id);
     for (const [step, a] of [...pathTo(guide, before[0]), before] as [string, StepAnswer][]) {
