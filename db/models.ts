@@ -39,10 +39,18 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare lockedUntil: Date | null;
   /** Set when an admin turns the person's sign-in off. */
   declare accessRemovedAt: CreationOptional<Date | null>;
-  /** Moves on when the password changes or the sign-in is turned off: older session cookies stop working. */
-  declare sessionEpoch: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+}
+
+/** A signed-in device: the cookie holds the id, this row only its hash. */
+export class SessionRecord extends Model<InferAttributes<SessionRecord>, InferCreationAttributes<SessionRecord>> {
+  declare idHash: string;
+  declare userId: number;
+  declare userAgent: string | null;
+  declare createdAt: Date;
+  declare lastSeenAt: Date;
+  declare expiresAt: Date;
 }
 
 export class PasswordReset extends Model<InferAttributes<PasswordReset>, InferCreationAttributes<PasswordReset>> {
@@ -203,10 +211,20 @@ export function initModels(sequelize: Sequelize) {
       firstFailedAt: DataTypes.DATE,
       lockedUntil: DataTypes.DATE,
       accessRemovedAt: DataTypes.DATE,
-      sessionEpoch: { type: DataTypes.INTEGER.UNSIGNED, defaultValue: 0 },
       ...timestamps,
     },
     { sequelize, tableName: "users" },
+  );
+  SessionRecord.init(
+    {
+      idHash: { type: DataTypes.CHAR(64), primaryKey: true },
+      userId: DataTypes.INTEGER.UNSIGNED,
+      userAgent: DataTypes.STRING(200),
+      createdAt: DataTypes.DATE(3),
+      lastSeenAt: DataTypes.DATE(3),
+      expiresAt: DataTypes.DATE(3),
+    },
+    { sequelize, tableName: "sessions", timestamps: false },
   );
   PasswordReset.init(
     { id, tokenHash: DataTypes.CHAR(64), expiresAt: DataTypes.DATE, usedAt: DataTypes.DATE, ...timestamps },

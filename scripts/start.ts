@@ -61,7 +61,7 @@ async function main() {
   const bin = (name: string) => path.join(root, "node_modules/.bin", name);
   const app = dev
     ? spawn(bin("react-router"), ["dev", "--host", host, "--port", String(port), "--strictPort"], { env, stdio: "inherit" })
-    : spawn(bin("react-router-serve"), ["build/server/index.js"], { env, stdio: "inherit" });
+    : spawn(process.execPath, [path.join(root, "server.js")], { env, stdio: "inherit" });
 
   console.log(`\nTankside: http://${host}:${port}`);
   if (ownDatabase) {

@@ -1,36 +1,61 @@
-import { parseForm } from "~/lib/form-parse";
-import { data } from "react-router";
+import { data, Form } from "react-router";
+import { z } from "zod";
 import { ChoosePasswordForm } from "~/components/choose-password-form";
 import { DoneNote } from "~/components/ui/done-note";
 import { PageTitle } from "~/components/ui/page-title";
+import { useTimes } from "~/components/use-time-zone";
+import { deviceName } from "~/lib/device-name";
 import { toFieldErrors } from "~/lib/form-errors";
+import { parseForm } from "~/lib/form-parse";
 import { changePasswordSchema } from "~/lib/people-schema";
 import { ROLE_LABELS } from "~/lib/roles";
-import { changePassword } from "~/services/account.server";
-import { requireUser } from "~/services/guards.server";
-import { signInCookie } from "~/services/session.server";
+import { changePassword, endOneSession, listSessions } from "~/services/account.server";
+import { fail, requireUser } from "~/services/guards.server";
+import { readForm } from "~/services/read-request.server";
+import { ABSOLUTE_DAYS, currentSessionKey, endSessions, IDLE_DAYS } from "~/services/session.server";
 import type { Route } from "./+types/account";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);
-  return { name: user.name, email: user.email, role: user.role, company: user.companyName };
+  const [sessions, current] = await Promise.all([listSessions(user), currentSessionKey(request)]);
+  return {
+    name: user.name,
+    email: user.email,
+    role: user.role,
+    company: user.companyName,
+    // The key names a device in the form; the current one is marked, not offered for ending here.
+    devices: sessions.map((s) => ({ ...s, name: deviceName(s.userAgent), current: s.key === current })),
+    limits: { idleDays: IDLE_DAYS, absoluteDays: ABSOLUTE_DAYS },
+  };
 }
+
+const deviceAction = z.discriminatedUnion("intent", [
+  z.object({ intent: z.literal("end-device"), key: z.string().regex(/^[0-9a-f]{64}$/, "Pick a device from the list.") }),
+  z.object({ intent: z.literal("end-others") }),
+]);
 
 export async function action({ request }: Route.ActionArgs) {
   const user = await requireUser(request);
-  const submission = parseForm(await request.formData(), changePasswordSchema);
+  const form = await readForm(request);
+  const current = await currentSessionKey(request);
+  if (form.get("intent") === "end-device" || form.get("intent") === "end-others") {
+    const parsed = deviceAction.safeParse(Object.fromEntries(form));
+    if (!parsed.success) fail(400, parsed.error.issues[0].message);
+    if (parsed.data.intent === "end-device") await endOneSession(user, parsed.data.key);
+    else await endSessions(user.id, { except: current ?? undefined });
+    return { result: null, message: parsed.data.intent === "end-device" ? "That device is signed out." : "Every other device is signed out." };
+  }
+  const submission = parseForm(form, changePasswordSchema);
   const hidden = { hideFields: ["current", "password", "confirm"] };
   if (submission.status !== "success") return data({ result: submission.reply(hidden), message: null }, { status: 400 });
-  const changed = await changePassword(user, submission.value.current, submission.value.password);
+  const changed = await changePassword(user, submission.value.current, submission.value.password, current);
   if (!changed.ok) return data({ result: submission.reply({ ...hidden, fieldErrors: toFieldErrors(changed.fieldErrors) }), message: null }, { status: 400 });
-  // This phone stays signed in with the new epoch; every other one is signed out.
-  return data(
-    { result: submission.reply({ resetForm: true }), message: "Password changed. Any other phone or computer signed in as you has been signed out." },
-    { headers: await signInCookie(request, user.id) },
-  );
+  return { result: submission.reply({ resetForm: true }), message: "Password changed. Any other phone or computer signed in as you has been signed out." };
 }
 
 export default function Account({ loaderData, actionData }: Route.ComponentProps) {
+  const times = useTimes();
+  const others = loaderData.devices.filter((d) => !d.current);
   return (
     <>
       <PageTitle lead={`${loaderData.email} · ${ROLE_LABELS[loaderData.role]} at ${loaderData.company}. Your admin can change your role.`}>
@@ -38,7 +63,39 @@ export default function Account({ loaderData, actionData }: Route.ComponentProps
       </PageTitle>
       <DoneNote message={actionData?.message} />
       <h2 className="text-2xl font-bold">Change your password</h2>
-      <ChoosePasswordForm lastResult={actionData?.result} submitLabel="Change password" askCurrent />
+      <ChoosePasswordForm lastResult={actionData?.result ?? undefined} submitLabel="Change password" askCurrent />
+      <h2 className="mt-8 text-2xl font-bold">Where you are signed in</h2>
+      <ul className="mt-2 space-y-2">
+        {loaderData.devices.map((d) => (
+          <li key={d.key} className="rounded-md border-2 border-rule bg-paper p-3">
+            <p className="font-bold">
+              {d.name}
+              {d.current ? " · this device" : ""}
+            </p>
+            <p className="text-sm">
+              Signed in {times.dateTime(d.createdAt)} · last used {times.dateTime(d.lastSeenAt)}
+            </p>
+            {d.current ? null : (
+              <Form method="post" className="mt-2">
+                <input type="hidden" name="key" value={d.key} />
+                <button name="intent" value="end-device" className="min-h-12 rounded-md border-2 border-ink bg-paper px-4 font-bold">
+                  Sign this device out
+                </button>
+              </Form>
+            )}
+          </li>
+        ))}
+      </ul>
+      {others.length > 1 ? (
+        <Form method="post" className="mt-3">
+          <button name="intent" value="end-others" className="min-h-12 rounded-md border-2 border-ink bg-paper px-4 font-bold">
+            Sign out every other device
+          </button>
+        </Form>
+      ) : null}
+      <p className="mt-2 text-sm">
+        A sign-in ends after {loaderData.limits.idleDays} days without use and after {loaderData.limits.absoluteDays} days in any case: then sign in again.
+      </p>
     </>
   );
 }

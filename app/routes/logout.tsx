@@ -1,12 +1,12 @@
 import { redirect } from "react-router";
-import { getSession, sessionStorage } from "~/services/session.server";
+import { signOutCookie } from "~/services/session.server";
 import type { Route } from "./+types/logout";
 
 export async function loader() {
   return redirect("/login");
 }
 
+/** Signing out deletes this device's session on the server, not only the cookie. */
 export async function action({ request }: Route.ActionArgs) {
-  const session = await getSession(request);
-  return redirect("/login", { headers: { "Set-Cookie": await sessionStorage.destroySession(session) } });
+  return redirect("/login", { headers: await signOutCookie(request) });
 }

@@ -21,11 +21,11 @@ export async function getUser(request: Request): Promise<SessionUser | null> {
   const userId = session.get("userId");
   if (!userId) return null;
   const user = await User.findByPk(userId, {
-    attributes: ["id", "name", "email", "role", "companyId", "accessRemovedAt", "sessionEpoch"],
+    attributes: ["id", "name", "email", "role", "companyId", "accessRemovedAt"],
     include: [{ model: Company, attributes: ["name", "timeZone"] }],
   });
-  // A sign-in turned off by an admin ends at once, on every device; so does every session from before a new password.
-  if (!user || user.accessRemovedAt || (session.get("epoch") ?? 0) !== user.sessionEpoch) return null;
+  // A sign-in turned off by an admin ends at once, on every device (its sessions are deleted too).
+  if (!user || user.accessRemovedAt) return null;
   const company = (user as User & { Company: Company }).Company;
   return { id: user.id, name: user.name, email: user.email, role: user.role, companyId: user.companyId, companyName: company.name, timeZone: company.timeZone };
 }

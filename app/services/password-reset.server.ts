@@ -1,7 +1,7 @@
 import { Op } from "sequelize";
 import { hashPassword } from "~/lib/password";
 import { RESET_MINUTES, resetMail } from "~/lib/reset-mail";
-import { PasswordReset, sequelize, User } from "./db.server";
+import { PasswordReset, sequelize, SessionRecord, User } from "./db.server";
 import { env } from "./env.server";
 import { sendMail } from "./mail.server";
 import { hashToken, newToken } from "./tokens.server";
@@ -56,8 +56,9 @@ export async function completeReset(token: string, password: string): Promise<{ 
     });
     const user = reset ? await User.findByPk(reset.userId, { transaction }) : null;
     if (!reset || !user || user.accessRemovedAt) return { ok: false as const, message: UNUSABLE };
-    // A new epoch: whoever else held a session (perhaps the reason for the reset) is signed out.
-    await user.update({ passwordHash, failedLogins: 0, firstFailedAt: null, lockedUntil: null, sessionEpoch: user.sessionEpoch + 1 }, { transaction });
+    // Whoever else held a session (perhaps the reason for the reset) is signed out.
+    await user.update({ passwordHash, failedLogins: 0, firstFailedAt: null, lockedUntil: null }, { transaction });
+    await SessionRecord.destroy({ where: { userId: user.id }, transaction });
     await PasswordReset.update({ usedAt: new Date() }, { where: { userId: user.id, usedAt: null }, transaction });
     return { ok: true as const, userId: user.id };
   });

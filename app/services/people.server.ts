@@ -6,6 +6,7 @@ import { Company, Invite, sequelize, User } from "./db.server";
 import { env } from "./env.server";
 import { fail, notFound, type SessionUser } from "./guards.server";
 import { sendMail } from "./mail.server";
+import { endSessions } from "./session.server";
 import { hashToken, newToken } from "./tokens.server";
 
 export const INVITE_DAYS = 7;
@@ -90,7 +91,8 @@ export async function actOnPerson(user: SessionUser, action: PersonAction): Prom
   }
   const removed = action.intent === "remove-access";
   // Turning it back on does not revive old sessions: the person signs in afresh.
-  await person.update(removed ? { accessRemovedAt: new Date(), sessionEpoch: person.sessionEpoch + 1 } : { accessRemovedAt: null });
+  await person.update({ accessRemovedAt: removed ? new Date() : null });
+  if (removed) await endSessions(person.id);
   return removed ? `${person.name} can no longer sign in; their cases stay as they are.` : `${person.name} can sign in again with their old password.`;
 }
 

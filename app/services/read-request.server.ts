@@ -9,8 +9,13 @@ function refuse(error: z.ZodError, what?: string): never {
   fail(400, what ? `Check ${what}: ${detail.join("; ")}.` : `Check ${Object.keys(fields).join(", ")}.`, fields);
 }
 
-/** Parses a JSON body with a schema; a bad body stops with 400 naming each bad field. */
+/**
+ * Parses a JSON body with a schema; a bad body stops with 400 naming each bad field. Only a body
+ * declared as JSON is read (415 otherwise): a cross-site form can send text/plain but not that.
+ */
 export async function readJson<S extends z.ZodType>(request: Request, schema: S): Promise<z.infer<S>> {
+  const type = request.headers.get("Content-Type") ?? "";
+  if (!/^application\/json\s*(;|$)/i.test(type)) fail(415, "Send the body as JSON (Content-Type: application/json).");
   let body: unknown;
   try {
     body = await request.json();

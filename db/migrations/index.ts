@@ -11,6 +11,7 @@ import * as m009 from "./009-people";
 import * as m010 from "./010-password-resets";
 import * as m011 from "./011-session-epoch";
 import * as m012 from "./012-time-zone-and-handoff-record";
+import * as m013 from "./013-sessions";
 
 export interface Migration {
   name: string;
@@ -32,4 +33,5 @@ export const migrations: Migration[] = [
   { name: "010-password-resets", ...m010 },
   { name: "011-session-epoch", ...m011 },
   { name: "012-time-zone-and-handoff-record", ...m012 },
+  { name: "013-sessions", ...m013 },
 ];

@@ -7,7 +7,7 @@ import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { chromium, type BrowserContext, type Page } from "playwright-core";
-import { afterAll, beforeAll } from "vitest";
+import { afterAll, afterEach, beforeAll } from "vitest";
 import { buildIfStale } from "../../scripts/build-if-stale";
 import { freePort } from "../../scripts/free-port";
 import { resetDatabase } from "./db";
@@ -38,7 +38,7 @@ export async function startApp(extraEnv: NodeJS.ProcessEnv = {}): Promise<Runnin
     SHOW_DEMO_SIGNINS: "1",
     ...extraEnv,
   };
-  const child: ChildProcess = spawn(path.join(root, "node_modules/.bin/react-router-serve"), ["build/server/index.js"], {
+  const child: ChildProcess = spawn(process.execPath, [path.join(root, "server.js")], {
     cwd: root,
     env,
     stdio: ["ignore", "ignore", "pipe"],
@@ -69,6 +69,9 @@ export async function startApp(extraEnv: NodeJS.ProcessEnv = {}): Promise<Runnin
 
 export const PHONE = { width: 360, height: 640 };
 
+/** What the browser reported breaking the Content-Security-Policy (any page of the context). */
+export const cspViolations: string[] = [];
+
 export async function launchBrowser(viewport = PHONE): Promise<{ context: BrowserContext; close(): Promise<void> }> {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), "tankside-chromium-"));
   const context = await chromium.launchPersistentContext(dir, {
@@ -87,6 +90,12 @@ export async function launchBrowser(viewport = PHONE): Promise<{ context: Browse
   });
   // Fail with the locator's name well inside the test's own timeout.
   context.setDefaultTimeout(10_000);
+  // Every browser test runs with the app's real security headers: a refused script or style fails it.
+  context.on("page", (page) =>
+    page.on("console", (m) => {
+      if (/Content Security Policy|Refused to (execute|load|apply|connect|frame)/i.test(m.text())) cspViolations.push(`${page.url()}: ${m.text()}`);
+    }),
+  );
   return {
     context,
     async close() {
@@ -124,6 +133,10 @@ export function appAndBrowserForFile(viewport = PHONE) {
   beforeAll(async () => {
     harness.app = await startApp();
     harness.browser = await launchBrowser(viewport);
+  });
+  afterEach(() => {
+    const seen = cspViolations.splice(0);
+    if (seen.length) throw new Error(`Content-Security-Policy violations:\n${seen.join("\n")}`);
   });
   afterAll(async () => {
     await harness.browser?.close();

@@ -1,13 +1,12 @@
 import { User } from "../../db/index";
-import { sessionStorage } from "~/services/session.server";
+import { signInCookie } from "~/services/session.server";
 
-/** A session cookie for a demo person, as if they had signed in. */
+/** A session cookie for a demo person, made the way a real sign-in makes it (a session row in the database). */
 export async function cookieFor(email: string): Promise<string> {
   const user = await User.findOne({ where: { email }, attributes: ["id"] });
   if (!user) throw new Error(`No user ${email}`);
-  const session = await sessionStorage.getSession();
-  session.set("userId", user.id);
-  return (await sessionStorage.commitSession(session)).split(";")[0];
+  const headers = new Headers(await signInCookie(new Request("http://127.0.0.1/login", { headers: { "User-Agent": "tests" } }), user.id));
+  return headers.get("Set-Cookie")!.split(";")[0];
 }
 
 export async function requestAs(email: string | null, path: string, init: RequestInit & { form?: Record<string, string> } = {}) {

@@ -1,5 +1,6 @@
 import { beforeAll, describe, expect, it } from "vitest";
-import { User } from "../../db/index";
+import { PasswordReset, SessionRecord, User } from "../../db/index";
+import { action as logoutAction } from "~/routes/logout";
 import { action as accountAction, loader as accountLoader } from "~/routes/account";
 import { action as loginAction } from "~/routes/login";
 import { action as peopleAction } from "~/routes/admin.people";
@@ -41,12 +42,17 @@ describe("your account", () => {
     expect(differ.data.result.error.confirm[0]).toMatch(/not the same/);
     expect(await canSee(laptop)).toBe(true);
 
+    const reset = await PasswordReset.create({
+      userId: (await User.findOne({ where: { email: RAVI } }))!.id,
+      tokenHash: "a".repeat(64),
+      expiresAt: new Date(Date.now() + 3_600_000),
+    });
     const done = await change(phone, { current: DEMO_PASSWORD, password: "recirculation valve open", confirm: "recirculation valve open" });
     expect(done.data.message).toMatch(/Password changed/);
-    const renewed = done.cookie!;
-    expect(await canSee(renewed)).toBe(true);
+    // This phone keeps its session; the laptop's is gone, and so is a reset link sent before.
+    expect(await canSee(phone)).toBe(true);
     expect(await canSee(laptop)).toBe(false);
-    expect(await canSee(phone)).toBe(false);
+    expect((await reset.reload()).usedAt).not.toBeNull();
     expect((await run(() => loginAction(args(form("/login", { email: RAVI, password: DEMO_PASSWORD, redirectTo: "/" }))))).status).toBe(401);
     await signedIn(RAVI, "recirculation valve open");
   });
@@ -60,5 +66,51 @@ describe("your account", () => {
     await admin({ intent: "restore-access", personId: String(dana.id) });
     expect(await canSee(old)).toBe(false);
     expect(await canSee(await signedIn("dana@cedarflats.example", DEMO_PASSWORD))).toBe(true);
+  });
+
+  it("makes a new session id at every sign-in, and signing out ends it on the server (a copied cookie stops working)", async () => {
+    const one = await signedIn(RAVI, "recirculation valve open");
+    const two = await signedIn(RAVI, "recirculation valve open");
+    expect(one).not.toBe(two);
+    const copy = one;
+    const out = await run(() => logoutAction(args(form("/logout", {}, one))));
+    expect(out.status).toBe(302);
+    expect(await canSee(copy)).toBe(false);
+    expect(await canSee(two)).toBe(true);
+    // The table keeps only a hash of each id: no stored value is in a cookie.
+    for (const row of await SessionRecord.findAll()) expect(decodeURIComponent(two)).not.toContain(row.idHash);
+  });
+
+  it("ends a session after 14 idle days or 60 days in all", async () => {
+    const ravi = (await User.findOne({ where: { email: RAVI } }))!;
+    const idle = await signedIn(RAVI, "recirculation valve open");
+    const old = await signedIn(RAVI, "recirculation valve open");
+    const rows = await SessionRecord.findAll({ where: { userId: ravi.id }, order: [["createdAt", "DESC"]] });
+    const DAY = 86_400_000;
+    await rows[1].update({ lastSeenAt: new Date(Date.now() - 14 * DAY - 60_000) });
+    await rows[0].update({ expiresAt: new Date(Date.now() - 1000) });
+    expect(await canSee(idle)).toBe(false);
+    expect(await canSee(old)).toBe(false);
+    const fresh = await signedIn(RAVI, "recirculation valve open");
+    const made = await SessionRecord.findOne({ where: { userId: ravi.id }, order: [["createdAt", "DESC"]] });
+    expect(made!.expiresAt.getTime() - made!.createdAt.getTime()).toBe(60 * DAY);
+    expect(await canSee(fresh)).toBe(true);
+  });
+
+  it("lists the person's devices on /account and signs one out", async () => {
+    const phone = await signedIn(RAVI, "recirculation valve open");
+    const laptop = await signedIn(RAVI, "recirculation valve open");
+    const page = await run(() => accountLoader(args(new Request("http://127.0.0.1/account", { headers: { Cookie: phone } }))));
+    const devices = page.data.devices as { key: string; current: boolean }[];
+    expect(devices.filter((d) => d.current)).toHaveLength(1);
+    const other = devices.find((d) => !d.current)!;
+    // Another person's key ends nothing of theirs.
+    await run(async () => accountAction(args(await requestAs("dana@cedarflats.example", "/account", { form: { intent: "end-device", key: other.key } }))));
+    expect(await canSee(laptop)).toBe(true);
+    await change(phone, { intent: "end-others" });
+    expect(await canSee(laptop)).toBe(false);
+    expect(await canSee(phone)).toBe(true);
+    const bad = await change(phone, { intent: "end-device", key: "nope" });
+    expect(bad.status).toBe(400);
   });
 });
