@@ -44,5 +44,6 @@ export default [
     ]),
     route("tools", "routes/tools.tsx"),
     route("tools/:tool", "routes/tools.$tool.tsx"),
+    route("*", "routes/not-found.tsx"),
   ]),
 ] satisfies RouteConfig;

@@ -16,7 +16,7 @@ export const caseFiltersSchema = z.object({
   to: day.optional(),
   sort: z.enum(CASE_SORTS, { error: `sort must be one of ${CASE_SORTS.join(", ")}` }).default("opened"),
   dir: z.enum(["asc", "desc"]).default("desc"),
-  page: z.coerce.number().int().min(1).max(100_000).default(1),
+  page: z.coerce.number({ error: "page must be a whole number" }).int("page must be a whole number").min(1, "page starts at 1").max(100_000).default(1),
 });
 
 export type CaseFilters = z.output<typeof caseFiltersSchema>;

@@ -51,6 +51,22 @@ export function isoInZone(iso: string | Date, timeZone: string): string {
   return `${parts.year}-${parts.month}-${parts.day}T${parts.hour}:${parts.minute}:${parts.second}${offset}`;
 }
 
+/** The zone's offset from UTC at an instant, in minutes (Denver in winter: −420). */
+function offsetMinutes(at: Date, timeZone: string): number {
+  const m = isoInZone(at, timeZone).match(/([+-])(\d{2}):(\d{2})$/)!;
+  return (m[1] === "-" ? -1 : 1) * (Number(m[2]) * 60 + Number(m[3]));
+}
+
+/** The instant a calendar day (YYYY-MM-DD) starts in a zone: a company's "June 1" runs from its own midnight. */
+export function startOfDayIn(day: string, timeZone: string): Date {
+  const [y, mo, d] = day.split("-").map(Number);
+  const utcMidnight = Date.UTC(y, mo - 1, d);
+  let at = new Date(utcMidnight - offsetMinutes(new Date(utcMidnight), timeZone) * 60_000);
+  // Across a daylight-saving change the offset at the guess can differ from the offset at midnight.
+  at = new Date(utcMidnight - offsetMinutes(at, timeZone) * 60_000);
+  return at;
+}
+
 /** Is this an IANA zone this runtime knows? */
 export function isTimeZone(zone: string): boolean {
   try {

@@ -1,12 +1,12 @@
 import { Form, Link, useNavigation } from "react-router";
 import { ParetoChart, TrendChart } from "~/components/board/charts";
 import { PageTitle } from "~/components/ui/page-title";
-import { boardQuerySchema } from "~/lib/board-query";
+import { boardQuerySchema, type BoardQuery } from "~/lib/board-query";
 import { fmt } from "~/lib/calc/units";
 import { shortLabel } from "~/lib/format";
 import { boardFor } from "~/services/board.server";
 import { sendDigest } from "~/services/digest.server";
-import { requireRole } from "~/services/guards.server";
+import { refusal, requireRole } from "~/services/guards.server";
 import { readQuery } from "~/services/read-request.server";
 import { causeList } from "~/services/guides.server";
 import { listRigs } from "~/services/rigs.server";
@@ -15,10 +15,20 @@ import type { Route } from "./+types/board";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireRole(request, "supervisor");
-  const q = readQuery(request, boardQuerySchema, "the window");
+  // A window the form got wrong keeps the person on the board: the default window, the message beside the form.
+  let formError: string | null = null;
+  let q: BoardQuery;
+  try {
+    q = readQuery(request, boardQuerySchema, "the window");
+  } catch (thrown) {
+    formError = refusal(thrown)?.error ?? null;
+    if (!formError) throw thrown;
+    q = boardQuerySchema.parse({});
+  }
   const [board, rigs] = await Promise.all([boardFor(user, q), listRigs(user, { includeRetired: true })]);
   return {
     board,
+    formError,
     window: { from: q.fromDay, to: q.toDay, rig: q.rigCode ?? "", repeatDays: q.repeatDays },
     rigs: rigs.map((r) => r.code),
     causeNames: Object.fromEntries(causeList().map((c) => [c.code, c.name])),
@@ -101,6 +111,11 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
         ) : null}
       </section>
 
+      {loaderData.formError ? (
+        <p role="alert" className="mt-4 rounded-md border-4 border-stop bg-paper p-3 font-bold text-stop">
+          {loaderData.formError} Showing the last 365 days instead.
+        </p>
+      ) : null}
       <Form method="get" className="mt-4 grid grid-cols-2 gap-3 rounded-lg border-2 border-ink bg-paper p-3 sm:grid-cols-5">
         <label className="font-bold">
           From
@@ -198,8 +213,8 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
             .slice(0, 12)
             .map((p) => ({ label: shortLabel(name(p.cause).split(" (")[0], 26), count: p.count, cumulative: Math.round(p.cumulativeShare * 1000) / 10 }))}
         />
-        <details className="rounded-md border-2 border-rule bg-paper p-3" open>
-          <summary className="min-h-12 cursor-pointer py-2 font-bold">Causes as a table</summary>
+        <details className="rounded-md border-2 border-rule bg-paper p-3">
+          <summary className="min-h-12 cursor-pointer py-2 font-bold">All {board.pareto.length} causes as a table</summary>
           <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Causes table">
             <table className="w-full min-w-[30rem] border-collapse text-left [&_td]:p-2 [&_th]:p-2">
               <thead>
@@ -299,7 +314,6 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
           ))}
         </ul>
       </section>
-
 
       <p className="mt-6">
         <a href={`/api/board?from=${window.from}&to=${window.to}${window.rig ? `&rig=${window.rig}` : ""}&repeatDays=${window.repeatDays}`}>

@@ -1,6 +1,7 @@
 import { Link } from "react-router";
 import { z } from "zod";
 import { ConfirmAction } from "~/components/ui/confirm-action";
+import { Markdown } from "~/components/ui/markdown";
 import { hasRole } from "~/lib/roles";
 import { PageTitle } from "~/components/ui/page-title";
 import { formatDuration } from "~/lib/format";
@@ -129,7 +130,7 @@ export default function CasePage({ loaderData: c }: Route.ComponentProps) {
               <p className="text-sm">
                 {e.seq}. {times.time(e.at)} · +{formatDuration(gap)}
               </p>
-              <p className="font-bold">{e.prompt.replace(/\*\*/g, "")}</p>
+              <Markdown className="font-bold">{e.prompt}</Markdown>
               <p>→ {answerLabel(e.answer)}</p>
               {e.note ? <p className="mt-1 italic">Note: {e.note}</p> : null}
             </li>

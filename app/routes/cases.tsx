@@ -82,7 +82,7 @@ export default function Cases({ loaderData }: Route.ComponentProps) {
           <tbody>
             {rows.map((r) => (
               <tr key={r.id} className="border-b border-rule">
-                <td className="p-2 font-bold">{r.rigCode}</td>
+                <td className="p-2 font-bold whitespace-nowrap">{r.rigCode}</td>
                 <td className="p-2">
                   <Link to={`/cases/${r.id}`}>{r.guideTitle}</Link>
                 </td>

@@ -7,7 +7,7 @@ import { GuideVersion } from "~/services/db.server";
 import { deskGuide, learnFromCases, openDraft, reviewVersion, submitDraft } from "~/services/desk.server";
 import { fail, requireRole, unlessRefused } from "~/services/guards.server";
 import { ADVISOR_MIN_CASES } from "~/lib/stats/check-order";
-import { answerLabel, statusLabel } from "~/lib/vocabulary";
+import { ANSWERS, answerLabel, statusLabel, type Answer } from "~/lib/vocabulary";
 import { useTimes } from "~/components/use-time-zone";
 import type { Route } from "./+types/desk.$guideId";
 
@@ -170,6 +170,7 @@ export default function DeskGuide({ loaderData, actionData }: Route.ComponentPro
           <h2 className="mt-6 text-xl font-bold">
             How crews went through version {learning.version} ({learning.cases} cases)
           </h2>
+          <p className="text-sm sm:hidden">The table scrolls sideways for answers, stops and times.</p>
           <div
             className="mt-2 overflow-x-auto rounded-lg border-2 border-ink bg-paper"
             tabIndex={0}
@@ -203,6 +204,7 @@ export default function DeskGuide({ loaderData, actionData }: Route.ComponentPro
                     <td className="p-2">{f.reached}</td>
                     <td className="p-2">
                       {Object.entries(f.answers)
+                        .sort(([a], [b]) => ANSWERS.indexOf(a as Answer) - ANSWERS.indexOf(b as Answer))
                         .map(([a, n]) => `${answerLabel(a)} ${n}`)
                         .join(", ") || "—"}
                     </td>
@@ -233,8 +235,8 @@ export default function DeskGuide({ loaderData, actionData }: Route.ComponentPro
               <ol className="mt-2 list-decimal space-y-1 pl-6">
                 {learning.advisor.suggested.map((c) => (
                   <li key={c.id}>
-                    <strong>{learning.prompts[c.id] ?? c.id}</strong>
-                    {c.guard ? ` (after its stop “${learning.prompts[c.guard] ?? c.guard}”)` : ""}: {c.probability} cases, {fmt(c.minutes, 1)} min
+                    <strong>“{learning.prompts[c.id] ?? c.id}”</strong>
+                    {c.guard ? ` (after its stop “${learning.prompts[c.guard] ?? c.guard}”)` : ""} — {c.probability} cases, {fmt(c.minutes, 1)} min
                   </li>
                 ))}
               </ol>

@@ -1,3 +1,4 @@
+import { useEffect, useState } from "react";
 import { data, Form, Link, redirect } from "react-router";
 import { z } from "zod";
 import { GuideEditor, type Draft } from "~/components/desk/guide-editor";
@@ -53,30 +54,12 @@ export default function EditVersion({ loaderData, actionData }: Route.ComponentP
       ) : null}
       {editable ? (
         <>
-          <GuideEditor initial={version.definition as unknown as Draft} causes={causes} saveUrl={`/api/desk/${guide.id}/v/${version.number}`} />
-          <Form method="post" className="mt-6 space-y-2 rounded-lg border-2 border-ink bg-paper p-3">
-            <h2 className="text-xl font-bold">Send for review</h2>
-            <p>Save first: the saved draft is what goes to the reviewer.</p>
-            {actionData ? (
-              <div role="alert" className="rounded-md border-4 border-stop p-3">
-                <p className="font-bold text-stop">{actionData.error}</p>
-                {actionData.problems.length ? (
-                  <ul className="mt-2 list-disc space-y-1 pl-6">
-                    {actionData.problems.map((p) => (
-                      <li key={p}>{p}</li>
-                    ))}
-                  </ul>
-                ) : null}
-              </div>
-            ) : null}
-            <label className="block font-bold">
-              Change note for the reviewer
-              <input name="changeNote" required minLength={3} maxLength={1000} className="mt-1 block min-h-12 w-full rounded-md border-2 border-ink px-2" />
-            </label>
-            <button name="intent" value="submit" className="min-h-12 rounded-md border-2 border-ink bg-paper px-4 font-bold">
-              Send for review
-            </button>
-          </Form>
+          <GuideEditor
+            initial={version.definition as unknown as Draft}
+            causes={causes}
+            saveUrl={`/api/desk/${guide.id}/v/${version.number}`}
+            footer={({ dirty, edits }) => <SendForReview dirty={dirty} edits={edits} result={actionData} />}
+          />
         </>
       ) : (
         <div className="space-y-3">
@@ -86,6 +69,45 @@ export default function EditVersion({ loaderData, actionData }: Route.ComponentP
         </div>
       )}
     </>
+  );
+}
+
+/**
+ * Sending the saved draft for review. With unsaved changes it waits (the saved draft is what the
+ * reviewer gets); problems the server listed are shown until the draft is edited again.
+ */
+function SendForReview({ dirty, edits, result }: { dirty: boolean; edits: number; result?: { error: string; problems: string[] } }) {
+  const [editsAtResult, setEditsAtResult] = useState(edits);
+  useEffect(() => setEditsAtResult(edits), [result]); // eslint-disable-line react-hooks/exhaustive-deps -- only when a new answer arrives
+  const showResult = result && editsAtResult === edits;
+  return (
+    <Form method="post" className="mt-6 space-y-2 rounded-lg border-2 border-ink bg-paper p-3">
+      <h2 className="text-xl font-bold">Send for review</h2>
+      {dirty ? (
+        <p className="font-bold text-stop">Save the draft first: the saved draft is what goes to the reviewer.</p>
+      ) : (
+        <p>The saved draft goes to a supervisor, who publishes it or sends it back with a comment.</p>
+      )}
+      {showResult ? (
+        <div role="alert" className="rounded-md border-4 border-stop p-3">
+          <p className="font-bold text-stop">{result.error}</p>
+          {result.problems.length ? (
+            <ul className="mt-2 list-disc space-y-1 pl-6">
+              {result.problems.map((p) => (
+                <li key={p}>{p}</li>
+              ))}
+            </ul>
+          ) : null}
+        </div>
+      ) : null}
+      <label className="block font-bold">
+        Change note for the reviewer
+        <input name="changeNote" required minLength={3} maxLength={1000} className="mt-1 block min-h-12 w-full rounded-md border-2 border-ink px-2" />
+      </label>
+      <button name="intent" value="submit" disabled={dirty} className="min-h-12 rounded-md border-2 border-ink bg-paper px-4 font-bold disabled:opacity-60">
+        Send for review
+      </button>
+    </Form>
   );
 }
 

@@ -46,7 +46,8 @@ function ShellFrame({ user, hidden, children }: Awaited<ReturnType<typeof loader
           </p>
         </div>
         <nav aria-label="Main" className="mx-auto max-w-3xl px-1 pb-1">
-          <ul className="flex flex-wrap items-center gap-x-1">
+          {/* One row that scrolls sideways on a phone, so the menu does not push the page down. */}
+          <ul className="flex items-center gap-x-1 overflow-x-auto whitespace-nowrap sm:flex-wrap">
             {navFor(user.role)
               .filter((item) => !hidden.includes(item.to))
               .map((item) => (

@@ -1,5 +1,8 @@
 import { QueryTypes } from "sequelize";
 import { PAGE_SIZE, type CaseFilters } from "~/lib/case-filters";
+import { startOfDayIn } from "~/lib/format";
+
+const nextDay = (day: string) => new Date(Date.parse(`${day}T00:00:00Z`) + 86_400_000).toISOString().slice(0, 10);
 import { Rig, sequelize, User } from "./db.server";
 import type { SessionUser } from "./guards.server";
 
@@ -32,8 +35,9 @@ function where(user: SessionUser, f: CaseFilters) {
     cause: f.cause ?? null,
     outcome: f.outcome ?? null,
     person: f.person ?? null,
-    from: f.from ? new Date(`${f.from}T00:00:00Z`) : null,
-    to: f.to ? new Date(Date.parse(`${f.to}T00:00:00Z`) + 86_400_000) : null,
+    // Days are the company's own: "to" includes the whole of its day.
+    from: f.from ? startOfDayIn(f.from, user.timeZone) : null,
+    to: f.to ? startOfDayIn(nextDay(f.to), user.timeZone) : null,
   };
   const sql = `FROM cases c JOIN rigs r ON r.id = c.rig_id JOIN guide_versions v ON v.id = c.guide_version_id JOIN guides g ON g.id = v.guide_id
     LEFT JOIN users u ON u.id = c.opened_by

@@ -3,7 +3,7 @@ import { Op, QueryTypes } from "sequelize";
 import { compileGuide } from "~/lib/guides/compile";
 import { mainLine } from "~/lib/guides/main-line";
 import type { Guide } from "~/lib/guides/schema";
-import { validateGuide } from "~/lib/guides/validate";
+import { validateGuide, plainProblem } from "~/lib/guides/validate";
 import { expectedMinutes, ratioOrder } from "~/lib/stats/check-order";
 import { stepFlow, type FlowCase } from "~/lib/stats/step-flow";
 import { GuideRecord, GuideVersion, guideScope, sequelize, User } from "./db.server";
@@ -36,7 +36,8 @@ export async function deskList(user: SessionUser) {
     include: [{ model: GuideVersion, as: "versions", attributes: ["number", "status", "updatedAt"] }],
     order: [["title", "ASC"]],
   });
-  const replaced = new Set(guides.filter((g) => g.companyId !== null && g.basedOnGuideId).map((g) => g.basedOnGuideId));
+  // A built-in is replaced for this company's crews only once its copy is published.
+  const replaced = new Set(guides.filter((g) => g.companyId !== null && g.basedOnGuideId && g.publishedVersion).map((g) => g.basedOnGuideId));
   return guides.map((g) => ({
     id: g.id,
     slug: g.slug,
@@ -163,7 +164,7 @@ export async function submitDraft(user: SessionUser, guideId: number, number: nu
   if (guide.companyId !== user.companyId || version.status !== "draft") fail(409, "Only a draft can be sent for review.");
   const problems = checkDefinition(version.definition);
   if (problems.length) {
-    const listed = Object.fromEntries(problems.map((p, i) => [String(i + 1), `${p.step ? `Step “${p.step}”: ` : ""}${p.message}`]));
+    const listed = Object.fromEntries(problems.map((p, i) => [String(i + 1), `${p.step ? `Step “${p.step}”: ` : ""}${plainProblem(p.message)}`]));
     fail(422, `Fix ${problems.length} problem${problems.length === 1 ? "" : "s"} before sending this for review.`, listed);
   }
   await version.update({ status: "in_review", changeNote, authorId: version.authorId ?? user.id });

@@ -5,7 +5,8 @@ import { fail } from "./guards.server";
 /** Stops with 400 naming each bad field, in the one shape every page and API answers errors in. */
 function refuse(error: z.ZodError, what?: string): never {
   const fields = fieldErrors(error);
-  const detail = Object.entries(fields).map(([k, v]) => `${k} ${v}`);
+  // Messages that already name their field ("from must be before to") are not prefixed twice.
+  const detail = Object.entries(fields).map(([k, v]) => (v.startsWith(k) ? v : `${k}: ${v}`));
   fail(400, what ? `Check ${what}: ${detail.join("; ")}.` : `Check ${Object.keys(fields).join(", ")}.`, fields);
 }
 

@@ -61,7 +61,8 @@ describe("supervisor screens, as a supervisor submits them (360×640)", () => {
 
   it("asks before marking a hand-off dealt with, and keeps who and the note", async () => {
     const p = await as("mo@cedarflats.example");
-    const handoff = await Case.findOne({ where: { outcome: "handoff", handoffResolvedAt: null } });
+    const handoff = await Case.findOne({ where: { outcome: "handoff" }, order: [["openedAt", "DESC"]] });
+    await handoff!.update({ handoffResolvedAt: null, handoffResolvedBy: null, handoffResolvedNote: null });
     await p.goto(`${harness.app.url}/cases/${handoff!.id}`);
     await p.getByText("Mark this hand-off dealt with").click();
     await p.getByLabel("What was done (optional)").fill("Pump sent to the shop");

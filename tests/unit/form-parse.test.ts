@@ -35,3 +35,14 @@ describe("reading a page form", () => {
     }
   });
 });
+
+describe("a company's calendar day", () => {
+  it("starts at the zone's own midnight, across daylight-saving changes (IANA tz database offsets)", async () => {
+    const { startOfDayIn } = await import("~/lib/format");
+    expect(startOfDayIn("2026-12-01", "America/Denver").toISOString()).toBe("2026-12-01T07:00:00.000Z"); // MST, UTC−7
+    expect(startOfDayIn("2026-07-01", "America/Denver").toISOString()).toBe("2026-07-01T06:00:00.000Z"); // MDT, UTC−6
+    expect(startOfDayIn("2026-03-08", "America/Denver").toISOString()).toBe("2026-03-08T07:00:00.000Z"); // DST starts at 2:00 that day
+    expect(startOfDayIn("2026-11-01", "America/Denver").toISOString()).toBe("2026-11-01T06:00:00.000Z"); // DST ends at 2:00 that day
+    expect(startOfDayIn("2026-06-01", "UTC").toISOString()).toBe("2026-06-01T00:00:00.000Z");
+  });
+});

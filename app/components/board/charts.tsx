@@ -14,11 +14,11 @@ export function ParetoChart({ rows }: { rows: { label: string; count: number; cu
   return (
     <div className="h-80" aria-hidden>
       <ResponsiveContainer width="100%" height="100%">
-        <ComposedChart data={rows} margin={{ top: 8, right: 8, bottom: 48, left: 0 }} accessibilityLayer={false}>
+        <ComposedChart data={rows} margin={{ top: 8, right: 16, bottom: 48, left: 56 }} accessibilityLayer={false}>
           <CartesianGrid stroke="#c9cec7" vertical={false} />
           <XAxis dataKey="label" angle={-35} textAnchor="end" interval={0} tick={{ fontSize: 12, fill: "#101418" }} height={90} />
-          <YAxis yAxisId="n" allowDecimals={false} tick={{ fill: "#101418" }} width={36} />
-          <YAxis yAxisId="pct" orientation="right" domain={[0, 100]} tickFormatter={(v) => `${v}%`} tick={{ fill: "#101418" }} width={40} />
+          <YAxis yAxisId="n" allowDecimals={false} tick={{ fill: "#101418" }} width={44} />
+          <YAxis yAxisId="pct" orientation="right" domain={[0, 100]} tickFormatter={(v) => `${v}%`} tick={{ fill: "#101418" }} width={48} />
           <Bar yAxisId="n" dataKey="count" name="Cases" fill="#0f4a2c" />
           <Line yAxisId="pct" dataKey="cumulative" name="Running share %" stroke="#7f1111" strokeWidth={3} dot={false} />
           <Legend verticalAlign="top" height={28} wrapperStyle={{ color: "#101418" }} />

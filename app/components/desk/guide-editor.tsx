@@ -24,9 +24,26 @@ function uniqueId(states: Record<string, unknown>, base: string) {
 }
 
 /** Edit a draft: guide fields, steps, answers; the validator runs on every change. Saving sends the whole draft. */
-export function GuideEditor({ initial, causes, saveUrl }: { initial: Draft; causes: Cause[]; saveUrl: string }) {
+export function GuideEditor({
+  initial,
+  causes,
+  saveUrl,
+  footer,
+}: {
+  initial: Draft;
+  causes: Cause[];
+  saveUrl: string;
+  /** What goes under the editor (sending for review), told whether there are unsaved changes and how many edits so far. */
+  footer?: (state: { dirty: boolean; edits: number }) => React.ReactNode;
+}) {
   const [draft, setDraft] = useState<Draft>(initial);
-  const [selected, setSelected] = useState<string | null>(initial.initial in initial.states ? initial.initial : null);
+  const [edits, setEdits] = useState(0);
+  const [selected, select] = useState<string | null>(initial.initial in initial.states ? initial.initial : null);
+  // On a phone the step's form sits below the list: bring it into view when a step is picked.
+  const setSelected = (id: string | null) => {
+    select(id);
+    if (id && window.innerWidth < 768) requestAnimationFrame(() => document.getElementById("selected-step")?.scrollIntoView({ block: "start" }));
+  };
   const [saved, setSaved] = useState<"saved" | "unsaved" | "saving" | "failed">("saved");
   const problems = useMemo(() => validateGuide(draft, { causes }).problems, [draft, causes]);
   useWarnBeforeLeaving(saved !== "saved");
@@ -34,6 +51,7 @@ export function GuideEditor({ initial, causes, saveUrl }: { initial: Draft; caus
 
   const change = (next: Draft) => {
     setDraft(next);
+    setEdits((n) => n + 1);
     setSaved("unsaved");
   };
   const setStep = (id: string, step: LooseStep) => change({ ...draft, states: { ...draft.states, [id]: step } });
@@ -135,7 +153,7 @@ export function GuideEditor({ initial, causes, saveUrl }: { initial: Draft; caus
                   aria-current={selected === id ? "true" : undefined}
                   className={`min-h-11 flex-1 truncate rounded-md border-2 px-2 text-left ${selected === id ? "border-link bg-paper font-bold" : "border-rule bg-paper"}`}
                 >
-                  {draft.states[id].meta.kind === "safety" ? "⛔ " : ""}
+                  {draft.states[id].meta.kind === "safety" ? <span className="mr-1 rounded bg-ink px-1 text-sm font-bold text-white">STOP</span> : null}
                   {id}
                 </button>
                 <button
@@ -165,7 +183,7 @@ export function GuideEditor({ initial, causes, saveUrl }: { initial: Draft; caus
             ))}
           </div>
         </section>
-        <section aria-label="Selected step" className="rounded-lg border-2 border-ink bg-paper p-3">
+        <section id="selected-step" aria-label="Selected step" className="scroll-mt-20 rounded-lg border-2 border-ink bg-paper p-3">
           {selected && draft.states[selected] ? (
             <>
               <StepForm
@@ -199,6 +217,7 @@ export function GuideEditor({ initial, causes, saveUrl }: { initial: Draft; caus
           )}
         </section>
       </div>
+      {footer?.({ dirty: saved !== "saved", edits })}
     </div>
   );
 }

@@ -1,4 +1,4 @@
-import type { GuideProblem } from "~/lib/guides/validate";
+import { plainProblem, type GuideProblem } from "~/lib/guides/validate";
 
 /** Live checks: every problem, each with a way to jump to its step. */
 export function ProblemsPanel({ problems, onSelect }: { problems: GuideProblem[]; onSelect: (step: string) => void }) {
@@ -24,7 +24,7 @@ export function ProblemsPanel({ problems, onSelect }: { problems: GuideProblem[]
               ) : (
                 <strong>Guide</strong>
               )}
-              : {p.message}
+              : {plainProblem(p.message)}
             </li>
           ))}
         </ul>

@@ -1,7 +1,7 @@
 import type { Cause } from "./causes";
 import { findDuplicateKeys } from "./duplicate-keys";
 import { reachable, stepsToEnd } from "./graph";
-import { ANSWERS_BY_KIND } from "../vocabulary";
+import { ANSWER_LABELS, ANSWERS_BY_KIND, type StepAnswer } from "../vocabulary";
 import { guideSchema, isFinalKind, STEP_KINDS, type Guide, type StepKind } from "./schema";
 
 export interface GuideProblem {
@@ -141,4 +141,19 @@ function checkStructure(raw: Loose, causes: Cause[], add: (message: string, step
   for (const id of unguarded) {
     if (steps[id].meta.handsOn && steps[id].meta.kind !== "safety") add("is hands-on but can be reached without passing a safety step", id);
   }
+}
+
+const FIELD_WORDS: Record<string, string> = {
+  prompt: "the question or instruction",
+  help: "the help text",
+  minutes: "the minutes",
+  cause: "the cause",
+  component: "the part",
+};
+
+/** A checker message in a trainer's words: no schema paths ("meta.prompt: …"), answers by their labels. */
+export function plainProblem(message: string): string {
+  return message
+    .replace(/^meta\.(\w+): /, (_m, field: string) => `${FIELD_WORDS[field] ?? field}: `)
+    .replace(/\banswer (YES|NO|DONE|CANT|ACK)\b/g, (_m, a: StepAnswer) => `the “${ANSWER_LABELS[a]}” answer`);
 }
