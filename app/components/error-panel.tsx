@@ -36,7 +36,7 @@ export function ErrorPanel({ error }: { error: unknown }) {
       <h1 className="text-2xl font-bold">{title}</h1>
       <p className="mt-2 text-lg">{detail}</p>
       <p className="mt-4 flex flex-wrap gap-x-6 gap-y-2">
-        <a href="/" className="text-lg font-bold">
+        <a href="/" className="inline-flex min-h-12 items-center text-lg font-bold">
           Back to the start
         </a>
         <button type="button" onClick={() => history.back()} className="min-h-12 text-lg font-bold text-link underline">

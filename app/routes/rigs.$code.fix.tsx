@@ -1,8 +1,9 @@
 import { randomUUID } from "node:crypto";
 import { useEffect, useState } from "react";
-import { Form, redirect, useFetcher, useNavigation } from "react-router";
+import { Form, Link, redirect, useFetcher, useNavigation } from "react-router";
+import { useTimes } from "~/components/use-time-zone";
 import { z } from "zod";
-import { startCase } from "~/services/cases.server";
+import { openWalksOn, startCase } from "~/services/cases.server";
 import { fail, requireUser } from "~/services/guards.server";
 import { usableGuides } from "~/services/guides.server";
 import { findRig } from "~/services/rigs.server";
@@ -11,9 +12,10 @@ import type { Route } from "./+types/rigs.$code.fix";
 export async function loader({ request, params }: Route.LoaderArgs) {
   const user = await requireUser(request);
   const rig = await findRig(user, params.code);
-  const guides = await usableGuides(user);
+  const [guides, openWalks] = await Promise.all([usableGuides(user), openWalksOn(user, rig.id)]);
   return {
     rig: { code: rig.code, name: rig.name, retired: rig.retired },
+    openWalks,
     tiles: guides.map((g) => ({ slug: g.slug, title: g.title, hint: g.definition.symptoms[0] })),
     // Made with the page, so even a tap before the scripts load (or a double tap) starts one case.
     caseId: randomUUID(),
@@ -44,7 +46,8 @@ interface Hit {
 }
 
 export default function StartFix({ loaderData }: Route.ComponentProps) {
-  const { rig, tiles, caseId } = loaderData;
+  const { rig, tiles, caseId, openWalks } = loaderData;
+  const times = useTimes();
   const search = useFetcher<{ results?: Hit[]; error?: string }>();
   const [query, setQuery] = useState("");
   const navigation = useNavigation();
@@ -64,6 +67,23 @@ export default function StartFix({ loaderData }: Route.ComponentProps) {
     <>
       <h1 className="text-3xl font-bold">What is {rig.code} doing?</h1>
       <p className="mt-1 text-lg">{rig.name}</p>
+      {openWalks.length ? (
+        <section aria-labelledby="open-h" className="mt-4 rounded-lg border-4 border-go bg-paper p-3">
+          <h2 id="open-h" className="text-lg font-bold">
+            Carry on where you left off
+          </h2>
+          <ul className="mt-2 space-y-2">
+            {openWalks.map((w) => (
+              <li key={w.id}>
+                <Link to={`/cases/${w.id}/walk`} className="flex min-h-14 flex-col justify-center rounded-lg bg-go px-4 py-2 text-white no-underline">
+                  <span className="text-xl font-bold">{w.guideTitle}</span>
+                  <span>started {times.dateTime(w.openedAt)}</span>
+                </Link>
+              </li>
+            ))}
+          </ul>
+        </section>
+      ) : null}
       {rig.retired ? (
         <p className="mt-2 font-bold text-stop">This rig is retired; a fix cannot be started on it.</p>
       ) : (

@@ -244,6 +244,22 @@ export async function recentRigCases(user: SessionUser, rigId: number, limit = 1
   });
 }
 
+/** This person's walk-throughs still open on a rig from the last three days, newest first: "continue" beats a second case. */
+export async function openWalksOn(user: SessionUser, rigId: number) {
+  const rows = await Case.findAll({
+    where: { companyId: user.companyId, rigId, openedBy: user.id, outcome: "open", openedAt: { [Op.gt]: new Date(Date.now() - 3 * 86_400_000) } },
+    attributes: ["id", "openedAt"],
+    include: [{ model: GuideVersion, as: "guideVersion", attributes: ["number"], include: [{ model: GuideRecord, as: "guide", attributes: ["title"] }] }],
+    order: [["openedAt", "DESC"]],
+    limit: 3,
+  });
+  return rows.map((c) => ({
+    id: c.id,
+    openedAt: c.openedAt.toISOString(),
+    guideTitle: (c as Case & { guideVersion: GuideVersion & { guide: GuideRecord } }).guideVersion.guide.title,
+  }));
+}
+
 /** The rig this person last started a fix on, so it can be offered first. */
 export async function lastRigIdFor(user: SessionUser): Promise<number | null> {
   const last = await Case.findOne({ where: { companyId: user.companyId, openedBy: user.id }, attributes: ["rigId"], order: [["openedAt", "DESC"]] });

@@ -184,4 +184,25 @@ describe("the walk tells the truth (360×640)", () => {
     expect(await Case.count()).toBe(before + 1);
     await p.close();
   });
+
+  it("offers to carry on an open walk-through, and after Stop without finishing nothing more can be answered", async () => {
+    const p = await crewPage();
+    const id = await startWalk(p, "vibration", "CF-03");
+    await answer(p, "NO");
+    await p.goto(`${harness.app.url}/rigs/CF-03/fix`);
+    await p
+      .getByRole("link", { name: /Vibration or jumping/ })
+      .first()
+      .click();
+    await p.waitForURL(new RegExp(`/cases/${id}/walk$`));
+    p.once("dialog", (d) => void d.accept());
+    await p.getByRole("button", { name: "Stop without finishing" }).click();
+    await p.getByRole("heading", { name: "Stopped without finishing" }).waitFor();
+    for (const name of ["Yes", "No", "Done", "Back one step"]) expect(await p.getByRole("button", { name, exact: true }).count(), name).toBe(0);
+    await expect.poll(async () => (await Case.findByPk(id))!.outcome).toBe("abandoned");
+    await p.goto(`${harness.app.url}/rigs/CF-03/fix`);
+    await p.getByRole("heading", { name: /What is CF-03 doing/ }).waitFor();
+    expect(await p.getByRole("heading", { name: "Carry on where you left off" }).count()).toBe(0);
+    await p.close();
+  });
 });

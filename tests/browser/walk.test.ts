@@ -41,7 +41,7 @@ describe("walk-through on a phone (360×640)", () => {
     await answer(p, "Yes");
     await p.getByRole("heading", { name: "Fixed" }).waitFor();
     await p.getByText("Tank water below the sump outlet").waitFor();
-    await p.getByLabel("Engine hours now (hour meter)").fill("2320");
+    await p.getByLabel(/^Engine hours now \(hour meter/).fill("2320");
     await answer(p, "Finish");
     await p.getByText("Case closed and saved.").waitFor();
     const id = caseIdOf(p);

@@ -30,7 +30,8 @@ export function EndCard({
   online: boolean;
   onFinish: (close: Omit<QueuedClose, "at" | "outcome" | "finalStep">) => void;
 }) {
-  const [hours, setHours] = useState(hourMeter.has ? String(hourMeter.current) : "");
+  // Left empty: the last reading offered as the answer would be saved unread with one tap.
+  const [hours, setHours] = useState("");
   const [note, setNote] = useState("");
   const [error, setError] = useState<string | null>(null);
   const { time } = useTimes();
@@ -72,7 +73,7 @@ export function EndCard({
         <div className="mt-4 space-y-3">
           {hourMeter.has ? (
             <label className="block font-bold">
-              Engine hours now (hour meter)
+              Engine hours now (hour meter; last reading {hourMeter.current.toLocaleString("en-US")} h)
               <input
                 value={hours}
                 onChange={(e) => setHours(e.target.value)}

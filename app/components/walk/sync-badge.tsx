@@ -9,7 +9,7 @@ export function SyncBadge({ online, waiting, rejected }: { online: boolean; wait
     text = "All answers saved to Tankside.";
     tone = "border-go bg-paper text-go";
   } else {
-    text = `${waiting} answer${waiting === 1 ? "" : "s"} kept on this phone${online ? ", sending…" : " — no signal; they will be sent when there is."}`;
+    text = `${waiting} answer${waiting === 1 ? "" : "s"} kept on this phone${online ? ", sending…" : ` — no signal; ${waiting === 1 ? "it" : "they"} will be sent when there is.`}`;
     tone = "border-ink bg-caution text-ink";
   }
   return (

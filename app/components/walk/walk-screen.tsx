@@ -51,6 +51,8 @@ export function WalkScreen({ caseId, guide, guideTitle, rig, stepsToEnd, causeNa
   const atEnd = meta.kind === "fixed" || meta.kind === "handoff";
   // Closed on the server and not by this phone (another phone finished it): read-only.
   const closedElsewhere = closedAs !== null && !record.close;
+  // Stopped on this phone: nothing more to answer, whatever step it was on.
+  const stoppedHere = record.close?.outcome === "abandoned";
 
   // Every step opens at its top with its prompt in focus: a shut-down stop below the fold is no stop.
   const top = useRef<HTMLDivElement>(null);
@@ -82,8 +84,8 @@ export function WalkScreen({ caseId, guide, guideTitle, rig, stepsToEnd, causeNa
           {atEnd ? " · end" : ` · at least ${stepsToEnd[here]} more to an end`}
         </p>
       </header>
-      {closedElsewhere ? (
-        <ClosedCard outcome={closedAs} />
+      {closedElsewhere || stoppedHere ? (
+        <ClosedCard outcome={stoppedHere ? "abandoned" : closedAs!} synced={stoppedHere ? !!record.closeResult : true} />
       ) : atEnd ? (
         <EndCard
           meta={meta}
@@ -115,7 +117,15 @@ export function WalkScreen({ caseId, guide, guideTitle, rig, stepsToEnd, causeNa
       <SyncBadge online={sync.online} waiting={sync.waiting} rejected={record.rejected} />
       {offlineReady ? <p className="text-base">This walk-through is kept on this phone: it opens again even with no signal.</p> : null}
       {path.length > 1 && !record.close && !closedElsewhere ? (
-        <button type="button" onClick={() => record_("BACK", here)} className="min-h-14 rounded-lg border-2 border-ink bg-paper text-lg font-bold">
+        <button
+          type="button"
+          onClick={() => {
+            // A note typed on this step goes with "went back a step", once.
+            record_("BACK", here);
+            setNote("");
+          }}
+          className="min-h-14 rounded-lg border-2 border-ink bg-paper text-lg font-bold"
+        >
           Back one step
         </button>
       ) : null}
@@ -132,21 +142,26 @@ export function WalkScreen({ caseId, guide, guideTitle, rig, stepsToEnd, causeNa
           Stop without finishing
         </button>
       ) : null}
-      {record.close?.outcome === "abandoned" ? <p className="font-bold">Stopped. The case is saved as abandoned.</p> : null}
     </div>
   );
 }
 
-/** A case another phone (or a supervisor) has closed: shown as it ended, with nothing to answer. */
-function ClosedCard({ outcome }: { outcome: Outcome }) {
+/** A closed case (stopped here, or finished elsewhere): shown as it ended, with nothing to answer. */
+function ClosedCard({ outcome, synced }: { outcome: Outcome; synced: boolean }) {
   return (
     <section aria-labelledby="closed-title" className="rounded-lg border-4 border-ink bg-paper p-4">
       <h1 id="closed-title" tabIndex={-1} data-step-heading className="text-2xl font-bold">
-        This case is closed ({outcomeLabel(outcome).toLowerCase()})
+        {outcome === "abandoned" ? "Stopped without finishing" : `This case is closed (${outcomeLabel(outcome).toLowerCase()})`}
       </h1>
-      <p className="mt-2 text-lg">It was finished on another phone and takes no more answers. If the rig still acts up, start a new fix.</p>
+      <p className="mt-2 text-lg">
+        {outcome === "abandoned"
+          ? synced
+            ? "The case is saved as abandoned and takes no more answers."
+            : "It will be saved as abandoned when this phone has signal. It takes no more answers."
+          : "It takes no more answers. If the rig still acts up, start a new fix."}
+      </p>
       <p className="mt-4">
-        <Link to="/" className="text-lg font-bold">
+        <Link to="/" className="inline-flex min-h-14 items-center rounded-lg border-2 border-ink bg-paper px-4 text-lg font-bold no-underline">
           Start a new fix
         </Link>
       </p>
