@@ -35,10 +35,14 @@ export async function createApp({ buildPath = path.resolve("build/server/index.j
   const app = express();
   app.disable("x-powered-by");
 
-  // A fresh nonce per response; the app's entry reads it from this header (set here, never from the client).
+  // Behind a load balancer, TRUST_PROXY (e.g. "1" or "loopback") lets req.ip be the phone's address.
+  if (process.env.TRUST_PROXY) app.set("trust proxy", /^\d+$/.test(process.env.TRUST_PROXY) ? Number(process.env.TRUST_PROXY) : process.env.TRUST_PROXY);
+  // A fresh nonce per response, and the client's address for throttling: the app reads both from
+  // headers set here, overwriting anything a client sent under those names.
   app.use((req, res, next) => {
     res.locals.nonce = randomBytes(16).toString("base64");
     req.headers["x-tankside-nonce"] = res.locals.nonce;
+    req.headers["x-tankside-client-ip"] = req.ip ?? "unknown";
     next();
   });
   app.use(

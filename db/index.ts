@@ -17,7 +17,15 @@ export function db(): Sequelize {
   return instance;
 }
 
+const closers: (() => Promise<void>)[] = [];
+
+/** Something else that holds database connections (the throttle's pool) closes with the database. */
+export function onDbClose(close: () => Promise<void>) {
+  closers.push(close);
+}
+
 export async function closeDb(): Promise<void> {
+  await Promise.all(closers.splice(0).map((c) => c()));
   if (instance) await instance.close();
   instance = undefined;
 }

@@ -34,9 +34,6 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare name: string;
   declare passwordHash: string;
   declare role: Role;
-  declare failedLogins: CreationOptional<number>;
-  declare firstFailedAt: Date | null;
-  declare lockedUntil: Date | null;
   /** Set when an admin turns the person's sign-in off. */
   declare accessRemovedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
@@ -207,9 +204,6 @@ export function initModels(sequelize: Sequelize) {
       name: DataTypes.STRING(120),
       passwordHash: DataTypes.STRING(100),
       role: DataTypes.ENUM(...ROLES),
-      failedLogins: { type: DataTypes.INTEGER.UNSIGNED, defaultValue: 0 },
-      firstFailedAt: DataTypes.DATE,
-      lockedUntil: DataTypes.DATE,
       accessRemovedAt: DataTypes.DATE,
       ...timestamps,
     },

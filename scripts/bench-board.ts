@@ -62,8 +62,6 @@ async function company(slug: string) {
     name: slug,
     passwordHash: "x",
     role: "crew",
-    firstFailedAt: null,
-    lockedUntil: null,
   });
   const rigs = [];
   for (let i = 1; i <= 5; i++) {

@@ -117,7 +117,7 @@ export async function seedDemo(log: (line: string) => void = console.log): Promi
       const company = await Company.create({ ...c }, { transaction });
       const people = DEMO_PEOPLE.filter((p) => p.company === c.slug);
       await User.bulkCreate(
-        people.map((p) => ({ companyId: company.id, email: p.email, name: p.name, role: p.role, passwordHash: hash, firstFailedAt: null, lockedUntil: null })),
+        people.map((p) => ({ companyId: company.id, email: p.email, name: p.name, role: p.role, passwordHash: hash })),
         { transaction },
       );
       for (const rig of RIGS[c.slug]) {

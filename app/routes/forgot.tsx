@@ -3,17 +3,20 @@ import { EmailField } from "~/components/email-field";
 import { z } from "zod";
 import { emailAddress } from "~/lib/people-schema";
 import { RESET_MINUTES } from "~/lib/reset-mail";
-import { requestReset } from "~/services/password-reset.server";
+import { startResetRequest } from "~/services/password-reset.server";
+import { readForm } from "~/services/read-request.server";
+import { checkLinkRequest } from "~/services/throttle.server";
 import type { Route } from "./+types/forgot";
 
 const emailSchema = z.object({ email: emailAddress("your") });
 
 export async function action({ request }: Route.ActionArgs) {
-  const form = await request.formData();
+  const form = await readForm(request);
   const parsed = emailSchema.safeParse({ email: form.get("email") ?? "" });
   if (!parsed.success) return data({ error: parsed.error.issues[0].message, sent: false }, { status: 400 });
-  await requestReset(parsed.data.email);
-  // The same answer whether or not the address has a sign-in.
+  await checkLinkRequest(request);
+  // Answered before any lookup or mail, so a known and an unknown address take the same time and get the same words.
+  startResetRequest(parsed.data.email);
   return { error: null, sent: true };
 }
 

@@ -27,6 +27,11 @@ export async function action({ request }: Route.ActionArgs) {
     // Where they were going, else where their role starts the day (the board for supervisors).
     return redirect(safeRedirect(form.get("redirectTo")) ?? landingFor(person.role), { headers: await signInCookie(request, person.id) });
   } catch (error) {
+    // Throttled: the same words and status for every address, with how long to wait.
+    if (error instanceof Response && error.status === 429) {
+      const body = (await error.json()) as { error: string };
+      return data({ error: body.error, fields: {} as SignInError["fields"], email: String(form.get("email") ?? "") }, { status: 429, headers: error.headers });
+    }
     if (error instanceof SignInError) {
       return data({ error: error.message, fields: error.fields, email: String(form.get("email") ?? "") }, { status: error.status });
     }

@@ -9,6 +9,19 @@ import { hashToken, newToken } from "./tokens.server";
 /** More links than this in an hour are not sent: nobody can use the form to flood a mailbox. */
 export const RESETS_PER_HOUR = 3;
 
+/** Link requests still being worked on after their answer went out (the form answers first). */
+const inFlight = new Set<Promise<void>>();
+
+/** Starts a link request without waiting for it; `linkRequestsSettled` waits for all started (tests, shutdown). */
+export function startResetRequest(email: string) {
+  const work = requestReset(email)
+    .catch((error) => console.warn(`Password link request failed: ${error instanceof Error ? error.message : error}`))
+    .finally(() => inFlight.delete(work));
+  inFlight.add(work);
+}
+
+export const linkRequestsSettled = () => Promise.all([...inFlight]).then(() => undefined);
+
 /**
  * Mails a "choose a new password" link if the address signs in and has not been turned off.
  * The caller answers the same either way, so the form does not tell who has an account.
@@ -57,7 +70,7 @@ export async function completeReset(token: string, password: string): Promise<{ 
     const user = reset ? await User.findByPk(reset.userId, { transaction }) : null;
     if (!reset || !user || user.accessRemovedAt) return { ok: false as const, message: UNUSABLE };
     // Whoever else held a session (perhaps the reason for the reset) is signed out.
-    await user.update({ passwordHash, failedLogins: 0, firstFailedAt: null, lockedUntil: null }, { transaction });
+    await user.update({ passwordHash }, { transaction });
     await SessionRecord.destroy({ where: { userId: user.id }, transaction });
     await PasswordReset.update({ usedAt: new Date() }, { where: { userId: user.id, usedAt: null }, transaction });
     return { ok: true as const, userId: user.id };

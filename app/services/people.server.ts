@@ -129,8 +129,6 @@ export async function acceptInvite(token: string, password: string): Promise<{ o
           name: invite.name,
           role: invite.role,
           passwordHash,
-          firstFailedAt: null,
-          lockedUntil: null,
         },
         { transaction },
       );

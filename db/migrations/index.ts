@@ -12,6 +12,7 @@ import * as m010 from "./010-password-resets";
 import * as m011 from "./011-session-epoch";
 import * as m012 from "./012-time-zone-and-handoff-record";
 import * as m013 from "./013-sessions";
+import * as m014 from "./014-throttling";
 
 export interface Migration {
   name: string;
@@ -34,4 +35,5 @@ export const migrations: Migration[] = [
   { name: "011-session-epoch", ...m011 },
   { name: "012-time-zone-and-handoff-record", ...m012 },
   { name: "013-sessions", ...m013 },
+  { name: "014-throttling", ...m014 },
 ];

@@ -4,14 +4,19 @@ import { action as forgotAction } from "~/routes/forgot";
 import { action as loginAction } from "~/routes/login";
 import { action as resetAction, loader as resetLoader } from "~/routes/reset.$token";
 import { loader as rigsLoader } from "~/routes/rigs";
-import { RESETS_PER_HOUR } from "~/services/password-reset.server";
+import { linkRequestsSettled, RESETS_PER_HOUR } from "~/services/password-reset.server";
 import { DEMO_PASSWORD } from "../../seeds/demo-people";
 import { resetDatabase } from "../helpers/db";
 import { outbox } from "../helpers/outbox";
 import { args, run } from "../helpers/requests";
 
 const form = (path: string, fields: Record<string, string>) => new Request(`http://127.0.0.1${path}`, { method: "POST", body: new URLSearchParams(fields) });
-const forgot = (email: string) => run(() => forgotAction(args(form("/forgot", { email }))));
+// The form answers before it looks anything up; the mail follows.
+const forgot = async (email: string) => {
+  const answer = await run(() => forgotAction(args(form("/forgot", { email }))));
+  await linkRequestsSettled();
+  return answer;
+};
 const reset = (token: string, password: string, confirm = password) => run(() => resetAction(args(form(`/reset/${token}`, { password, confirm }), { token })));
 /** Signs in through the real form; a success also hands back the session cookie. */
 const signIn = (email: string, password: string) => run(() => loginAction(args(form("/login", { email, password, redirectTo: "/" }))));
@@ -40,9 +45,7 @@ describe("forgot your password", () => {
     expect(bad.data.error).toMatch(/whole e-mail address/);
   });
 
-  it("mails a one-hour, single-use link that sets the password and lifts a lock", async () => {
-    const dana = (await User.findOne({ where: { email: "dana@cedarflats.example" } }))!;
-    await dana.update({ failedLogins: 10, firstFailedAt: new Date(), lockedUntil: new Date(Date.now() + 600_000) });
+  it("mails a one-hour, single-use link that sets the password", async () => {
     expect((await forgot("Dana@CedarFlats.example")).data.sent).toBe(true);
     const token = await tokenFor("dana@cedarflats.example");
     expect((await mailsTo("dana@cedarflats.example")).at(-1)!.subject).toBe("Choose a new Tankside password");
@@ -52,7 +55,6 @@ describe("forgot your password", () => {
     const short = await reset(token, "short");
     expect(short.status).toBe(400);
     expect(short.data.result.error.password[0]).toMatch(/at least 10/);
-    expect((await signIn("dana@cedarflats.example", DEMO_PASSWORD)).status).toBe(423);
 
     const done = await reset(token, "agitator paddles turn");
     expect(done).toMatchObject({ status: 302, location: "/" });
