@@ -1,5 +1,4 @@
 import { beforeAll, describe, expect, it } from "vitest";
-import { User } from "../../db/index";
 import { action as loginAction, loader as loginLoader } from "~/routes/login";
 import { loader as shellLoader } from "~/routes/shell";
 import { loader as newRigLoader } from "~/routes/rigs.new";
