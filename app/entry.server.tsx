@@ -15,6 +15,8 @@ export const streamTimeout = 5_000;
 export default function handleRequest(request: Request, responseStatusCode: number, responseHeaders: Headers, routerContext: EntryContext) {
   if (request.method.toUpperCase() === "HEAD") return new Response(null, { status: responseStatusCode, headers: responseHeaders });
   const nonce = request.headers.get("x-tankside-nonce") ?? undefined;
+  // A page answered while the database is down says when to try again.
+  if (responseStatusCode === 503) responseHeaders.set("Retry-After", "30");
 
   return new Promise((resolve, reject) => {
     let shellRendered = false;

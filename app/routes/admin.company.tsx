@@ -7,6 +7,7 @@ import { PageTitle } from "~/components/ui/page-title";
 import { companySettingsSchema } from "~/lib/company-schema";
 import { companySettings, saveCompanySettings } from "~/services/company.server";
 import { requireRole } from "~/services/guards.server";
+import { readForm } from "~/services/read-request.server";
 import type { Route } from "./+types/admin.company";
 
 export async function loader({ request }: Route.LoaderArgs) {
@@ -16,7 +17,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 export async function action({ request }: Route.ActionArgs) {
   const user = await requireRole(request, "admin");
-  const submission = parseForm(await request.formData(), companySettingsSchema);
+  const submission = parseForm(await readForm(request), companySettingsSchema);
   if (submission.status !== "success") return data({ result: submission.reply(), message: null }, { status: 400 });
   await saveCompanySettings(user, submission.value);
   return { result: submission.reply(), message: `Saved. Times now show in ${submission.value.timeZone}.` };

@@ -11,6 +11,7 @@ import { ROLE_LABELS, ROLES } from "~/lib/roles";
 import { requireRole } from "~/services/guards.server";
 import { actOnPerson, invitePerson, listPeople } from "~/services/people.server";
 import { useTimes } from "~/components/use-time-zone";
+import { readForm } from "~/services/read-request.server";
 import type { Route } from "./+types/admin.people";
 
 export async function loader({ request }: Route.LoaderArgs) {
@@ -24,7 +25,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 export async function action({ request }: Route.ActionArgs) {
   const user = await requireRole(request, "admin");
-  const form = await request.formData();
+  const form = await readForm(request);
   if (form.get("intent") === "invite") {
     const submission = parseForm(form, inviteSchema);
     if (submission.status !== "success") return data({ invite: submission.reply(), message: null }, { status: 400 });

@@ -5,7 +5,7 @@ import { requirePost } from "~/services/read-request.server";
 import { addPhoto, MAX_PHOTO_BYTES } from "~/services/photos.server";
 import type { Route } from "./+types/api.cases.$id.photos";
 
-const fields = z.object({ stepId: z.string().max(80).optional() });
+const fields = z.object({ stepId: z.string().min(1).max(80).optional() });
 
 export async function action({ request, params }: Route.ActionArgs) {
   const user = await requireUser(request);
@@ -22,7 +22,9 @@ export async function action({ request, params }: Route.ActionArgs) {
   }
   const photo = form.get("photo");
   if (!(photo instanceof Blob)) fail(400, "Add a photo in the field named photo.", { photo: "missing" });
-  const { stepId } = fields.parse({ stepId: form.get("stepId") ?? undefined });
+  const parsedFields = fields.safeParse({ stepId: form.get("stepId") ?? undefined });
+  if (!parsedFields.success) fail(400, "stepId must name a step (at most 80 characters).", { stepId: "not a step name" });
+  const { stepId } = parsedFields.data;
   const saved = await addPhoto(user, params.id, stepId ?? null, new Uint8Array(await photo.arrayBuffer()));
   return Response.json(saved, { status: 201 });
 }

@@ -10,6 +10,7 @@ import { caseDetail, resolveHandoff } from "~/services/cases.server";
 import { fail, requireRole, requireUser } from "~/services/guards.server";
 import { causeList } from "~/services/guides.server";
 import { useTimes } from "~/components/use-time-zone";
+import { readForm } from "~/services/read-request.server";
 import type { Route } from "./+types/cases.$id";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
@@ -41,7 +42,7 @@ const resolveHandoffSchema = z.object({
 
 export async function action({ request, params }: Route.ActionArgs) {
   const user = await requireRole(request, "supervisor");
-  const form = await request.formData();
+  const form = await readForm(request);
   const parsed = resolveHandoffSchema.safeParse(Object.fromEntries(form));
   if (!parsed.success) fail(400, `Nothing changed: ${parsed.error.issues.map((i) => i.message).join(" ")}`);
   await resolveHandoff(user, params.id, parsed.data.note ?? null);

@@ -9,6 +9,7 @@ import { fail, requireRole, unlessRefused } from "~/services/guards.server";
 import { ADVISOR_MIN_CASES } from "~/lib/stats/check-order";
 import { ANSWERS, answerLabel, statusLabel, type Answer } from "~/lib/vocabulary";
 import { useTimes } from "~/components/use-time-zone";
+import { readForm } from "~/services/read-request.server";
 import type { Route } from "./+types/desk.$guideId";
 
 const guideIdOf = (params: { guideId: string }) => {
@@ -57,7 +58,7 @@ const actionSchema = z.discriminatedUnion("intent", [
 export async function action({ request, params }: Route.ActionArgs) {
   const user = await requireRole(request, "trainer");
   const guideId = guideIdOf(params);
-  const parsed = actionSchema.safeParse(Object.fromEntries(await request.formData()));
+  const parsed = actionSchema.safeParse(Object.fromEntries(await readForm(request)));
   if (!parsed.success) return data({ error: parsed.error.issues.map((i) => i.message).join(" "), problems: [] as string[], number: null }, { status: 400 });
   const a = parsed.data;
   if (a.intent === "edit") {

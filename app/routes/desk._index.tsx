@@ -3,6 +3,7 @@ import { PageTitle } from "~/components/ui/page-title";
 import { statusLabel } from "~/lib/vocabulary";
 import { createGuide, deskList, importGuide } from "~/services/desk.server";
 import { requireRole } from "~/services/guards.server";
+import { readForm } from "~/services/read-request.server";
 import type { Route } from "./+types/desk._index";
 
 export async function loader({ request }: Route.LoaderArgs) {
@@ -14,7 +15,7 @@ const MAX_IMPORT_BYTES = 200_000;
 
 export async function action({ request }: Route.ActionArgs) {
   const user = await requireRole(request, "trainer");
-  const form = await request.formData();
+  const form = await readForm(request);
   const intent = form.get("intent");
   try {
     if (intent === "new") {

@@ -7,6 +7,7 @@ import { getUser } from "~/services/guards.server";
 import { landingFor } from "~/lib/navigation";
 import { safeRedirect } from "~/lib/safe-redirect";
 import { signInCookie } from "~/services/session.server";
+import { readForm } from "~/services/read-request.server";
 import type { Route } from "./+types/login";
 
 export async function loader({ request }: Route.LoaderArgs) {
@@ -21,7 +22,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 }
 
 export async function action({ request }: Route.ActionArgs) {
-  const form = await request.clone().formData();
+  const form = await readForm(request.clone());
   try {
     const person = await authenticator.authenticate("form", request);
     // Where they were going, else where their role starts the day (the board for supervisors).

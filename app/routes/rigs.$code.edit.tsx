@@ -6,6 +6,7 @@ import { toFieldErrors } from "~/lib/form-errors";
 import { rigInputSchema } from "~/lib/rig-schema";
 import { requireRole } from "~/services/guards.server";
 import { findRig, updateRig } from "~/services/rigs.server";
+import { readForm } from "~/services/read-request.server";
 import type { Route } from "./+types/rigs.$code.edit";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
@@ -34,7 +35,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
 
 export async function action({ request, params }: Route.ActionArgs) {
   const user = await requireRole(request, "admin");
-  const submission = parseForm(await request.formData(), rigInputSchema);
+  const submission = parseForm(await readForm(request), rigInputSchema);
   if (submission.status !== "success") return data(submission.reply(), { status: 400 });
   const saved = await updateRig(user, params.code, submission.value);
   if (!saved.ok) return data(submission.reply({ fieldErrors: toFieldErrors(saved.fieldErrors) }), { status: 400 });

@@ -7,6 +7,7 @@ import { openWalksOn, startCase } from "~/services/cases.server";
 import { fail, requireUser } from "~/services/guards.server";
 import { usableGuides } from "~/services/guides.server";
 import { findRig } from "~/services/rigs.server";
+import { readForm } from "~/services/read-request.server";
 import type { Route } from "./+types/rigs.$code.fix";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
@@ -33,7 +34,7 @@ const startForm = z.object({
 
 export async function action({ request, params }: Route.ActionArgs) {
   const user = await requireUser(request);
-  const parsed = startForm.safeParse(Object.fromEntries(await request.formData()));
+  const parsed = startForm.safeParse(Object.fromEntries(await readForm(request)));
   if (!parsed.success) fail(400, "Pick a guide to start.");
   const { id } = await startCase(user, { id: parsed.data.caseId, rigCode: params.code, guideSlug: parsed.data.guideSlug });
   return redirect(`/cases/${id}/walk`);

@@ -7,6 +7,7 @@ import { fail, requireRole, requireUser } from "~/services/guards.server";
 import { ConfirmAction } from "~/components/ui/confirm-action";
 import { findRig, setRigRetired } from "~/services/rigs.server";
 import { useTimes } from "~/components/use-time-zone";
+import { readForm } from "~/services/read-request.server";
 import type { Route } from "./+types/rigs.$code";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
@@ -17,7 +18,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
 
 export async function action({ request, params }: Route.ActionArgs) {
   const user = await requireRole(request, "admin");
-  const form = await request.formData();
+  const form = await readForm(request);
   const intent = form.get("intent");
   if (intent !== "retire" && intent !== "reinstate") fail(400, "Say what to do: retire or reinstate.");
   if (intent === "retire" && form.get("confirmed") !== "yes") fail(400, "Confirm retiring the rig.");

@@ -6,6 +6,7 @@ import { toFieldErrors } from "~/lib/form-errors";
 import { rigInputSchema } from "~/lib/rig-schema";
 import { requireRole } from "~/services/guards.server";
 import { createRig } from "~/services/rigs.server";
+import { readForm } from "~/services/read-request.server";
 import type { Route } from "./+types/rigs.new";
 
 export async function loader({ request }: Route.LoaderArgs) {
@@ -15,7 +16,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 export async function action({ request }: Route.ActionArgs) {
   const user = await requireRole(request, "admin");
-  const submission = parseForm(await request.formData(), rigInputSchema);
+  const submission = parseForm(await readForm(request), rigInputSchema);
   if (submission.status !== "success") return data(submission.reply(), { status: 400 });
   const saved = await createRig(user, submission.value);
   if (!saved.ok) return data(submission.reply({ fieldErrors: toFieldErrors(saved.fieldErrors) }), { status: 400 });

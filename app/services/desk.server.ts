@@ -2,7 +2,7 @@ import { createHash } from "node:crypto";
 import { Op, QueryTypes } from "sequelize";
 import { compileGuide } from "~/lib/guides/compile";
 import { mainLine } from "~/lib/guides/main-line";
-import type { Guide } from "~/lib/guides/schema";
+import { draftShapeSchema, wellFormedText, type Guide } from "~/lib/guides/schema";
 import { validateGuide, plainProblem } from "~/lib/guides/validate";
 import { expectedMinutes, ratioOrder } from "~/lib/stats/check-order";
 import { stepFlow, type FlowCase } from "~/lib/stats/step-flow";
@@ -153,6 +153,12 @@ export async function saveDraft(user: SessionUser, guideId: number, number: numb
   if (guide.companyId !== user.companyId || version.status !== "draft") fail(409, "Only a draft of your company's guide can be saved.");
   if (typeof definition !== "object" || definition === null || Array.isArray(definition)) fail(400, "The guide must be a JSON object.");
   if (JSON.stringify(definition).length > MAX_DEFINITION_CHARS) fail(413, "That guide is too large (over 200,000 characters).");
+  if (!wellFormedText(definition)) fail(400, "Nothing saved: the guide has text that is not valid Unicode, or is nested too deeply.");
+  const shape = draftShapeSchema.safeParse(definition);
+  if (!shape.success) {
+    const first = shape.error.issues[0];
+    fail(400, `Nothing saved: the draft is not in a shape the editor can open (${first.path.join(".") || "guide"}: ${first.message}).`);
+  }
   const sourceHash = hash(definition);
   if (sourceHash !== version.sourceHash) await version.update({ definition: definition as Guide, sourceHash });
   return { problems: checkDefinition(definition) };

@@ -44,3 +44,38 @@ export type Step = z.infer<typeof stepSchema>;
 export type StepMeta = z.infer<typeof stepMetaSchema>;
 
 export const isFinalKind = (kind: StepKind) => FINAL_KINDS.includes(kind);
+
+/**
+ * What a draft may be while a trainer is still writing it: unfinished (empty prompts, answers not yet
+ * pointed anywhere) but always of the shape the editor and the diff can open, so a stored draft never
+ * breaks them. The full rules are `guideSchema` and the validator's.
+ */
+const text = z.string().max(4000);
+export const draftShapeSchema = z.object({
+  id: z.string().max(80),
+  title: z.string().max(120),
+  summary: z.string().max(600),
+  symptoms: z.array(z.string().max(120)).max(60),
+  initial: z.string().max(80),
+  states: z
+    .record(
+      z.string().min(1).max(80),
+      z.object({
+        type: z.literal("final").optional(),
+        on: z.record(z.string().max(8), z.string().max(80)).optional(),
+        meta: z.looseObject({ kind: z.enum(STEP_KINDS), prompt: text, help: text.optional() }),
+      }),
+    )
+    .refine((s) => Object.keys(s).length <= 200, "a guide has at most 200 steps"),
+});
+
+const LONE_SURROGATE = /[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/;
+
+/** No lone surrogate anywhere in a value's text and no deep nesting (the database refuses both; neither is ever meant). */
+export function wellFormedText(value: unknown, depth = 0): boolean {
+  if (depth > 12) return false;
+  if (typeof value === "string") return !LONE_SURROGATE.test(value);
+  if (Array.isArray(value)) return value.every((v) => wellFormedText(v, depth + 1));
+  if (value && typeof value === "object") return Object.entries(value).every(([k, v]) => !LONE_SURROGATE.test(k) && wellFormedText(v, depth + 1));
+  return true;
+}
