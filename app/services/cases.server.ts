@@ -74,12 +74,14 @@ export async function storeEvents(user: SessionUser, caseId: string, events: Cas
     fail(409, `Nothing stored: this case was closed as ${outcomeLabel(found.outcome).toLowerCase()} and takes no more answers.`);
   }
 
-  return sequelize.transaction(async (transaction) => {
+  return withDeadlockRetry(() => sequelize.transaction(async (transaction) => {
+    // Batches for one case take turns on the case's own row: a lock on a row that exists, never the
+    // gap locks that "SELECT … FOR UPDATE" on not-yet-stored event ids takes (those deadlocked).
+    await Case.findByPk(caseId, { attributes: ["id"], transaction, lock: transaction.LOCK.UPDATE });
     const known = await CaseEvent.findAll({
       where: { caseId, [Op.or]: [{ id: events.map((e) => e.id) }, { seq: events.map((e) => e.seq) }] },
       attributes: ["id", "seq"],
       transaction,
-      lock: transaction.LOCK.UPDATE,
     });
     const knownIds = new Set(known.map((k) => k.id));
     const seqOwner = new Map(known.map((k) => [k.seq, k.id]));
@@ -102,7 +104,19 @@ export async function storeEvents(user: SessionUser, caseId: string, events: Cas
       .sort((a, b) => +a - +b)[0];
     if (firstAck && (!found.safetyAckAt || firstAck < found.safetyAckAt)) await found.update({ safetyAckAt: firstAck }, { transaction });
     return { stored: fresh.length, duplicates: events.length - fresh.length };
-  });
+  }));
+}
+
+/** Runs a transaction again (up to three times) when InnoDB picks it as a deadlock victim. */
+async function withDeadlockRetry<T>(work: () => Promise<T>, tries = 3): Promise<T> {
+  for (let i = 1; ; i++) {
+    try {
+      return await work();
+    } catch (error) {
+      const code = (error as { parent?: { errno?: number } }).parent?.errno;
+      if (code !== 1213 || i >= tries) throw error;
+    }
+  }
 }
 
 /** Closes a case once: fixed or handoff at a matching end step, or abandoned. A hand-off tells the supervisors. */

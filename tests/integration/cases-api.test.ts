@@ -88,6 +88,16 @@ describe("storing answers", () => {
     expect(Object.keys(res.data.fields).sort()).toEqual(["events.0.answer", "events.0.at", "events.0.id", "events.0.seq"]);
   });
 
+  it("stores twenty identical batches sent at once exactly once, with no errors", async () => {
+    const id = randomUUID();
+    await start(DANA, "CF-07", "lost-prime", id);
+    const batch = [ev(1, "water-level", "NO"), ev(2, "add-water", "DONE"), ev(3, "holds-after-water", "YES")];
+    const answers = await Promise.all(Array.from({ length: 20 }, () => sendEvents(DANA, id, batch)));
+    expect(answers.map((a) => a.status)).toEqual(Array(20).fill(200));
+    expect(answers.reduce((n, a) => n + a.data.stored, 0)).toBe(3);
+    expect(await CaseEvent.count({ where: { caseId: id } })).toBe(3);
+  });
+
   it("records when the safety stop was acknowledged", async () => {
     const id = randomUUID();
     await start(DANA, "CF-07", "lost-prime", id);
