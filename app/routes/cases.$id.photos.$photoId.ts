@@ -9,6 +9,13 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   if (!Number.isInteger(id) || id < 1) notFound("That photo");
   const photo = await readPhoto(user, params.id, id);
   return new Response(photo.body, {
-    headers: { "Content-Type": photo.contentType, "Cache-Control": "private, max-age=86400", "X-Content-Type-Options": "nosniff" },
+    headers: {
+      "Content-Type": photo.contentType,
+      "Content-Disposition": `inline; filename="case-${params.id.slice(0, 8)}-photo-${id}.${photo.contentType.split("/")[1]}"`,
+      // Opened on its own, a photo is a sandboxed document that can run nothing.
+      "Content-Security-Policy": "sandbox; default-src 'none'; img-src 'self'; style-src 'unsafe-inline'",
+      "Cache-Control": "private, max-age=86400",
+      "X-Content-Type-Options": "nosniff",
+    },
   });
 }

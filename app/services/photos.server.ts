@@ -1,5 +1,6 @@
 import { randomUUID } from "node:crypto";
 import { fileTypeFromBuffer } from "file-type";
+import sharp from "sharp";
 import { Case, CasePhoto } from "./db.server";
 import { fail, notFound, type SessionUser } from "./guards.server";
 import { getObject, putObject } from "./storage.server";
@@ -22,10 +23,27 @@ export async function addPhoto(user: SessionUser, caseId: string, stepId: string
   if (!type || !IMAGE_TYPES.has(type.mime)) {
     fail(415, "That file is not a photo (JPEG, PNG, WebP or HEIC).", { photo: `looks like ${type?.mime ?? "an unknown file type"}` });
   }
-  const key = `companies/${user.companyId}/cases/${caseId}/${randomUUID()}.${type.ext}`;
-  await putObject(key, bytes, type.mime);
-  const photo = await CasePhoto.create({ caseId, stepId, storageKey: key, contentType: type.mime, bytes: bytes.byteLength, uploadedBy: user.id });
+  const clean = await withoutMetadata(bytes, type.mime);
+  const key = `companies/${user.companyId}/cases/${caseId}/${randomUUID()}.${clean.ext}`;
+  await putObject(key, clean.bytes, clean.mime);
+  const photo = await CasePhoto.create({ caseId, stepId, storageKey: key, contentType: clean.mime, bytes: clean.bytes.byteLength, uploadedBy: user.id });
   return { id: photo.id };
+}
+
+/**
+ * A phone's photo carries where it was taken (GPS), the phone's make and more in its EXIF and XMP
+ * blocks. The image is turned upright by its orientation tag, then written again without any
+ * metadata (sharp keeps none unless asked). HEIC/AVIF come back as JPEG, which every browser shows.
+ */
+async function withoutMetadata(bytes: Uint8Array, mime: string): Promise<{ bytes: Uint8Array; mime: string; ext: string }> {
+  const image = sharp(bytes, { failOn: "error" }).rotate();
+  try {
+    if (mime === "image/png") return { bytes: await image.png().toBuffer(), mime, ext: "png" };
+    if (mime === "image/webp") return { bytes: await image.webp({ quality: 85 }).toBuffer(), mime, ext: "webp" };
+    return { bytes: await image.jpeg({ quality: 85, mozjpeg: true }).toBuffer(), mime: "image/jpeg", ext: "jpg" };
+  } catch {
+    fail(415, "That photo could not be read (the file is damaged or not a whole image).", { photo: "unreadable image" });
+  }
 }
 
 export async function readPhoto(user: SessionUser, caseId: string, photoId: number) {

@@ -1,4 +1,5 @@
 import { randomUUID } from "node:crypto";
+import sharp from "sharp";
 import { beforeAll, describe, expect, it } from "vitest";
 import { Case, CasePhoto, Company, GuideVersion, Rig, User } from "../../db/index";
 import { action as photoAction } from "~/routes/api.cases.$id.photos";
@@ -21,6 +22,15 @@ const jpegBytes = (size: number) => {
   b.set([0xff, 0xd8, 0xff, 0xe0, 0x00, 0x10, 0x4a, 0x46, 0x49, 0x46, 0x00, 0x01]);
   return b;
 };
+/** A small real JPEG as a phone writes it: EXIF with the phone's make, a GPS position and "rotate 90°". */
+const phonePhoto = async () =>
+  new Uint8Array(
+    await sharp({ create: { width: 64, height: 48, channels: 3, background: "#c33" } })
+      .jpeg()
+      .withExif({ IFD0: { Make: "PhoneCo", Model: "Field 7" }, IFD3: { GPSLatitudeRef: "N", GPSLatitude: "39/1 44/1 0/1" } })
+      .withMetadata({ orientation: 6 })
+      .toBuffer(),
+  );
 const upload = async (email: string, id: string, bytes: Uint8Array<ArrayBuffer>, name: string) => {
   const form = new FormData();
   form.set("stepId", "agitator-speed");
@@ -40,13 +50,38 @@ beforeAll(async () => {
 
 describe("photos", () => {
   it("stores a JPEG under a key the server makes, and serves it to the company", async () => {
-    const res = await upload(DANA, caseId, jpegBytes(2048), "../../etc/passwd.jpg");
+    const res = await upload(DANA, caseId, await phonePhoto(), "../../etc/passwd.jpg");
     expect(res.status).toBe(201);
     const photo = await CasePhoto.findByPk(res.data.id);
     expect(photo!.storageKey).toMatch(new RegExp(`^companies/\\d+/cases/${caseId}/[0-9a-f-]{36}\\.jpg$`));
     const served = (await photoLoader(args(await requestAs(DANA, "/x"), { id: caseId, photoId: String(res.data.id) }))) as Response;
     expect(served.headers.get("Content-Type")).toBe("image/jpeg");
     expect(new Uint8Array(await served.arrayBuffer()).slice(0, 3)).toEqual(new Uint8Array([0xff, 0xd8, 0xff]));
+  });
+
+  it("strips the phone's position and other metadata, keeping the picture upright", async () => {
+    const taken = await phonePhoto();
+    expect((await sharp(taken).metadata()).exif).toBeDefined();
+    const res = await upload(DANA, caseId, taken, "IMG_0042.jpg");
+    expect(res.status).toBe(201);
+    const served = (await photoLoader(args(await requestAs(DANA, "/x"), { id: caseId, photoId: String(res.data.id) }))) as Response;
+    expect(served.headers.get("Content-Disposition")).toMatch(/^inline; filename="case-[0-9a-f]{8}-photo-\d+\.jpeg"$/);
+    expect(served.headers.get("Content-Security-Policy")).toMatch(/^sandbox;/);
+    const stored = Buffer.from(await served.arrayBuffer());
+    const meta = await sharp(stored).metadata();
+    expect(meta.exif).toBeUndefined();
+    expect(meta.xmp).toBeUndefined();
+    expect(meta.orientation).toBeUndefined();
+    expect(stored.includes(Buffer.from("PhoneCo"))).toBe(false);
+    // Taken 64×48 with "rotate 90°" in its EXIF: stored upright as 48×64.
+    expect([meta.width, meta.height]).toEqual([48, 64]);
+  });
+
+  it("refuses a damaged image that only starts like a JPEG, and saves nothing", async () => {
+    const before = await CasePhoto.count();
+    const res = await upload(DANA, caseId, jpegBytes(2048), "broken.jpg");
+    expect(res.status).toBe(415);
+    expect(await CasePhoto.count()).toBe(before);
   });
 
   it("refuses a text file renamed .jpg, and saves nothing", async () => {
