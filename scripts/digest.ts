@@ -10,6 +10,11 @@ import { startFakeSmtp } from "./fakes/smtp";
 import { freePort } from "./free-port";
 
 const dataDir = path.resolve(".data");
+// A real database with no real mail server would "send" every company's digest into a local folder.
+if (process.env.DATABASE_URL && !process.env.SMTP_URL) {
+  console.error("DATABASE_URL is set but SMTP_URL is not: set SMTP_URL to your mail provider (the local fake is only for the demo database).");
+  process.exit(2);
+}
 const db = process.env.DATABASE_URL
   ? null
   : await startLocalMariadb({ dir: path.join(dataDir, "mariadb"), port: Number(process.env.DB_PORT ?? 3406), database: "tankside", log: () => {} });

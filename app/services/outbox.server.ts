@@ -1,6 +1,5 @@
 import fs from "node:fs/promises";
 import path from "node:path";
-import { simpleParser } from "mailparser";
 import { env } from "./env.server";
 import { COMPANY_HEADER } from "./mail.server";
 
@@ -22,6 +21,8 @@ export async function readOutbox(companyId: number, limit = 50): Promise<OutboxM
     .filter((f) => f.endsWith(".json"))
     .sort()
     .reverse();
+  // Only the local fake's outbox needs a mail parser, and only in development: loaded here, not at start.
+  const { simpleParser } = await import("mailparser");
   const all = await Promise.all(
     files.map(async (file) => {
       const kept = JSON.parse(await fs.readFile(path.join(dir, file), "utf8")) as { receivedAt: string; to: string[]; raw: string };

@@ -54,4 +54,12 @@ describe("the README's deploy commands on an empty database", () => {
     expect((failed as { code: number }).code).not.toBe(0);
     expect((failed as { stderr: string }).stderr).toMatch(/DATABASE_URL/);
   });
+
+  it("npm run digest refuses to run against a real database with no mail server set", async () => {
+    const failed = await run("npm", ["run", "--silent", "digest"], { env: { ...process.env, DATABASE_URL: target.toString(), SMTP_URL: "" } }).catch(
+      (e: { code: number; stderr: string }) => e,
+    );
+    expect((failed as { code: number }).code).toBe(2);
+    expect((failed as { stderr: string }).stderr).toMatch(/SMTP_URL is not/);
+  });
 });
