@@ -1,5 +1,6 @@
 import { beforeAll, describe, expect, it } from "vitest";
 import { Invite, User } from "../../db/index";
+import { loader as outboxLoader } from "~/routes/admin.outbox";
 import { action as peopleAction, loader as peopleLoader } from "~/routes/admin.people";
 import { action as joinAction, loader as joinLoader } from "~/routes/join.$token";
 import { action as loginAction } from "~/routes/login";
@@ -152,5 +153,27 @@ describe("roles and sign-ins", () => {
 
     await post(JUNE, { intent: "restore-access", personId: String(dana.id) });
     expect((await signIn("dana@cedarflats.example", DEMO_PASSWORD)).status).toBe(302);
+  });
+
+  it("shows each admin only the mail their own company sent, even when two companies invite the same address", async () => {
+    const li = await User.findOne({ where: { email: "li@bluemesa.example" } });
+    await li!.update({ role: "admin" });
+    const shared = "pat.shared@example.com";
+    await post(JUNE, { intent: "invite", name: "Pat", email: shared, role: "crew" });
+    await run(async () =>
+      peopleAction(
+        args(await requestAs("li@bluemesa.example", "/admin/people", { form: { intent: "invite", name: "Pat", email: shared, role: "supervisor" } })),
+      ),
+    );
+    const inbox = async (email: string) =>
+      (await run(async () => outboxLoader(args(await requestAs(email, "/admin/outbox"))))).data.messages as { text: string; to: string[] }[];
+    const cedar = (await inbox(JUNE)).filter((m) => m.to.includes(shared));
+    const mesa = (await inbox("li@bluemesa.example")).filter((m) => m.to.includes(shared));
+    expect(cedar).toHaveLength(1);
+    expect(mesa).toHaveLength(1);
+    expect(cedar[0].text).toMatch(/Cedar Flats/);
+    expect(cedar[0].text).not.toMatch(/Blue Mesa/);
+    expect(mesa[0].text).toMatch(/Blue Mesa/);
+    await li!.update({ role: "supervisor" });
   });
 });
