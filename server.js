@@ -104,5 +104,13 @@ if (import.meta.url === pathToFileURL(process.argv[1] ?? "").href) {
   process.env.NODE_ENV ??= "production";
   const app = await createApp({ appUrl: process.env.APP_URL ?? `http://${host}:${port}` });
   const server = app.listen(port, host, () => console.log(`[tankside] http://${host}:${port}`));
-  for (const signal of ["SIGTERM", "SIGINT"]) process.once(signal, () => server.close());
+  // Stop taking requests, let the ones under way finish (a few seconds at most), then exit: the
+  // database pools would otherwise keep the process alive.
+  for (const signal of ["SIGTERM", "SIGINT"]) {
+    process.once(signal, () => {
+      server.close(() => process.exit(0));
+      server.closeIdleConnections();
+      setTimeout(() => process.exit(0), 3000).unref();
+    });
+  }
 }

@@ -29,6 +29,8 @@ describe("guide desk in the browser", () => {
     await p.getByText("All changes saved.").waitFor();
 
     await p.getByRole("link", { name: "Versions and review" }).click();
+    // The editor has a "Send for review" form of its own: be on the versions page before using this one.
+    await p.waitForURL(/\/desk\/\d+$/);
     await caution(p).waitFor();
     await p.getByLabel("Change note for the reviewer").fill("Skip the stop");
     await p.getByRole("button", { name: "Send for review" }).click();

@@ -58,8 +58,11 @@ describe("people on a phone (360 px)", () => {
     const before = (await outbox()).length;
     await p.getByRole("button", { name: "Send me a link" }).click();
     await p.getByRole("status").getByText("a link to choose a new password is on its way", { exact: false }).waitFor();
-    const mail = (await outbox()).slice(before).find((m) => m.to.includes("dana@cedarflats.example") && m.subject === "Choose a new Tankside password")!;
-    await p.goto(mail.text.match(/http:\/\/\S+\/reset\/\S+/)![0]);
+    // The page answers before the mail goes: wait for it to arrive.
+    const resetMail = async () =>
+      (await outbox()).slice(before).find((m) => m.to.includes("dana@cedarflats.example") && m.subject === "Choose a new Tankside password");
+    await expect.poll(resetMail, { timeout: 10_000 }).toBeTruthy();
+    await p.goto((await resetMail())!.text.match(/http:\/\/\S+\/reset\/\S+/)![0]);
     await p.getByLabel("Password", { exact: true }).fill("hose reel wound tight");
     await p.getByLabel("The same password again").fill("hose reel wound tight");
     await p.getByRole("button", { name: "Save password and sign in" }).click();
