@@ -1,12 +1,6 @@
 import { formatDateTime } from "./format";
+import { roleDescription } from "./permissions";
 import { ROLE_LABELS, type Role } from "./roles";
-
-const WHAT_THEY_DO: Record<Role, string> = {
-  crew: "start a fix on a rig, walk through a guide and use the field math",
-  trainer: "also write and edit guides on the guide desk",
-  supervisor: "also see the fault board and every case, and publish guides",
-  admin: "also invite people, set their roles and look after the rigs",
-};
 
 /** The invitation e-mail: who asked, what the role lets them do, the link and when it stops working. */
 export function inviteMail(f: { name: string; company: string; invitedBy: string; role: Role; link: string; expiresAt: Date; timeZone: string }): {
@@ -18,7 +12,7 @@ export function inviteMail(f: { name: string; company: string; invitedBy: string
     text: [
       `Hello ${f.name},`,
       "",
-      `${f.invitedBy} has added you to ${f.company} on Tankside as ${ROLE_LABELS[f.role].toLowerCase()}: you can ${WHAT_THEY_DO[f.role]}.`,
+      `${f.invitedBy} has added you to ${f.company} on Tankside as ${ROLE_LABELS[f.role].toLowerCase()}: you can ${roleDescription(f.role)}.`,
       "",
       "Choose your password here (the link works once):",
       f.link,

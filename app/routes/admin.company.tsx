@@ -6,17 +6,17 @@ import { DoneNote } from "~/components/ui/done-note";
 import { PageTitle } from "~/components/ui/page-title";
 import { companySettingsSchema } from "~/lib/company-schema";
 import { companySettings, saveCompanySettings } from "~/services/company.server";
-import { requireRole } from "~/services/guards.server";
+import { requirePermission } from "~/services/guards.server";
 import { readForm } from "~/services/read-request.server";
 import type { Route } from "./+types/admin.company";
 
 export async function loader({ request }: Route.LoaderArgs) {
-  const user = await requireRole(request, "admin");
+  const user = await requirePermission(request, "company-settings");
   return { company: await companySettings(user), zones: Intl.supportedValuesOf("timeZone") };
 }
 
 export async function action({ request }: Route.ActionArgs) {
-  const user = await requireRole(request, "admin");
+  const user = await requirePermission(request, "company-settings");
   const submission = parseForm(await readForm(request), companySettingsSchema);
   if (submission.status !== "success") return data({ result: submission.reply(), message: null }, { status: 400 });
   await saveCompanySettings(user, submission.value);

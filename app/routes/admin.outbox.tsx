@@ -1,11 +1,11 @@
 import { PageTitle } from "~/components/ui/page-title";
-import { notFound, requireRole } from "~/services/guards.server";
+import { notFound, requirePermission } from "~/services/guards.server";
 import { readOutbox } from "~/services/outbox.server";
 import { useTimes } from "~/components/use-time-zone";
 import type { Route } from "./+types/admin.outbox";
 
 export async function loader({ request }: Route.LoaderArgs) {
-  const user = await requireRole(request, "admin");
+  const user = await requirePermission(request, "read-outbox");
   const messages = await readOutbox(user.companyId);
   if (!messages) notFound("The local outbox (the app is sending through a real mail provider)");
   return { messages };

@@ -7,15 +7,16 @@ import { DoneNote } from "~/components/ui/done-note";
 import { PageTitle } from "~/components/ui/page-title";
 import { toFieldErrors } from "~/lib/form-errors";
 import { inviteSchema, personActionSchema } from "~/lib/people-schema";
+import { roleDescription } from "~/lib/permissions";
 import { ROLE_LABELS, ROLES } from "~/lib/roles";
-import { requireRole } from "~/services/guards.server";
+import { requirePermission } from "~/services/guards.server";
 import { actOnPerson, invitePerson, listPeople } from "~/services/people.server";
 import { useTimes } from "~/components/use-time-zone";
 import { readForm } from "~/services/read-request.server";
 import type { Route } from "./+types/admin.people";
 
 export async function loader({ request }: Route.LoaderArgs) {
-  const user = await requireRole(request, "admin");
+  const user = await requirePermission(request, "manage-people");
   const { people, invites } = await listPeople(user);
   return {
     people: people.map((p) => ({ ...p, accessRemovedAt: p.accessRemovedAt?.toISOString() ?? null, createdAt: p.createdAt.toISOString() })),
@@ -24,7 +25,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 }
 
 export async function action({ request }: Route.ActionArgs) {
-  const user = await requireRole(request, "admin");
+  const user = await requirePermission(request, "manage-people");
   const form = await readForm(request);
   if (form.get("intent") === "invite") {
     const submission = parseForm(form, inviteSchema);
@@ -42,13 +43,6 @@ export async function action({ request }: Route.ActionArgs) {
   if (!parsed.success) return data({ invite: null, message: `Nothing changed: ${parsed.error.issues.map((i) => i.message).join(" ")}` }, { status: 400 });
   return { invite: null, message: await actOnPerson(user, parsed.data) };
 }
-
-const ROLE_HINTS: Record<(typeof ROLES)[number], string> = {
-  crew: "starts fixes, walks guides, field math",
-  trainer: "crew, plus writes guides on the desk",
-  supervisor: "trainer, plus fault board, cases, publishing",
-  admin: "supervisor, plus people and rigs",
-};
 
 const buttonClass = "min-h-12 rounded-md border-2 border-ink bg-paper px-4 font-bold";
 
@@ -87,7 +81,7 @@ export default function People({ loaderData, actionData }: Route.ComponentProps)
             <select {...getSelectProps(fields.role)} className={inputClass}>
               {ROLES.map((r) => (
                 <option key={r} value={r}>
-                  {ROLE_LABELS[r]} — {ROLE_HINTS[r]}
+                  {ROLE_LABELS[r]} — {roleDescription(r)}
                 </option>
               ))}
             </select>

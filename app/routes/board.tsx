@@ -6,15 +6,16 @@ import { fmt } from "~/lib/calc/units";
 import { shortLabel } from "~/lib/format";
 import { boardFor } from "~/services/board.server";
 import { sendDigest } from "~/services/digest.server";
-import { refusal, requireRole } from "~/services/guards.server";
+import { refusal, requirePermission } from "~/services/guards.server";
 import { readQuery } from "~/services/read-request.server";
 import { causeList } from "~/services/guides.server";
 import { listRigs } from "~/services/rigs.server";
 import { useTimes } from "~/components/use-time-zone";
+import { can } from "~/lib/permissions";
 import type { Route } from "./+types/board";
 
 export async function loader({ request }: Route.LoaderArgs) {
-  const user = await requireRole(request, "supervisor");
+  const user = await requirePermission(request, "read-board");
   // A window the form got wrong keeps the person on the board: the default window, the message beside the form.
   let formError: string | null = null;
   let q: BoardQuery;
@@ -32,12 +33,12 @@ export async function loader({ request }: Route.LoaderArgs) {
     window: { from: q.fromDay, to: q.toDay, rig: q.rigCode ?? "", repeatDays: q.repeatDays },
     rigs: rigs.map((r) => r.code),
     causeNames: Object.fromEntries(causeList().map((c) => [c.code, c.name])),
-    canSendDigest: user.role === "admin",
+    canSendDigest: can(user, "send-digest"),
   };
 }
 
 export async function action({ request }: Route.ActionArgs) {
-  const user = await requireRole(request, "admin");
+  const user = await requirePermission(request, "send-digest");
   const sent = await sendDigest(user.companyId);
   return { sentTo: sent };
 }

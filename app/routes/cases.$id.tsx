@@ -2,15 +2,15 @@ import { Link } from "react-router";
 import { z } from "zod";
 import { ConfirmAction } from "~/components/ui/confirm-action";
 import { Markdown } from "~/components/ui/markdown";
-import { hasRole } from "~/lib/roles";
 import { PageTitle } from "~/components/ui/page-title";
 import { formatDuration } from "~/lib/format";
 import { answerLabel, outcomeLabel } from "~/lib/vocabulary";
 import { caseDetail, resolveHandoff } from "~/services/cases.server";
-import { fail, requireRole, requireUser } from "~/services/guards.server";
+import { fail, requirePermission, requireUser } from "~/services/guards.server";
 import { causeList } from "~/services/guides.server";
 import { useTimes } from "~/components/use-time-zone";
 import { readForm } from "~/services/read-request.server";
+import { can } from "~/lib/permissions";
 import type { Route } from "./+types/cases.$id";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
@@ -20,7 +20,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   const states = detail.guide.definition.states;
   return {
     ...detail,
-    canResolve: hasRole(user.role, "supervisor"),
+    canResolve: can(user, "resolve-handoffs"),
     guide: { slug: detail.guide.slug, title: detail.guide.title, version: detail.guide.version },
     cause,
     stepPrompts: Object.fromEntries(Object.entries(states).map(([id, s]) => [id, s.meta.prompt])),
@@ -41,7 +41,7 @@ const resolveHandoffSchema = z.object({
 });
 
 export async function action({ request, params }: Route.ActionArgs) {
-  const user = await requireRole(request, "supervisor");
+  const user = await requirePermission(request, "resolve-handoffs");
   const form = await readForm(request);
   const parsed = resolveHandoffSchema.safeParse(Object.fromEntries(form));
   if (!parsed.success) fail(400, `Nothing changed: ${parsed.error.issues.map((i) => i.message).join(" ")}`);

@@ -3,14 +3,14 @@ import { toCsv } from "~/lib/csv";
 import { isoInZone } from "~/lib/format";
 import { outcomeLabel } from "~/lib/vocabulary";
 import { listCases } from "~/services/case-list.server";
-import { requireRole } from "~/services/guards.server";
+import { requirePermission } from "~/services/guards.server";
 import { readQuery } from "~/services/read-request.server";
 import { causeList } from "~/services/guides.server";
 import type { Route } from "./+types/cases.export";
 
 /** The filtered cases as CSV (the same filters as the table, every page). */
 export async function loader({ request }: Route.LoaderArgs) {
-  const user = await requireRole(request, "supervisor");
+  const user = await requirePermission(request, "read-cases");
   const { rows } = await listCases(user, readQuery(request, caseFiltersSchema, "the filters"), { all: true });
   const names = new Map(causeList().map((c) => [c.code, c.name]));
   const csv = toCsv(

@@ -4,14 +4,14 @@ import { caseFiltersSchema, filtersToSearch, PAGE_SIZE, type CaseFilters } from 
 import { formatDuration } from "~/lib/format";
 import { OUTCOME_LABELS, outcomeLabel } from "~/lib/vocabulary";
 import { caseFilterOptions, listCases } from "~/services/case-list.server";
-import { requireRole } from "~/services/guards.server";
+import { requirePermission } from "~/services/guards.server";
 import { readQuery } from "~/services/read-request.server";
 import { causeList } from "~/services/guides.server";
 import { useTimes } from "~/components/use-time-zone";
 import type { Route } from "./+types/cases";
 
 export async function loader({ request }: Route.LoaderArgs) {
-  const user = await requireRole(request, "supervisor");
+  const user = await requirePermission(request, "read-cases");
   const filters = readQuery(request, caseFiltersSchema, "the filters");
   const [{ rows, total }, options] = await Promise.all([listCases(user, filters), caseFilterOptions(user)]);
   return { rows, total, filters, options, causes: causeList().map((c) => ({ code: c.code, name: c.name })) };

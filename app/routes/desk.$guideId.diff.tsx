@@ -3,11 +3,11 @@ import { PageTitle } from "~/components/ui/page-title";
 import { diffGuides } from "~/lib/guides/diff";
 import { versionFor } from "~/services/desk.server";
 import { deskParams } from "~/services/desk-params.server";
-import { requireRole } from "~/services/guards.server";
+import { requirePermission } from "~/services/guards.server";
 import type { Route } from "./+types/desk.$guideId.diff";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const user = await requireRole(request, "trainer");
+  const user = await requirePermission(request, "edit-guides");
   const url = new URL(request.url);
   const a = deskParams({ guideId: params.guideId, number: url.searchParams.get("a") ?? "" });
   const b = deskParams({ guideId: params.guideId, number: url.searchParams.get("b") ?? "" });

@@ -2,14 +2,14 @@ import { data, Form, Link, redirect } from "react-router";
 import { z } from "zod";
 import { PageTitle } from "~/components/ui/page-title";
 import { fmt } from "~/lib/calc/units";
-import { hasRole } from "~/lib/roles";
 import { GuideVersion } from "~/services/db.server";
 import { deskGuide, learnFromCases, openDraft, reviewVersion, submitDraft } from "~/services/desk.server";
-import { fail, requireRole, unlessRefused } from "~/services/guards.server";
+import { fail, requirePermission, unlessRefused } from "~/services/guards.server";
 import { ADVISOR_MIN_CASES } from "~/lib/stats/check-order";
 import { ANSWERS, answerLabel, statusLabel, type Answer } from "~/lib/vocabulary";
 import { useTimes } from "~/components/use-time-zone";
 import { readForm } from "~/services/read-request.server";
+import { can } from "~/lib/permissions";
 import type { Route } from "./+types/desk.$guideId";
 
 const guideIdOf = (params: { guideId: string }) => {
@@ -19,7 +19,7 @@ const guideIdOf = (params: { guideId: string }) => {
 };
 
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const user = await requireRole(request, "trainer");
+  const user = await requirePermission(request, "edit-guides");
   const guide = await deskGuide(user, guideIdOf(params));
   const versions = await GuideVersion.findAll({
     where: { guideId: guide.id },
@@ -35,7 +35,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
       reviewComment: v.reviewComment,
       updatedAt: v.updatedAt.toISOString(),
     })),
-    canPublish: hasRole(user.role, "supervisor"),
+    canPublish: can(user, "publish-guides"),
     learning: await learnFromCases(user, guide.id),
   };
 }
@@ -56,7 +56,7 @@ const actionSchema = z.discriminatedUnion("intent", [
 ]);
 
 export async function action({ request, params }: Route.ActionArgs) {
-  const user = await requireRole(request, "trainer");
+  const user = await requirePermission(request, "edit-guides");
   const guideId = guideIdOf(params);
   const parsed = actionSchema.safeParse(Object.fromEntries(await readForm(request)));
   if (!parsed.success) return data({ error: parsed.error.issues.map((i) => i.message).join(" "), problems: [] as string[], number: null }, { status: 400 });
@@ -70,7 +70,7 @@ export async function action({ request, params }: Route.ActionArgs) {
     if (refused) return data({ error: refused.error, problems: Object.values(refused.fields), number: a.number }, { status: refused.status });
     return { done: `Version ${a.number} sent for review.` };
   }
-  await requireRole(request, "supervisor");
+  await requirePermission(request, "publish-guides");
   const refused = await unlessRefused(() => reviewVersion(user, guideId, a.number, a.intent === "approve" ? "approve" : "return", a.comment ?? null));
   if (refused) return data({ error: refused.error, problems: Object.values(refused.fields), number: null }, { status: refused.status });
   return { done: a.intent === "approve" ? `Version ${a.number} published: new cases use it.` : `Version ${a.number} sent back to draft.` };

@@ -4,12 +4,12 @@ import { PageTitle } from "~/components/ui/page-title";
 import { validateGuide } from "~/lib/guides/validate";
 import { versionFor } from "~/services/desk.server";
 import { deskParams } from "~/services/desk-params.server";
-import { requireRole } from "~/services/guards.server";
+import { requirePermission } from "~/services/guards.server";
 import { causeList } from "~/services/guides.server";
 import type { Route } from "./+types/desk.$guideId.v.$number.preview";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const user = await requireRole(request, "trainer");
+  const user = await requirePermission(request, "edit-guides");
   const { guideId, number } = deskParams(params);
   const v = await versionFor(user, guideId, number);
   const { guide, problems } = validateGuide(v.version.definition, { causes: causeList() });

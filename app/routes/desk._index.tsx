@@ -2,19 +2,19 @@ import { data, Form, Link, redirect } from "react-router";
 import { PageTitle } from "~/components/ui/page-title";
 import { statusLabel } from "~/lib/vocabulary";
 import { createGuide, deskList, importGuide } from "~/services/desk.server";
-import { requireRole } from "~/services/guards.server";
+import { requirePermission } from "~/services/guards.server";
 import { readForm } from "~/services/read-request.server";
 import type { Route } from "./+types/desk._index";
 
 export async function loader({ request }: Route.LoaderArgs) {
-  const user = await requireRole(request, "trainer");
+  const user = await requirePermission(request, "edit-guides");
   return { guides: await deskList(user) };
 }
 
 const MAX_IMPORT_BYTES = 200_000;
 
 export async function action({ request }: Route.ActionArgs) {
-  const user = await requireRole(request, "trainer");
+  const user = await requirePermission(request, "edit-guides");
   const form = await readForm(request);
   const intent = form.get("intent");
   try {

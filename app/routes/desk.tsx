@@ -1,10 +1,10 @@
 import { Outlet } from "react-router";
 import { SafetyCaution } from "~/components/walk/safety-caution";
-import { requireRole } from "~/services/guards.server";
+import { requirePermission } from "~/services/guards.server";
 import type { Route } from "./+types/desk";
 
 export async function loader({ request }: Route.LoaderArgs) {
-  await requireRole(request, "trainer");
+  await requirePermission(request, "edit-guides");
   return null;
 }
 

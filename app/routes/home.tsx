@@ -1,6 +1,6 @@
 import { Link } from "react-router";
 import { PageTitle } from "~/components/ui/page-title";
-import { navFor } from "~/lib/navigation";
+import { forEveryone, navFor } from "~/lib/navigation";
 import { ROLE_LABELS } from "~/lib/roles";
 import { env } from "~/services/env.server";
 import { lastRigIdFor } from "~/services/cases.server";
@@ -18,7 +18,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 export default function Home({ loaderData }: Route.ComponentProps) {
   const { rigs, role, firstName, lastRigId, hidden } = loaderData;
-  const more = navFor(role).filter((item) => item.minRole !== "crew" && !hidden.includes(item.to));
+  const more = navFor(role).filter((item) => !forEveryone(item) && !hidden.includes(item.to));
   return (
     <>
       <PageTitle lead="Pick the rig that is acting up.">Hi {firstName}. Which rig?</PageTitle>

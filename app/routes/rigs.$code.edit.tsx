@@ -4,13 +4,13 @@ import { RigForm } from "~/components/rig-form";
 import { PageTitle } from "~/components/ui/page-title";
 import { toFieldErrors } from "~/lib/form-errors";
 import { rigInputSchema } from "~/lib/rig-schema";
-import { requireRole } from "~/services/guards.server";
+import { requirePermission } from "~/services/guards.server";
 import { findRig, updateRig } from "~/services/rigs.server";
 import { readForm } from "~/services/read-request.server";
 import type { Route } from "./+types/rigs.$code.edit";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const user = await requireRole(request, "admin");
+  const user = await requirePermission(request, "edit-rigs");
   const rig = await findRig(user, params.code);
   const { code, name, mount, tankGal, pumpKind, hasHourMeter, engineHours, hoseLengthFt, hoseDiameterIn, yardElevationFt, nozzleTips, torqueSpecs, notes } =
     rig.get({ plain: true });
@@ -34,7 +34,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
 }
 
 export async function action({ request, params }: Route.ActionArgs) {
-  const user = await requireRole(request, "admin");
+  const user = await requirePermission(request, "edit-rigs");
   const submission = parseForm(await readForm(request), rigInputSchema);
   if (submission.status !== "success") return data(submission.reply(), { status: 400 });
   const saved = await updateRig(user, params.code, submission.value);

@@ -3,21 +3,22 @@ import { PageTitle } from "~/components/ui/page-title";
 import { fmt, ftToM, galToL, inToMm } from "~/lib/calc/units";
 import { outcomeLabel } from "~/lib/vocabulary";
 import { recentRigCases } from "~/services/cases.server";
-import { fail, requireRole, requireUser } from "~/services/guards.server";
+import { fail, requirePermission, requireUser } from "~/services/guards.server";
 import { ConfirmAction } from "~/components/ui/confirm-action";
 import { findRig, setRigRetired } from "~/services/rigs.server";
 import { useTimes } from "~/components/use-time-zone";
 import { readForm } from "~/services/read-request.server";
+import { can } from "~/lib/permissions";
 import type { Route } from "./+types/rigs.$code";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   const user = await requireUser(request);
   const rig = await findRig(user, params.code);
-  return { rig: rig.get({ plain: true }), canEdit: user.role === "admin", cases: await recentRigCases(user, rig.id) };
+  return { rig: rig.get({ plain: true }), canEdit: can(user, "edit-rigs"), cases: await recentRigCases(user, rig.id) };
 }
 
 export async function action({ request, params }: Route.ActionArgs) {
-  const user = await requireRole(request, "admin");
+  const user = await requirePermission(request, "edit-rigs");
   const form = await readForm(request);
   const intent = form.get("intent");
   if (intent !== "retire" && intent !== "reinstate") fail(400, "Say what to do: retire or reinstate.");

@@ -4,18 +4,18 @@ import { RigForm } from "~/components/rig-form";
 import { PageTitle } from "~/components/ui/page-title";
 import { toFieldErrors } from "~/lib/form-errors";
 import { rigInputSchema } from "~/lib/rig-schema";
-import { requireRole } from "~/services/guards.server";
+import { requirePermission } from "~/services/guards.server";
 import { createRig } from "~/services/rigs.server";
 import { readForm } from "~/services/read-request.server";
 import type { Route } from "./+types/rigs.new";
 
 export async function loader({ request }: Route.LoaderArgs) {
-  await requireRole(request, "admin");
+  await requirePermission(request, "edit-rigs");
   return null;
 }
 
 export async function action({ request }: Route.ActionArgs) {
-  const user = await requireRole(request, "admin");
+  const user = await requirePermission(request, "edit-rigs");
   const submission = parseForm(await readForm(request), rigInputSchema);
   if (submission.status !== "success") return data(submission.reply(), { status: 400 });
   const saved = await createRig(user, submission.value);

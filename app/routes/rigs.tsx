@@ -3,11 +3,12 @@ import { ButtonLink } from "~/components/ui/button-link";
 import { PageTitle } from "~/components/ui/page-title";
 import { requireUser } from "~/services/guards.server";
 import { listRigs } from "~/services/rigs.server";
+import { can } from "~/lib/permissions";
 import type { Route } from "./+types/rigs";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);
-  return { rigs: await listRigs(user, { includeRetired: true }), canEdit: user.role === "admin" };
+  return { rigs: await listRigs(user, { includeRetired: true }), canEdit: can(user, "edit-rigs") };
 }
 
 export default function Rigs({ loaderData }: Route.ComponentProps) {

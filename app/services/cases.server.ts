@@ -74,37 +74,39 @@ export async function storeEvents(user: SessionUser, caseId: string, events: Cas
     fail(409, `Nothing stored: this case was closed as ${outcomeLabel(found.outcome).toLowerCase()} and takes no more answers.`);
   }
 
-  return withDeadlockRetry(() => sequelize.transaction(async (transaction) => {
-    // Batches for one case take turns on the case's own row: a lock on a row that exists, never the
-    // gap locks that "SELECT … FOR UPDATE" on not-yet-stored event ids takes (those deadlocked).
-    await Case.findByPk(caseId, { attributes: ["id"], transaction, lock: transaction.LOCK.UPDATE });
-    const known = await CaseEvent.findAll({
-      where: { caseId, [Op.or]: [{ id: events.map((e) => e.id) }, { seq: events.map((e) => e.seq) }] },
-      attributes: ["id", "seq"],
-      transaction,
-    });
-    const knownIds = new Set(known.map((k) => k.id));
-    const seqOwner = new Map(known.map((k) => [k.seq, k.id]));
-    const fresh = [...new Map(events.filter((e) => !knownIds.has(e.id)).map((e) => [e.id, e])).values()];
-    for (const e of fresh) {
-      if (seqOwner.has(e.seq) && seqOwner.get(e.seq) !== e.id) fail(409, `Nothing stored: event ${e.seq} is already taken by another event.`);
-    }
-    try {
-      await CaseEvent.bulkCreate(
-        fresh.map((e) => ({ id: e.id, caseId, seq: e.seq, stepId: e.stepId, answer: e.answer, at: new Date(e.at), note: e.note?.trim() || null })),
-        { transaction },
-      );
-    } catch (error) {
-      if (error instanceof UniqueConstraintError) fail(409, "Nothing stored: two events in the batch share a sequence number.");
-      throw error;
-    }
-    const firstAck = fresh
-      .filter((e) => e.answer === "ACK")
-      .map((e) => new Date(e.at))
-      .sort((a, b) => +a - +b)[0];
-    if (firstAck && (!found.safetyAckAt || firstAck < found.safetyAckAt)) await found.update({ safetyAckAt: firstAck }, { transaction });
-    return { stored: fresh.length, duplicates: events.length - fresh.length };
-  }));
+  return withDeadlockRetry(() =>
+    sequelize.transaction(async (transaction) => {
+      // Batches for one case take turns on the case's own row: a lock on a row that exists, never the
+      // gap locks that "SELECT … FOR UPDATE" on not-yet-stored event ids takes (those deadlocked).
+      await Case.findByPk(caseId, { attributes: ["id"], transaction, lock: transaction.LOCK.UPDATE });
+      const known = await CaseEvent.findAll({
+        where: { caseId, [Op.or]: [{ id: events.map((e) => e.id) }, { seq: events.map((e) => e.seq) }] },
+        attributes: ["id", "seq"],
+        transaction,
+      });
+      const knownIds = new Set(known.map((k) => k.id));
+      const seqOwner = new Map(known.map((k) => [k.seq, k.id]));
+      const fresh = [...new Map(events.filter((e) => !knownIds.has(e.id)).map((e) => [e.id, e])).values()];
+      for (const e of fresh) {
+        if (seqOwner.has(e.seq) && seqOwner.get(e.seq) !== e.id) fail(409, `Nothing stored: event ${e.seq} is already taken by another event.`);
+      }
+      try {
+        await CaseEvent.bulkCreate(
+          fresh.map((e) => ({ id: e.id, caseId, seq: e.seq, stepId: e.stepId, answer: e.answer, at: new Date(e.at), note: e.note?.trim() || null })),
+          { transaction },
+        );
+      } catch (error) {
+        if (error instanceof UniqueConstraintError) fail(409, "Nothing stored: two events in the batch share a sequence number.");
+        throw error;
+      }
+      const firstAck = fresh
+        .filter((e) => e.answer === "ACK")
+        .map((e) => new Date(e.at))
+        .sort((a, b) => +a - +b)[0];
+      if (firstAck && (!found.safetyAckAt || firstAck < found.safetyAckAt)) await found.update({ safetyAckAt: firstAck }, { transaction });
+      return { stored: fresh.length, duplicates: events.length - fresh.length };
+    }),
+  );
 }
 
 /** Runs a transaction again (up to three times) when InnoDB picks it as a deadlock victim. */

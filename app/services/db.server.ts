@@ -26,7 +26,8 @@ function guarded(sequelize: Sequelize): Sequelize {
     throw isDown(error) ? databaseDown() : error;
   };
   sequelize.query = ((...args: Parameters<typeof query>) => query(...args).catch(rethrow)) as typeof sequelize.query;
-  sequelize.transaction = ((...args: Parameters<typeof transaction>) => (transaction as (...a: unknown[]) => Promise<unknown>)(...args).catch(rethrow)) as typeof sequelize.transaction;
+  sequelize.transaction = ((...args: Parameters<typeof transaction>) =>
+    (transaction as (...a: unknown[]) => Promise<unknown>)(...args).catch(rethrow)) as typeof sequelize.transaction;
   return sequelize;
 }
 

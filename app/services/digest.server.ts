@@ -1,7 +1,8 @@
 import { digestMail } from "~/lib/digest-mail";
 import { buildBoard } from "~/lib/stats/board";
 import { boardAggregates } from "./board.server";
-import { Company, User } from "./db.server";
+import { Company } from "./db.server";
+import { supervisorsOf } from "./recipients.server";
 import { env } from "./env.server";
 import { causeList } from "./guides.server";
 import { sendMail } from "./mail.server";
@@ -15,8 +16,7 @@ export async function sendDigest(companyId: number, now = new Date()): Promise<s
   const to = new Date(Date.UTC(now.getUTCFullYear(), now.getUTCMonth(), now.getUTCDate()) + 86_400_000);
   const from = new Date(to.getTime() - DIGEST_DAYS * 86_400_000);
   const board = buildBoard(await boardAggregates(companyId, { from, to }));
-  let people = await User.findAll({ where: { companyId, role: "supervisor" }, attributes: ["name", "email"] });
-  if (!people.length) people = await User.findAll({ where: { companyId, role: "admin" }, attributes: ["name", "email"] });
+  const people = await supervisorsOf(companyId);
   const names = new Map(causeList().map((c) => [c.code, c.name]));
   const mail = digestMail(
     company.name,

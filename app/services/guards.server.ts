@@ -1,5 +1,6 @@
 import { data, redirect } from "react-router";
-import { hasRole, type Role } from "~/lib/roles";
+import { can, lowestRole, type Permission } from "~/lib/permissions";
+import type { Role } from "~/lib/roles";
 import { Company, User } from "./db.server";
 import { getSession } from "./session.server";
 
@@ -39,12 +40,10 @@ export async function requireUser(request: Request): Promise<SessionUser> {
   throw redirect(`/login?redirectTo=${encodeURIComponent(url.pathname + url.search)}`);
 }
 
-/** The signed-in person if their role reaches `role`; otherwise a 403. */
-export async function requireRole(request: Request, role: Role): Promise<SessionUser> {
+/** The signed-in person if they may do `action` (the permission map in lib/permissions); otherwise a 403. */
+export async function requirePermission(request: Request, action: Permission): Promise<SessionUser> {
   const user = await requireUser(request);
-  if (!hasRole(user.role, role)) {
-    fail(403, `This needs the ${role} role or above.`);
-  }
+  if (!can(user, action)) fail(403, `This needs the ${lowestRole(action)} role or above.`);
   return user;
 }
 

@@ -1,6 +1,7 @@
 import { handoffMail } from "~/lib/handoff-mail";
 import { caseDetail } from "./cases.server";
-import { Case, User } from "./db.server";
+import { Case } from "./db.server";
+import { supervisorsOf } from "./recipients.server";
 import { env } from "./env.server";
 import type { SessionUser } from "./guards.server";
 import { sendMail } from "./mail.server";
@@ -17,9 +18,7 @@ export const NO_MAIL: HandoffMailResult = { notified: [], mailedAt: null, mailFa
 /** Mails the company's supervisors (its admins if it has none) about a handed-off case; returns who was told. */
 async function notifyHandoff(user: SessionUser, caseId: string): Promise<string[]> {
   const detail = await caseDetail(user, caseId);
-  let people = await User.findAll({ where: { companyId: user.companyId, role: "supervisor", accessRemovedAt: null }, attributes: ["name", "email"] });
-  if (people.length === 0)
-    people = await User.findAll({ where: { companyId: user.companyId, role: "admin", accessRemovedAt: null }, attributes: ["name", "email"] });
+  const people = await supervisorsOf(user.companyId);
   const base = env().APP_URL;
   const mail = handoffMail({
     rig: detail.rig,

@@ -17,11 +17,72 @@ const ROUNDS = 2_100;
 
 // A small, seeded generator: the same bodies on every run.
 let seed = 20261202;
-const rand = () => ((seed = (seed * 1103515245 + 12345) % 2 ** 31) / 2 ** 31);
-const pick = <T,>(xs: readonly T[]): T => xs[Math.floor(rand() * xs.length)];
+const rand = () => (seed = (seed * 1103515245 + 12345) % 2 ** 31) / 2 ** 31;
+const pick = <T>(xs: readonly T[]): T => xs[Math.floor(rand() * xs.length)];
 
-const NAMES = ["intent", "email", "password", "confirm", "current", "name", "role", "personId", "inviteId", "confirmed", "note", "guideSlug", "caseId", "rigCode", "code", "tankGal", "engineHours", "hoseLengthFt", "hoseDiameterIn", "yardElevationFt", "mount", "pumpKind", "number", "changeNote", "comment", "title", "file", "key", "timeZone", "stepId", "redirectTo", "events", "outcome", "finalStep", "definition", "q", "rig", "from", "to", "page", "sort"];
-const INTENTS = ["invite", "role", "remove-access", "restore-access", "cancel-invite", "retire", "reinstate", "resolve-handoff", "new", "import", "edit", "submit", "approve", "return", "end-device", "end-others", "bogus", ""];
+const NAMES = [
+  "intent",
+  "email",
+  "password",
+  "confirm",
+  "current",
+  "name",
+  "role",
+  "personId",
+  "inviteId",
+  "confirmed",
+  "note",
+  "guideSlug",
+  "caseId",
+  "rigCode",
+  "code",
+  "tankGal",
+  "engineHours",
+  "hoseLengthFt",
+  "hoseDiameterIn",
+  "yardElevationFt",
+  "mount",
+  "pumpKind",
+  "number",
+  "changeNote",
+  "comment",
+  "title",
+  "file",
+  "key",
+  "timeZone",
+  "stepId",
+  "redirectTo",
+  "events",
+  "outcome",
+  "finalStep",
+  "definition",
+  "q",
+  "rig",
+  "from",
+  "to",
+  "page",
+  "sort",
+];
+const INTENTS = [
+  "invite",
+  "role",
+  "remove-access",
+  "restore-access",
+  "cancel-invite",
+  "retire",
+  "reinstate",
+  "resolve-handoff",
+  "new",
+  "import",
+  "edit",
+  "submit",
+  "approve",
+  "return",
+  "end-device",
+  "end-others",
+  "bogus",
+  "",
+];
 const deep = (n: number): unknown => (n === 0 ? "x" : { a: deep(n - 1) });
 const VALUES: (() => unknown)[] = [
   () => "",
@@ -35,7 +96,7 @@ const VALUES: (() => unknown)[] = [
   () => "x".repeat(5000),
   () => "\ud800 lone surrogate",
   () => "<script>alert(1)</script>",
-  () => "=HYPERLINK(\"http://x\")",
+  () => '=HYPERLINK("http://x")',
   () => "__proto__",
   () => "CF-07",
   () => "foaming",
@@ -66,9 +127,12 @@ function body(): { headers: Record<string, string>; body: BodyInit } {
     case 2:
       return { headers: { "Content-Type": "application/json" }, body: JSON.stringify(rand() < 0.2 ? pick(VALUES)() : fields) };
     case 3:
-      return { headers: { "Content-Type": "application/json" }, body: pick(["{", "[1,", "nul", "\"unterminated", "{\"a\":}"]) };
+      return { headers: { "Content-Type": "application/json" }, body: pick(["{", "[1,", "nul", '"unterminated', '{"a":}']) };
     case 4:
-      return { headers: { "Content-Type": "multipart/form-data; boundary=XYZ" }, body: pick(["--XYZ\r\nContent-Disposition: form-data; name=\"a\"\r\n\r\nb", "garbage", "--XYZ--"]) };
+      return {
+        headers: { "Content-Type": "multipart/form-data; boundary=XYZ" },
+        body: pick(['--XYZ\r\nContent-Disposition: form-data; name="a"\r\n\r\nb', "garbage", "--XYZ--"]),
+      };
     default:
       return { headers: { "Content-Type": pick(["text/plain", "application/xml", ""]) }, body: JSON.stringify(fields) };
   }
@@ -90,7 +154,9 @@ beforeAll(async () => {
   const version = (await GuideVersion.findOne())!;
   const guide = (await GuideRecord.findByPk(version.guideId))!;
   const id = randomUUID();
-  await Case.create(caseRow({ id, companyId: rig.companyId, rigId: rig.id, guideVersionId: version.id, openedBy: null, openedAt: new Date(), outcome: "open" }));
+  await Case.create(
+    caseRow({ id, companyId: rig.companyId, rigId: rig.id, guideVersionId: version.id, openedBy: null, openedAt: new Date(), outcome: "open" }),
+  );
   params = { id, code: "CF-07", guideId: String(guide.id), number: "1", token: "not-a-token", photoId: "1", kind: "hose", tool: "load", "*": "nothing" };
 });
 
@@ -114,14 +180,20 @@ describe("hostile input at every action and API route", () => {
       const url = new URL(`http://127.0.0.1${r.e.path.replace(/:(\w+)/g, (_m, k) => params[k] ?? "x").replace("*", "nothing")}`);
       if (r.method === "GET") for (let k = 0; k < 3; k++) url.searchParams.set(pick(NAMES), String(pick(VALUES)()));
       const b = r.method === "POST" ? body() : { headers: {}, body: undefined };
-      const request = new Request(url, { method: r.method, headers: { ...b.headers, Cookie: cookie, "x-tankside-client-ip": `10.9.${i % 250}.1` }, body: b.body });
+      const request = new Request(url, {
+        method: r.method,
+        headers: { ...b.headers, Cookie: cookie, "x-tankside-client-ip": `10.9.${i % 250}.1` },
+        body: b.body,
+      });
       let status: number;
       try {
         const out = await r.run({ request, params: Object.fromEntries(Object.keys(params).map((k) => [k, params[k]])), context: {} });
         status = out instanceof Response ? out.status : ((out as { init?: { status?: number } } | undefined)?.init?.status ?? 200);
       } catch (thrown) {
         status =
-          thrown instanceof Response ? thrown.status : ((thrown as { init?: { status?: number } }).init?.status ?? ((thrown as { type?: string }).type === "DataWithResponseInit" ? 200 : 500));
+          thrown instanceof Response
+            ? thrown.status
+            : ((thrown as { init?: { status?: number } }).init?.status ?? ((thrown as { type?: string }).type === "DataWithResponseInit" ? 200 : 500));
         if (status === 500 && thrown instanceof Error) fivexx.push(`${r.method} ${url.pathname}: ${thrown.message.slice(0, 160)}`);
       }
       if (status >= 500) {

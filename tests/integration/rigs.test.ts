@@ -87,7 +87,9 @@ describe("admins add, edit and retire rigs", () => {
       rigAction(args(await requestAs("dana@cedarflats.example", "/rigs/CF-21", { form: { intent: "retire", confirmed: "yes" } }), { code: "CF-21" })),
     );
     expect(crew.status).toBe(403);
-    await run(async () => rigAction(args(await requestAs("june@cedarflats.example", "/rigs/CF-21", { form: { intent: "retire", confirmed: "yes" } }), { code: "CF-21" })));
+    await run(async () =>
+      rigAction(args(await requestAs("june@cedarflats.example", "/rigs/CF-21", { form: { intent: "retire", confirmed: "yes" } }), { code: "CF-21" })),
+    );
     expect((await Rig.findOne({ where: { code: "CF-21" } }))!.retired).toBe(true);
   });
 });

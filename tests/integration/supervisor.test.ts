@@ -121,7 +121,10 @@ describe("cases table", () => {
   });
 
   it("writes CSV times in the company's zone with their offset", async () => {
-    const rows = parse(await ((await exportLoader(args(await requestAs(MO, "/cases/export")))) as Response).text(), { columns: true }) as Record<string, string>[];
+    const rows = parse(await ((await exportLoader(args(await requestAs(MO, "/cases/export")))) as Response).text(), { columns: true }) as Record<
+      string,
+      string
+    >[];
     // The demo companies work in America/Denver: UTC−7 in winter, UTC−6 in summer.
     for (const r of rows) {
       expect(r.opened_at).toMatch(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}-0[67]:00$/);
@@ -154,12 +157,18 @@ describe("board page, hand-offs and the digest", () => {
 
   it("lets a supervisor mark a hand-off dealt with, and another company gets 404", async () => {
     expect(
-      (await run(async () => caseAction(args(await requestAs("li@bluemesa.example", "/x", { form: { intent: "resolve-handoff", confirmed: "yes" } }), { id: handoffId }))))
-        .status,
+      (
+        await run(async () =>
+          caseAction(args(await requestAs("li@bluemesa.example", "/x", { form: { intent: "resolve-handoff", confirmed: "yes" } }), { id: handoffId })),
+        )
+      ).status,
     ).toBe(404);
     expect(
-      (await run(async () => caseAction(args(await requestAs("dana@cedarflats.example", "/x", { form: { intent: "resolve-handoff", confirmed: "yes" } }), { id: handoffId }))))
-        .status,
+      (
+        await run(async () =>
+          caseAction(args(await requestAs("dana@cedarflats.example", "/x", { form: { intent: "resolve-handoff", confirmed: "yes" } }), { id: handoffId })),
+        )
+      ).status,
     ).toBe(403);
     // One tap without the confirmation changes nothing.
     const unconfirmed = await run(async () => caseAction(args(await requestAs(MO, "/x", { form: { intent: "resolve-handoff" } }), { id: handoffId })));
@@ -167,7 +176,11 @@ describe("board page, hand-offs and the digest", () => {
     expect(unconfirmed.data.error).toMatch(/Confirm/);
     expect((await Case.findByPk(handoffId))!.handoffResolvedAt).toBeNull();
     await run(async () =>
-      caseAction(args(await requestAs(MO, "/x", { form: { intent: "resolve-handoff", confirmed: "yes", note: "New suction gasket fitted at the yard." } }), { id: handoffId })),
+      caseAction(
+        args(await requestAs(MO, "/x", { form: { intent: "resolve-handoff", confirmed: "yes", note: "New suction gasket fitted at the yard." } }), {
+          id: handoffId,
+        }),
+      ),
     );
     const resolved = (await Case.findByPk(handoffId))!;
     expect(resolved.handoffResolvedAt).not.toBeNull();
