@@ -2,8 +2,7 @@ import { data, Form, Link, redirect } from "react-router";
 import { z } from "zod";
 import { PageTitle } from "~/components/ui/page-title";
 import { fmt } from "~/lib/calc/units";
-import { GuideVersion } from "~/services/db.server";
-import { deskGuide, learnFromCases, openDraft, reviewVersion, submitDraft } from "~/services/desk.server";
+import { deskGuideVersions, learnFromCases, openDraft, reviewVersion, submitDraft } from "~/services/desk.server";
 import { fail, requirePermission, unlessRefused } from "~/services/guards.server";
 import { ADVISOR_MIN_CASES } from "~/lib/stats/check-order";
 import { ANSWERS, answerLabel, statusLabel, type Answer } from "~/lib/vocabulary";
@@ -20,21 +19,10 @@ const guideIdOf = (params: { guideId: string }) => {
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   const user = await requirePermission(request, "edit-guides");
-  const guide = await deskGuide(user, guideIdOf(params));
-  const versions = await GuideVersion.findAll({
-    where: { guideId: guide.id },
-    attributes: ["number", "status", "changeNote", "reviewComment", "updatedAt", "publishedAt"],
-    order: [["number", "DESC"]],
-  });
+  const { guide, versions } = await deskGuideVersions(user, guideIdOf(params));
   return {
-    guide: { id: guide.id, title: guide.title, slug: guide.slug, builtIn: guide.companyId === null, publishedVersion: guide.publishedVersion },
-    versions: versions.map((v) => ({
-      number: v.number,
-      status: v.status,
-      changeNote: v.changeNote,
-      reviewComment: v.reviewComment,
-      updatedAt: v.updatedAt.toISOString(),
-    })),
+    guide,
+    versions,
     canPublish: can(user, "publish-guides"),
     learning: await learnFromCases(user, guide.id),
   };

@@ -21,6 +21,26 @@ export async function deskGuide(user: SessionUser, guideId: number) {
   return guide;
 }
 
+/** A guide for the versions page: what it is, and every version newest first (plain data). */
+export async function deskGuideVersions(user: SessionUser, guideId: number) {
+  const guide = await deskGuide(user, guideId);
+  const versions = await GuideVersion.findAll({
+    where: { guideId: guide.id },
+    attributes: ["number", "status", "changeNote", "reviewComment", "updatedAt"],
+    order: [["number", "DESC"]],
+  });
+  return {
+    guide: { id: guide.id, title: guide.title, slug: guide.slug, builtIn: guide.companyId === null, publishedVersion: guide.publishedVersion },
+    versions: versions.map((v) => ({
+      number: v.number,
+      status: v.status,
+      changeNote: v.changeNote,
+      reviewComment: v.reviewComment,
+      updatedAt: v.updatedAt.toISOString(),
+    })),
+  };
+}
+
 async function deskVersion(user: SessionUser, guideId: number, number: number) {
   const guide = await deskGuide(user, guideId);
   const version = await GuideVersion.findOne({ where: { guideId: guide.id, number } });

@@ -1,5 +1,7 @@
 import { DataTypes, type QueryInterface } from "sequelize";
-import { ROLES } from "../../app/lib/roles";
+
+// The roles as they were when this migration landed: a migration never follows today's constants.
+const ROLES = ["crew", "trainer", "supervisor", "admin"] as const;
 
 /** Admins invite people by e-mail and can turn a person's sign-in off (kept, so their cases keep a name). */
 export async function up(qi: QueryInterface) {
