@@ -1,6 +1,7 @@
 import { data, Form, Link, redirect } from "react-router";
 import { z } from "zod";
 import { PageTitle } from "~/components/ui/page-title";
+import { RefusalNote } from "~/components/ui/refusal-note";
 import { fmt } from "~/lib/calc/units";
 import { deskGuideVersions, learnFromCases, openDraft, reviewVersion, submitDraft } from "~/services/desk.server";
 import { fail, requirePermission, unlessRefused } from "~/services/guards.server";
@@ -74,15 +75,7 @@ export default function DeskGuide({ loaderData, actionData }: Route.ComponentPro
         {guide.title}
       </PageTitle>
       {actionData && "error" in actionData ? (
-        <div role="alert" className="mb-3 rounded-md border-4 border-stop bg-paper p-3">
-          <p className="font-bold text-stop">{actionData.error}</p>
-          {actionData.problems.length ? (
-            <ul className="mt-2 list-disc space-y-1 pl-6">
-              {actionData.problems.map((p) => (
-                <li key={p}>{p}</li>
-              ))}
-            </ul>
-          ) : null}
+        <RefusalNote error={actionData.error} problems={actionData.problems}>
           {actionData.number ? (
             <p className="mt-2">
               <Link to={`v/${actionData.number}`} className="font-bold">
@@ -90,7 +83,7 @@ export default function DeskGuide({ loaderData, actionData }: Route.ComponentPro
               </Link>
             </p>
           ) : null}
-        </div>
+        </RefusalNote>
       ) : null}
       {actionData && "done" in actionData ? (
         <p role="status" className="mb-3 font-bold text-go">

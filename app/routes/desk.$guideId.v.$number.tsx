@@ -5,6 +5,7 @@ import { GuideEditor, type Draft } from "~/components/desk/guide-editor";
 import { ProblemsPanel } from "~/components/desk/problems-panel";
 import { TreeDrawing } from "~/components/desk/tree-drawing";
 import { PageTitle } from "~/components/ui/page-title";
+import { RefusalNote } from "~/components/ui/refusal-note";
 import { checkDefinition, submitDraft, versionFor } from "~/services/desk.server";
 import { deskParams } from "~/services/desk-params.server";
 import { requirePermission, unlessRefused } from "~/services/guards.server";
@@ -88,18 +89,7 @@ function SendForReview({ dirty, edits, result }: { dirty: boolean; edits: number
       ) : (
         <p>The saved draft goes to a supervisor, who publishes it or sends it back with a comment.</p>
       )}
-      {showResult ? (
-        <div role="alert" className="rounded-md border-4 border-stop p-3">
-          <p className="font-bold text-stop">{result.error}</p>
-          {result.problems.length ? (
-            <ul className="mt-2 list-disc space-y-1 pl-6">
-              {result.problems.map((p) => (
-                <li key={p}>{p}</li>
-              ))}
-            </ul>
-          ) : null}
-        </div>
-      ) : null}
+      {showResult ? <RefusalNote error={result.error} problems={result.problems} /> : null}
       <label className="block font-bold">
         Change note for the reviewer
         <input name="changeNote" required minLength={3} maxLength={1000} className="mt-1 block min-h-12 w-full rounded-md border-2 border-ink px-2" />
