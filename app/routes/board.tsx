@@ -1,4 +1,4 @@
-import { Form, Link, useNavigation } from "react-router";
+import { data, Form, Link, useNavigation } from "react-router";
 import { ParetoChart, TrendChart } from "~/components/board/charts";
 import { PageTitle } from "~/components/ui/page-title";
 import { boardQuerySchema, type BoardQuery } from "~/lib/board-query";
@@ -39,8 +39,13 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 export async function action({ request }: Route.ActionArgs) {
   const user = await requirePermission(request, "send-digest");
-  const sent = await sendDigest(user.companyId);
-  return { sentTo: sent };
+  // Said only once the mail server has taken it; a refusal is said as such, never a 500.
+  try {
+    return { sentTo: await sendDigest(user.companyId), mailFailed: false };
+  } catch (error) {
+    console.warn(`Digest for company ${user.companyId} failed: ${error instanceof Error ? error.message : error}`);
+    return data({ sentTo: [] as string[], mailFailed: true }, { status: 502 });
+  }
 }
 
 const h = (v: number | null, digits = 0) => (v === null ? "—" : fmt(v, digits));
@@ -328,7 +333,9 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
           </button>
           {actionData ? (
             <p role="status" className="mt-2 font-bold">
-              Digest sent to {actionData.sentTo.join(", ") || "no one (no supervisors)"}.
+              {actionData.mailFailed
+                ? "The mail server did not take the digest: nothing was sent. Try again later."
+                : `Digest sent to ${actionData.sentTo.join(", ") || "no one (no supervisors)"}.`}
             </p>
           ) : null}
         </Form>

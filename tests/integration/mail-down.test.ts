@@ -2,6 +2,7 @@ import { randomUUID } from "node:crypto";
 import { beforeAll, describe, expect, it, vi } from "vitest";
 import { Case, Invite } from "../../db/index";
 import { action as peopleAction } from "~/routes/admin.people";
+import { action as boardAction } from "~/routes/board";
 import { action as closeAction } from "~/routes/api.cases.$id.close";
 import { action as startAction } from "~/routes/api.cases";
 import { action as forgotAction } from "~/routes/forgot";
@@ -54,5 +55,11 @@ describe("with the mail server down", () => {
     expect(closed.status).toBe(200);
     expect(closed.data).toMatchObject({ outcome: "handoff", mailFailed: true });
     expect((await Case.findByPk(id))!.outcome).toBe("handoff");
+  });
+
+  it("sending the digest now says the mail server refused it, instead of a 500", async () => {
+    const res = await run(async () => boardAction(args(await requestAs("june@cedarflats.example", "/board", { form: {} }))));
+    expect(res.status).toBe(502);
+    expect(res.data).toEqual({ sentTo: [], mailFailed: true });
   });
 });
