@@ -53,3 +53,5 @@ export const rigInputSchema = z.object({
 });
 
 export type RigInput = z.infer<typeof rigInputSchema>;
+export type NozzleTipInput = z.infer<typeof nozzleTipSchema>;
+export type TorqueSpecInput = z.infer<typeof torqueSpecSchema>;

@@ -3,6 +3,7 @@ import { Op, UniqueConstraintError } from "sequelize";
 import type { CaseEventInput, CloseCaseInput } from "~/lib/case-schema";
 import { answerFits } from "~/lib/guides/walk";
 import { isFinalKind, type Guide } from "~/lib/guides/schema";
+import { rigSpecsOf, type RigSpecs } from "~/lib/rig-specs";
 import { outcomeLabel, type Outcome } from "~/lib/vocabulary";
 import { Case, CaseEvent, CasePhoto, changeCase, GuideRecord, GuideVersion, Rig, sequelize, User } from "./db.server";
 import { fail, notFound, type SessionUser } from "./guards.server";
@@ -173,18 +174,7 @@ export interface CaseDetail {
   handoffResolvedAt: string | null;
   handoffResolvedBy: string | null;
   handoffResolvedNote: string | null;
-  rig: {
-    code: string;
-    name: string;
-    hasHourMeter: boolean;
-    engineHours: number;
-    tankGal: number;
-    hoseLengthFt: number;
-    hoseDiameterIn: number;
-    yardElevationFt: number;
-    nozzleTips: Rig["nozzleTips"];
-    torqueSpecs: NonNullable<Rig["torqueSpecs"]>;
-  };
+  rig: RigSpecs & { hasHourMeter: boolean; engineHours: number };
   guide: { slug: string; title: string; version: number; definition: Guide };
   openedBy: string | null;
   events: { id: string; seq: number; stepId: string; answer: string; at: string; note: string | null }[];
@@ -214,18 +204,7 @@ export async function caseDetail(user: SessionUser, caseId: string): Promise<Cas
     handoffResolvedAt: found.handoffResolvedAt?.toISOString() ?? null,
     handoffResolvedBy: resolver?.name ?? null,
     handoffResolvedNote: found.handoffResolvedNote,
-    rig: {
-      code: rig!.code,
-      name: rig!.name,
-      hasHourMeter: rig!.hasHourMeter,
-      engineHours: rig!.engineHours,
-      tankGal: rig!.tankGal,
-      hoseLengthFt: rig!.hoseLengthFt,
-      hoseDiameterIn: rig!.hoseDiameterIn,
-      yardElevationFt: rig!.yardElevationFt,
-      nozzleTips: rig!.nozzleTips,
-      torqueSpecs: rig!.torqueSpecs ?? [],
-    },
+    rig: { ...rigSpecsOf(rig!), hasHourMeter: rig!.hasHourMeter, engineHours: rig!.engineHours },
     guide: { slug: record!.slug, title: record!.title, version: version.number, definition: guide },
     openedBy: opener?.name ?? null,
     events: events.map((e) => ({ id: e.id, seq: e.seq, stepId: e.stepId, answer: e.answer, at: e.at.toISOString(), note: e.note })),

@@ -1,16 +1,5 @@
 import { CalcInputError } from "~/lib/calc/validate";
 
-/** What a calculator needs to know about the rig it is filled from. */
-export interface RigSpecs {
-  code: string;
-  tankGal: number;
-  hoseLengthFt: number;
-  hoseDiameterIn: number;
-  yardElevationFt: number;
-  nozzleTips: { name: string; reachFt: number; widthFt: number }[];
-  torqueSpecs: { part: string; ftLb: number }[];
-}
-
 /** Runs a calculator on what the person typed: a result, or each bad field's message. */
 export function tryCalc<T>(fn: (input: unknown) => T, input: unknown): { result: T | null; errors: Record<string, string> } {
   try {

@@ -2,7 +2,7 @@ import { HoseCalc } from "./hose-calc";
 import { LoadSheetCalc } from "./load-sheet-calc";
 import { SuctionCalc } from "./suction-calc";
 import { TorqueCalc } from "./torque-calc";
-import type { RigSpecs } from "./calc-kit";
+import type { RigSpecs } from "~/lib/rig-specs";
 
 const WIDGETS = {
   "hose-friction": { title: "Hose friction for this rig", Calc: HoseCalc },

@@ -2,7 +2,8 @@ import { useState } from "react";
 import { hoseFriction, reachByHoseLength } from "~/lib/calc/hose";
 import { FRICTION_TABLES, tableFor } from "~/lib/calc/hose-tables";
 import { fmt, ftToM, psiToKpa } from "~/lib/calc/units";
-import { NumberField, ResultBox, SourceNote, toNumber, tryCalc, type RigSpecs } from "./calc-kit";
+import { NumberField, ResultBox, SourceNote, toNumber, tryCalc } from "./calc-kit";
+import type { RigSpecs } from "~/lib/rig-specs";
 
 /** Hose friction for a flow, and what each 50 ft of hose costs in reach at the pump's pressure. */
 export function HoseCalc({ rig, compact = false }: { rig?: RigSpecs; compact?: boolean }) {

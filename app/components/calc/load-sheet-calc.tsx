@@ -1,7 +1,8 @@
 import { useState } from "react";
 import { DEFAULT_FIBER_CEILING_LB_PER_100_GAL, loadSheet } from "~/lib/calc/load-sheet";
 import { acresToSqFt, fmt, galToL, lbPerAcreToKgPerHa, lbToKg, sqFtToAcres, sqMToSqFt } from "~/lib/calc/units";
-import { NumberField, ResultBox, SourceNote, toNumber, tryCalc, type RigSpecs } from "./calc-kit";
+import { NumberField, ResultBox, SourceNote, toNumber, tryCalc } from "./calc-kit";
+import type { RigSpecs } from "~/lib/rig-specs";
 
 interface Row {
   key: number;

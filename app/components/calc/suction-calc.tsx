@@ -1,7 +1,8 @@
 import { useState } from "react";
 import { suctionCheck } from "~/lib/calc/suction";
 import { fmt, ftToM } from "~/lib/calc/units";
-import { NumberField, ResultBox, SourceNote, toNumber, tryCalc, type RigSpecs } from "./calc-kit";
+import { NumberField, ResultBox, SourceNote, toNumber, tryCalc } from "./calc-kit";
+import type { RigSpecs } from "~/lib/rig-specs";
 
 /** Will the pump hold prime drafting from here? NPSH available against the pump's NPSH required. */
 export function SuctionCalc({ rig }: { rig?: RigSpecs; compact?: boolean }) {

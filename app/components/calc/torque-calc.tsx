@@ -1,7 +1,8 @@
 import { useState } from "react";
 import { boltTorque, convertTorque } from "~/lib/calc/torque";
 import { fmt } from "~/lib/calc/units";
-import { NumberField, ResultBox, SourceNote, toNumber, tryCalc, type RigSpecs } from "./calc-kit";
+import { NumberField, ResultBox, SourceNote, toNumber, tryCalc } from "./calc-kit";
+import type { RigSpecs } from "~/lib/rig-specs";
 
 /** ft·lb ↔ N·m, the rig's own torque figures, and an estimate for when no figure is given. */
 export function TorqueCalc({ rig, compact = false }: { rig?: RigSpecs; compact?: boolean }) {
