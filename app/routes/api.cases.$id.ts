@@ -1,4 +1,4 @@
-import { caseDetail } from "~/services/cases.server";
+import { caseDetail } from "~/services/case-detail.server";
 import { requireUser } from "~/services/guards.server";
 import type { Route } from "./+types/api.cases.$id";
 

@@ -2,7 +2,7 @@ import { useEffect, useState } from "react";
 import { CalcWidget } from "~/components/calc/calc-widget";
 import { WalkScreen } from "~/components/walk/walk-screen";
 import { stepsToEnd } from "~/lib/guides/graph";
-import { caseDetail } from "~/services/cases.server";
+import { caseDetail } from "~/services/case-detail.server";
 import { requireUser } from "~/services/guards.server";
 import { causeList } from "~/services/guides.server";
 import type { Answer } from "~/lib/vocabulary";

@@ -1,5 +1,5 @@
 import { handoffMail } from "~/lib/handoff-mail";
-import { caseDetail } from "./cases.server";
+import { caseDetail } from "./case-detail.server";
 import { Case } from "./db.server";
 import { supervisorsOf } from "./recipients.server";
 import { env } from "./env.server";

@@ -1,0 +1,67 @@
+import type { Guide } from "~/lib/guides/schema";
+import { rigSpecsOf, type RigSpecs } from "~/lib/rig-specs";
+import type { Outcome } from "~/lib/vocabulary";
+import { Case, CaseEvent, CasePhoto, GuideRecord, GuideVersion, Rig, User } from "./db.server";
+import { notFound, type SessionUser } from "./guards.server";
+
+/** The company's case with the guide version it follows; another company's id is a 404. */
+export async function findCaseWithGuide(user: SessionUser, caseId: string) {
+  const found = await Case.findOne({
+    where: { id: caseId, companyId: user.companyId },
+    include: [{ model: GuideVersion, as: "guideVersion", attributes: ["id", "number", "definition", "guideId"] }],
+  });
+  if (!found) notFound("That case");
+  const version = (found as Case & { guideVersion: GuideVersion }).guideVersion;
+  return { found, guide: version.definition, version };
+}
+
+export interface CaseDetail {
+  id: string;
+  outcome: Outcome;
+  openedAt: string;
+  closedAt: string | null;
+  engineHours: number | null;
+  finalStep: string | null;
+  causeCode: string | null;
+  safetyAckAt: string | null;
+  note: string | null;
+  handoffResolvedAt: string | null;
+  handoffResolvedBy: string | null;
+  handoffResolvedNote: string | null;
+  rig: RigSpecs & { hasHourMeter: boolean; engineHours: number };
+  guide: { slug: string; title: string; version: number; definition: Guide };
+  openedBy: string | null;
+  events: { id: string; seq: number; stepId: string; answer: string; at: string; note: string | null }[];
+  photos: { id: number; stepId: string | null; contentType: string; takenAt: string }[];
+}
+
+export async function caseDetail(user: SessionUser, caseId: string): Promise<CaseDetail> {
+  const { found, guide, version } = await findCaseWithGuide(user, caseId);
+  const [rig, record, opener, resolver, events, photos] = await Promise.all([
+    Rig.findByPk(found.rigId),
+    GuideRecord.findByPk(version.guideId, { attributes: ["slug", "title"] }),
+    found.openedBy ? User.findByPk(found.openedBy, { attributes: ["name"] }) : null,
+    found.handoffResolvedBy ? User.findByPk(found.handoffResolvedBy, { attributes: ["name"] }) : null,
+    CaseEvent.findAll({ where: { caseId }, order: [["seq", "ASC"]] }),
+    CasePhoto.findAll({ where: { caseId }, attributes: ["id", "stepId", "contentType", "createdAt"], order: [["id", "ASC"]] }),
+  ]);
+  return {
+    id: found.id,
+    outcome: found.outcome,
+    openedAt: found.openedAt.toISOString(),
+    closedAt: found.closedAt?.toISOString() ?? null,
+    engineHours: found.engineHours,
+    finalStep: found.finalStep,
+    causeCode: found.causeCode,
+    safetyAckAt: found.safetyAckAt?.toISOString() ?? null,
+    note: found.note,
+    handoffResolvedAt: found.handoffResolvedAt?.toISOString() ?? null,
+    handoffResolvedBy: resolver?.name ?? null,
+    handoffResolvedNote: found.handoffResolvedNote,
+    rig: { ...rigSpecsOf(rig!), hasHourMeter: rig!.hasHourMeter, engineHours: rig!.engineHours },
+    guide: { slug: record!.slug, title: record!.title, version: version.number, definition: guide },
+    openedBy: opener?.name ?? null,
+    events: events.map((e) => ({ id: e.id, seq: e.seq, stepId: e.stepId, answer: e.answer, at: e.at.toISOString(), note: e.note })),
+    photos: photos.map((p) => ({ id: p.id, stepId: p.stepId, contentType: p.contentType, takenAt: p.createdAt.toISOString() })),
+  };
+}
