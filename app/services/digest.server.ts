@@ -1,4 +1,4 @@
-import { digestMail } from "~/lib/digest-mail";
+import { digestMail } from "~/lib/mail/digest";
 import { buildBoard } from "~/lib/stats/board";
 import { boardAggregates } from "./board.server";
 import { Company } from "./db.server";

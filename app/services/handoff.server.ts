@@ -1,4 +1,4 @@
-import { handoffMail } from "~/lib/handoff-mail";
+import { handoffMail } from "~/lib/mail/handoff";
 import { caseDetail } from "./case-detail.server";
 import { Case } from "./db.server";
 import { supervisorsOf } from "./recipients.server";

@@ -1,6 +1,6 @@
 import { Op } from "sequelize";
 import { hashPassword } from "~/lib/password";
-import { RESET_MINUTES, resetMail } from "~/lib/reset-mail";
+import { RESET_MINUTES, resetMail } from "~/lib/mail/reset";
 import { PasswordReset, sequelize, SessionRecord, User } from "./db.server";
 import { env } from "./env.server";
 import { sendMail } from "./mail.server";

@@ -1,5 +1,5 @@
 import { Op, UniqueConstraintError } from "sequelize";
-import { inviteMail } from "~/lib/invite-mail";
+import { inviteMail } from "~/lib/mail/invite";
 import { hashPassword } from "~/lib/password";
 import type { InviteInput, PersonAction } from "~/lib/people-schema";
 import { Company, Invite, sequelize, User } from "./db.server";

@@ -1,6 +1,6 @@
-import { fmt } from "./calc/units";
-import { formatDateTime, isoInZone } from "./format";
-import type { Board } from "./stats/board";
+import { fmt } from "../calc/units";
+import { formatDateTime, isoInZone } from "../format";
+import type { Board } from "../stats/board";
 
 /** The weekly digest for a company's supervisors: what to look at, in plain text. */
 export function digestMail(

@@ -1,6 +1,6 @@
-import type { Guide } from "./guides/schema";
-import { formatDateTime, formatTime } from "./format";
-import { answerLabel } from "./vocabulary";
+import type { Guide } from "../guides/schema";
+import { formatDateTime, formatTime } from "../format";
+import { answerLabel } from "../vocabulary";
 
 export interface HandoffFacts {
   rig: { code: string; name: string };
