@@ -14,7 +14,7 @@ import { Case, closeDb, Company, db, GuideRecord, GuideVersion, Rig, User } from
 import { startLocalMariadb } from "../db/local-mariadb";
 import { migrateUp } from "../db/migrate";
 import { changeCase, rebuildBoardRollups } from "../db/board-rollups";
-import { loadLibrary } from "../app/lib/guides/files";
+import { loadLibrary } from "../app/lib/guides/files.server";
 import { importBuiltinGuides } from "../seeds/import-guides";
 import { seededRandom } from "../seeds/random";
 

@@ -1,6 +1,6 @@
 /** `npm run guides:check [files…]`: checks guide files (default: all of content/guides). Exit 1 on any problem. */
 import path from "node:path";
-import { checkGuideFiles, contentDir, guideFilesIn, loadCauses } from "../app/lib/guides/files";
+import { checkGuideFiles, contentDir, guideFilesIn, loadCauses } from "../app/lib/guides/files.server";
 import { describeProblem } from "../app/lib/guides/validate";
 
 const args = process.argv.slice(2);

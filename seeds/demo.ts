@@ -3,7 +3,7 @@
  * database, so a second `npm start` keeps whatever was changed since.
  */
 import { db, Company, Rig, User } from "../db/index";
-import { hashPassword } from "../app/lib/password";
+import { hashPassword } from "../app/services/password.server";
 import type { z } from "zod";
 import { rigInputSchema } from "../app/lib/rig-schema";
 import { DEMO_PASSWORD, DEMO_PEOPLE } from "./demo-people";

@@ -1,4 +1,4 @@
-import { loadLibrary } from "../app/lib/guides/files";
+import { loadLibrary } from "../app/lib/guides/files.server";
 import { seedDemo } from "./demo";
 import { seedDemoHistory } from "./demo-history";
 import { importBuiltinGuides } from "./import-guides";

@@ -1,4 +1,4 @@
-import { checkPassword, hashPassword } from "~/lib/password";
+import { checkPassword, hashPassword } from "~/services/password.server";
 import { PasswordReset, sequelize, SessionRecord, User } from "./db.server";
 import type { SessionUser } from "./guards.server";
 import { endSessions } from "./session.server";

@@ -1,5 +1,5 @@
 import { Op } from "sequelize";
-import { loadCauses } from "~/lib/guides/files";
+import { loadCauses } from "~/lib/guides/files.server";
 import type { Cause } from "~/lib/guides/causes";
 import type { Guide } from "~/lib/guides/schema";
 import { createGuideSearch, type SearchHit } from "~/lib/guides/search";

@@ -1,5 +1,5 @@
 import { Op } from "sequelize";
-import { hashPassword } from "~/lib/password";
+import { hashPassword } from "~/services/password.server";
 import { RESET_MINUTES, resetMail } from "~/lib/mail/reset";
 import { PasswordReset, sequelize, SessionRecord, User } from "./db.server";
 import { env } from "./env.server";

@@ -1,6 +1,6 @@
 import { Op, UniqueConstraintError } from "sequelize";
 import { inviteMail } from "~/lib/mail/invite";
-import { hashPassword } from "~/lib/password";
+import { hashPassword } from "~/services/password.server";
 import type { InviteInput, PersonAction } from "~/lib/people-schema";
 import { Company, Invite, sequelize, User } from "./db.server";
 import { env } from "./env.server";

@@ -1,7 +1,7 @@
 import type { Page } from "playwright-core";
 import { describe, expect, it, onTestFinished } from "vitest";
 import { Case } from "../../db/index";
-import { loadLibrary } from "~/lib/guides/files";
+import { loadLibrary } from "~/lib/guides/files.server";
 import type { Guide } from "~/lib/guides/schema";
 import { ANSWER_LABELS, type StepAnswer } from "~/lib/vocabulary";
 import { appAndBrowserForFile, signIn } from "../helpers/app";

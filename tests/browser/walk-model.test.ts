@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { getSimplePaths } from "xstate/graph";
 import { compileGuide } from "~/lib/guides/compile";
-import { loadLibrary } from "~/lib/guides/files";
+import { loadLibrary } from "~/lib/guides/files.server";
 import { ANSWER_LABELS, STEP_ANSWERS, type StepAnswer } from "~/lib/vocabulary";
 import { appAndBrowserForFile, signIn } from "../helpers/app";
 import { root } from "../helpers/guides";

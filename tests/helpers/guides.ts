@@ -1,6 +1,6 @@
 import fs from "node:fs";
 import path from "node:path";
-import { loadCauses } from "~/lib/guides/files";
+import { loadCauses } from "~/lib/guides/files.server";
 import type { Guide } from "~/lib/guides/schema";
 
 export const root = path.resolve(import.meta.dirname, "../..");

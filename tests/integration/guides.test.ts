@@ -1,6 +1,6 @@
 import { beforeAll, describe, expect, it } from "vitest";
 import { Company, GuideRecord, GuideVersion, guideScope } from "../../db/index";
-import { loadLibrary } from "~/lib/guides/files";
+import { loadLibrary } from "~/lib/guides/files.server";
 import { loader as searchLoader } from "~/routes/api.guides.search";
 import { importBuiltinGuides } from "../../seeds/import-guides";
 import { resetDatabase } from "../helpers/db";

@@ -1,7 +1,7 @@
 import { createMachine } from "xstate";
 import { getShortestPaths } from "xstate/graph";
 import { describe, expect, it } from "vitest";
-import { loadLibrary } from "~/lib/guides/files";
+import { loadLibrary } from "~/lib/guides/files.server";
 import type { Guide } from "~/lib/guides/schema";
 import { ANSWERS_BY_KIND, STEP_ANSWERS as ANSWERS } from "~/lib/vocabulary";
 import { validateGuide } from "~/lib/guides/validate";

@@ -3,7 +3,7 @@ import { initialTransition, transition } from "xstate";
 import { getSimplePaths } from "xstate/graph";
 import { describe, expect, it } from "vitest";
 import { compileGuide } from "~/lib/guides/compile";
-import { checkGuideFiles, guideFilesIn, loadLibrary } from "~/lib/guides/files";
+import { checkGuideFiles, guideFilesIn, loadLibrary } from "~/lib/guides/files.server";
 import { simplePaths } from "~/lib/guides/graph";
 import { ANSWERS_BY_KIND as EVENTS_BY_KIND, STEP_ANSWERS as ANSWERS } from "~/lib/vocabulary";
 import type { Guide } from "~/lib/guides/schema";

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { compileGuide } from "~/lib/guides/compile";
 import { diffGuides } from "~/lib/guides/diff";
-import { loadLibrary } from "~/lib/guides/files";
+import { loadLibrary } from "~/lib/guides/files.server";
 import { mainLine } from "~/lib/guides/main-line";
 import { stepFlow } from "~/lib/stats/step-flow";
 import { root, tinyGuide } from "../../helpers/guides";

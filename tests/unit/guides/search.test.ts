@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { loadLibrary } from "~/lib/guides/files";
+import { loadLibrary } from "~/lib/guides/files.server";
 import { createGuideSearch } from "~/lib/guides/search";
 import { causes, root } from "../../helpers/guides";
 
