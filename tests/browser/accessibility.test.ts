@@ -1,7 +1,7 @@
 import type { Page } from "playwright-core";
 import { describe, expect, it } from "vitest";
 import { GuideRecord } from "../../db/index";
-import { appAndBrowserForFile, signIn } from "../helpers/app";
+import { appAndBrowserForFile, signIn, startCaseFromPage } from "../helpers/app";
 import { axeFindings } from "../helpers/axe";
 
 const harness = appAndBrowserForFile();
@@ -34,14 +34,7 @@ describe("every page at 360×640 passes axe with AAA contrast, has a title and o
     await harness.browser.context.clearCookies();
     await signIn(p, harness.app.url, "dana@cedarflats.example");
     // A walk-through of its own, started through the API as the fix page does.
-    const started = await p.evaluate(async () => {
-      const res = await fetch("/api/cases", {
-        method: "POST",
-        headers: { "Content-Type": "application/json" },
-        body: JSON.stringify({ rigCode: "CF-07", guideSlug: "lost-prime" }),
-      });
-      return (await res.json()) as { id: string };
-    });
+    const started = { id: await startCaseFromPage(p, "CF-07", "lost-prime") };
     const pages = [
       "/",
       "/rigs",

@@ -4,7 +4,7 @@ import { Case } from "../../db/index";
 import { loadLibrary } from "~/lib/guides/files.server";
 import type { Guide } from "~/lib/guides/schema";
 import { ANSWER_LABELS, type StepAnswer } from "~/lib/vocabulary";
-import { appAndBrowserForFile, signIn } from "../helpers/app";
+import { appAndBrowserForFile, signIn, startCaseFromPage } from "../helpers/app";
 import { root } from "../helpers/guides";
 
 const harness = appAndBrowserForFile();
@@ -37,13 +37,7 @@ const length = (guide: Guide, id: string) => {
 };
 
 async function startWalk(p: Page, guideSlug: string, rigCode = "CF-07"): Promise<string> {
-  const id = await p.evaluate(
-    async ([guideSlug, rigCode]) => {
-      const res = await fetch("/api/cases", { method: "POST", headers: { "Content-Type": "application/json" }, body: JSON.stringify({ rigCode, guideSlug }) });
-      return ((await res.json()) as { id: string }).id;
-    },
-    [guideSlug, rigCode],
-  );
+  const id = await startCaseFromPage(p, rigCode, guideSlug);
   await p.goto(`${harness.app.url}/cases/${id}/walk`);
   return id;
 }

@@ -3,7 +3,7 @@ import { getSimplePaths } from "xstate/graph";
 import { compileGuide } from "~/lib/guides/compile";
 import { loadLibrary } from "~/lib/guides/files.server";
 import { ANSWER_LABELS, STEP_ANSWERS, type StepAnswer } from "~/lib/vocabulary";
-import { appAndBrowserForFile, signIn } from "../helpers/app";
+import { appAndBrowserForFile, signIn, startCaseFromPage } from "../helpers/app";
 import { root } from "../helpers/guides";
 
 const harness = appAndBrowserForFile();
@@ -37,14 +37,7 @@ describe("the walk screen follows the guide's machine on every path (vibration)"
     await harness.browser.context.clearCookies();
     const p = await harness.browser.context.newPage();
     await signIn(p, harness.app.url, "dana@cedarflats.example");
-    const id = await p.evaluate(async () => {
-      const res = await fetch("/api/cases", {
-        method: "POST",
-        headers: { "Content-Type": "application/json" },
-        body: JSON.stringify({ rigCode: "CF-03", guideSlug: "vibration" }),
-      });
-      return ((await res.json()) as { id: string }).id;
-    });
+    const id = await startCaseFromPage(p, "CF-03", "vibration");
     await p.goto(`${harness.app.url}/cases/${id}/walk`);
     for (const step of path.steps) {
       if (step.event.type === "xstate.init") continue;
