@@ -36,6 +36,8 @@ export default function handleRequest(request: Request, responseStatusCode: numb
           },
         });
         responseHeaders.set("Content-Type", "text/html");
+        // Pages hold company data: never kept by the browser or a proxy, so Back after signing out shows nothing.
+        if (!responseHeaders.has("Cache-Control")) responseHeaders.set("Cache-Control", "private, no-store");
         pipe(body);
         resolve(new Response(createReadableStreamFromReadable(body), { headers: responseHeaders, status: responseStatusCode }));
       },

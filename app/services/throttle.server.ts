@@ -62,10 +62,10 @@ export const backOffSeconds = (beyondFree: number) => Math.min(30 * 2 ** (beyond
 export const clientOf = (request: Request) => request.headers.get("x-tankside-client-ip") ?? "unknown";
 const accountKey = (email: string, request: Request) => `${email.trim().toLowerCase()}|${clientOf(request)}`;
 
-function tooMany(retrySeconds: number): never {
+function tooMany(retrySeconds: number, what: string): never {
   const seconds = Math.max(1, Math.ceil(retrySeconds));
   throw Response.json(
-    { error: `Too many tries from here. Wait ${seconds < 90 ? `${seconds} seconds` : `${Math.ceil(seconds / 60)} minutes`} and try again.` },
+    { error: `Too many tries ${what}. Wait ${seconds < 90 ? `${seconds} seconds` : `${Math.ceil(seconds / 60)} minutes`} and try again.` },
     { status: 429, headers: { "Retry-After": String(seconds) } },
   );
 }
@@ -75,8 +75,10 @@ const blockedFor = (res: RateLimiterRes | null, points: number) => (res && res.c
 /** Before checking a password: stops with 429 (and Retry-After) while this client or this address+client must wait. */
 export async function checkSignInAllowed(email: string, request: Request) {
   const [byClient, byAccount] = await Promise.all([signInByClient().get(clientOf(request)), signInByAccount().get(accountKey(email, request))]);
-  const wait = Math.max(blockedFor(byClient, 30), blockedFor(byAccount, FREE_FAILURES));
-  if (wait > 0) tooMany(wait);
+  const forAddress = blockedFor(byAccount, FREE_FAILURES);
+  const fromHere = blockedFor(byClient, 30);
+  if (forAddress > 0 || fromHere > 0)
+    tooMany(Math.max(forAddress, fromHere), forAddress >= fromHere ? "with this address from here" : "from this device or network");
 }
 
 /** After a wrong password (or an unknown address): counts it, and starts the back-off past the free tries. */
@@ -100,5 +102,5 @@ export async function recordSignInSuccess(email: string, request: Request) {
 export async function checkLinkRequest(request: Request) {
   await linksByClient()
     .consume(clientOf(request))
-    .catch((res: RateLimiterRes) => tooMany(res.msBeforeNext / 1000));
+    .catch((res: RateLimiterRes) => tooMany(res.msBeforeNext / 1000, "for password links from this device or network"));
 }

@@ -53,6 +53,8 @@ describe("security headers on every response (OWASP ASVS 14.4)", () => {
     expect(res.headers.get("Cross-Origin-Opener-Policy")).toBe("same-origin");
     expect(res.headers.get("Strict-Transport-Security")).toBeNull(); // plain http on loopback
     expect(res.headers.get("X-Powered-By")).toBeNull();
+    // Pages are never kept: Back after signing out shows nothing private.
+    expect(res.headers.get("Cache-Control")).toBe("private, no-store");
   });
 
   it("sends no Referer from pages that carry a token", async () => {
