@@ -2,25 +2,35 @@
  * Times and durations for people, always in the company's time zone and always naming it
  * ("Jun 1, 2026, 8:05 AM MDT"), so a reader never wonders which clock a time is on.
  */
-export function formatDateTime(iso: string | Date, timeZone: string): string {
-  return new Date(iso).toLocaleString("en-US", {
-    timeZone,
-    month: "short",
-    day: "numeric",
+const OPTIONS = {
+  dateTime: { month: "short", day: "numeric", year: "numeric", hour: "numeric", minute: "2-digit", timeZoneName: "short" },
+  time: { hour: "numeric", minute: "2-digit", second: "2-digit", timeZoneName: "short" },
+  date: { month: "short", day: "numeric", year: "numeric" },
+  iso: {
+    hourCycle: "h23",
     year: "numeric",
-    hour: "numeric",
+    month: "2-digit",
+    day: "2-digit",
+    hour: "2-digit",
     minute: "2-digit",
-    timeZoneName: "short",
-  });
+    second: "2-digit",
+    timeZoneName: "longOffset",
+  },
+} satisfies Record<string, Intl.DateTimeFormatOptions>;
+
+// Building a formatter costs far more than using one: one per kind and zone, kept (a CSV of
+// thousands of rows, a page of cases).
+const formatters = new Map<string, Intl.DateTimeFormat>();
+function formatter(kind: keyof typeof OPTIONS, timeZone: string): Intl.DateTimeFormat {
+  const key = `${kind} ${timeZone}`;
+  let f = formatters.get(key);
+  if (!f) formatters.set(key, (f = new Intl.DateTimeFormat("en-US", { ...OPTIONS[kind], timeZone })));
+  return f;
 }
 
-export function formatTime(iso: string | Date, timeZone: string): string {
-  return new Date(iso).toLocaleTimeString("en-US", { timeZone, hour: "numeric", minute: "2-digit", second: "2-digit", timeZoneName: "short" });
-}
-
-export function formatDate(iso: string | Date, timeZone: string): string {
-  return new Date(iso).toLocaleDateString("en-US", { timeZone, month: "short", day: "numeric", year: "numeric" });
-}
+export const formatDateTime = (iso: string | Date, timeZone: string) => formatter("dateTime", timeZone).format(new Date(iso));
+export const formatTime = (iso: string | Date, timeZone: string) => formatter("time", timeZone).format(new Date(iso));
+export const formatDate = (iso: string | Date, timeZone: string) => formatter("date", timeZone).format(new Date(iso));
 
 /** A label cut at a word boundary (never mid-word), with an ellipsis when cut. */
 export function shortLabel(text: string, max: number): string {
@@ -33,17 +43,7 @@ export function shortLabel(text: string, max: number): string {
 /** ISO 8601 in the zone's local time with its offset, e.g. 2026-06-01T08:05:00-06:00 (for CSV files). */
 export function isoInZone(iso: string | Date, timeZone: string): string {
   const parts = Object.fromEntries(
-    new Intl.DateTimeFormat("en-US", {
-      timeZone,
-      hourCycle: "h23",
-      year: "numeric",
-      month: "2-digit",
-      day: "2-digit",
-      hour: "2-digit",
-      minute: "2-digit",
-      second: "2-digit",
-      timeZoneName: "longOffset",
-    })
+    formatter("iso", timeZone)
       .formatToParts(new Date(iso))
       .map((p) => [p.type, p.value]),
   );

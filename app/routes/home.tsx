@@ -2,7 +2,7 @@ import { Link } from "react-router";
 import { PageTitle } from "~/components/ui/page-title";
 import { forEveryone, navFor } from "~/lib/navigation";
 import { ROLE_LABELS } from "~/lib/roles";
-import { env } from "~/services/env.server";
+import { hiddenSections } from "~/services/env.server";
 import { lastRigIdFor } from "~/services/cases.server";
 import { requireUser } from "~/services/guards.server";
 import { listRigs } from "~/services/rigs.server";
@@ -13,7 +13,7 @@ export async function loader({ request }: Route.LoaderArgs) {
   const [rigs, lastRigId] = await Promise.all([listRigs(user), lastRigIdFor(user)]);
   // The rig this person worked on last comes first: it is usually the one acting up again.
   rigs.sort((a, b) => Number(b.id === lastRigId) - Number(a.id === lastRigId));
-  return { role: user.role, firstName: user.name.split(" ")[0], rigs, lastRigId, hidden: env().MAIL_OUTBOX_DIR ? [] : ["/admin/outbox"] };
+  return { role: user.role, firstName: user.name.split(" ")[0], rigs, lastRigId, hidden: hiddenSections() };
 }
 
 export default function Home({ loaderData }: Route.ComponentProps) {

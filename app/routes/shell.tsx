@@ -2,14 +2,13 @@ import { Form, Link, NavLink, Outlet, useRouteLoaderData } from "react-router";
 import { ErrorPanel } from "~/components/error-panel";
 import { navFor } from "~/lib/navigation";
 import { ROLE_LABELS } from "~/lib/roles";
-import { env } from "~/services/env.server";
+import { hiddenSections } from "~/services/env.server";
 import { requireUser } from "~/services/guards.server";
 import type { Route } from "./+types/shell";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);
-  // The outbox exists only while the app sends through the local fake mail server.
-  return { user, hidden: env().MAIL_OUTBOX_DIR ? [] : ["/admin/outbox"] };
+  return { user, hidden: hiddenSections() };
 }
 
 export default function Shell({ loaderData }: Route.ComponentProps) {

@@ -44,3 +44,6 @@ export function env(): Env {
 }
 
 export const isProduction = () => env().NODE_ENV === "production";
+
+/** Sections that exist only in some set-ups: the outbox only while mail goes to the local fake server. */
+export const hiddenSections = (): string[] => (env().MAIL_OUTBOX_DIR ? [] : ["/admin/outbox"]);
