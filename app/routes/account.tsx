@@ -15,8 +15,8 @@ import { readForm } from "~/services/read-request.server";
 import { ABSOLUTE_DAYS, currentSessionKey, endSessions, IDLE_DAYS } from "~/services/session.server";
 import type { Route } from "./+types/account";
 
-export async function loader({ request }: Route.LoaderArgs) {
-  const user = await requireUser(request);
+export async function loader({ request, context }: Route.LoaderArgs) {
+  const user = await requireUser({ request, context });
   const [sessions, current] = await Promise.all([listSessions(user), currentSessionKey(request)]);
   return {
     name: user.name,
@@ -34,8 +34,8 @@ const deviceAction = z.discriminatedUnion("intent", [
   z.object({ intent: z.literal("end-others") }),
 ]);
 
-export async function action({ request }: Route.ActionArgs) {
-  const user = await requireUser(request);
+export async function action({ request, context }: Route.ActionArgs) {
+  const user = await requireUser({ request, context });
   const form = await readForm(request);
   const current = await currentSessionKey(request);
   if (form.get("intent") === "end-device" || form.get("intent") === "end-others") {

@@ -10,13 +10,13 @@ import { requirePermission } from "~/services/guards.server";
 import { readForm } from "~/services/read-request.server";
 import type { Route } from "./+types/admin.company";
 
-export async function loader({ request }: Route.LoaderArgs) {
-  const user = await requirePermission(request, "company-settings");
+export async function loader({ request, context }: Route.LoaderArgs) {
+  const user = await requirePermission({ request, context }, "company-settings");
   return { company: await companySettings(user), zones: Intl.supportedValuesOf("timeZone") };
 }
 
-export async function action({ request }: Route.ActionArgs) {
-  const user = await requirePermission(request, "company-settings");
+export async function action({ request, context }: Route.ActionArgs) {
+  const user = await requirePermission({ request, context }, "company-settings");
   const submission = parseForm(await readForm(request), companySettingsSchema);
   if (submission.status !== "success") return data({ result: submission.reply(), message: null }, { status: 400 });
   await saveCompanySettings(user, submission.value);

@@ -4,8 +4,8 @@ import { readOutbox } from "~/services/outbox.server";
 import { useTimes } from "~/components/use-time-zone";
 import type { Route } from "./+types/admin.outbox";
 
-export async function loader({ request }: Route.LoaderArgs) {
-  const user = await requirePermission(request, "read-outbox");
+export async function loader({ request, context }: Route.LoaderArgs) {
+  const user = await requirePermission({ request, context }, "read-outbox");
   const messages = await readOutbox(user.companyId);
   if (!messages) notFound("The local outbox (the app is sending through a real mail provider)");
   return { messages };

@@ -15,8 +15,8 @@ import { useTimes } from "~/components/use-time-zone";
 import { readForm } from "~/services/read-request.server";
 import type { Route } from "./+types/admin.people";
 
-export async function loader({ request }: Route.LoaderArgs) {
-  const user = await requirePermission(request, "manage-people");
+export async function loader({ request, context }: Route.LoaderArgs) {
+  const user = await requirePermission({ request, context }, "manage-people");
   const { people, invites } = await listPeople(user);
   return {
     people: people.map((p) => ({ ...p, accessRemovedAt: p.accessRemovedAt?.toISOString() ?? null, createdAt: p.createdAt.toISOString() })),
@@ -24,8 +24,8 @@ export async function loader({ request }: Route.LoaderArgs) {
   };
 }
 
-export async function action({ request }: Route.ActionArgs) {
-  const user = await requirePermission(request, "manage-people");
+export async function action({ request, context }: Route.ActionArgs) {
+  const user = await requirePermission({ request, context }, "manage-people");
   const form = await readForm(request);
   if (form.get("intent") === "invite") {
     const submission = parseForm(form, inviteSchema);

@@ -5,8 +5,8 @@ import { readQuery } from "~/services/read-request.server";
 import type { Route } from "./+types/api.board";
 
 /** GET /api/board?from=…&to=…&rig=…&repeatDays=…: the fault board's figures as JSON (supervisor and admin). */
-export async function loader({ request }: Route.LoaderArgs) {
-  const user = await requirePermission(request, "read-board");
+export async function loader({ request, context }: Route.LoaderArgs) {
+  const user = await requirePermission({ request, context }, "read-board");
   const q = readQuery(request, boardQuerySchema);
   const board = await boardFor(user, q);
   return Response.json({ window: { from: q.fromDay, to: q.toDay, rig: q.rigCode ?? null, repeatDays: q.repeatDays }, ...board });

@@ -5,8 +5,8 @@ import { requirePost } from "~/services/read-request.server";
 import type { Route } from "./+types/api.calc.$kind";
 
 /** POST /api/calc/{hose|suction|load|torque}: JSON in, JSON out; a bad field is named in a 400. */
-export async function action({ request, params }: Route.ActionArgs) {
-  await requireUser(request);
+export async function action({ request, params, context }: Route.ActionArgs) {
+  await requireUser({ request, context });
   requirePost(request);
   if (!isCalculator(params.kind)) notFound(`Calculator ${params.kind}`);
   let body: unknown;

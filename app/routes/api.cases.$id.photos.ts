@@ -7,8 +7,8 @@ import type { Route } from "./+types/api.cases.$id.photos";
 
 const fields = z.object({ stepId: z.string().min(1).max(80).optional() });
 
-export async function action({ request, params }: Route.ActionArgs) {
-  const user = await requireUser(request);
+export async function action({ request, params, context }: Route.ActionArgs) {
+  const user = await requireUser({ request, context });
   requirePost(request);
   let form: FormData;
   try {

@@ -4,8 +4,8 @@ import { requireUser } from "~/services/guards.server";
 import { readJson, requirePost } from "~/services/read-request.server";
 import type { Route } from "./+types/api.cases";
 
-export async function action({ request }: Route.ActionArgs) {
-  const user = await requireUser(request);
+export async function action({ request, context }: Route.ActionArgs) {
+  const user = await requireUser({ request, context });
   requirePost(request);
   const body = await readJson(request, startCaseSchema);
   const { id, created } = await startCase(user, body);

@@ -12,8 +12,8 @@ const query = z.object({
     .max(120, "Keep it under 120 characters."),
 });
 
-export async function loader({ request }: Route.LoaderArgs) {
-  const user = await requireUser(request);
+export async function loader({ request, context }: Route.LoaderArgs) {
+  const user = await requireUser({ request, context });
   const { q } = readQuery(request, query);
   return Response.json({ results: await searchGuides(user, q) });
 }

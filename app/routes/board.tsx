@@ -14,8 +14,8 @@ import { useTimes } from "~/components/use-time-zone";
 import { can } from "~/lib/permissions";
 import type { Route } from "./+types/board";
 
-export async function loader({ request }: Route.LoaderArgs) {
-  const user = await requirePermission(request, "read-board");
+export async function loader({ request, context }: Route.LoaderArgs) {
+  const user = await requirePermission({ request, context }, "read-board");
   // A window the form got wrong keeps the person on the board: the default window, the message beside the form.
   let formError: string | null = null;
   let q: BoardQuery;
@@ -37,8 +37,8 @@ export async function loader({ request }: Route.LoaderArgs) {
   };
 }
 
-export async function action({ request }: Route.ActionArgs) {
-  const user = await requirePermission(request, "send-digest");
+export async function action({ request, context }: Route.ActionArgs) {
+  const user = await requirePermission({ request, context }, "send-digest");
   // Said only once the mail server has taken it; a refusal is said as such, never a 500.
   try {
     return { sentTo: await sendDigest(user.companyId), mailFailed: false };

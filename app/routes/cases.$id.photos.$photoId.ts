@@ -3,8 +3,8 @@ import { readPhoto } from "~/services/photos.server";
 import type { Route } from "./+types/cases.$id.photos.$photoId";
 
 /** A case photo, streamed through the app so the bucket stays private and company checks stay in one place. */
-export async function loader({ request, params }: Route.LoaderArgs) {
-  const user = await requireUser(request);
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const user = await requireUser({ request, context });
   const id = Number(params.photoId);
   if (!Number.isInteger(id) || id < 1) notFound("That photo");
   const photo = await readPhoto(user, params.id, id);

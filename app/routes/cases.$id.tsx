@@ -14,8 +14,8 @@ import { readForm } from "~/services/read-request.server";
 import { can } from "~/lib/permissions";
 import type { Route } from "./+types/cases.$id";
 
-export async function loader({ request, params }: Route.LoaderArgs) {
-  const user = await requireUser(request);
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const user = await requireUser({ request, context });
   const detail = await caseDetail(user, params.id);
   const cause = causeList().find((c) => c.code === detail.causeCode) ?? null;
   const states = detail.guide.definition.states;
@@ -41,8 +41,8 @@ const resolveHandoffSchema = z.object({
     .transform((v) => v || undefined),
 });
 
-export async function action({ request, params }: Route.ActionArgs) {
-  const user = await requirePermission(request, "resolve-handoffs");
+export async function action({ request, params, context }: Route.ActionArgs) {
+  const user = await requirePermission({ request, context }, "resolve-handoffs");
   const form = await readForm(request);
   const parsed = resolveHandoffSchema.safeParse(Object.fromEntries(form));
   if (!parsed.success) fail(400, `Nothing changed: ${parsed.error.issues.map((i) => i.message).join(" ")}`);

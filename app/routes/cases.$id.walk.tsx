@@ -8,8 +8,8 @@ import { causeList } from "~/services/guides.server";
 import type { Answer } from "~/lib/vocabulary";
 import type { Route } from "./+types/cases.$id.walk";
 
-export async function loader({ request, params }: Route.LoaderArgs) {
-  const user = await requireUser(request);
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const user = await requireUser({ request, context });
   const detail = await caseDetail(user, params.id);
   const codes = new Set(Object.values(detail.guide.definition.states).flatMap((s) => (s.meta.cause ? [s.meta.cause] : [])));
   return {

@@ -9,8 +9,8 @@ import { causeList } from "~/services/guides.server";
 import type { Route } from "./+types/cases.export";
 
 /** The filtered cases as CSV (the same filters as the table, every page). */
-export async function loader({ request }: Route.LoaderArgs) {
-  const user = await requirePermission(request, "read-cases");
+export async function loader({ request, context }: Route.LoaderArgs) {
+  const user = await requirePermission({ request, context }, "read-cases");
   const { rows } = await listCases(user, readQuery(request, caseFiltersSchema, "the filters"), { all: true });
   const names = new Map(causeList().map((c) => [c.code, c.name]));
   const csv = toCsv(

@@ -10,8 +10,8 @@ import { causeList } from "~/services/guides.server";
 import { useTimes } from "~/components/use-time-zone";
 import type { Route } from "./+types/cases";
 
-export async function loader({ request }: Route.LoaderArgs) {
-  const user = await requirePermission(request, "read-cases");
+export async function loader({ request, context }: Route.LoaderArgs) {
+  const user = await requirePermission({ request, context }, "read-cases");
   const filters = readQuery(request, caseFiltersSchema, "the filters");
   const [{ rows, total }, options] = await Promise.all([listCases(user, filters), caseFilterOptions(user)]);
   return { rows, total, filters, options, causes: causeList().map((c) => ({ code: c.code, name: c.name })) };

@@ -6,8 +6,8 @@ import { deskParams } from "~/services/desk-params.server";
 import { requirePermission } from "~/services/guards.server";
 import type { Route } from "./+types/desk.$guideId.diff";
 
-export async function loader({ request, params }: Route.LoaderArgs) {
-  const user = await requirePermission(request, "edit-guides");
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const user = await requirePermission({ request, context }, "edit-guides");
   const url = new URL(request.url);
   const a = deskParams({ guideId: params.guideId, number: url.searchParams.get("a") ?? "" });
   const b = deskParams({ guideId: params.guideId, number: url.searchParams.get("b") ?? "" });

@@ -18,8 +18,8 @@ const guideIdOf = (params: { guideId: string }) => {
   return id;
 };
 
-export async function loader({ request, params }: Route.LoaderArgs) {
-  const user = await requirePermission(request, "edit-guides");
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const user = await requirePermission({ request, context }, "edit-guides");
   const { guide, versions } = await deskGuideVersions(user, guideIdOf(params));
   return {
     guide,
@@ -44,8 +44,8 @@ const actionSchema = z.discriminatedUnion("intent", [
   }),
 ]);
 
-export async function action({ request, params }: Route.ActionArgs) {
-  const user = await requirePermission(request, "edit-guides");
+export async function action({ request, params, context }: Route.ActionArgs) {
+  const user = await requirePermission({ request, context }, "edit-guides");
   const guideId = guideIdOf(params);
   const parsed = actionSchema.safeParse(Object.fromEntries(await readForm(request)));
   if (!parsed.success) return data({ error: parsed.error.issues.map((i) => i.message).join(" "), problems: [] as string[], number: null }, { status: 400 });
@@ -59,7 +59,7 @@ export async function action({ request, params }: Route.ActionArgs) {
     if (refused) return data({ error: refused.error, problems: Object.values(refused.fields), number: a.number }, { status: refused.status });
     return { done: `Version ${a.number} sent for review.` };
   }
-  await requirePermission(request, "publish-guides");
+  await requirePermission({ request, context }, "publish-guides");
   const refused = await unlessRefused(() => reviewVersion(user, guideId, a.number, a.intent === "approve" ? "approve" : "return", a.comment ?? null));
   if (refused) return data({ error: refused.error, problems: Object.values(refused.fields), number: null }, { status: refused.status });
   return { done: a.intent === "approve" ? `Version ${a.number} published: new cases use it.` : `Version ${a.number} sent back to draft.` };

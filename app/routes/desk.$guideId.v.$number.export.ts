@@ -4,8 +4,8 @@ import { requirePermission } from "~/services/guards.server";
 import type { Route } from "./+types/desk.$guideId.v.$number.export";
 
 /** A version as a content/guides file, ready to import elsewhere or ship. */
-export async function loader({ request, params }: Route.LoaderArgs) {
-  const user = await requirePermission(request, "edit-guides");
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const user = await requirePermission({ request, context }, "edit-guides");
   const { guideId, number } = deskParams(params);
   const { guide, version } = await versionFor(user, guideId, number);
   return new Response(`${JSON.stringify(version.definition, null, 2)}\n`, {

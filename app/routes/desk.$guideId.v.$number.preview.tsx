@@ -8,8 +8,8 @@ import { requirePermission } from "~/services/guards.server";
 import { causeList } from "~/services/guides.server";
 import type { Route } from "./+types/desk.$guideId.v.$number.preview";
 
-export async function loader({ request, params }: Route.LoaderArgs) {
-  const user = await requirePermission(request, "edit-guides");
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const user = await requirePermission({ request, context }, "edit-guides");
   const { guideId, number } = deskParams(params);
   const v = await versionFor(user, guideId, number);
   const { guide, problems } = validateGuide(v.version.definition, { causes: causeList() });

@@ -13,8 +13,8 @@ import { readForm } from "~/services/read-request.server";
 import { causeList } from "~/services/guides.server";
 import type { Route } from "./+types/desk.$guideId.v.$number";
 
-export async function loader({ request, params }: Route.LoaderArgs) {
-  const user = await requirePermission(request, "edit-guides");
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const user = await requirePermission({ request, context }, "edit-guides");
   const { guideId, number } = deskParams(params);
   const v = await versionFor(user, guideId, number);
   return { ...v, editable: v.version.status === "draft" && !v.guide.builtIn, causes: causeList(), problems: checkDefinition(v.version.definition) };
@@ -26,8 +26,8 @@ const submitSchema = z.object({
 });
 
 /** Sending the draft for review from the editor: problems keep the trainer here, listed. */
-export async function action({ request, params }: Route.ActionArgs) {
-  const user = await requirePermission(request, "edit-guides");
+export async function action({ request, params, context }: Route.ActionArgs) {
+  const user = await requirePermission({ request, context }, "edit-guides");
   const { guideId, number } = deskParams(params);
   const parsed = submitSchema.safeParse(Object.fromEntries(await readForm(request)));
   if (!parsed.success) return data({ error: parsed.error.issues.map((i) => i.message).join(" "), problems: [] as string[] }, { status: 400 });

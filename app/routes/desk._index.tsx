@@ -6,15 +6,15 @@ import { requirePermission } from "~/services/guards.server";
 import { readForm } from "~/services/read-request.server";
 import type { Route } from "./+types/desk._index";
 
-export async function loader({ request }: Route.LoaderArgs) {
-  const user = await requirePermission(request, "edit-guides");
+export async function loader({ request, context }: Route.LoaderArgs) {
+  const user = await requirePermission({ request, context }, "edit-guides");
   return { guides: await deskList(user) };
 }
 
 const MAX_IMPORT_BYTES = 200_000;
 
-export async function action({ request }: Route.ActionArgs) {
-  const user = await requirePermission(request, "edit-guides");
+export async function action({ request, context }: Route.ActionArgs) {
+  const user = await requirePermission({ request, context }, "edit-guides");
   const form = await readForm(request);
   const intent = form.get("intent");
   try {

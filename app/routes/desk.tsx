@@ -3,8 +3,8 @@ import { SafetyCaution } from "~/components/walk/safety-caution";
 import { requirePermission } from "~/services/guards.server";
 import type { Route } from "./+types/desk";
 
-export async function loader({ request }: Route.LoaderArgs) {
-  await requirePermission(request, "edit-guides");
+export async function loader({ request, context }: Route.LoaderArgs) {
+  await requirePermission({ request, context }, "edit-guides");
   return null;
 }
 

@@ -8,8 +8,8 @@ import { requireUser } from "~/services/guards.server";
 import { listRigs } from "~/services/rigs.server";
 import type { Route } from "./+types/home";
 
-export async function loader({ request }: Route.LoaderArgs) {
-  const user = await requireUser(request);
+export async function loader({ request, context }: Route.LoaderArgs) {
+  const user = await requireUser({ request, context });
   const [rigs, lastRigId] = await Promise.all([listRigs(user), lastRigIdFor(user)]);
   // The rig this person worked on last comes first: it is usually the one acting up again.
   rigs.sort((a, b) => Number(b.id === lastRigId) - Number(a.id === lastRigId));

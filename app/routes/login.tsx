@@ -3,15 +3,15 @@ import { DEMO_PASSWORD, DEMO_PEOPLE } from "../../seeds/demo-people";
 import { EmailField } from "~/components/email-field";
 import { authenticator, SignInError } from "~/services/auth.server";
 import { env } from "~/services/env.server";
-import { getUser } from "~/services/guards.server";
+import { currentUser } from "~/services/guards.server";
 import { landingFor } from "~/lib/navigation";
 import { safeRedirect } from "~/lib/safe-redirect";
 import { signInCookie } from "~/services/session.server";
 import { readForm } from "~/services/read-request.server";
 import type { Route } from "./+types/login";
 
-export async function loader({ request }: Route.LoaderArgs) {
-  const user = await getUser(request);
+export async function loader({ request, context }: Route.LoaderArgs) {
+  const user = await currentUser({ request, context });
   if (user) throw redirect(landingFor(user.role));
   const e = env();
   const showDemo = e.SHOW_DEMO_SIGNINS === "1" || (e.NODE_ENV !== "production" && e.SHOW_DEMO_SIGNINS !== "0");

@@ -9,8 +9,8 @@ import { findRig, updateRig } from "~/services/rigs.server";
 import { readForm } from "~/services/read-request.server";
 import type { Route } from "./+types/rigs.$code.edit";
 
-export async function loader({ request, params }: Route.LoaderArgs) {
-  const user = await requirePermission(request, "edit-rigs");
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const user = await requirePermission({ request, context }, "edit-rigs");
   const rig = await findRig(user, params.code);
   const { code, name, mount, tankGal, pumpKind, hasHourMeter, engineHours, hoseLengthFt, hoseDiameterIn, yardElevationFt, nozzleTips, torqueSpecs, notes } =
     rig.get({ plain: true });
@@ -33,8 +33,8 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   };
 }
 
-export async function action({ request, params }: Route.ActionArgs) {
-  const user = await requirePermission(request, "edit-rigs");
+export async function action({ request, params, context }: Route.ActionArgs) {
+  const user = await requirePermission({ request, context }, "edit-rigs");
   const submission = parseForm(await readForm(request), rigInputSchema);
   if (submission.status !== "success") return data(submission.reply(), { status: 400 });
   const saved = await updateRig(user, params.code, submission.value);

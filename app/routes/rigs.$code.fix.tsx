@@ -10,8 +10,8 @@ import { findRig } from "~/services/rigs.server";
 import { readForm } from "~/services/read-request.server";
 import type { Route } from "./+types/rigs.$code.fix";
 
-export async function loader({ request, params }: Route.LoaderArgs) {
-  const user = await requireUser(request);
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const user = await requireUser({ request, context });
   const rig = await findRig(user, params.code);
   const [guides, openWalks] = await Promise.all([usableGuides(user), openWalksOn(user, rig.id)]);
   return {
@@ -32,8 +32,8 @@ const startForm = z.object({
     .or(z.literal("").transform(() => undefined)),
 });
 
-export async function action({ request, params }: Route.ActionArgs) {
-  const user = await requireUser(request);
+export async function action({ request, params, context }: Route.ActionArgs) {
+  const user = await requireUser({ request, context });
   const parsed = startForm.safeParse(Object.fromEntries(await readForm(request)));
   if (!parsed.success) fail(400, "Pick a guide to start.");
   const { id } = await startCase(user, { id: parsed.data.caseId, rigCode: params.code, guideSlug: parsed.data.guideSlug });

@@ -4,8 +4,8 @@ import { env } from "~/services/env.server";
 import { findRig } from "~/services/rigs.server";
 import type { Route } from "./+types/rigs.$code.label";
 
-export async function loader({ request, params }: Route.LoaderArgs) {
-  const user = await requireUser(request);
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const user = await requireUser({ request, context });
   const rig = await findRig(user, params.code);
   const url = `${env().APP_URL}/rigs/${rig.code}/fix`;
   const svg = await QRCode.toString(url, { type: "svg", errorCorrectionLevel: "M", margin: 1, color: { dark: "#000000", light: "#ffffff" } });

@@ -11,14 +11,14 @@ import { readForm } from "~/services/read-request.server";
 import { can } from "~/lib/permissions";
 import type { Route } from "./+types/rigs.$code";
 
-export async function loader({ request, params }: Route.LoaderArgs) {
-  const user = await requireUser(request);
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const user = await requireUser({ request, context });
   const rig = await findRig(user, params.code);
   return { rig: rig.get({ plain: true }), canEdit: can(user, "edit-rigs"), cases: await recentRigCases(user, rig.id) };
 }
 
-export async function action({ request, params }: Route.ActionArgs) {
-  const user = await requirePermission(request, "edit-rigs");
+export async function action({ request, params, context }: Route.ActionArgs) {
+  const user = await requirePermission({ request, context }, "edit-rigs");
   const form = await readForm(request);
   const intent = form.get("intent");
   if (intent !== "retire" && intent !== "reinstate") fail(400, "Say what to do: retire or reinstate.");

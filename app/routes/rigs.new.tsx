@@ -9,13 +9,13 @@ import { createRig } from "~/services/rigs.server";
 import { readForm } from "~/services/read-request.server";
 import type { Route } from "./+types/rigs.new";
 
-export async function loader({ request }: Route.LoaderArgs) {
-  await requirePermission(request, "edit-rigs");
+export async function loader({ request, context }: Route.LoaderArgs) {
+  await requirePermission({ request, context }, "edit-rigs");
   return null;
 }
 
-export async function action({ request }: Route.ActionArgs) {
-  const user = await requirePermission(request, "edit-rigs");
+export async function action({ request, context }: Route.ActionArgs) {
+  const user = await requirePermission({ request, context }, "edit-rigs");
   const submission = parseForm(await readForm(request), rigInputSchema);
   if (submission.status !== "success") return data(submission.reply(), { status: 400 });
   const saved = await createRig(user, submission.value);

@@ -6,8 +6,8 @@ import { listRigs } from "~/services/rigs.server";
 import { can } from "~/lib/permissions";
 import type { Route } from "./+types/rigs";
 
-export async function loader({ request }: Route.LoaderArgs) {
-  const user = await requireUser(request);
+export async function loader({ request, context }: Route.LoaderArgs) {
+  const user = await requireUser({ request, context });
   return { rigs: await listRigs(user, { includeRetired: true }), canEdit: can(user, "edit-rigs") };
 }
 

@@ -6,8 +6,8 @@ import { hiddenSections } from "~/services/env.server";
 import { requireUser } from "~/services/guards.server";
 import type { Route } from "./+types/shell";
 
-export async function loader({ request }: Route.LoaderArgs) {
-  const user = await requireUser(request);
+export async function loader({ request, context }: Route.LoaderArgs) {
+  const user = await requireUser({ request, context });
   return { user, hidden: hiddenSections() };
 }
 

@@ -9,8 +9,8 @@ import { notFound, requireUser } from "~/services/guards.server";
 import { rigSpecsFor } from "~/services/rig-specs.server";
 import type { Route } from "./+types/tools.$tool";
 
-export async function loader({ request, params }: Route.LoaderArgs) {
-  const user = await requireUser(request);
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const user = await requireUser({ request, context });
   const tool = toolById(params.tool);
   if (!tool) notFound("That calculator");
   const rigs = await rigSpecsFor(user);

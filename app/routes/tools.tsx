@@ -4,8 +4,8 @@ import { TOOLS } from "~/lib/tools";
 import { requireUser } from "~/services/guards.server";
 import type { Route } from "./+types/tools";
 
-export async function loader({ request }: Route.LoaderArgs) {
-  await requireUser(request);
+export async function loader({ request, context }: Route.LoaderArgs) {
+  await requireUser({ request, context });
   return null;
 }
 

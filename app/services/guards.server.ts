@@ -1,4 +1,4 @@
-import { data, redirect } from "react-router";
+import { createContext, data, redirect, type RouterContextProvider } from "react-router";
 import { can, lowestRole, type Permission } from "~/lib/permissions";
 import type { Role } from "~/lib/roles";
 import { Company, User } from "./db.server";
@@ -17,7 +17,7 @@ export interface SessionUser {
 
 const isApi = (request: Request) => new URL(request.url).pathname.startsWith("/api/");
 
-export async function getUser(request: Request): Promise<SessionUser | null> {
+async function getUser(request: Request): Promise<SessionUser | null> {
   const session = await getSession(request);
   const userId = session.get("userId");
   if (!userId) return null;
@@ -31,9 +31,29 @@ export async function getUser(request: Request): Promise<SessionUser | null> {
   return { id: user.id, name: user.name, email: user.email, role: user.role, companyId: user.companyId, companyName: company.name, timeZone: company.timeZone };
 }
 
+/** What a loader or action is handed: the request and the request's own context (one per request, shared by every loader). */
+export interface RequestArgs {
+  request: Request;
+  context: Readonly<RouterContextProvider>;
+}
+
+// The signed-in person, looked up once per request: a desk page runs three or four loaders that all need them.
+const signedIn = createContext<Promise<SessionUser | null> | null>(null);
+
+/** The signed-in person or null, from the request context (looked up on first use). */
+export function currentUser({ request, context }: RequestArgs): Promise<SessionUser | null> {
+  let lookup = context.get(signedIn);
+  if (!lookup) {
+    lookup = getUser(request);
+    (context as RouterContextProvider).set(signedIn, lookup);
+  }
+  return lookup;
+}
+
 /** The signed-in person, or a redirect to sign-in (401 JSON for API routes). */
-export async function requireUser(request: Request): Promise<SessionUser> {
-  const user = await getUser(request);
+export async function requireUser(args: RequestArgs): Promise<SessionUser> {
+  const { request } = args;
+  const user = await currentUser(args);
   if (user) return user;
   if (isApi(request)) fail(401, "Sign in first.");
   const url = new URL(request.url);
@@ -41,8 +61,8 @@ export async function requireUser(request: Request): Promise<SessionUser> {
 }
 
 /** The signed-in person if they may do `action` (the permission map in lib/permissions); otherwise a 403. */
-export async function requirePermission(request: Request, action: Permission): Promise<SessionUser> {
-  const user = await requireUser(request);
+export async function requirePermission(args: RequestArgs, action: Permission): Promise<SessionUser> {
+  const user = await requireUser(args);
   if (!can(user, action)) fail(403, `This needs the ${lowestRole(action)} role or above.`);
   return user;
 }
