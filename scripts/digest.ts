@@ -26,7 +26,10 @@ if (smtp) {
 }
 try {
   const { sendAllDigests } = await import("../app/services/digest.server");
-  for (const r of await sendAllDigests()) console.log(`${r.company}: sent to ${r.sentTo.join(", ") || "no one"}`);
+  const results = await sendAllDigests();
+  for (const r of results) console.log(`${r.company}: ${r.mailFailed ? "NOT SENT, the mail server refused it" : `sent to ${r.sentTo.join(", ") || "no one"}`}`);
+  // A scheduler sees a failed run and can retry it.
+  if (results.some((r) => r.mailFailed)) process.exitCode = 1;
 } finally {
   await closeDb();
   await smtp?.stop();

@@ -40,12 +40,8 @@ export async function loader({ request, context }: Route.LoaderArgs) {
 export async function action({ request, context }: Route.ActionArgs) {
   const user = await requirePermission({ request, context }, "send-digest");
   // Said only once the mail server has taken it; a refusal is said as such, never a 500.
-  try {
-    return { sentTo: await sendDigest(user.companyId), mailFailed: false };
-  } catch (error) {
-    console.warn(`Digest for company ${user.companyId} failed: ${error instanceof Error ? error.message : error}`);
-    return data({ sentTo: [] as string[], mailFailed: true }, { status: 502 });
-  }
+  const result = await sendDigest(user.companyId);
+  return result.mailFailed ? data(result, { status: 502 }) : result;
 }
 
 const h = (v: number | null, digits = 0) => (v === null ? "—" : fmt(v, digits));

@@ -2,17 +2,23 @@ import { digestMail } from "~/lib/mail/digest";
 import { buildBoard } from "~/lib/stats/board";
 import { boardAggregates } from "./board.server";
 import { Company } from "./db.server";
-import { supervisorsOf } from "./recipients.server";
 import { env } from "./env.server";
 import { causeList } from "./guides.server";
-import { sendMail } from "./mail.server";
+import { deliver, supervisorsOf } from "./mail.server";
 
 const DIGEST_DAYS = 30;
 
-/** Sends one company's digest to its supervisors (its admins if it has none); returns who got it. */
-export async function sendDigest(companyId: number, now = new Date()): Promise<string[]> {
+export interface DigestResult {
+  /** Who the mail was addressed to. */
+  sentTo: string[];
+  /** The mail server refused it: nobody got it. */
+  mailFailed: boolean;
+}
+
+/** Sends one company's digest to its supervisors (its admins if it has none); says who got it, or that the mail failed. */
+export async function sendDigest(companyId: number, now = new Date()): Promise<DigestResult> {
   const company = await Company.findByPk(companyId, { attributes: ["name", "timeZone"] });
-  if (!company) return [];
+  if (!company) return { sentTo: [], mailFailed: false };
   const to = new Date(Date.UTC(now.getUTCFullYear(), now.getUTCMonth(), now.getUTCDate()) + 86_400_000);
   const from = new Date(to.getTime() - DIGEST_DAYS * 86_400_000);
   const board = buildBoard(await boardAggregates(companyId, { from, to }));
@@ -26,13 +32,14 @@ export async function sendDigest(companyId: number, now = new Date()): Promise<s
     env().APP_URL,
     company.timeZone,
   );
-  await sendMail({ companyId, to: people.map((p) => p.email), ...mail });
-  return people.map((p) => p.name);
+  const sent = await deliver({ companyId, to: people.map((p) => p.email), ...mail }, `Digest for company ${companyId}`);
+  return sent ? { sentTo: people.map((p) => p.name), mailFailed: false } : { sentTo: [], mailFailed: true };
 }
 
-export async function sendAllDigests(now = new Date()): Promise<{ company: string; sentTo: string[] }[]> {
+/** Every company's digest; one refused mail does not keep the next company's from going. */
+export async function sendAllDigests(now = new Date()): Promise<({ company: string } & DigestResult)[]> {
   const companies = await Company.findAll({ attributes: ["id", "name"], order: [["id", "ASC"]] });
   const out = [];
-  for (const c of companies) out.push({ company: c.name, sentTo: await sendDigest(c.id, now) });
+  for (const c of companies) out.push({ company: c.name, ...(await sendDigest(c.id, now)) });
   return out;
 }

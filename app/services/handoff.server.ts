@@ -1,10 +1,9 @@
 import { handoffMail } from "~/lib/mail/handoff";
 import { caseDetail } from "./case-detail.server";
 import { Case } from "./db.server";
-import { supervisorsOf } from "./recipients.server";
 import { env } from "./env.server";
 import type { SessionUser } from "./guards.server";
-import { sendMail } from "./mail.server";
+import { deliver, supervisorsOf } from "./mail.server";
 
 /** What the phone is told about a hand-off's mail: only what has happened. */
 export interface HandoffMailResult {
@@ -15,8 +14,8 @@ export interface HandoffMailResult {
 
 export const NO_MAIL: HandoffMailResult = { notified: [], mailedAt: null, mailFailed: false };
 
-/** Mails the company's supervisors (its admins if it has none) about a handed-off case; returns who was told. */
-async function notifyHandoff(user: SessionUser, caseId: string): Promise<string[]> {
+/** Mails the company's supervisors (its admins if it has none) about a handed-off case; returns who was told, or null if the mail failed. */
+async function notifyHandoff(user: SessionUser, caseId: string): Promise<string[] | null> {
   const detail = await caseDetail(user, caseId);
   const people = await supervisorsOf(user.companyId);
   const base = env().APP_URL;
@@ -32,8 +31,8 @@ async function notifyHandoff(user: SessionUser, caseId: string): Promise<string[
     timeZone: user.timeZone,
     photoUrls: detail.photos.map((p) => `${base}/cases/${caseId}/photos/${p.id}`),
   });
-  await sendMail({ companyId: user.companyId, to: people.map((p) => p.email), ...mail });
-  return people.map((p) => p.name);
+  const sent = await deliver({ companyId: user.companyId, to: people.map((p) => p.email), ...mail }, `Hand-off mail for case ${caseId}`);
+  return sent ? people.map((p) => p.name) : null;
 }
 
 /**
@@ -50,14 +49,15 @@ export async function mailHandoffOnce(user: SessionUser, caseId: string): Promis
     if (!c?.handoffMailedTo) return NO_MAIL;
     return { notified: c.handoffMailedTo.split(", "), mailedAt: c.handoffMailedAt?.toISOString() ?? null, mailFailed: false };
   }
-  try {
-    const names = await notifyHandoff(user, caseId);
-    const mailedAt = new Date();
-    await Case.update({ handoffMailedAt: mailedAt, handoffMailedTo: names.join(", ") }, { where });
-    return { notified: names, mailedAt: mailedAt.toISOString(), mailFailed: false };
-  } catch (error) {
-    console.warn(`Hand-off mail for case ${caseId} failed: ${error instanceof Error ? error.message : error}`);
+  const names = await notifyHandoff(user, caseId).catch(async (error) => {
+    await Case.update({ handoffMailedAt: null }, { where });
+    throw error;
+  });
+  if (!names) {
     await Case.update({ handoffMailedAt: null }, { where });
     return { notified: [], mailedAt: null, mailFailed: true };
   }
+  const mailedAt = new Date();
+  await Case.update({ handoffMailedAt: mailedAt, handoffMailedTo: names.join(", ") }, { where });
+  return { notified: names, mailedAt: mailedAt.toISOString(), mailFailed: false };
 }

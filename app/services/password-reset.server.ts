@@ -3,7 +3,7 @@ import { hashPassword } from "~/services/password.server";
 import { RESET_MINUTES, resetMail } from "~/lib/mail/reset";
 import { PasswordReset, sequelize, SessionRecord, User } from "./db.server";
 import { env } from "./env.server";
-import { sendMail } from "./mail.server";
+import { deliver } from "./mail.server";
 import { hashToken, newToken } from "./tokens.server";
 
 /** More links than this in an hour are not sent: nobody can use the form to flood a mailbox. */
@@ -33,16 +33,15 @@ export async function requestReset(email: string): Promise<void> {
   if (recent >= RESETS_PER_HOUR) return;
   const { token, hash } = newToken();
   await PasswordReset.create({ userId: user.id, tokenHash: hash, expiresAt: new Date(Date.now() + RESET_MINUTES * 60_000) });
-  try {
-    await sendMail({
+  // The page answers the same either way (it must not tell who has an account); a refused mail is only logged.
+  await deliver(
+    {
       companyId: user.companyId,
       to: [user.email],
       ...resetMail({ name: user.name, link: new URL(`/reset/${token}`, env().APP_URL).toString(), minutes: RESET_MINUTES }),
-    });
-  } catch (error) {
-    // The page answers the same either way (it must not tell who has an account); the log says it.
-    console.warn(`Password link mail to user ${user.id} failed: ${error instanceof Error ? error.message : error}`);
-  }
+    },
+    `Password link mail to user ${user.id}`,
+  );
 }
 
 const UNUSABLE = "This link has expired or has already been used. Ask for a new one from the sign-in page.";

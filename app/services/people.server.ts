@@ -5,7 +5,7 @@ import type { InviteInput, PersonAction } from "~/lib/people-schema";
 import { Company, Invite, sequelize, User } from "./db.server";
 import { env } from "./env.server";
 import { fail, notFound, type SessionUser } from "./guards.server";
-import { sendMail } from "./mail.server";
+import { deliver } from "./mail.server";
 import { endSessions } from "./session.server";
 import { hashToken, newToken } from "./tokens.server";
 
@@ -64,13 +64,8 @@ export async function invitePerson(user: SessionUser, input: InviteInput): Promi
     expiresAt,
     timeZone: user.timeZone,
   });
-  try {
-    await sendMail({ companyId: user.companyId, to: [input.email], ...mail });
-  } catch (error) {
-    console.warn(`Invitation mail to ${input.email} failed: ${error instanceof Error ? error.message : error}`);
-    return { ok: true, email: input.email, mailFailed: true };
-  }
-  return { ok: true, email: input.email, mailFailed: false };
+  const sent = await deliver({ companyId: user.companyId, to: [input.email], ...mail }, `Invitation mail to ${input.email}`);
+  return { ok: true, email: input.email, mailFailed: !sent };
 }
 
 /** Changes a role, or turns a sign-in off or on, for someone in the admin's company; never the admin's own. */

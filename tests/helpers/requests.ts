@@ -1,3 +1,4 @@
+import { RouterContextProvider } from "react-router";
 import { User } from "../../db/index";
 import { signInCookie } from "~/services/session.server";
 
@@ -59,4 +60,4 @@ async function describe(value: unknown): Promise<Outcome> {
 }
 
 /** The arguments React Router passes a loader or action, for calling one directly. */
-export const args = (request: Request, params: Record<string, string> = {}) => ({ request, params, context: {} }) as never;
+export const args = (request: Request, params: Record<string, string> = {}) => ({ request, params, context: new RouterContextProvider() }) as never;

@@ -6,14 +6,19 @@ import { action as boardAction } from "~/routes/board";
 import { action as closeAction } from "~/routes/api.cases.$id.close";
 import { action as startAction } from "~/routes/api.cases";
 import { action as forgotAction } from "~/routes/forgot";
+import { sendAllDigests } from "~/services/digest.server";
 import { resetDatabase } from "../helpers/db";
 import { args, requestAs, run } from "../helpers/requests";
 
 // The mail server refuses everything in this file: what people were doing must still be kept.
-vi.mock("~/services/mail.server", () => ({
-  sendMail: vi.fn(async () => {
-    throw new Error("connect ECONNREFUSED 127.0.0.1:25");
-  }),
+vi.mock("nodemailer", () => ({
+  default: {
+    createTransport: () => ({
+      sendMail: async () => {
+        throw new Error("connect ECONNREFUSED 127.0.0.1:25");
+      },
+    }),
+  },
 }));
 vi.spyOn(console, "warn").mockImplementation(() => {});
 
@@ -61,5 +66,11 @@ describe("with the mail server down", () => {
     const res = await run(async () => boardAction(args(await requestAs("june@cedarflats.example", "/board", { form: {} }))));
     expect(res.status).toBe(502);
     expect(res.data).toEqual({ sentTo: [], mailFailed: true });
+  });
+
+  it("the weekly digest run tries every company and reports each refusal", async () => {
+    const results = await sendAllDigests();
+    expect(results.length).toBeGreaterThan(1);
+    expect(results.every((r) => r.mailFailed && r.sentTo.length === 0)).toBe(true);
   });
 });
