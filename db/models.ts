@@ -1,7 +1,7 @@
 import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
 
 import type { Guide } from "../app/lib/guides/schema";
-import { ROLES, type Role } from "../app/lib/roles";
+import { ROLES, type Role } from "../app/lib/people/roles";
 import { ANSWERS, OUTCOMES, VERSION_STATUSES, type Answer, type Outcome, type VersionStatus } from "../app/lib/vocabulary";
 
 export { ROLES, type Role };

@@ -13,7 +13,7 @@ import { QueryTypes, type CreationAttributes } from "sequelize";
 import { Case, closeDb, Company, db, GuideRecord, GuideVersion, Rig, User } from "../db/index";
 import { startLocalMariadb } from "../db/local-mariadb";
 import { migrateUp } from "../db/migrate";
-import { changeCase, rebuildBoardRollups } from "../db/board-rollups";
+import { changeCase, rebuildBoardRollups } from "../app/services/board-rollups.server";
 import { loadLibrary } from "../app/lib/guides/files.server";
 import { importBuiltinGuides } from "../seeds/import-guides";
 import { seededRandom } from "../seeds/random";

@@ -5,7 +5,7 @@
  */
 import path from "node:path";
 import { performance } from "node:perf_hooks";
-import { rebuildBoardRollups } from "../db/board-rollups";
+import { rebuildBoardRollups } from "../app/services/board-rollups.server";
 import { closeDb, db as sequelize } from "../db/index";
 import { startLocalMariadb } from "../db/local-mariadb";
 import { migrateUp } from "../db/migrate";

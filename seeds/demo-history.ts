@@ -9,7 +9,7 @@ import type { CreationAttributes } from "sequelize";
 import { simplePaths, type GuidePath } from "../app/lib/guides/graph";
 import type { Guide } from "../app/lib/guides/schema";
 import { Case, CaseEvent, Company, db, GuideRecord, GuideVersion, Rig, User } from "../db/index";
-import { rebuildBoardRollups } from "../db/board-rollups";
+import { rebuildBoardRollups } from "../app/services/board-rollups.server";
 import { seededRandom } from "./random";
 
 const DAY = 86_400_000;

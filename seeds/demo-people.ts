@@ -1,4 +1,4 @@
-import type { Role } from "../app/lib/roles";
+import type { Role } from "../app/lib/people/roles";
 
 /** Every demo password; the demo is invented and these accounts exist only in demo data. */
 export const DEMO_PASSWORD = "field-demo-2026";

@@ -5,7 +5,7 @@
 import { db, Company, Rig, User } from "../db/index";
 import { hashPassword } from "../app/services/password.server";
 import type { z } from "zod";
-import { rigInputSchema } from "../app/lib/rig-schema";
+import { rigInputSchema } from "../app/lib/rigs/schema";
 import { DEMO_PASSWORD, DEMO_PEOPLE } from "./demo-people";
 
 const COMPANIES = [

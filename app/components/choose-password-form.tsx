@@ -1,7 +1,7 @@
 import { getFormProps, getInputProps, useForm, type SubmissionResult } from "@conform-to/react";
-import { parseForm } from "~/lib/form-parse";
+import { parseForm } from "~/lib/forms/parse";
 import { Form, useNavigation } from "react-router";
-import { changePasswordSchema, choosePasswordSchema, MIN_PASSWORD } from "~/lib/people-schema";
+import { changePasswordSchema, choosePasswordSchema, MIN_PASSWORD } from "~/lib/people/schema";
 import { FormField, inputClass } from "./form-field";
 
 /** A new password typed twice, checked by the same schema here and on the server (joining, resetting, changing). */

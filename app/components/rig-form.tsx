@@ -1,7 +1,7 @@
 import { getFormProps, getInputProps, getSelectProps, getTextareaProps, useForm, type SubmissionResult } from "@conform-to/react";
-import { parseForm } from "~/lib/form-parse";
+import { parseForm } from "~/lib/forms/parse";
 import { Form } from "react-router";
-import { rigInputSchema, type RigInput } from "~/lib/rig-schema";
+import { rigInputSchema, type RigInput } from "~/lib/rigs/schema";
 import { FormField, inputClass } from "./form-field";
 
 /** Add or edit a rig; the same zod schema checks it here and on the server. */

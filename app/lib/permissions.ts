@@ -1,4 +1,4 @@
-import { hasRole, ROLES, type Role } from "./roles";
+import { hasRole, ROLES, type Role } from "./people/roles";
 
 /**
  * Who may do what, in one place: each action with the lowest role that may do it (roles read

@@ -1,10 +1,10 @@
 import { getFormProps, getSelectProps, useForm } from "@conform-to/react";
-import { parseForm } from "~/lib/form-parse";
+import { parseForm } from "~/lib/forms/parse";
 import { data, Form } from "react-router";
 import { FormField, inputClass } from "~/components/form-field";
 import { DoneNote } from "~/components/ui/done-note";
 import { PageTitle } from "~/components/ui/page-title";
-import { companySettingsSchema } from "~/lib/company-schema";
+import { companySettingsSchema } from "~/lib/people/company-schema";
 import { companySettings, saveCompanySettings } from "~/services/company.server";
 import { requirePermission } from "~/services/guards.server";
 import { readForm } from "~/services/read-request.server";

@@ -1,14 +1,14 @@
 import { getFormProps, getInputProps, getSelectProps, useForm } from "@conform-to/react";
-import { parseForm } from "~/lib/form-parse";
+import { parseForm } from "~/lib/forms/parse";
 import { data, Form, useNavigation } from "react-router";
 import { FormField, inputClass } from "~/components/form-field";
 import { ConfirmAction } from "~/components/ui/confirm-action";
 import { DoneNote } from "~/components/ui/done-note";
 import { PageTitle } from "~/components/ui/page-title";
-import { toFieldErrors } from "~/lib/form-errors";
-import { inviteSchema, personActionSchema } from "~/lib/people-schema";
+import { toFieldErrors } from "~/lib/forms/errors";
+import { inviteSchema, personActionSchema } from "~/lib/people/schema";
 import { roleDescription } from "~/lib/permissions";
-import { ROLE_LABELS, ROLES } from "~/lib/roles";
+import { ROLE_LABELS, ROLES } from "~/lib/people/roles";
 import { requirePermission } from "~/services/guards.server";
 import { actOnPerson, invitePerson, listPeople } from "~/services/people.server";
 import { useTimes } from "~/components/use-time-zone";

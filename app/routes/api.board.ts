@@ -1,4 +1,4 @@
-import { boardQuerySchema } from "~/lib/board-query";
+import { boardQuerySchema } from "~/lib/stats/board-query";
 import { boardFor } from "~/services/board.server";
 import { requirePermission } from "~/services/guards.server";
 import { readQuery } from "~/services/read-request.server";

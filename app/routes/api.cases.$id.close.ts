@@ -1,4 +1,4 @@
-import { closeCaseSchema } from "~/lib/case-schema";
+import { closeCaseSchema } from "~/lib/cases/schema";
 import { closeCase } from "~/services/cases.server";
 import { requireUser } from "~/services/guards.server";
 import { readJson, requirePost } from "~/services/read-request.server";

@@ -1,4 +1,4 @@
-import { eventBatchSchema } from "~/lib/case-schema";
+import { eventBatchSchema } from "~/lib/cases/schema";
 import { storeEvents } from "~/services/cases.server";
 import { requireUser } from "~/services/guards.server";
 import { readJson, requirePost } from "~/services/read-request.server";

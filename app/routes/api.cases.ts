@@ -1,4 +1,4 @@
-import { startCaseSchema } from "~/lib/case-schema";
+import { startCaseSchema } from "~/lib/cases/schema";
 import { startCase } from "~/services/cases.server";
 import { requireUser } from "~/services/guards.server";
 import { readJson, requirePost } from "~/services/read-request.server";

@@ -1,8 +1,8 @@
 import { data, Form, Link, useNavigation } from "react-router";
 import { ParetoChart, TrendChart } from "~/components/board/charts";
 import { PageTitle } from "~/components/ui/page-title";
-import { boardQuerySchema, type BoardQuery } from "~/lib/board-query";
-import { fmt } from "~/lib/calc/units";
+import { boardQuerySchema, type BoardQuery } from "~/lib/stats/board-query";
+import { fmt } from "~/lib/field-math/units";
 import { shortLabel } from "~/lib/format";
 import { boardFor } from "~/services/board.server";
 import { sendDigest } from "~/services/digest.server";

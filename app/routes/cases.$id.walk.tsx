@@ -1,5 +1,5 @@
 import { useEffect, useState } from "react";
-import { CalcWidget } from "~/components/calc/calc-widget";
+import { FieldMathWidget } from "~/components/field-math/widget";
 import { WalkScreen } from "~/components/walk/walk-screen";
 import { stepsToEnd } from "~/lib/guides/graph";
 import { caseDetail } from "~/services/case-detail.server";
@@ -41,7 +41,7 @@ export default function Walk({ loaderData }: Route.ComponentProps) {
       serverEvents={d.events}
       closedAs={d.closedAs}
       offlineReady={offlineReady}
-      renderCalc={(calc) => <CalcWidget calc={calc} rig={d.rig} />}
+      renderFieldMath={(widget) => <FieldMathWidget widget={widget} rig={d.rig} />}
     />
   );
 }

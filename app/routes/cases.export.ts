@@ -1,4 +1,4 @@
-import { caseFiltersSchema } from "~/lib/case-filters";
+import { caseFiltersSchema } from "~/lib/cases/filters";
 import { toCsv } from "~/lib/csv";
 import { isoInZone } from "~/lib/format";
 import { outcomeLabel } from "~/lib/vocabulary";

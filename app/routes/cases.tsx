@@ -1,6 +1,6 @@
 import { Form, Link } from "react-router";
 import { PageTitle } from "~/components/ui/page-title";
-import { caseFiltersSchema, filtersToSearch, PAGE_SIZE, type CaseFilters } from "~/lib/case-filters";
+import { caseFiltersSchema, filtersToSearch, PAGE_SIZE, type CaseFilters } from "~/lib/cases/filters";
 import { formatDuration } from "~/lib/format";
 import { OUTCOME_LABELS, outcomeLabel } from "~/lib/vocabulary";
 import { caseFilterOptions, listCases } from "~/services/case-list.server";

@@ -2,7 +2,7 @@ import { data, Form, Link, redirect } from "react-router";
 import { z } from "zod";
 import { PageTitle } from "~/components/ui/page-title";
 import { RefusalNote } from "~/components/ui/refusal-note";
-import { fmt } from "~/lib/calc/units";
+import { fmt } from "~/lib/field-math/units";
 import { deskGuideVersions, learnFromCases, openDraft, reviewVersion, submitDraft } from "~/services/desk.server";
 import { fail, requirePermission, unlessRefused } from "~/services/guards.server";
 import { ADVISOR_MIN_CASES } from "~/lib/stats/check-order";

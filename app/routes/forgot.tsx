@@ -1,7 +1,7 @@
 import { data, Form, Link, useNavigation } from "react-router";
 import { EmailField } from "~/components/email-field";
 import { z } from "zod";
-import { emailAddress } from "~/lib/people-schema";
+import { emailAddress } from "~/lib/people/schema";
 import { RESET_MINUTES } from "~/lib/mail/reset";
 import { startResetRequest } from "~/services/password-reset.server";
 import { readForm } from "~/services/read-request.server";

@@ -1,7 +1,7 @@
 import { Link } from "react-router";
 import { PageTitle } from "~/components/ui/page-title";
 import { forEveryone, navFor } from "~/lib/navigation";
-import { ROLE_LABELS } from "~/lib/roles";
+import { ROLE_LABELS } from "~/lib/people/roles";
 import { hiddenSections } from "~/services/env.server";
 import { lastRigIdFor } from "~/services/cases.server";
 import { requireUser } from "~/services/guards.server";

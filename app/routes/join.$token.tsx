@@ -1,7 +1,7 @@
 import { data } from "react-router";
 import { ChoosePasswordForm } from "~/components/choose-password-form";
 import { LinkPage } from "~/components/link-page";
-import { ROLE_LABELS } from "~/lib/roles";
+import { ROLE_LABELS } from "~/lib/people/roles";
 import { setPasswordFromLink } from "~/services/password-link.server";
 import { acceptInvite, checkInvite } from "~/services/people.server";
 import type { Route } from "./+types/join.$token";

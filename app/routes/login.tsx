@@ -5,7 +5,7 @@ import { authenticator, SignInError } from "~/services/auth.server";
 import { env } from "~/services/env.server";
 import { currentUser } from "~/services/guards.server";
 import { landingFor } from "~/lib/navigation";
-import { safeRedirect } from "~/lib/safe-redirect";
+import { safeRedirect } from "~/lib/forms/safe-redirect";
 import { signInCookie } from "~/services/session.server";
 import { readForm } from "~/services/read-request.server";
 import type { Route } from "./+types/login";

@@ -1,9 +1,9 @@
-import { parseForm } from "~/lib/form-parse";
+import { parseForm } from "~/lib/forms/parse";
 import { data, redirect } from "react-router";
 import { RigForm } from "~/components/rig-form";
 import { PageTitle } from "~/components/ui/page-title";
-import { toFieldErrors } from "~/lib/form-errors";
-import { rigInputSchema } from "~/lib/rig-schema";
+import { toFieldErrors } from "~/lib/forms/errors";
+import { rigInputSchema } from "~/lib/rigs/schema";
 import { requirePermission } from "~/services/guards.server";
 import { findRig, updateRig } from "~/services/rigs.server";
 import { readForm } from "~/services/read-request.server";
@@ -13,7 +13,7 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
   const user = await requirePermission({ request, context }, "edit-rigs");
   const rig = await findRig(user, params.code);
   const { code, name, mount, tankGal, pumpKind, hasHourMeter, engineHours, hoseLengthFt, hoseDiameterIn, yardElevationFt, nozzleTips, torqueSpecs, notes } =
-    rig.get({ plain: true });
+    rig;
   return {
     rig: {
       code,

@@ -1,6 +1,6 @@
 import { Form, Link } from "react-router";
 import { PageTitle } from "~/components/ui/page-title";
-import { fmt, ftToM, galToL, inToMm } from "~/lib/calc/units";
+import { fmt, ftToM, galToL, inToMm } from "~/lib/field-math/units";
 import { outcomeLabel } from "~/lib/vocabulary";
 import { recentRigCases } from "~/services/cases.server";
 import { fail, requirePermission, requireUser } from "~/services/guards.server";
@@ -14,7 +14,7 @@ import type { Route } from "./+types/rigs.$code";
 export async function loader({ request, params, context }: Route.LoaderArgs) {
   const user = await requireUser({ request, context });
   const rig = await findRig(user, params.code);
-  return { rig: rig.get({ plain: true }), canEdit: can(user, "edit-rigs"), cases: await recentRigCases(user, rig.id) };
+  return { rig, canEdit: can(user, "edit-rigs"), cases: await recentRigCases(user, rig.id) };
 }
 
 export async function action({ request, params, context }: Route.ActionArgs) {

@@ -1,9 +1,9 @@
-import { parseForm } from "~/lib/form-parse";
+import { parseForm } from "~/lib/forms/parse";
 import { data, redirect } from "react-router";
 import { RigForm } from "~/components/rig-form";
 import { PageTitle } from "~/components/ui/page-title";
-import { toFieldErrors } from "~/lib/form-errors";
-import { rigInputSchema } from "~/lib/rig-schema";
+import { toFieldErrors } from "~/lib/forms/errors";
+import { rigInputSchema } from "~/lib/rigs/schema";
 import { requirePermission } from "~/services/guards.server";
 import { createRig } from "~/services/rigs.server";
 import { readForm } from "~/services/read-request.server";

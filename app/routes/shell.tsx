@@ -1,7 +1,7 @@
 import { Form, Link, NavLink, Outlet, useRouteLoaderData } from "react-router";
 import { ErrorPanel } from "~/components/error-panel";
 import { navFor } from "~/lib/navigation";
-import { ROLE_LABELS } from "~/lib/roles";
+import { ROLE_LABELS } from "~/lib/people/roles";
 import { hiddenSections } from "~/services/env.server";
 import { requireUser } from "~/services/guards.server";
 import type { Route } from "./+types/shell";

@@ -2,8 +2,8 @@ import { Authenticator } from "remix-auth";
 import { FormStrategy } from "remix-auth-form";
 import { z } from "zod";
 import { checkPassword, hashPassword } from "~/services/password.server";
-import { emailAddress, fitsBcrypt, TOO_LONG } from "~/lib/people-schema";
-import type { Role } from "~/lib/roles";
+import { emailAddress, fitsBcrypt, TOO_LONG } from "~/lib/people/schema";
+import type { Role } from "~/lib/people/roles";
 import { User } from "./db.server";
 import { checkSignInAllowed, recordSignInFailure, recordSignInSuccess } from "./throttle.server";
 

@@ -31,7 +31,7 @@ const inPeriods =
 
 /**
  * The board's aggregates for one company and window, read from the rollups kept as cases
- * open and close (db/board-rollups.ts), so the cost follows rigs, people and months rather
+ * open and close (board-rollups.server.ts), so the cost follows rigs, people and months rather
  * than the number of cases; the numbers are then finished by the pure stats module.
  * The window runs from midnight to midnight UTC.
  */

@@ -1,5 +1,6 @@
 import type { Guide } from "~/lib/guides/schema";
-import { rigSpecsOf, type RigSpecs } from "~/lib/rig-specs";
+import { ownedBy } from "./tenancy.server";
+import { rigSpecsOf, type RigSpecs } from "~/lib/rigs/specs";
 import type { Outcome } from "~/lib/vocabulary";
 import { Case, CaseEvent, CasePhoto, GuideRecord, GuideVersion, Rig, User } from "./db.server";
 import { notFound, type SessionUser } from "./guards.server";
@@ -7,7 +8,7 @@ import { notFound, type SessionUser } from "./guards.server";
 /** The company's case with the guide version it follows; another company's id is a 404. */
 export async function findCaseWithGuide(user: SessionUser, caseId: string) {
   const found = await Case.findOne({
-    where: { id: caseId, companyId: user.companyId },
+    where: ownedBy(user, { id: caseId }),
     include: [{ model: GuideVersion, as: "guideVersion", attributes: ["id", "number", "definition", "guideId"] }],
   });
   if (!found) notFound("That case");

@@ -1,5 +1,6 @@
 import { QueryTypes } from "sequelize";
-import { PAGE_SIZE, type CaseFilters } from "~/lib/case-filters";
+import { ownedBy, usableGuideSql } from "./tenancy.server";
+import { PAGE_SIZE, type CaseFilters } from "~/lib/cases/filters";
 import { startOfDayIn } from "~/lib/format";
 
 const nextDay = (day: string) => new Date(Date.parse(`${day}T00:00:00Z`) + 86_400_000).toISOString().slice(0, 10);
@@ -76,12 +77,12 @@ export async function listCases(user: SessionUser, f: CaseFilters, { limit = PAG
 /** What the filter menus offer: the company's rigs, people and the guides they can use. */
 export async function caseFilterOptions(user: SessionUser) {
   const [rigs, people, guides] = await Promise.all([
-    Rig.findAll({ where: { companyId: user.companyId }, attributes: ["code"], order: [["code", "ASC"]] }),
-    User.findAll({ where: { companyId: user.companyId }, attributes: ["id", "name"], order: [["name", "ASC"]] }),
-    sequelize.query<{ slug: string; title: string }>(
-      "SELECT DISTINCT g.slug, g.title FROM guides g WHERE g.company_id IS NULL OR g.company_id = :company ORDER BY g.title",
-      { replacements: { company: user.companyId }, type: QueryTypes.SELECT },
-    ),
+    Rig.findAll({ where: ownedBy(user), attributes: ["code"], order: [["code", "ASC"]] }),
+    User.findAll({ where: ownedBy(user), attributes: ["id", "name"], order: [["name", "ASC"]] }),
+    sequelize.query<{ slug: string; title: string }>(`SELECT DISTINCT g.slug, g.title FROM guides g WHERE ${usableGuideSql("g")} ORDER BY g.title`, {
+      replacements: { company: user.companyId },
+      type: QueryTypes.SELECT,
+    }),
   ]);
   return { rigs: rigs.map((r) => r.code), people: people.map((p) => ({ id: p.id, name: p.name })), guides };
 }

@@ -1,7 +1,8 @@
 import { randomUUID } from "node:crypto";
+import { ownedBy } from "./tenancy.server";
 import { Op, UniqueConstraintError } from "sequelize";
-import type { CaseEventInput, CloseCaseInput } from "~/lib/case-schema";
-import { answerFits } from "~/lib/guides/walk";
+import type { CaseEventInput, CloseCaseInput } from "~/lib/cases/schema";
+import { answerFits } from "~/lib/walk/replay";
 import { isFinalKind } from "~/lib/guides/schema";
 import { outcomeLabel } from "~/lib/vocabulary";
 import { findCaseWithGuide } from "./case-detail.server";
@@ -12,7 +13,7 @@ import { mailHandoffOnce, NO_MAIL } from "./handoff.server";
 
 /** Starts a case on one of the company's active rigs with the guide's newest published version. Resending the same id is harmless. */
 export async function startCase(user: SessionUser, input: { id?: string; rigCode: string; guideSlug: string }) {
-  const rig = await Rig.findOne({ where: { companyId: user.companyId, code: input.rigCode.toUpperCase(), retired: false }, attributes: ["id", "code"] });
+  const rig = await Rig.findOne({ where: ownedBy(user, { code: input.rigCode.toUpperCase(), retired: false }), attributes: ["id", "code"] });
   if (!rig) notFound(`Rig ${input.rigCode}`);
   const guide = (await usableGuides(user)).find((g) => g.slug === input.guideSlug);
   if (!guide) notFound(`Guide ${input.guideSlug}`);
@@ -153,7 +154,7 @@ export async function closeCase(user: SessionUser, caseId: string, input: CloseC
 /** A rig's latest cases, newest first, for its page. */
 export async function recentRigCases(user: SessionUser, rigId: number, limit = 10) {
   const rows = await Case.findAll({
-    where: { companyId: user.companyId, rigId },
+    where: ownedBy(user, { rigId }),
     attributes: ["id", "outcome", "openedAt", "closedAt", "causeCode"],
     include: [
       { model: GuideVersion, as: "guideVersion", attributes: ["number"], include: [{ model: GuideRecord, as: "guide", attributes: ["title"] }] },
@@ -180,7 +181,7 @@ export async function recentRigCases(user: SessionUser, rigId: number, limit = 1
 /** This person's walk-throughs still open on a rig from the last three days, newest first: "continue" beats a second case. */
 export async function openWalksOn(user: SessionUser, rigId: number) {
   const rows = await Case.findAll({
-    where: { companyId: user.companyId, rigId, openedBy: user.id, outcome: "open", openedAt: { [Op.gt]: new Date(Date.now() - 3 * 86_400_000) } },
+    where: ownedBy(user, { rigId, openedBy: user.id, outcome: "open", openedAt: { [Op.gt]: new Date(Date.now() - 3 * 86_400_000) } }),
     attributes: ["id", "openedAt"],
     include: [{ model: GuideVersion, as: "guideVersion", attributes: ["number"], include: [{ model: GuideRecord, as: "guide", attributes: ["title"] }] }],
     order: [["openedAt", "DESC"]],
@@ -195,7 +196,7 @@ export async function openWalksOn(user: SessionUser, rigId: number) {
 
 /** The rig this person last started a fix on, so it can be offered first. */
 export async function lastRigIdFor(user: SessionUser): Promise<number | null> {
-  const last = await Case.findOne({ where: { companyId: user.companyId, openedBy: user.id }, attributes: ["rigId"], order: [["openedAt", "DESC"]] });
+  const last = await Case.findOne({ where: ownedBy(user, { openedBy: user.id }), attributes: ["rigId"], order: [["openedAt", "DESC"]] });
   return last?.rigId ?? null;
 }
 

@@ -1,4 +1,4 @@
-import type { CompanySettings } from "~/lib/company-schema";
+import type { CompanySettings } from "~/lib/people/company-schema";
 import { Company } from "./db.server";
 import type { SessionUser } from "./guards.server";
 

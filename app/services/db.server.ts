@@ -3,7 +3,7 @@ import { data } from "react-router";
 import { db } from "../../db/index";
 
 export * from "../../db/models";
-export { changeCase, rebuildBoardRollups } from "../../db/board-rollups";
+export { changeCase, rebuildBoardRollups } from "./board-rollups.server";
 
 /** What every page and API answers while the database cannot be reached: 503 with a plain sentence and when to try again. */
 export const DATABASE_DOWN_RETRY_SECONDS = 30;

@@ -1,4 +1,5 @@
 import { createHash } from "node:crypto";
+import { replacedBuiltIns, usableBy } from "./tenancy.server";
 import { Op, QueryTypes } from "sequelize";
 import { compileGuide } from "~/lib/guides/compile";
 import { mainLine } from "~/lib/guides/main-line";
@@ -16,7 +17,7 @@ export const checkDefinition = (definition: unknown) => validateGuide(definition
 
 /** A guide the company may see on the desk: its own, or built-in. Another company's is a 404. */
 export async function deskGuide(user: SessionUser, guideId: number) {
-  const guide = await GuideRecord.findOne({ where: { id: guideId, [Op.or]: [{ companyId: null }, { companyId: user.companyId }] } });
+  const guide = await GuideRecord.findOne({ where: usableBy(user, { id: guideId }) });
   if (!guide) notFound("That guide");
   return guide;
 }
@@ -51,13 +52,12 @@ async function deskVersion(user: SessionUser, guideId: number, number: number) {
 /** The desk's list: built-in and company guides with their versions, newest first. */
 export async function deskList(user: SessionUser) {
   const guides = await GuideRecord.findAll({
-    where: { [Op.or]: [{ companyId: null }, { companyId: user.companyId }] },
+    where: usableBy(user),
     attributes: ["id", "companyId", "slug", "title", "publishedVersion", "basedOnGuideId"],
     include: [{ model: GuideVersion, as: "versions", attributes: ["number", "status", "updatedAt"] }],
     order: [["title", "ASC"]],
   });
-  // A built-in is replaced for this company's crews only once its copy is published.
-  const replaced = new Set(guides.filter((g) => g.companyId !== null && g.basedOnGuideId && g.publishedVersion).map((g) => g.basedOnGuideId));
+  const replaced = replacedBuiltIns(guides);
   return guides.map((g) => ({
     id: g.id,
     slug: g.slug,

@@ -1,6 +1,6 @@
 import { createContext, data, redirect, type RouterContextProvider } from "react-router";
 import { can, lowestRole, type Permission } from "~/lib/permissions";
-import type { Role } from "~/lib/roles";
+import type { Role } from "~/lib/people/roles";
 import { Company, User } from "./db.server";
 import { getSession } from "./session.server";
 

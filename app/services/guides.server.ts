@@ -1,4 +1,5 @@
 import { Op } from "sequelize";
+import { replacedBuiltIns, usableBy } from "./tenancy.server";
 import { loadCauses } from "~/lib/guides/files.server";
 import type { Cause } from "~/lib/guides/causes";
 import type { Guide } from "~/lib/guides/schema";
@@ -25,11 +26,11 @@ export interface UsableGuide {
  */
 export async function usableGuides(user: SessionUser): Promise<UsableGuide[]> {
   const records = await GuideRecord.findAll({
-    where: { [Op.or]: [{ companyId: null }, { companyId: user.companyId }], publishedVersion: { [Op.ne]: null } },
+    where: usableBy(user, { publishedVersion: { [Op.ne]: null } }),
     attributes: ["id", "companyId", "slug", "title", "publishedVersion", "basedOnGuideId"],
   });
-  const replaced = new Set(records.filter((r) => r.companyId !== null).flatMap((r) => [r.basedOnGuideId, r.slug]));
-  const chosen = records.filter((r) => r.companyId !== null || !(replaced.has(r.id) || replaced.has(r.slug)));
+  const replaced = replacedBuiltIns(records);
+  const chosen = records.filter((r) => !replaced.has(r.id));
   const versions = await GuideVersion.findAll({
     where: { [Op.or]: chosen.map((r) => ({ guideId: r.id, number: r.publishedVersion! })) },
     attributes: ["id", "guideId", "number", "definition"],

@@ -1,4 +1,5 @@
 import { handoffMail } from "~/lib/mail/handoff";
+import { ownedBy } from "./tenancy.server";
 import { caseDetail } from "./case-detail.server";
 import { Case } from "./db.server";
 import { env } from "./env.server";
@@ -41,7 +42,7 @@ async function notifyHandoff(user: SessionUser, caseId: string): Promise<string[
  * A failed send frees the slot, so the next resend of the close tries again.
  */
 export async function mailHandoffOnce(user: SessionUser, caseId: string): Promise<HandoffMailResult> {
-  const where = { id: caseId, companyId: user.companyId };
+  const where = ownedBy(user, { id: caseId });
   const [claimed] = await Case.update({ handoffMailedAt: new Date() }, { where: { ...where, handoffMailedAt: null } });
   if (!claimed) {
     const c = await Case.findOne({ where, attributes: ["handoffMailedAt", "handoffMailedTo"] });

@@ -1,7 +1,7 @@
 import { readForm } from "./read-request.server";
-import { parseForm } from "~/lib/form-parse";
+import { parseForm } from "~/lib/forms/parse";
 import { data, redirect } from "react-router";
-import { choosePasswordSchema } from "~/lib/people-schema";
+import { choosePasswordSchema } from "~/lib/people/schema";
 import { signInCookie } from "./session.server";
 
 type SpendLink = (password: string) => Promise<{ ok: true; userId: number } | { ok: false; message: string }>;

@@ -1,7 +1,8 @@
 import { Op, UniqueConstraintError } from "sequelize";
+import { ownedBy } from "./tenancy.server";
 import { inviteMail } from "~/lib/mail/invite";
 import { hashPassword } from "~/services/password.server";
-import type { InviteInput, PersonAction } from "~/lib/people-schema";
+import type { InviteInput, PersonAction } from "~/lib/people/schema";
 import { Company, Invite, sequelize, User } from "./db.server";
 import { env } from "./env.server";
 import { fail, notFound, type SessionUser } from "./guards.server";
@@ -15,7 +16,7 @@ export const INVITE_DAYS = 7;
 export async function listPeople(user: SessionUser) {
   const [people, invites] = await Promise.all([
     User.findAll({
-      where: { companyId: user.companyId },
+      where: ownedBy(user),
       attributes: ["id", "name", "email", "role", "accessRemovedAt", "createdAt"],
       order: [
         ["accessRemovedAt", "ASC"],
@@ -23,7 +24,7 @@ export async function listPeople(user: SessionUser) {
       ],
     }),
     Invite.findAll({
-      where: { companyId: user.companyId, acceptedAt: null },
+      where: ownedBy(user, { acceptedAt: null }),
       attributes: ["id", "name", "email", "role", "expiresAt", "createdAt"],
       order: [["createdAt", "DESC"]],
     }),
@@ -49,7 +50,7 @@ export async function invitePerson(user: SessionUser, input: InviteInput): Promi
   const { token, hash } = newToken();
   const expiresAt = new Date(Date.now() + INVITE_DAYS * 86_400_000);
   await sequelize.transaction(async (transaction) => {
-    await Invite.destroy({ where: { companyId: user.companyId, email: input.email, acceptedAt: null }, transaction });
+    await Invite.destroy({ where: ownedBy(user, { email: input.email, acceptedAt: null }), transaction });
     await Invite.create(
       { companyId: user.companyId, email: input.email, name: input.name, role: input.role, tokenHash: hash, invitedBy: user.id, expiresAt },
       { transaction },
@@ -71,12 +72,12 @@ export async function invitePerson(user: SessionUser, input: InviteInput): Promi
 /** Changes a role, or turns a sign-in off or on, for someone in the admin's company; never the admin's own. */
 export async function actOnPerson(user: SessionUser, action: PersonAction): Promise<string> {
   if (action.intent === "cancel-invite") {
-    const invite = await Invite.findOne({ where: { id: action.inviteId, companyId: user.companyId, acceptedAt: null } });
+    const invite = await Invite.findOne({ where: ownedBy(user, { id: action.inviteId, acceptedAt: null }) });
     if (!invite) notFound("That invitation");
     await invite.destroy();
     return `The invitation to ${invite.email} is cancelled; its link no longer works.`;
   }
-  const person = await User.findOne({ where: { id: action.personId, companyId: user.companyId } });
+  const person = await User.findOne({ where: ownedBy(user, { id: action.personId }) });
   if (!person) notFound("That person");
   // Admins cannot lock themselves out, so a company always keeps at least one admin.
   if (person.id === user.id) fail(409, "You cannot change your own role or sign-in. Ask another admin.");

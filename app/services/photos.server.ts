@@ -1,4 +1,5 @@
 import { randomUUID } from "node:crypto";
+import { ownedBy } from "./tenancy.server";
 import { fileTypeFromBuffer } from "file-type";
 import sharp from "sharp";
 import { Case, CasePhoto } from "./db.server";
@@ -9,7 +10,7 @@ export const MAX_PHOTO_BYTES = 10 * 1024 * 1024;
 const IMAGE_TYPES = new Set(["image/jpeg", "image/png", "image/webp", "image/heic", "image/heif", "image/avif"]);
 
 async function companyCase(user: SessionUser, caseId: string) {
-  const found = await Case.findOne({ where: { id: caseId, companyId: user.companyId }, attributes: ["id", "companyId"] });
+  const found = await Case.findOne({ where: ownedBy(user, { id: caseId }), attributes: ["id", "companyId"] });
   if (!found) notFound("That case");
   return found;
 }

@@ -1,5 +1,5 @@
 import type { z } from "zod";
-import { fieldErrors } from "~/lib/api";
+import { fieldErrors } from "~/lib/forms/errors";
 import { fail } from "./guards.server";
 
 /** Stops with 400 naming each bad field, in the one shape every page and API answers errors in. */

@@ -13,6 +13,7 @@ import * as m011 from "./011-session-epoch";
 import * as m012 from "./012-time-zone-and-handoff-record";
 import * as m013 from "./013-sessions";
 import * as m014 from "./014-throttling";
+import * as m015 from "./015-field-math-name";
 
 export interface Migration {
   name: string;
@@ -36,4 +37,5 @@ export const migrations: Migration[] = [
   { name: "012-time-zone-and-handoff-record", ...m012 },
   { name: "013-sessions", ...m013 },
   { name: "014-throttling", ...m014 },
+  { name: "015-field-math-name", ...m015 },
 ];

@@ -41,11 +41,11 @@ describe("every page at 360×640 passes axe with AAA contrast, has a title and o
       "/rigs/CF-07",
       "/rigs/CF-07/fix",
       "/rigs/CF-07/label",
-      "/tools",
-      "/tools/load",
-      "/tools/hose",
-      "/tools/suction",
-      "/tools/torque",
+      "/field-math",
+      "/field-math/load",
+      "/field-math/hose",
+      "/field-math/suction",
+      "/field-math/torque",
       "/account",
     ];
     expect(await checkPages(p, [...pages, `/cases/${started.id}/walk`, "/cases/00000000-0000-4000-8000-000000000000/walk"])).toEqual([]);

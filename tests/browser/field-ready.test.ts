@@ -137,7 +137,7 @@ describe("admin screens", () => {
 describe("details found on the way (360×640)", () => {
   it("shows a 1,500 lb/ac rate whole in the load sheet, and the QR code inside its frame", async () => {
     const p = await as("dana@cedarflats.example");
-    await p.goto(`${harness.app.url}/tools/load`);
+    await p.goto(`${harness.app.url}/field-math/load`);
     const rate = p.getByLabel("Rate").first();
     await expect.poll(() => rate.inputValue()).toBe("1500");
     expect(await rate.evaluate((el: HTMLInputElement) => el.scrollWidth <= el.clientWidth)).toBe(true);

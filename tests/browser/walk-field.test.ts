@@ -33,7 +33,7 @@ function pathTo(guide: Guide, target: string): [string, StepAnswer][] {
 /** How long a step is on screen: a calculator makes it longest, then its help and prompt. */
 const length = (guide: Guide, id: string) => {
   const m = guide.states[id].meta;
-  return (m.calc ? 10_000 : 0) + (m.help?.length ?? 0) + m.prompt.length;
+  return (m.fieldMath ? 10_000 : 0) + (m.help?.length ?? 0) + m.prompt.length;
 };
 
 async function startWalk(p: Page, guideSlug: string, rigCode = "CF-07"): Promise<string> {

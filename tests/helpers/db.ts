@@ -1,5 +1,5 @@
 import { db } from "../../db/index";
-import { rebuildBoardRollups } from "../../db/board-rollups";
+import { rebuildBoardRollups } from "~/services/board-rollups.server";
 import { migrateUp } from "../../db/migrate";
 import { seedAll } from "../../seeds/seed-all";
 

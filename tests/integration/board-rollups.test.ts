@@ -1,6 +1,6 @@
 import { randomUUID } from "node:crypto";
 import { beforeAll, describe, expect, it } from "vitest";
-import { changeCase } from "../../db/board-rollups";
+import { changeCase } from "~/services/board-rollups.server";
 import { Case, Company, db, GuideRecord, GuideVersion, Rig, User } from "../../db/index";
 import type { BoardAggregates } from "~/lib/stats/board";
 import { findRepeats, summariseChain } from "~/lib/stats/repeats";

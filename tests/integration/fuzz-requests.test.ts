@@ -157,7 +157,7 @@ beforeAll(async () => {
   await Case.create(
     caseRow({ id, companyId: rig.companyId, rigId: rig.id, guideVersionId: version.id, openedBy: null, openedAt: new Date(), outcome: "open" }),
   );
-  params = { id, code: "CF-07", guideId: String(guide.id), number: "1", token: "not-a-token", photoId: "1", kind: "hose", tool: "load", "*": "nothing" };
+  params = { id, code: "CF-07", guideId: String(guide.id), number: "1", token: "not-a-token", photoId: "1", kind: "hose", screen: "load", "*": "nothing" };
 });
 
 describe("hostile input at every action and API route", () => {

@@ -36,7 +36,7 @@ const EXPECTED: Record<string, Row> = {
   "GET /healthz": r(200, 200, 200, 200, 200),
   "GET /api/guides/search": r(401, 400, 400, 400, 400),
   "GET /api/board": r(401, 403, 403, 200, 200),
-  "POST /api/calc/:kind": r(401, 400, 400, 400, 400),
+  "POST /api/field-math/:kind": r(401, 400, 400, 400, 400),
   "POST /api/cases": r(401, 415, 415, 415, 415),
   "GET /api/cases/:id": r(401, 200, 200, 200, 200, 404),
   "POST /api/cases/:id/events": r(401, 415, 415, 415, 415),
@@ -81,8 +81,8 @@ const EXPECTED: Record<string, Row> = {
   "GET /desk/:guideId/v/:number": r(302, 403, 200, 200, 200, 404),
   "POST /desk/:guideId/v/:number": r(302, 403, 400, 400, 400),
   "GET /desk/:guideId/v/:number/preview": r(302, 403, 200, 200, 200, 404),
-  "GET /tools": r(302, 200, 200, 200, 200),
-  "GET /tools/:tool": r(302, 200, 200, 200, 200),
+  "GET /field-math": r(302, 200, 200, 200, 200),
+  "GET /field-math/:screen": r(302, 200, 200, 200, 200),
   "GET /*": r(302, 404, 404, 404, 404),
 };
 
@@ -108,7 +108,7 @@ beforeAll(async () => {
     "Blue Mesa own guide",
   );
   const builtIn = (await GuideVersion.findOne())!;
-  const shared = { number: "1", token: "not-a-token", photoId: "1", kind: "hose", tool: "load", "*": "nothing" };
+  const shared = { number: "1", token: "not-a-token", photoId: "1", kind: "hose", screen: "load", "*": "nothing" };
   own = { ...shared, id: await handoffOn("CF-07"), code: "CF-07", guideId: String(builtIn.guideId) };
   foreign = { ...shared, id: await handoffOn("BM-01"), code: "BM-01", guideId: String(bmGuide.guideId), number: String(bmGuide.number) };
 });

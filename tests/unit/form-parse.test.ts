@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { parseForm } from "~/lib/form-parse";
-import { rigInputSchema } from "~/lib/rig-schema";
+import { parseForm } from "~/lib/forms/parse";
+import { rigInputSchema } from "~/lib/rigs/schema";
 
 const form = (fields: Record<string, string>) => {
   const f = new FormData();

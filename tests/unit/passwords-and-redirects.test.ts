@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { choosePasswordSchema, fitsBcrypt } from "~/lib/people-schema";
-import { safeRedirect } from "~/lib/safe-redirect";
+import { choosePasswordSchema, fitsBcrypt } from "~/lib/people/schema";
+import { safeRedirect } from "~/lib/forms/safe-redirect";
 
 describe("passwords bcrypt would cut short", () => {
   it("counts UTF-8 bytes, not characters", () => {

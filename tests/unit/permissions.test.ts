@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { landingFor, NAV_ITEMS, navFor } from "~/lib/navigation";
 import { can, PERMISSIONS, roleDescription, type Permission } from "~/lib/permissions";
-import { ROLES } from "~/lib/roles";
+import { ROLES } from "~/lib/people/roles";
 
 describe("the permission map", () => {
   it("gives each role what the roles below it have, and more", () => {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { rigInputSchema } from "~/lib/rig-schema";
+import { rigInputSchema } from "~/lib/rigs/schema";
 
 const good = {
   code: " cf-21 ",

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { navFor } from "~/lib/navigation";
-import { hasRole, ROLES } from "~/lib/roles";
+import { hasRole, ROLES } from "~/lib/people/roles";
 
 describe("roles", () => {
   it("orders crew < trainer < supervisor < admin", () => {

@@ -1,11 +1,11 @@
 import { Markdown } from "~/components/ui/markdown";
-import { CALC_WIDGETS, STEP_KINDS, type StepKind } from "~/lib/guides/schema";
+import { FIELD_MATH_WIDGETS, STEP_KINDS, type StepKind } from "~/lib/guides/schema";
 import { ANSWERS_BY_KIND } from "~/lib/vocabulary";
 
 export interface LooseStep {
   type?: "final";
   on?: Record<string, string>;
-  meta: { kind: StepKind; prompt: string; help?: string; handsOn?: boolean; minutes?: number; calc?: string; cause?: string; component?: string };
+  meta: { kind: StepKind; prompt: string; help?: string; handsOn?: boolean; minutes?: number; fieldMath?: string; cause?: string; component?: string };
 }
 
 const NEW = "__new__";
@@ -96,9 +96,9 @@ export function StepForm({
       </div>
       <label className="block font-bold">
         Field-math widget
-        <select value={meta.calc ?? ""} onChange={(e) => set({ calc: e.target.value || undefined })} className={field}>
+        <select value={meta.fieldMath ?? ""} onChange={(e) => set({ fieldMath: e.target.value || undefined })} className={field}>
           <option value="">None</option>
-          {CALC_WIDGETS.map((c) => (
+          {FIELD_MATH_WIDGETS.map((c) => (
             <option key={c}>{c}</option>
           ))}
         </select>

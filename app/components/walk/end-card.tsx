@@ -1,7 +1,7 @@
 import { useState } from "react";
 import { Markdown } from "~/components/ui/markdown";
 import type { StepMeta } from "~/lib/guides/schema";
-import type { QueuedClose, WalkRecord } from "~/lib/walk-queue";
+import type { QueuedClose, WalkRecord } from "~/lib/walk/queue";
 import { useTimes } from "../use-time-zone";
 
 /** What the crew is told about the hand-off mail: what will happen until the server says what did. */

@@ -1,5 +1,5 @@
 import { useCallback, useEffect, useRef, useState } from "react";
-import { closePending, markSynced, unsynced, type WalkRecord } from "~/lib/walk-queue";
+import { closePending, markSynced, unsynced, type WalkRecord } from "~/lib/walk/queue";
 
 const RETRY_MS = 4000;
 

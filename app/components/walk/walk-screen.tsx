@@ -2,9 +2,9 @@ import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } fr
 import { Link } from "react-router";
 import { compileGuide } from "~/lib/guides/compile";
 import type { Guide } from "~/lib/guides/schema";
-import { replayWalk } from "~/lib/guides/walk";
+import { replayWalk } from "~/lib/walk/replay";
 import { outcomeLabel, type Outcome } from "~/lib/vocabulary";
-import { appendEvent, loadRecord, mergeServerEvents, saveRecord, type QueuedEvent, type WalkRecord } from "~/lib/walk-queue";
+import { appendEvent, loadRecord, mergeServerEvents, saveRecord, type QueuedEvent, type WalkRecord } from "~/lib/walk/queue";
 import { EndCard } from "./end-card";
 import { PhotoPicker } from "./photo-picker";
 import { StepCard } from "./step-card";
@@ -22,11 +22,11 @@ export interface WalkScreenProps {
   /** How the server has the case closed, or null while it is open. */
   closedAs: Outcome | null;
   offlineReady?: boolean;
-  renderCalc?: (calc: string) => React.ReactNode;
+  renderFieldMath?: (widget: string) => React.ReactNode;
 }
 
 /** The crew's walk-through: state lives on the phone, the server hears about it in batches. */
-export function WalkScreen({ caseId, guide, guideTitle, rig, stepsToEnd, causeNames, serverEvents, closedAs, offlineReady, renderCalc }: WalkScreenProps) {
+export function WalkScreen({ caseId, guide, guideTitle, rig, stepsToEnd, causeNames, serverEvents, closedAs, offlineReady, renderFieldMath }: WalkScreenProps) {
   const machine = useMemo(() => compileGuide(guide), [guide]);
   const [record, setRecord] = useState<WalkRecord>(() => mergeServerEvents({ caseId, events: [], synced: [] }, serverEvents));
   const [note, setNote] = useState("");
@@ -110,7 +110,7 @@ export function WalkScreen({ caseId, guide, guideTitle, rig, stepsToEnd, causeNa
             setNote("");
           }}
         >
-          {meta.calc && renderCalc ? renderCalc(meta.calc) : null}
+          {meta.fieldMath && renderFieldMath ? renderFieldMath(meta.fieldMath) : null}
           <PhotoPicker caseId={caseId} stepId={here} online={sync.online} />
         </StepCard>
       )}

@@ -6,7 +6,7 @@ export type StepKind = (typeof STEP_KINDS)[number];
 export const FINAL_KINDS: readonly StepKind[] = ["fixed", "handoff"];
 
 /** Field-math widgets a step may show (built by the field-math screens). */
-export const CALC_WIDGETS = ["hose-friction", "suction-head", "load-sheet", "torque"] as const;
+export const FIELD_MATH_WIDGETS = ["hose-friction", "suction-head", "load-sheet", "torque"] as const;
 
 export const COMPONENTS = ["pump", "suction", "sump", "agitator", "hose", "nozzle", "valve", "engine", "tank", "lubrication", "material", "operation"] as const;
 
@@ -18,7 +18,7 @@ export const stepMetaSchema = z.strictObject({
   help: z.string().max(4000).optional(),
   handsOn: z.boolean().optional(),
   minutes: z.number().min(0).max(240).optional(),
-  calc: z.enum(CALC_WIDGETS).optional(),
+  fieldMath: z.enum(FIELD_MATH_WIDGETS).optional(),
   cause: z.string().optional(),
   component: z.enum(COMPONENTS).optional(),
 });

@@ -1,4 +1,4 @@
-import { fmt } from "../calc/units";
+import { fmt } from "../field-math/units";
 import { formatDateTime, isoInZone } from "../format";
 import type { Board } from "../stats/board";
 

@@ -1,6 +1,6 @@
 import { formatDateTime } from "../format";
 import { roleDescription } from "../permissions";
-import { ROLE_LABELS, type Role } from "../roles";
+import { ROLE_LABELS, type Role } from "../people/roles";
 
 /** The invitation e-mail: who asked, what the role lets them do, the link and when it stops working. */
 export function inviteMail(f: { name: string; company: string; invitedBy: string; role: Role; link: string; expiresAt: Date; timeZone: string }): {

@@ -1,5 +1,5 @@
 import type { GuideMachine } from "../guides/compile";
-import { replayWalk } from "../guides/walk";
+import { replayWalk } from "../walk/replay";
 
 export interface FlowCase {
   outcome: string;

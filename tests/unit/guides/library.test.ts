@@ -33,8 +33,8 @@ describe("the shipped guide library", () => {
   });
 
   it("uses field-math widgets in at least three guides", () => {
-    const withCalc = library.filter((g) => Object.values(g.states).some((s) => s.meta.calc));
-    expect(withCalc.length).toBeGreaterThanOrEqual(3);
+    const withFieldMath = library.filter((g) => Object.values(g.states).some((s) => s.meta.fieldMath));
+    expect(withFieldMath.length).toBeGreaterThanOrEqual(3);
   });
 
   it.each(library.map((g) => [g.id, g] as [string, Guide]))("%s: every simple path ends in fixed or handoff, walked on the compiled machine", (_id, guide) => {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { compileGuide } from "~/lib/guides/compile";
-import { answerFits, replayWalk } from "~/lib/guides/walk";
+import { answerFits, replayWalk } from "~/lib/walk/replay";
 import { tinyGuide } from "../../helpers/guides";
 
 // tiny.json: look (check) —YES→ stop (safety) —ACK→ fix (task) —DONE→ done (fixed); NO / CANT → gone (handoff).

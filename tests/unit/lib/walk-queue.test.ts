@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { appendEvent, loadRecord, markSynced, mergeServerEvents, saveRecord, unsynced, type KeyValueStore } from "~/lib/walk-queue";
+import { appendEvent, loadRecord, markSynced, mergeServerEvents, saveRecord, unsynced, type KeyValueStore } from "~/lib/walk/queue";
 
 const memory = (): KeyValueStore & { data: Map<string, string> } => {
   const data = new Map<string, string>();

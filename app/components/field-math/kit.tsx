@@ -1,0 +1,71 @@
+import { FieldMathInputError } from "~/lib/field-math/validate";
+
+/** Runs a calculator on what the person typed: a result, or each bad field's message. */
+export function tryFieldMath<T>(fn: (input: unknown) => T, input: unknown): { result: T | null; errors: Record<string, string> } {
+  try {
+    return { result: fn(input), errors: {} };
+  } catch (error) {
+    if (error instanceof FieldMathInputError) return { result: null, errors: error.fields };
+    throw error;
+  }
+}
+
+/** "12" → 12, "" or "abc" → NaN (which the calculators reject by name). */
+export const toNumber = (s: string) => (s.trim() === "" ? Number.NaN : Number(s.replace(/,/g, "")));
+
+export function NumberField({
+  id,
+  label,
+  value,
+  onChange,
+  unit,
+  beside,
+  error,
+}: {
+  id: string;
+  label: string;
+  value: string;
+  onChange: (v: string) => void;
+  unit: string;
+  beside?: string;
+  error?: string;
+}) {
+  return (
+    <div>
+      <label htmlFor={id} className="block font-bold">
+        {label}
+      </label>
+      <div className="mt-1 flex items-center gap-2">
+        <input
+          id={id}
+          value={value}
+          onChange={(e) => onChange(e.target.value)}
+          inputMode="decimal"
+          aria-invalid={error ? true : undefined}
+          aria-describedby={error ? `${id}-error` : undefined}
+          className="block min-h-14 w-full min-w-0 rounded-md border-2 border-ink bg-paper px-3 text-lg aria-[invalid=true]:border-4 aria-[invalid=true]:border-stop"
+        />
+        <span className="min-w-10 shrink-0 text-base">{unit}</span>
+      </div>
+      {beside ? <p className="text-sm">{beside}</p> : null}
+      {error ? (
+        <p id={`${id}-error`} className="mt-1 font-bold text-stop">
+          {error}
+        </p>
+      ) : null}
+    </div>
+  );
+}
+
+export function ResultBox({ children, tone = "plain" }: { children: React.ReactNode; tone?: "plain" | "good" | "warn" | "bad" }) {
+  const tones = { plain: "border-ink", good: "border-go", warn: "border-ink bg-caution", bad: "border-stop" };
+  return (
+    <div role="status" aria-live="polite" className={`rounded-lg border-4 bg-paper p-4 ${tones[tone]}`}>
+      {children}
+    </div>
+  );
+}
+
+export function SourceNote({ children }: { children: React.ReactNode }) {
+  return <p className="mt-2 text-sm">{children}</p>;
+}

@@ -1,8 +1,0 @@
-import type { z } from "zod";
-
-/** `{ field: message }` from a zod error: the first message for each field, named by its path. */
-export function fieldErrors(error: z.ZodError): Record<string, string> {
-  const out: Record<string, string> = {};
-  for (const issue of error.issues) out[issue.path.join(".") || "body"] ??= issue.message;
-  return out;
-}

@@ -1,0 +1,35 @@
+import { z } from "zod";
+import { ANSWERS, CLOSE_OUTCOMES } from "../vocabulary";
+
+const uuid = z.string().uuid("must be a UUID");
+const isoTime = z.iso.datetime({ offset: true, message: "must be an ISO 8601 time, like 2026-06-01T14:05:00Z" });
+
+export const startCaseSchema = z.strictObject({
+  id: uuid.optional(),
+  rigCode: z.string({ error: "rigCode is required" }).trim().min(1, "rigCode is required").max(16),
+  guideSlug: z.string({ error: "guideSlug is required" }).trim().min(1, "guideSlug is required").max(80),
+});
+
+export const caseEventSchema = z.strictObject({
+  id: uuid,
+  seq: z.number({ error: "seq must be a number" }).int().min(1, "seq starts at 1").max(10_000),
+  stepId: z.string().min(1).max(80),
+  answer: z.enum(ANSWERS, { error: `answer must be one of ${ANSWERS.join(", ")}` }),
+  at: isoTime,
+  note: z.string().max(2000, "keep a note under 2,000 characters").optional(),
+});
+
+export const eventBatchSchema = z.strictObject({
+  events: z.array(caseEventSchema).min(1, "send at least one event").max(500, "send at most 500 events at once"),
+});
+
+export const closeCaseSchema = z.strictObject({
+  outcome: z.enum(CLOSE_OUTCOMES, { error: `outcome must be one of ${CLOSE_OUTCOMES.join(", ")}` }),
+  finalStep: z.string().min(1).max(80).optional(),
+  engineHours: z.number().min(0, "engine hours cannot be negative").max(100_000, "engine hours over 100,000 are not plausible").optional(),
+  note: z.string().max(2000).optional(),
+  at: isoTime.optional(),
+});
+
+export type CaseEventInput = z.infer<typeof caseEventSchema>;
+export type CloseCaseInput = z.infer<typeof closeCaseSchema>;

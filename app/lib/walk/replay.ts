@@ -1,0 +1,42 @@
+import { transition } from "xstate";
+import type { GuideMachine } from "../guides/compile";
+import { ANSWERS_BY_KIND } from "../vocabulary";
+import type { Guide } from "../guides/schema";
+
+export interface WalkAnswer {
+  seq: number;
+  stepId: string;
+  answer: string;
+}
+
+/** Does this answer belong to this step of this guide version? BACK fits any step. */
+export function answerFits(guide: Guide, stepId: string, answer: string): string | null {
+  const step = guide.states[stepId];
+  if (!step) return `step "${stepId}" is not in this guide version`;
+  if (answer === "BACK") return null;
+  const allowed: readonly string[] = ANSWERS_BY_KIND[step.meta.kind];
+  if (!allowed.includes(answer)) {
+    return allowed.length ? `a ${step.meta.kind} step takes ${allowed.join(" or ")}, not ${answer}` : `step "${stepId}" is an end and takes no answers`;
+  }
+  return null;
+}
+
+/**
+ * The steps a walk-through has visited, by replaying its answers in `seq` order on the
+ * guide's machine; BACK undoes the answer before it. The last step is where the crew is.
+ */
+export function replayWalk(machine: GuideMachine, answers: WalkAnswer[]): string[] {
+  const path = [String(machine.config.initial)];
+  for (const a of [...answers].sort((x, y) => x.seq - y.seq)) {
+    if (a.answer === "BACK") {
+      if (path.length > 1) path.pop();
+      continue;
+    }
+    const here = path[path.length - 1];
+    if (a.stepId !== here) continue; // an answer for another step (e.g. sent twice) moves nothing
+    const [next] = transition(machine, machine.resolveState({ value: here }), { type: a.answer });
+    const to = String(next.value);
+    if (to !== here) path.push(to);
+  }
+  return path;
+}

@@ -1,0 +1,59 @@
+import { Form, useSubmit } from "react-router";
+import { HoseMath } from "~/components/field-math/hose";
+import { LoadSheetMath } from "~/components/field-math/load-sheet";
+import { SuctionMath } from "~/components/field-math/suction";
+import { TorqueMath } from "~/components/field-math/torque";
+import { PageTitle } from "~/components/ui/page-title";
+import { fieldMathScreen } from "~/lib/field-math/screens";
+import { notFound, requireUser } from "~/services/guards.server";
+import { rigSpecsFor } from "~/services/rigs.server";
+import type { Route } from "./+types/field-math.$screen";
+
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const user = await requireUser({ request, context });
+  const screen = fieldMathScreen(params.screen);
+  if (!screen) notFound("That field-math screen");
+  const rigs = await rigSpecsFor(user);
+  const wanted = new URL(request.url).searchParams.get("rig")?.toUpperCase();
+  const rig = rigs.find((r) => r.code === wanted) ?? rigs[0] ?? null;
+  return { screen, rigs: rigs.map((r) => ({ code: r.code, name: r.name })), rig };
+}
+
+const SCREENS = { load: LoadSheetMath, hose: HoseMath, suction: SuctionMath, torque: TorqueMath };
+
+export default function FieldMathScreen({ loaderData }: Route.ComponentProps) {
+  const { screen, rigs, rig } = loaderData;
+  const submit = useSubmit();
+  const Screen = SCREENS[screen.id];
+  return (
+    <>
+      <PageTitle lead={screen.lead}>{screen.title}</PageTitle>
+      {rigs.length ? (
+        <Form method="get" className="no-print mb-4" onChange={(e) => submit(e.currentTarget)}>
+          <label htmlFor="rig" className="block font-bold">
+            Filled from rig
+          </label>
+          <select id="rig" name="rig" defaultValue={rig?.code} className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink bg-paper px-3 text-lg">
+            {rigs.map((r) => (
+              <option key={r.code} value={r.code}>
+                {r.code} · {r.name}
+              </option>
+            ))}
+          </select>
+          <noscript>
+            <button className="mt-2 min-h-12 rounded-md border-2 border-ink px-3 font-bold">Use this rig</button>
+          </noscript>
+        </Form>
+      ) : null}
+      {/* Re-mount on a new rig so every field starts from that rig's specs. */}
+      <Screen key={rig?.code ?? "none"} rig={rig ?? undefined} />
+      {screen.id === "load" ? (
+        <button type="button" onClick={() => window.print()} className="no-print mt-4 min-h-14 w-full rounded-md bg-go text-lg font-bold text-white">
+          Print the load sheet
+        </button>
+      ) : null}
+    </>
+  );
+}
+
+export const meta: Route.MetaFunction = ({ data }) => [{ title: `${data?.screen.title ?? "Field math"} · Tankside` }];

@@ -1,0 +1,30 @@
+import { Link } from "react-router";
+import { PageTitle } from "~/components/ui/page-title";
+import { FIELD_MATH_SCREENS } from "~/lib/field-math/screens";
+import { requireUser } from "~/services/guards.server";
+import type { Route } from "./+types/field-math";
+
+export async function loader({ request, context }: Route.LoaderArgs) {
+  await requireUser({ request, context });
+  return null;
+}
+
+export default function FieldMath() {
+  return (
+    <>
+      <PageTitle lead="Figures for the job and for a rig that is acting up. Water figures are a floor: slurry loses more.">Field math</PageTitle>
+      <ul className="grid gap-3 sm:grid-cols-2">
+        {FIELD_MATH_SCREENS.map((t) => (
+          <li key={t.id}>
+            <Link to={t.id} className="flex min-h-20 flex-col justify-center rounded-lg border-2 border-ink bg-paper px-4 py-3 text-ink no-underline">
+              <span className="text-xl font-bold">{t.title}</span>
+              <span>{t.lead}</span>
+            </Link>
+          </li>
+        ))}
+      </ul>
+    </>
+  );
+}
+
+export const meta: Route.MetaFunction = () => [{ title: "Field math · Tankside" }];
