@@ -1,8 +1,8 @@
-import { getFormProps, getInputProps, useForm, type SubmissionResult } from "@conform-to/react";
-import { parseForm } from "~/lib/forms/parse";
+import { getFormProps, getInputProps, type SubmissionResult } from "@conform-to/react";
+import { useCheckedForm } from "~/components/forms/use-checked-form";
 import { Form, useNavigation } from "react-router";
 import { changePasswordSchema, choosePasswordSchema, MIN_PASSWORD } from "~/lib/people/schema";
-import { FormField, inputClass } from "./form-field";
+import { FormField, inputClass } from "~/components/forms/form-field";
 
 /** A new password typed twice, checked by the same schema here and on the server (joining, resetting, changing). */
 export function ChoosePasswordForm({
@@ -16,12 +16,7 @@ export function ChoosePasswordForm({
   askCurrent?: boolean;
 }) {
   const busy = useNavigation().state !== "idle";
-  const [form, fields] = useForm<{ current?: string; password: string; confirm: string }>({
-    lastResult,
-    onValidate: ({ formData }) => parseForm(formData, askCurrent ? changePasswordSchema : choosePasswordSchema),
-    shouldValidate: "onSubmit",
-    shouldRevalidate: "onInput",
-  });
+  const [form, fields] = useCheckedForm((askCurrent ? changePasswordSchema : choosePasswordSchema) as typeof changePasswordSchema, { lastResult });
   return (
     <Form method="post" {...getFormProps(form)} className="mt-6 space-y-4 rounded-lg border-2 border-ink bg-paper p-5">
       {askCurrent ? (

@@ -1,4 +1,5 @@
 import { Link } from "react-router";
+import { ErrorList } from "~/components/ui/error-list";
 
 /** The page an e-mailed link opens, outside the app's menu: why it cannot be used, or what it is for. */
 export function LinkPage({
@@ -16,9 +17,9 @@ export function LinkPage({
     <main className="mx-auto max-w-md px-4 py-8">
       <h1 className="text-3xl font-bold">Tankside</h1>
       {message ? (
-        <p role="alert" className="mt-4 rounded-md border-2 border-stop bg-paper p-3 font-bold text-stop">
-          {message}
-        </p>
+        <div className="mt-4">
+          <ErrorList error={message} />
+        </div>
       ) : null}
       {usable && !message ? (
         children

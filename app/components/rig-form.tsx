@@ -1,8 +1,9 @@
-import { getFormProps, getInputProps, getSelectProps, getTextareaProps, useForm, type SubmissionResult } from "@conform-to/react";
-import { parseForm } from "~/lib/forms/parse";
+import { getFormProps, getInputProps, getSelectProps, getTextareaProps, type SubmissionResult } from "@conform-to/react";
+import { useCheckedForm } from "~/components/forms/use-checked-form";
+import { ErrorList } from "~/components/ui/error-list";
 import { Form } from "react-router";
 import { rigInputSchema, type RigInput } from "~/lib/rigs/schema";
-import { FormField, inputClass } from "./form-field";
+import { FormField, inputClass } from "~/components/forms/form-field";
 
 /** Add or edit a rig; the same zod schema checks it here and on the server. */
 export function RigForm({
@@ -14,13 +15,9 @@ export function RigForm({
   lastResult?: SubmissionResult<string[]> | null;
   submitLabel: string;
 }) {
-  const [form, fields] = useForm({
+  const [form, fields] = useCheckedForm(rigInputSchema, {
     lastResult,
     defaultValue: defaultValue ?? { mount: "truck", hasHourMeter: true, engineHours: 0, yardElevationFt: 0, nozzleTips: [], torqueSpecs: [] },
-    onValidate: ({ formData }) => parseForm(formData, rigInputSchema),
-    // Not on blur: a message appearing as focus leaves would move the Save button under the thumb.
-    shouldValidate: "onSubmit",
-    shouldRevalidate: "onInput",
   });
   const tips = fields.nozzleTips.getFieldList();
   const specs = fields.torqueSpecs.getFieldList();
@@ -28,11 +25,7 @@ export function RigForm({
 
   return (
     <Form method="post" {...getFormProps(form)} className="space-y-4 rounded-lg border-2 border-ink bg-paper p-4">
-      {form.errors?.length ? (
-        <p id={form.errorId} role="alert" className="font-bold text-stop">
-          {form.errors.join(" ")}
-        </p>
-      ) : null}
+      {form.errors?.length ? <ErrorList id={form.errorId} error={form.errors.join(" ")} /> : null}
       <FormField field={fields.code} label="Unit code" hint="Short and unique in your company, like CF-07.">
         <input {...getInputProps(fields.code, { type: "text" })} className={inputClass} autoCapitalize="characters" />
       </FormField>

@@ -1,7 +1,8 @@
-import { getFormProps, getSelectProps, useForm } from "@conform-to/react";
+import { getFormProps, getSelectProps } from "@conform-to/react";
 import { parseForm } from "~/lib/forms/parse";
+import { useCheckedForm } from "~/components/forms/use-checked-form";
 import { data, Form } from "react-router";
-import { FormField, inputClass } from "~/components/form-field";
+import { FormField, inputClass } from "~/components/forms/form-field";
 import { DoneNote } from "~/components/ui/done-note";
 import { PageTitle } from "~/components/ui/page-title";
 import { companySettingsSchema } from "~/lib/people/company-schema";
@@ -25,13 +26,7 @@ export async function action({ request, context }: Route.ActionArgs) {
 
 export default function CompanyPage({ loaderData, actionData }: Route.ComponentProps) {
   const { company, zones } = loaderData;
-  const [form, fields] = useForm({
-    lastResult: actionData?.result,
-    defaultValue: { timeZone: company.timeZone },
-    onValidate: ({ formData }) => parseForm(formData, companySettingsSchema),
-    shouldValidate: "onSubmit",
-    shouldRevalidate: "onInput",
-  });
+  const [form, fields] = useCheckedForm(companySettingsSchema, { lastResult: actionData?.result, defaultValue: { timeZone: company.timeZone } });
   return (
     <>
       <PageTitle lead={company.name}>Company settings</PageTitle>

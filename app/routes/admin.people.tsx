@@ -1,7 +1,8 @@
-import { getFormProps, getInputProps, getSelectProps, useForm } from "@conform-to/react";
+import { getFormProps, getInputProps, getSelectProps } from "@conform-to/react";
 import { parseForm } from "~/lib/forms/parse";
+import { useCheckedForm } from "~/components/forms/use-checked-form";
 import { data, Form, useNavigation } from "react-router";
-import { FormField, inputClass } from "~/components/form-field";
+import { FormField, inputClass } from "~/components/forms/form-field";
 import { ConfirmAction } from "~/components/ui/confirm-action";
 import { DoneNote } from "~/components/ui/done-note";
 import { PageTitle } from "~/components/ui/page-title";
@@ -49,13 +50,7 @@ const buttonClass = "min-h-12 rounded-md border-2 border-ink bg-paper px-4 font-
 export default function People({ loaderData, actionData }: Route.ComponentProps) {
   const times = useTimes();
   const busy = useNavigation().state !== "idle";
-  const [form, fields] = useForm({
-    lastResult: actionData?.invite,
-    defaultValue: { role: "crew" },
-    onValidate: ({ formData }) => parseForm(formData, inviteSchema),
-    shouldValidate: "onSubmit",
-    shouldRevalidate: "onInput",
-  });
+  const [form, fields] = useCheckedForm(inviteSchema, { lastResult: actionData?.invite, defaultValue: { role: "crew" } });
   const { people, invites } = loaderData;
 
   return (

@@ -1,4 +1,5 @@
 import { data, Form, Link, useNavigation } from "react-router";
+import { ErrorList } from "~/components/ui/error-list";
 import { ParetoChart, TrendChart } from "~/components/board/charts";
 import { PageTitle } from "~/components/ui/page-title";
 import { boardQuerySchema, type BoardQuery } from "~/lib/stats/board-query";
@@ -114,9 +115,9 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
       </section>
 
       {loaderData.formError ? (
-        <p role="alert" className="mt-4 rounded-md border-4 border-stop bg-paper p-3 font-bold text-stop">
-          {loaderData.formError} Showing the last 365 days instead.
-        </p>
+        <div className="mt-4">
+          <ErrorList error={`${loaderData.formError} Showing the last 365 days instead.`} />
+        </div>
       ) : null}
       <Form method="get" className="mt-4 grid grid-cols-2 gap-3 rounded-lg border-2 border-ink bg-paper p-3 sm:grid-cols-5">
         <label className="font-bold">

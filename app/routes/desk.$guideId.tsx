@@ -1,10 +1,14 @@
-import { data, Form, Link, redirect } from "react-router";
-import { z } from "zod";
+import { Form, Link, redirect } from "react-router";
+import { FormField, inputClass } from "~/components/forms/form-field";
+import { useCheckedForm } from "~/components/forms/use-checked-form";
+import { getFormProps, getInputProps } from "@conform-to/react";
+import { versionActionSchema } from "~/lib/guides/desk-forms";
+import { parseForm } from "~/lib/forms/parse";
 import { PageTitle } from "~/components/ui/page-title";
-import { RefusalNote } from "~/components/ui/refusal-note";
+import { ErrorList } from "~/components/ui/error-list";
 import { fmt } from "~/lib/field-math/units";
 import { deskGuideVersions, learnFromCases, openDraft, reviewVersion, submitDraft } from "~/services/desk.server";
-import { fail, requirePermission, unlessRefused } from "~/services/guards.server";
+import { answerRefusal, fail, refused, requirePermission, unlessRefused } from "~/services/guards.server";
 import { ADVISOR_MIN_CASES } from "~/lib/stats/check-order";
 import { ANSWERS, answerLabel, statusLabel, type Answer } from "~/lib/vocabulary";
 import { useTimes } from "~/components/use-time-zone";
@@ -29,61 +33,52 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
   };
 }
 
-const actionSchema = z.discriminatedUnion("intent", [
-  z.object({ intent: z.literal("edit") }),
-  z.object({
-    intent: z.literal("submit"),
-    number: z.coerce.number().int().positive(),
-    changeNote: z.string().trim().min(3, "Say what changed (at least 3 characters).").max(1000),
-  }),
-  z.object({ intent: z.literal("approve"), number: z.coerce.number().int().positive(), comment: z.string().trim().max(1000).optional() }),
-  z.object({
-    intent: z.literal("return"),
-    number: z.coerce.number().int().positive(),
-    comment: z.string().trim().min(3, "Say what needs changing.").max(1000),
-  }),
-]);
-
 export async function action({ request, params, context }: Route.ActionArgs) {
   const user = await requirePermission({ request, context }, "edit-guides");
   const guideId = guideIdOf(params);
-  const parsed = actionSchema.safeParse(Object.fromEntries(await readForm(request)));
-  if (!parsed.success) return data({ error: parsed.error.issues.map((i) => i.message).join(" "), problems: [] as string[], number: null }, { status: 400 });
-  const a = parsed.data;
+  const submission = parseForm(await readForm(request), versionActionSchema);
+  if (submission.status !== "success")
+    return refused(
+      400,
+      Object.values(submission.error ?? {})
+        .flat()
+        .join(" ") || "Check the form.",
+    );
+  const a = submission.value;
   if (a.intent === "edit") {
     const draft = await openDraft(user, guideId);
     return redirect(`/desk/${draft.guideId}/v/${draft.number}`);
   }
   if (a.intent === "submit") {
-    const refused = await unlessRefused(() => submitDraft(user, guideId, a.number, a.changeNote));
-    if (refused) return data({ error: refused.error, problems: Object.values(refused.fields), number: a.number }, { status: refused.status });
+    const r = await unlessRefused(() => submitDraft(user, guideId, a.number, a.changeNote));
+    if (r) return answerRefusal(r);
     return { done: `Version ${a.number} sent for review.` };
   }
   await requirePermission({ request, context }, "publish-guides");
-  const refused = await unlessRefused(() => reviewVersion(user, guideId, a.number, a.intent === "approve" ? "approve" : "return", a.comment ?? null));
-  if (refused) return data({ error: refused.error, problems: Object.values(refused.fields), number: null }, { status: refused.status });
+  const r = await unlessRefused(() => reviewVersion(user, guideId, a.number, a.intent === "approve" ? "approve" : "return", a.comment ?? null));
+  if (r) return answerRefusal(r);
   return { done: a.intent === "approve" ? `Version ${a.number} published: new cases use it.` : `Version ${a.number} sent back to draft.` };
 }
 
 export default function DeskGuide({ loaderData, actionData }: Route.ComponentProps) {
   const times = useTimes();
   const { guide, versions, canPublish, learning } = loaderData;
-  const input = "mt-1 block min-h-12 w-full rounded-md border-2 border-ink px-2";
+  const draft = guide.builtIn ? undefined : versions.find((v) => v.status === "draft");
   return (
     <>
       <PageTitle lead={guide.builtIn ? "Built-in guide: editing makes your company's own copy; the built-in stays as it is." : "Your company's guide."}>
         {guide.title}
       </PageTitle>
       {actionData && "error" in actionData ? (
-        <RefusalNote error={actionData.error} problems={actionData.problems}>
-          {actionData.number ? (
+        <ErrorList error={actionData.error} problems={actionData.problems}>
+          {actionData.problems.length && draft ? (
             <p className="mt-2">
-              <Link to={`v/${actionData.number}`} className="font-bold">
-                Open version {actionData.number} in the editor to fix them
+              <Link to={`v/${draft.number}`} className="font-bold">
+                Open version {draft.number} in the editor to fix them
               </Link>
             </p>
           ) : null}
-        </RefusalNote>
+        </ErrorList>
       ) : null}
       {actionData && "done" in actionData ? (
         <p role="status" className="mb-3 font-bold text-go">
@@ -113,35 +108,8 @@ export default function DeskGuide({ loaderData, actionData }: Route.ComponentPro
               </a>
               {versions[i + 1] ? <Link to={`diff?a=${versions[i + 1].number}&b=${v.number}`}>What changed from v{versions[i + 1].number}</Link> : null}
             </p>
-            {v.status === "draft" && !guide.builtIn ? (
-              <Form method="post" className="mt-2">
-                <input type="hidden" name="number" value={v.number} />
-                <label className="block font-bold">
-                  Change note for the reviewer
-                  <input name="changeNote" className={input} />
-                </label>
-                <button name="intent" value="submit" className="mt-2 min-h-12 rounded-md border-2 border-ink bg-paper px-4 font-bold">
-                  Send for review
-                </button>
-              </Form>
-            ) : null}
-            {v.status === "in_review" && canPublish ? (
-              <Form method="post" className="mt-2">
-                <input type="hidden" name="number" value={v.number} />
-                <label className="block font-bold">
-                  Comment
-                  <input name="comment" className={input} />
-                </label>
-                <div className="mt-2 flex flex-wrap gap-2">
-                  <button name="intent" value="approve" className="min-h-12 rounded-md bg-go px-4 font-bold text-white">
-                    Approve and publish
-                  </button>
-                  <button name="intent" value="return" className="min-h-12 rounded-md border-2 border-ink bg-paper px-4 font-bold">
-                    Send back to draft
-                  </button>
-                </div>
-              </Form>
-            ) : null}
+            {v.status === "draft" && !guide.builtIn ? <SubmitVersionForm number={v.number} /> : null}
+            {v.status === "in_review" && canPublish ? <ReviewVersionForm number={v.number} /> : null}
             {v.status === "in_review" && !canPublish ? <p className="mt-1">Waiting for a supervisor to review.</p> : null}
           </li>
         ))}
@@ -227,6 +195,41 @@ export default function DeskGuide({ loaderData, actionData }: Route.ComponentPro
         </>
       ) : null}
     </>
+  );
+}
+
+function SubmitVersionForm({ number }: { number: number }) {
+  const [form, fields] = useCheckedForm(versionActionSchema, { id: `submit-v${number}` });
+  return (
+    <Form method="post" {...getFormProps(form)} className="mt-2">
+      <input type="hidden" name="number" value={number} />
+      <FormField field={fields.changeNote} label="Change note for the reviewer">
+        <input {...getInputProps(fields.changeNote, { type: "text" })} className={inputClass} />
+      </FormField>
+      <button name="intent" value="submit" className="mt-2 min-h-12 rounded-md border-2 border-ink bg-paper px-4 font-bold">
+        Send for review
+      </button>
+    </Form>
+  );
+}
+
+function ReviewVersionForm({ number }: { number: number }) {
+  const [form, fields] = useCheckedForm(versionActionSchema, { id: `review-v${number}` });
+  return (
+    <Form method="post" {...getFormProps(form)} className="mt-2">
+      <input type="hidden" name="number" value={number} />
+      <FormField field={fields.comment} label="Comment" hint="Needed when you send it back: say what needs changing.">
+        <input {...getInputProps(fields.comment, { type: "text" })} className={inputClass} />
+      </FormField>
+      <div className="mt-2 flex flex-wrap gap-2">
+        <button name="intent" value="approve" className="min-h-12 rounded-md bg-go px-4 font-bold text-white">
+          Approve and publish
+        </button>
+        <button name="intent" value="return" className="min-h-12 rounded-md border-2 border-ink bg-paper px-4 font-bold">
+          Send back to draft
+        </button>
+      </div>
+    </Form>
   );
 }
 

@@ -1,4 +1,5 @@
 import { Link } from "react-router";
+import { ErrorList } from "~/components/ui/error-list";
 import { PreviewWalk } from "~/components/desk/preview-walk";
 import { PageTitle } from "~/components/ui/page-title";
 import { validateGuide } from "~/lib/guides/validate";
@@ -23,18 +24,7 @@ export default function Preview({ loaderData: d }: Route.ComponentProps) {
       <p className="mb-3">
         <Link to={`/desk/${d.guideId}/v/${d.number}`}>Back to the editor</Link>
       </p>
-      {d.guide ? (
-        <PreviewWalk guide={d.guide} />
-      ) : (
-        <div role="alert" className="rounded-md border-4 border-stop bg-paper p-3">
-          <p className="font-bold">Fix these first: a guide with problems cannot be walked.</p>
-          <ul className="mt-2 list-disc pl-6">
-            {d.problems.map((p, i) => (
-              <li key={i}>{p}</li>
-            ))}
-          </ul>
-        </div>
-      )}
+      {d.guide ? <PreviewWalk guide={d.guide} /> : <ErrorList error="Fix these first: a guide with problems cannot be walked." problems={d.problems} />}
     </>
   );
 }

@@ -1,14 +1,18 @@
 import { useEffect, useState } from "react";
-import { data, Form, Link, redirect } from "react-router";
-import { z } from "zod";
+import { FormField, inputClass } from "~/components/forms/form-field";
+import { useCheckedForm } from "~/components/forms/use-checked-form";
+import { getFormProps, getInputProps } from "@conform-to/react";
+import { submitDraftSchema } from "~/lib/guides/desk-forms";
+import { parseForm } from "~/lib/forms/parse";
+import { Form, Link, redirect } from "react-router";
 import { GuideEditor, type Draft } from "~/components/desk/guide-editor";
 import { ProblemsPanel } from "~/components/desk/problems-panel";
 import { TreeDrawing } from "~/components/desk/tree-drawing";
 import { PageTitle } from "~/components/ui/page-title";
-import { RefusalNote } from "~/components/ui/refusal-note";
+import { ErrorList } from "~/components/ui/error-list";
 import { checkDefinition, submitDraft, versionFor } from "~/services/desk.server";
 import { deskParams } from "~/services/desk-params.server";
-import { requirePermission, unlessRefused } from "~/services/guards.server";
+import { answerRefusal, refused, requirePermission, unlessRefused } from "~/services/guards.server";
 import { readForm } from "~/services/read-request.server";
 import { causeList } from "~/services/guides.server";
 import type { Route } from "./+types/desk.$guideId.v.$number";
@@ -20,19 +24,20 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
   return { ...v, editable: v.version.status === "draft" && !v.guide.builtIn, causes: causeList(), problems: checkDefinition(v.version.definition) };
 }
 
-const submitSchema = z.object({
-  intent: z.literal("submit", { error: "Say what to do: submit." }),
-  changeNote: z.string({ error: "Say what changed (at least 3 characters)." }).trim().min(3, "Say what changed (at least 3 characters).").max(1000),
-});
-
 /** Sending the draft for review from the editor: problems keep the trainer here, listed. */
 export async function action({ request, params, context }: Route.ActionArgs) {
   const user = await requirePermission({ request, context }, "edit-guides");
   const { guideId, number } = deskParams(params);
-  const parsed = submitSchema.safeParse(Object.fromEntries(await readForm(request)));
-  if (!parsed.success) return data({ error: parsed.error.issues.map((i) => i.message).join(" "), problems: [] as string[] }, { status: 400 });
-  const refused = await unlessRefused(() => submitDraft(user, guideId, number, parsed.data.changeNote));
-  if (refused) return data({ error: refused.error, problems: Object.values(refused.fields) }, { status: refused.status });
+  const submission = parseForm(await readForm(request), submitDraftSchema);
+  if (submission.status !== "success")
+    return refused(
+      400,
+      Object.values(submission.error ?? {})
+        .flat()
+        .join(" ") || "Check the form.",
+    );
+  const r = await unlessRefused(() => submitDraft(user, guideId, number, submission.value.changeNote));
+  if (r) return answerRefusal(r);
   return redirect(`/desk/${guideId}`);
 }
 
@@ -81,19 +86,19 @@ function SendForReview({ dirty, edits, result }: { dirty: boolean; edits: number
   const [editsAtResult, setEditsAtResult] = useState(edits);
   useEffect(() => setEditsAtResult(edits), [result]); // eslint-disable-line react-hooks/exhaustive-deps -- only when a new answer arrives
   const showResult = result && editsAtResult === edits;
+  const [form, fields] = useCheckedForm(submitDraftSchema, { id: "send-for-review" });
   return (
-    <Form method="post" className="mt-6 space-y-2 rounded-lg border-2 border-ink bg-paper p-3">
+    <Form method="post" {...getFormProps(form)} className="mt-6 space-y-2 rounded-lg border-2 border-ink bg-paper p-3">
       <h2 className="text-xl font-bold">Send for review</h2>
       {dirty ? (
         <p className="font-bold text-stop">Save the draft first: the saved draft is what goes to the reviewer.</p>
       ) : (
         <p>The saved draft goes to a supervisor, who publishes it or sends it back with a comment.</p>
       )}
-      {showResult ? <RefusalNote error={result.error} problems={result.problems} /> : null}
-      <label className="block font-bold">
-        Change note for the reviewer
-        <input name="changeNote" required minLength={3} maxLength={1000} className="mt-1 block min-h-12 w-full rounded-md border-2 border-ink px-2" />
-      </label>
+      {showResult ? <ErrorList error={result.error} problems={result.problems} /> : null}
+      <FormField field={fields.changeNote} label="Change note for the reviewer">
+        <input {...getInputProps(fields.changeNote, { type: "text" })} className={inputClass} />
+      </FormField>
       <button name="intent" value="submit" disabled={dirty} className="min-h-12 rounded-md border-2 border-ink bg-paper px-4 font-bold disabled:opacity-60">
         Send for review
       </button>

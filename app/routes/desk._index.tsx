@@ -1,8 +1,14 @@
-import { data, Form, Link, redirect } from "react-router";
+import { Form, Link, redirect } from "react-router";
+import { FormField, inputClass } from "~/components/forms/form-field";
+import { useCheckedForm } from "~/components/forms/use-checked-form";
+import { getFormProps, getInputProps } from "@conform-to/react";
+import { newGuideSchema } from "~/lib/guides/desk-forms";
+import { parseForm } from "~/lib/forms/parse";
+import { ErrorList } from "~/components/ui/error-list";
 import { PageTitle } from "~/components/ui/page-title";
 import { statusLabel } from "~/lib/vocabulary";
 import { createGuide, deskList, importGuide } from "~/services/desk.server";
-import { requirePermission } from "~/services/guards.server";
+import { answerRefusal, refusal, refused, requirePermission } from "~/services/guards.server";
 import { readForm } from "~/services/read-request.server";
 import type { Route } from "./+types/desk._index";
 
@@ -19,31 +25,25 @@ export async function action({ request, context }: Route.ActionArgs) {
   const intent = form.get("intent");
   try {
     if (intent === "new") {
-      const title = String(form.get("title") ?? "").trim();
-      if (title.length < 3 || title.length > 120)
-        return data({ error: "Give the new guide a title of 3 to 120 characters.", problems: [] as string[] }, { status: 400 });
-      const { guideId, number } = await createGuide(user, title);
+      const submission = parseForm(form, newGuideSchema);
+      if (submission.status !== "success") return refused(400, submission.error?.title?.[0] ?? "Give the new guide a title of 3 to 120 characters.");
+      const { guideId, number } = await createGuide(user, submission.value.title);
       return redirect(`/desk/${guideId}/v/${number}`);
     }
     if (intent === "import") {
       const file = form.get("file");
-      if (!(file instanceof File) || file.size === 0)
-        return data({ error: "Choose a guide file (.json) to import.", problems: [] as string[] }, { status: 400 });
-      if (file.size > MAX_IMPORT_BYTES) return data({ error: "That file is too large for a guide (over 200 kB).", problems: [] as string[] }, { status: 413 });
+      if (!(file instanceof File) || file.size === 0) return refused(400, "Choose a guide file (.json) to import.");
+      if (file.size > MAX_IMPORT_BYTES) return refused(413, "That file is too large for a guide (over 200 kB).");
       const { guideId, number } = await importGuide(user, await file.text());
       return redirect(`/desk/${guideId}/v/${number}`);
     }
   } catch (thrown) {
     // A refused import lists every problem; the desk stays as it was.
-    const body = (thrown as { data?: { error?: string; fields?: Record<string, string> } }).data;
-    if (body?.error)
-      return data(
-        { error: body.error, problems: Object.values(body.fields ?? {}) },
-        { status: (thrown as { init?: { status?: number } }).init?.status ?? 400 },
-      );
+    const r = refusal(thrown);
+    if (r) return answerRefusal(r);
     throw thrown;
   }
-  return data({ error: "Unknown action.", problems: [] as string[] }, { status: 400 });
+  return refused(400, "Say what to do: new or import.");
 }
 
 export default function Desk({ loaderData, actionData }: Route.ComponentProps) {
@@ -65,27 +65,9 @@ export default function Desk({ loaderData, actionData }: Route.ComponentProps) {
   return (
     <>
       <PageTitle lead="Write, review and publish the guides your crews follow.">Guide desk</PageTitle>
-      {actionData?.error ? (
-        <div role="alert" className="mb-4 rounded-md border-4 border-stop bg-paper p-3">
-          <p className="font-bold text-stop">{actionData.error}</p>
-          {actionData.problems.length ? (
-            <ul className="mt-2 list-disc pl-6">
-              {actionData.problems.map((p, i) => (
-                <li key={i}>{p}</li>
-              ))}
-            </ul>
-          ) : null}
-        </div>
-      ) : null}
+      {actionData?.error ? <ErrorList error={actionData.error} problems={actionData.problems} /> : null}
       <div className="grid gap-3 sm:grid-cols-2">
-        <Form method="post" className="rounded-lg border-2 border-ink bg-paper p-3">
-          <input type="hidden" name="intent" value="new" />
-          <label className="block font-bold">
-            Write a new guide
-            <input name="title" placeholder="e.g. Hopper gate sticks" className="mt-1 block min-h-12 w-full rounded-md border-2 border-ink px-2" />
-          </label>
-          <button className="mt-2 min-h-12 w-full rounded-md bg-go font-bold text-white">Start a draft</button>
-        </Form>
+        <NewGuideForm />
         <Form method="post" encType="multipart/form-data" className="rounded-lg border-2 border-ink bg-paper p-3">
           <input type="hidden" name="intent" value="import" />
           <label className="block font-bold">
@@ -100,6 +82,19 @@ export default function Desk({ loaderData, actionData }: Route.ComponentProps) {
       <h2 className="mt-6 text-xl font-bold">Built-in library</h2>
       <ul className="mt-2 space-y-2">{builtIn.map(row)}</ul>
     </>
+  );
+}
+
+function NewGuideForm() {
+  const [form, fields] = useCheckedForm(newGuideSchema, { id: "new-guide" });
+  return (
+    <Form method="post" {...getFormProps(form)} className="rounded-lg border-2 border-ink bg-paper p-3">
+      <input type="hidden" name="intent" value="new" />
+      <FormField field={fields.title} label="Write a new guide">
+        <input {...getInputProps(fields.title, { type: "text" })} placeholder="e.g. Hopper gate sticks" className={inputClass} />
+      </FormField>
+      <button className="mt-2 min-h-12 w-full rounded-md bg-go font-bold text-white">Start a draft</button>
+    </Form>
   );
 }
 

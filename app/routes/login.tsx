@@ -1,6 +1,11 @@
 import { data, Form, Link, redirect, useNavigation } from "react-router";
+import { FormField, inputClass } from "~/components/forms/form-field";
+import { useCheckedForm } from "~/components/forms/use-checked-form";
+import { signInSchema } from "~/lib/people/schema";
+import { getFormProps, getInputProps } from "@conform-to/react";
+import { ErrorList } from "~/components/ui/error-list";
 import { DEMO_PASSWORD, DEMO_PEOPLE } from "../../seeds/demo-people";
-import { EmailField } from "~/components/email-field";
+import { EmailField } from "~/components/forms/email-field";
 import { authenticator, SignInError } from "~/services/auth.server";
 import { env } from "~/services/env.server";
 import { currentUser } from "~/services/guards.server";
@@ -42,38 +47,28 @@ export async function action({ request }: Route.ActionArgs) {
 
 export default function Login({ loaderData, actionData }: Route.ComponentProps) {
   const busy = useNavigation().state !== "idle";
-  const fields = actionData?.fields ?? {};
+  // The server's answer (wrong password, throttled) is shown above the fields; its field messages beside them.
+  const serverFields = actionData?.fields ?? {};
+  const [form, fields] = useCheckedForm(signInSchema, {
+    lastResult: actionData
+      ? {
+          status: "error",
+          initialValue: { email: actionData.email },
+          error: Object.fromEntries(Object.entries(serverFields).map(([k, v]) => [k, v ? [v] : []])),
+        }
+      : null,
+  });
   return (
     <main className="mx-auto max-w-md px-4 py-8">
       <h1 className="text-3xl font-bold">Tankside</h1>
       <p className="mt-1 text-lg">Sign in to troubleshoot your rigs.</p>
-      <Form method="post" className="mt-6 space-y-4 rounded-lg border-2 border-ink bg-paper p-5" noValidate>
+      <Form method="post" {...getFormProps(form)} className="mt-6 space-y-4 rounded-lg border-2 border-ink bg-paper p-5">
         <input type="hidden" name="redirectTo" value={loaderData.redirectTo} />
-        {actionData?.error ? (
-          <p role="alert" className="rounded-md border-2 border-stop bg-paper p-3 font-bold text-stop">
-            {actionData.error}
-          </p>
-        ) : null}
-        <EmailField error={fields.email} defaultValue={actionData?.email} />
-        <div>
-          <label htmlFor="password" className="block font-bold">
-            Password
-          </label>
-          <input
-            id="password"
-            name="password"
-            type="password"
-            autoComplete="current-password"
-            aria-invalid={fields.password ? true : undefined}
-            aria-describedby={fields.password ? "password-error" : undefined}
-            className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink px-3 text-lg"
-          />
-          {fields.password ? (
-            <p id="password-error" className="mt-1 font-bold text-stop">
-              {fields.password}
-            </p>
-          ) : null}
-        </div>
+        {actionData?.error ? <ErrorList error={actionData.error} /> : null}
+        <EmailField field={fields.email} />
+        <FormField field={fields.password} label="Password">
+          <input {...getInputProps(fields.password, { type: "password" })} autoComplete="current-password" className={inputClass} />
+        </FormField>
         <button type="submit" disabled={busy} className="min-h-14 w-full rounded-md bg-go text-lg font-bold text-white">
           {busy ? "Signing in…" : "Sign in"}
         </button>

@@ -1,8 +1,7 @@
 import { Authenticator } from "remix-auth";
 import { FormStrategy } from "remix-auth-form";
-import { z } from "zod";
 import { checkPassword, hashPassword } from "~/services/password.server";
-import { emailAddress, fitsBcrypt, TOO_LONG } from "~/lib/people/schema";
+import { signInSchema } from "~/lib/people/schema";
 import type { Role } from "~/lib/people/roles";
 import { User } from "./db.server";
 import { checkSignInAllowed, recordSignInFailure, recordSignInSuccess } from "./throttle.server";
@@ -23,13 +22,8 @@ const WRONG = "That e-mail and password do not match an account. Check both and 
 // Compared against when no account matches, so timing does not tell which part was wrong.
 let dummyHash: Promise<string> | undefined;
 
-const credentials = z.object({
-  email: emailAddress("your"),
-  password: z.string().min(1, "Enter your password.").refine(fitsBcrypt, TOO_LONG),
-});
-
 async function verify(form: FormData, request: Request): Promise<SignedIn> {
-  const parsed = credentials.safeParse({ email: form.get("email") ?? "", password: form.get("password") ?? "" });
+  const parsed = signInSchema.safeParse({ email: form.get("email") ?? "", password: form.get("password") ?? "" });
   if (!parsed.success) {
     // The first problem per field is the one worth saying.
     const fields: Record<string, string> = {};

@@ -77,6 +77,17 @@ export function notFound(what = "That record"): never {
   fail(404, `${what} was not found.`);
 }
 
+/**
+ * The one answer a page action gives when it refuses and the page stays: `{ error, problems }` with its
+ * status (the same words `fail` would throw, shown in place by ErrorList). Pass a zod error or a refusal.
+ */
+export function refused(status: number, error: string, problems: string[] = []) {
+  return data({ error, problems }, { status });
+}
+
+/** `refused` for what `unlessRefused` caught. */
+export const answerRefusal = (r: { status: number; error: string; fields: Record<string, string> }) => refused(r.status, r.error, Object.values(r.fields));
+
 /** What `fail` threw, read back, so a page can show a refusal in place instead of an error page; null for anything else. */
 export function refusal(thrown: unknown): { status: number; error: string; fields: Record<string, string> } | null {
   if (!thrown || typeof thrown !== "object" || (thrown as { type?: string }).type !== "DataWithResponseInit") return null;

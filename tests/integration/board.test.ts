@@ -1,3 +1,4 @@
+import { RouterContextProvider } from "react-router";
 import { randomUUID } from "node:crypto";
 import { beforeAll, describe, expect, it } from "vitest";
 import { Case, Company, GuideVersion, Rig, User } from "../../db/index";
@@ -145,8 +146,15 @@ describe("GET /api/board", () => {
       ["ravi@cedarflats.example", 403],
     ] as const) {
       expect(
-        (await run(async () => boardApi({ request: await requestAs(email, "/api/board?from=2026-04-01&to=2026-10-01"), params: {}, context: {} } as never)))
-          .status,
+        (
+          await run(async () =>
+            boardApi({
+              request: await requestAs(email, "/api/board?from=2026-04-01&to=2026-10-01"),
+              params: {},
+              context: new RouterContextProvider(),
+            } as never),
+          )
+        ).status,
         email,
       ).toBe(status);
     }
@@ -154,17 +162,29 @@ describe("GET /api/board", () => {
 
   it("shows each company only its own rigs, filters by rig, and names a bad window", async () => {
     const res = await run(async () =>
-      boardApi({ request: await requestAs("li@bluemesa.example", "/api/board?from=2026-04-01&to=2026-10-01"), params: {}, context: {} } as never),
+      boardApi({
+        request: await requestAs("li@bluemesa.example", "/api/board?from=2026-04-01&to=2026-10-01"),
+        params: {},
+        context: new RouterContextProvider(),
+      } as never),
     );
     expect(res.data.rigs.map((r: { rigCode: string }) => r.rigCode)).toEqual(["BM-01", "BM-02"]);
     expect(res.data.fleet.cases).toBe(3);
     const one = await run(async () =>
-      boardApi({ request: await requestAs("mo@cedarflats.example", "/api/board?from=2026-04-01&to=2026-10-01&rig=cf-07"), params: {}, context: {} } as never),
+      boardApi({
+        request: await requestAs("mo@cedarflats.example", "/api/board?from=2026-04-01&to=2026-10-01&rig=cf-07"),
+        params: {},
+        context: new RouterContextProvider(),
+      } as never),
     );
     expect(one.data.rigs.map((r: { rigCode: string }) => r.rigCode)).toEqual(["CF-07"]);
     expect(one.data.pareto.map((p: { cause: string }) => p.cause)).toEqual(["low-engine-speed"]);
     const bad = await run(async () =>
-      boardApi({ request: await requestAs("mo@cedarflats.example", "/api/board?from=2026-13-01&repeatDays=0"), params: {}, context: {} } as never),
+      boardApi({
+        request: await requestAs("mo@cedarflats.example", "/api/board?from=2026-13-01&repeatDays=0"),
+        params: {},
+        context: new RouterContextProvider(),
+      } as never),
     );
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.data.fields).sort()).toEqual(["from", "repeatDays"]);

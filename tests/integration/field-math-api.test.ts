@@ -1,3 +1,4 @@
+import { RouterContextProvider } from "react-router";
 import { beforeAll, describe, expect, it } from "vitest";
 import { action } from "~/routes/api.field-math.$kind";
 import { resetDatabase } from "../helpers/db";
@@ -12,7 +13,7 @@ const call = (kind: string, body: unknown, email: string | null = "dana@cedarfla
         headers: { "Content-Type": "application/json" },
       }),
       params: { kind },
-      context: {},
+      context: new RouterContextProvider(),
     } as never),
   );
 

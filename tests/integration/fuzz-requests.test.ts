@@ -1,3 +1,4 @@
+import { RouterContextProvider } from "react-router";
 import { randomUUID } from "node:crypto";
 import { beforeAll, describe, expect, it } from "vitest";
 import { Case, db, GuideRecord, GuideVersion, Rig } from "../../db/index";
@@ -187,7 +188,7 @@ describe("hostile input at every action and API route", () => {
       });
       let status: number;
       try {
-        const out = await r.run({ request, params: Object.fromEntries(Object.keys(params).map((k) => [k, params[k]])), context: {} });
+        const out = await r.run({ request, params: Object.fromEntries(Object.keys(params).map((k) => [k, params[k]])), context: new RouterContextProvider() });
         status = out instanceof Response ? out.status : ((out as { init?: { status?: number } } | undefined)?.init?.status ?? 200);
       } catch (thrown) {
         status =

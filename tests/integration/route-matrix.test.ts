@@ -1,3 +1,4 @@
+import { RouterContextProvider } from "react-router";
 import { randomUUID } from "node:crypto";
 import { beforeAll, describe, expect, it } from "vitest";
 import { Case, Company, GuideVersion, Rig, User } from "../../db/index";
@@ -153,7 +154,7 @@ describe("who may do what, for every route in app/routes.ts", () => {
           const headers: Record<string, string> = cookie ? { Cookie: cookie } : {};
           const init: RequestInit =
             method === "POST" ? { method, headers: { ...headers, "Content-Type": "application/x-www-form-urlencoded" }, body: "" } : { headers };
-          return (await run(async () => fn({ request: new Request(url, init), params, context: {} }))).status;
+          return (await run(async () => fn({ request: new Request(url, init), params, context: new RouterContextProvider() }))).status;
         };
         const answers: Partial<Row> = { out: await ask(null, own) };
         for (const role of Object.keys(PEOPLE) as (keyof typeof PEOPLE)[]) answers[role] = await ask(PEOPLE[role], own);

@@ -1,4 +1,5 @@
 import { useState } from "react";
+import { ErrorList } from "~/components/ui/error-list";
 import { Markdown } from "~/components/ui/markdown";
 import type { StepMeta } from "~/lib/guides/schema";
 import type { QueuedClose, WalkRecord } from "~/lib/walk/queue";
@@ -92,11 +93,7 @@ export function EndCard({
               className="mt-1 block w-full rounded-md border-2 border-ink p-2 text-lg font-normal"
             />
           </label>
-          {error ? (
-            <p role="alert" className="font-bold text-stop">
-              {error}
-            </p>
-          ) : null}
+          {error ? <ErrorList error={error} /> : null}
           <button type="button" onClick={finish} className="min-h-16 w-full rounded-lg bg-go text-xl font-bold text-white">
             Finish
           </button>

@@ -63,3 +63,12 @@ export const changePasswordSchema = z
 
 export type InviteInput = z.infer<typeof inviteSchema>;
 export type PersonAction = z.infer<typeof personActionSchema>;
+
+/** The sign-in form: checked in the browser and again by the sign-in strategy. */
+export const signInSchema = z.object({
+  email: emailAddress("your"),
+  password: z.string({ error: "Enter your password." }).min(1, "Enter your password.").refine(fitsBcrypt, TOO_LONG),
+});
+
+/** "Forgot your password?": only the address. */
+export const forgotSchema = z.object({ email: emailAddress("your") });
