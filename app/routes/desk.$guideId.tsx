@@ -8,7 +8,7 @@ import { PageTitle } from "~/components/ui/page-title";
 import { ErrorList } from "~/components/ui/error-list";
 import { fmt } from "~/lib/field-math/units";
 import { deskGuideVersions, learnFromCases, openDraft, reviewVersion, submitDraft } from "~/services/desk.server";
-import { answerRefusal, fail, refused, requirePermission, unlessRefused } from "~/services/guards.server";
+import { answerRefusal, fail, refusedForm, requirePermission, unlessRefused } from "~/services/guards.server";
 import { ADVISOR_MIN_CASES } from "~/lib/stats/check-order";
 import { ANSWERS, answerLabel, statusLabel, type Answer } from "~/lib/vocabulary";
 import { useTimes } from "~/components/use-time-zone";
@@ -37,13 +37,7 @@ export async function action({ request, params, context }: Route.ActionArgs) {
   const user = await requirePermission({ request, context }, "edit-guides");
   const guideId = guideIdOf(params);
   const submission = parseForm(await readForm(request), versionActionSchema);
-  if (submission.status !== "success")
-    return refused(
-      400,
-      Object.values(submission.error ?? {})
-        .flat()
-        .join(" ") || "Check the form.",
-    );
+  if (submission.status !== "success") return refusedForm(submission);
   const a = submission.value;
   if (a.intent === "edit") {
     const draft = await openDraft(user, guideId);

@@ -12,7 +12,7 @@ import { PageTitle } from "~/components/ui/page-title";
 import { ErrorList } from "~/components/ui/error-list";
 import { checkDefinition, submitDraft, versionFor } from "~/services/desk.server";
 import { deskParams } from "~/services/desk-params.server";
-import { answerRefusal, refused, requirePermission, unlessRefused } from "~/services/guards.server";
+import { answerRefusal, refusedForm, requirePermission, unlessRefused } from "~/services/guards.server";
 import { readForm } from "~/services/read-request.server";
 import { causeList } from "~/services/guides.server";
 import type { Route } from "./+types/desk.$guideId.v.$number";
@@ -29,13 +29,7 @@ export async function action({ request, params, context }: Route.ActionArgs) {
   const user = await requirePermission({ request, context }, "edit-guides");
   const { guideId, number } = deskParams(params);
   const submission = parseForm(await readForm(request), submitDraftSchema);
-  if (submission.status !== "success")
-    return refused(
-      400,
-      Object.values(submission.error ?? {})
-        .flat()
-        .join(" ") || "Check the form.",
-    );
+  if (submission.status !== "success") return refusedForm(submission);
   const r = await unlessRefused(() => submitDraft(user, guideId, number, submission.value.changeNote));
   if (r) return answerRefusal(r);
   return redirect(`/desk/${guideId}`);

@@ -1,3 +1,4 @@
+import { useMemo } from "react";
 import { data, Form, Link, redirect, useNavigation } from "react-router";
 import { FormField, inputClass } from "~/components/forms/form-field";
 import { useCheckedForm } from "~/components/forms/use-checked-form";
@@ -48,16 +49,19 @@ export async function action({ request }: Route.ActionArgs) {
 export default function Login({ loaderData, actionData }: Route.ComponentProps) {
   const busy = useNavigation().state !== "idle";
   // The server's answer (wrong password, throttled) is shown above the fields; its field messages beside them.
-  const serverFields = actionData?.fields ?? {};
-  const [form, fields] = useCheckedForm(signInSchema, {
-    lastResult: actionData
-      ? {
-          status: "error",
-          initialValue: { email: actionData.email },
-          error: Object.fromEntries(Object.entries(serverFields).map(([k, v]) => [k, v ? [v] : []])),
-        }
-      : null,
-  });
+  // Made once per answer: conform applies a new lastResult object every time it sees one.
+  const lastResult = useMemo(
+    () =>
+      actionData
+        ? {
+            status: "error" as const,
+            initialValue: { email: actionData.email },
+            error: Object.fromEntries(Object.entries(actionData.fields ?? {}).map(([k, v]) => [k, v ? [v] : []])),
+          }
+        : null,
+    [actionData],
+  );
+  const [form, fields] = useCheckedForm(signInSchema, { lastResult });
   return (
     <main className="mx-auto max-w-md px-4 py-8">
       <h1 className="text-3xl font-bold">Tankside</h1>
