@@ -8,6 +8,7 @@ const files = args.length ? args.map((f) => path.resolve(f)) : guideFilesIn(path
 const results = checkGuideFiles(files, loadCauses());
 let bad = 0;
 for (const r of results) {
+  for (const w of r.warnings) console.log(`WARN ${path.relative(process.cwd(), r.file)}: ${describeProblem(w)}`);
   if (r.problems.length === 0) {
     console.log(`ok   ${path.relative(process.cwd(), r.file)}`);
     continue;

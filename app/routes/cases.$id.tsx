@@ -1,4 +1,5 @@
 import { Link } from "react-router";
+import { CHECKLIST_LABELS, checklistOf } from "~/lib/guides/safety";
 import { z } from "zod";
 import { ConfirmAction } from "~/components/ui/confirm-action";
 import { Markdown } from "~/components/ui/markdown";
@@ -26,6 +27,10 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
     cause,
     stepPrompts: Object.fromEntries(Object.entries(states).map(([id, s]) => [id, s.meta.prompt])),
     finalPrompt: detail.finalStep ? (states[detail.finalStep]?.meta.prompt ?? null) : null,
+    // Which stop was acknowledged, when, and what it isolated (the version's own checklist).
+    stops: detail.events
+      .filter((e) => e.answer === "ACK" && states[e.stepId])
+      .map((e) => ({ seq: e.seq, stepId: e.stepId, at: e.at, checklist: [...checklistOf(states[e.stepId].meta)] })),
     events: detail.events.map((e) => ({ ...e, prompt: states[e.stepId]?.meta.prompt ?? e.stepId, kind: states[e.stepId]?.meta.kind ?? "check" })),
   };
 }
@@ -55,6 +60,7 @@ const plainPrompt = (prompt: string | undefined) => prompt?.replace(/\*\*|__|`/g
 export default function CasePage({ loaderData: c }: Route.ComponentProps) {
   const times = useTimes();
   const states = c.stepPrompts;
+  const stops = c.stops;
   const duration = c.closedAt ? formatDuration(Date.parse(c.closedAt) - Date.parse(c.openedAt)) : "still open";
   const facts: [string, React.ReactNode][] = [
     [
@@ -70,7 +76,20 @@ export default function CasePage({ loaderData: c }: Route.ComponentProps) {
     ["Time taken", duration],
     ["Outcome", outcomeLabel(c.outcome)],
     ["Cause", c.cause ? `${c.cause.name} (${c.cause.component})` : "—"],
-    ["Shut-down acknowledged", c.safetyAckAt ? `${times.time(c.safetyAckAt)}` : "no hands-on step reached"],
+    [
+      "Shut-downs acknowledged",
+      stops.length ? (
+        <ul>
+          {stops.map((s) => (
+            <li key={s.seq}>
+              {times.time(s.at)} at step “{s.stepId}”: {s.checklist.map((i) => CHECKLIST_LABELS[i].replace(/\.$/, "")).join("; ")}
+            </li>
+          ))}
+        </ul>
+      ) : (
+        "no hands-on step reached"
+      ),
+    ],
     ["Engine hours", c.engineHours !== null ? `${c.engineHours} h` : "—"],
   ];
   return (

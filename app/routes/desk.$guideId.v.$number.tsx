@@ -10,7 +10,7 @@ import { ProblemsPanel } from "~/components/desk/problems-panel";
 import { TreeDrawing } from "~/components/desk/tree-drawing";
 import { PageTitle } from "~/components/ui/page-title";
 import { ErrorList } from "~/components/ui/error-list";
-import { checkDefinition, submitDraft, versionFor } from "~/services/desk.server";
+import { checkDefinition, definitionWarnings, submitDraft, versionFor } from "~/services/desk.server";
 import { deskParams } from "~/services/desk-params.server";
 import { answerRefusal, refusedForm, requirePermission, unlessRefused } from "~/services/guards.server";
 import { readForm } from "~/services/read-request.server";
@@ -21,7 +21,13 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
   const user = await requirePermission({ request, context }, "edit-guides");
   const { guideId, number } = deskParams(params);
   const v = await versionFor(user, guideId, number);
-  return { ...v, editable: v.version.status === "draft" && !v.guide.builtIn, causes: causeList(), problems: checkDefinition(v.version.definition) };
+  return {
+    ...v,
+    editable: v.version.status === "draft" && !v.guide.builtIn,
+    causes: causeList(),
+    problems: checkDefinition(v.version.definition),
+    warnings: definitionWarnings(v.version.definition),
+  };
 }
 
 /** Sending the draft for review from the editor: problems keep the trainer here, listed. */
@@ -64,7 +70,7 @@ export default function EditVersion({ loaderData, actionData }: Route.ComponentP
       ) : (
         <div className="space-y-3">
           <p>This version is {version.status.replace("_", " ")} and is never changed. Open a draft from the versions page to change the guide.</p>
-          <ProblemsPanel problems={problems} onSelect={() => {}} />
+          <ProblemsPanel problems={problems} warnings={loaderData.warnings} onSelect={() => {}} />
           <TreeDrawing states={version.definition.states} selected={null} onSelect={() => {}} />
         </div>
       )}

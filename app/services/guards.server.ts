@@ -87,7 +87,12 @@ export function refused(status: number, error: string, problems: string[] = []) 
 
 /** `refused` for a form conform could not accept: every message, in one sentence. */
 export const refusedForm = (submission: { error?: Record<string, string[] | null> | null }) =>
-  refused(400, Object.values(submission.error ?? {}).flat().join(" ") || "Check the form.");
+  refused(
+    400,
+    Object.values(submission.error ?? {})
+      .flat()
+      .join(" ") || "Check the form.",
+  );
 
 /** `refused` for what `unlessRefused` caught. */
 export const answerRefusal = (r: { status: number; error: string; fields: Record<string, string> }) => refused(r.status, r.error, Object.values(r.fields));

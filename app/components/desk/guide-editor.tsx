@@ -45,7 +45,7 @@ export function GuideEditor({
     if (id && window.innerWidth < 768) requestAnimationFrame(() => document.getElementById("selected-step")?.scrollIntoView({ block: "start" }));
   };
   const [saved, setSaved] = useState<"saved" | "unsaved" | "saving" | "failed">("saved");
-  const problems = useMemo(() => validateGuide(draft, { causes }).problems, [draft, causes]);
+  const { problems, warnings } = useMemo(() => validateGuide(draft, { causes }), [draft, causes]);
   useWarnBeforeLeaving(saved !== "saved");
   const ids = Object.keys(draft.states);
 
@@ -111,7 +111,7 @@ export function GuideEditor({
           {saved === "saved" ? "All changes saved." : saved === "saving" ? "Saving…" : saved === "failed" ? "Not saved: try again." : "Unsaved changes."}
         </span>
       </div>
-      <ProblemsPanel problems={problems} onSelect={setSelected} />
+      <ProblemsPanel problems={problems} warnings={warnings} onSelect={setSelected} />
       <fieldset className="space-y-3 rounded-lg border-2 border-ink bg-paper p-3">
         <legend className="px-1 font-bold">Guide</legend>
         <label className="block font-bold">

@@ -1,11 +1,25 @@
 import { Markdown } from "~/components/ui/markdown";
 import { FIELD_MATH_WIDGETS, STEP_KINDS, type StepKind } from "~/lib/guides/schema";
 import { ANSWERS_BY_KIND } from "~/lib/vocabulary";
+import { CHECKLIST_ITEMS, CHECKLIST_LABELS, HAZARD_NEEDS, HAZARDS, STANDARD_STOP, type ChecklistItem, type Hazard } from "~/lib/guides/safety";
 
 export interface LooseStep {
   type?: "final";
   on?: Record<string, string>;
-  meta: { kind: StepKind; prompt: string; help?: string; handsOn?: boolean; minutes?: number; fieldMath?: string; cause?: string; component?: string };
+  meta: {
+    kind: StepKind;
+    prompt: string;
+    help?: string;
+    handsOn?: boolean;
+    energizes?: boolean;
+    returnsToService?: boolean;
+    checklist?: ChecklistItem[];
+    hazards?: Hazard[];
+    minutes?: number;
+    fieldMath?: string;
+    cause?: string;
+    component?: string;
+  };
 }
 
 const NEW = "__new__";
@@ -94,6 +108,62 @@ export function StepForm({
           />
         </label>
       </div>
+      {meta.kind === "safety" ? (
+        <fieldset className="rounded-md border-2 border-rule p-2">
+          <legend className="font-bold">What this stop isolates (the crew reads each line)</legend>
+          {CHECKLIST_ITEMS.map((item) => {
+            const list = meta.checklist?.length ? meta.checklist : STANDARD_STOP;
+            return (
+              <label key={item} className="flex min-h-12 items-center gap-2">
+                <input
+                  type="checkbox"
+                  checked={list.includes(item)}
+                  onChange={(e) => set({ checklist: e.target.checked ? [...list, item] : list.filter((i) => i !== item) })}
+                  className="h-6 w-6"
+                />
+                {CHECKLIST_LABELS[item]}
+              </label>
+            );
+          })}
+        </fieldset>
+      ) : (
+        <div className="grid gap-1">
+          <label className="flex min-h-12 items-center gap-2 font-bold">
+            <input type="checkbox" checked={!!meta.energizes} onChange={(e) => set({ energizes: e.target.checked || undefined })} className="h-6 w-6" />
+            Puts energy back (engine, clutch, pump or agitator run, line pressurised): ends the shut-down
+          </label>
+          {meta.kind === "task" && !meta.handsOn ? (
+            <label className="flex min-h-12 items-center gap-2 font-bold">
+              <input
+                type="checkbox"
+                checked={!!meta.returnsToService}
+                onChange={(e) => set({ returnsToService: e.target.checked || undefined })}
+                className="h-6 w-6"
+              />
+              Return to service: tips, plugs, gaskets and guards back on, everyone clear
+            </label>
+          ) : null}
+        </div>
+      )}
+      {meta.handsOn ? (
+        <fieldset className="rounded-md border-2 border-rule p-2">
+          <legend className="font-bold">What this hands-on step opens (the stop before it must cover each)</legend>
+          {HAZARDS.map((h) => (
+            <label key={h} className="flex min-h-12 items-center gap-2">
+              <input
+                type="checkbox"
+                checked={!!meta.hazards?.includes(h)}
+                onChange={(e) => {
+                  const next = e.target.checked ? [...(meta.hazards ?? []), h] : (meta.hazards ?? []).filter((x) => x !== h);
+                  set({ hazards: next.length ? next : undefined });
+                }}
+                className="h-6 w-6"
+              />
+              It {HAZARD_NEEDS[h].words}
+            </label>
+          ))}
+        </fieldset>
+      ) : null}
       <label className="block font-bold">
         Field-math widget
         <select value={meta.fieldMath ?? ""} onChange={(e) => set({ fieldMath: e.target.value || undefined })} className={field}>

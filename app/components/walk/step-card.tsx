@@ -5,6 +5,7 @@ import type { GuideMachine } from "~/lib/guides/compile";
 import type { StepMeta } from "~/lib/guides/schema";
 import { AnswerButtons } from "./answer-buttons";
 import { SafetyCaution } from "./safety-caution";
+import { CHECKLIST_LABELS, checklistOf } from "~/lib/guides/safety";
 
 /**
  * One step, driven by the guide's machine restored at that step. Answering sends the event
@@ -54,6 +55,16 @@ export function StepCard({
         <div id="step-prompt" tabIndex={-1} data-step-heading className={`mt-1 leading-snug ${safety ? "text-xl" : "text-[1.45rem] font-bold"}`}>
           <Markdown>{meta.prompt}</Markdown>
         </div>
+        {safety ? (
+          <ul aria-label="Before you go on" className="mt-3 space-y-1 text-lg">
+            {checklistOf(meta).map((item) => (
+              <li key={item} className="flex gap-2">
+                <span aria-hidden="true">☐</span>
+                {CHECKLIST_LABELS[item]}
+              </li>
+            ))}
+          </ul>
+        ) : null}
         {meta.help && safety ? <Markdown className="mt-3 text-base">{meta.help}</Markdown> : null}
         {meta.help && !safety ? (
           <div className="mt-3">

@@ -17,6 +17,7 @@ export interface GuideFile {
   text: string;
   guide: Guide | null;
   problems: GuideProblem[];
+  warnings: GuideProblem[];
 }
 
 export function guideFilesIn(dir: string): string[] {
@@ -32,9 +33,9 @@ export function checkGuideFiles(files: string[], causes: Cause[]): GuideFile[] {
   const results = files.map((file) => {
     const text = fs.readFileSync(file, "utf8");
     const name = path.basename(file, ".json");
-    const { guide, problems } = validateGuide(text, { causes, name });
+    const { guide, problems, warnings } = validateGuide(text, { causes, name });
     if (guide && guide.id !== name) problems.push({ guide: guide.id, message: `file name ${path.basename(file)} should be ${guide.id}.json` });
-    return { file, text, guide: problems.length ? null : guide, problems };
+    return { file, text, guide: problems.length ? null : guide, problems, warnings };
   });
   const seen = new Map<string, string>();
   for (const r of results) {

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { STEP_ANSWERS } from "../vocabulary";
+import { CHECKLIST_ITEMS, HAZARDS } from "./safety";
 
 export const STEP_KINDS = ["check", "task", "safety", "fixed", "handoff"] as const;
 export type StepKind = (typeof STEP_KINDS)[number];
@@ -17,6 +18,14 @@ export const stepMetaSchema = z.strictObject({
   prompt: z.string().trim().min(1, "the prompt is empty").max(400, "keep the prompt under 400 characters; details go in help"),
   help: z.string().max(4000).optional(),
   handsOn: z.boolean().optional(),
+  /** Puts energy back (engine started, clutch engaged, pump or agitator run, line pressurised): ends every stop before it. */
+  energizes: z.boolean().optional(),
+  /** On a safety step: what it isolates (none listed: the standard five). */
+  checklist: z.array(z.enum(CHECKLIST_ITEMS)).max(CHECKLIST_ITEMS.length).optional(),
+  /** On a hands-on step: what it exposes, which the stop before it must cover. */
+  hazards: z.array(z.enum(HAZARDS)).max(HAZARDS.length).optional(),
+  /** Tips, plugs, gaskets and guards back on, everyone clear of the stream: hands-on work is put back together. */
+  returnsToService: z.boolean().optional(),
   minutes: z.number().min(0).max(240).optional(),
   fieldMath: z.enum(FIELD_MATH_WIDGETS).optional(),
   cause: z.string().optional(),

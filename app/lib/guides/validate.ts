@@ -3,6 +3,7 @@ import { findDuplicateKeys } from "./duplicate-keys";
 import { reachable, stepsToEnd } from "./graph";
 import { ANSWER_LABELS, ANSWERS_BY_KIND, type StepAnswer } from "../vocabulary";
 import { guideSchema, isFinalKind, STEP_KINDS, type Guide, type StepKind } from "./schema";
+import { CORE_STOP, restartsWithoutReturnToService, sendsInsideTank, unguardedSteps } from "./safety";
 
 export interface GuideProblem {
   guide: string;
@@ -13,6 +14,8 @@ export interface GuideProblem {
 export interface ValidationResult {
   guide: Guide | null;
   problems: GuideProblem[];
+  /** Allowed, but a reviewer should look (a restart with no return-to-service step before it). */
+  warnings: GuideProblem[];
 }
 
 export const describeProblem = (p: GuideProblem) => `${p.guide}${p.step ? ` › step "${p.step}"` : ""}: ${p.message}`;
@@ -34,12 +37,13 @@ export function validateGuide(input: unknown, options: { causes: Cause[]; name?:
   try {
     return validate(input, options);
   } catch (error) {
-    return { guide: null, problems: [{ guide: options.name ?? "guide", message: `could not be checked: ${String(error)}` }] };
+    return { guide: null, problems: [{ guide: options.name ?? "guide", message: `could not be checked: ${String(error)}` }], warnings: [] };
   }
 }
 
 function validate(input: unknown, { causes, name }: { causes: Cause[]; name?: string }): ValidationResult {
   const problems: GuideProblem[] = [];
+  const warnings: GuideProblem[] = [];
   let raw: unknown = input;
   if (typeof input === "string") {
     try {
@@ -48,7 +52,7 @@ function validate(input: unknown, { causes, name }: { causes: Cause[]; name?: st
       const message = error instanceof Error ? error.message : String(error);
       const at = /position (\d+)/.exec(message);
       const where = at && !/line \d+/.test(message) ? ` (${lineColumn(input, Number(at[1]))})` : "";
-      return { guide: null, problems: [{ guide: name ?? "guide", message: `is not valid JSON: ${message}${where}` }] };
+      return { guide: null, problems: [{ guide: name ?? "guide", message: `is not valid JSON: ${message}${where}` }], warnings: [] };
     }
   }
   const guideName = (isObject(raw) && typeof raw.id === "string" && raw.id) || name || "guide";
@@ -56,7 +60,7 @@ function validate(input: unknown, { causes, name }: { causes: Cause[]; name?: st
 
   if (!isObject(raw)) {
     add("must be a JSON object with id, title, summary, symptoms, initial and states");
-    return { guide: null, problems };
+    return { guide: null, problems, warnings };
   }
   if (typeof input === "string") {
     for (const d of findDuplicateKeys(input)) {
@@ -80,12 +84,12 @@ function validate(input: unknown, { causes, name }: { causes: Cause[]; name?: st
     }
   }
 
-  checkStructure(raw, causes, add);
-  return { guide: problems.length === 0 && parsed.success ? parsed.data : null, problems };
+  checkStructure(raw, causes, add, (message, step) => warnings.push({ guide: guideName, step, message }));
+  return { guide: problems.length === 0 && parsed.success ? parsed.data : null, problems, warnings };
 }
 
 /** The graph rules, on whatever part of the file is shaped well enough to read. */
-function checkStructure(raw: Loose, causes: Cause[], add: (message: string, step?: string) => void) {
+function checkStructure(raw: Loose, causes: Cause[], add: (message: string, step?: string) => void, warn: (message: string, step?: string) => void) {
   if (!isObject(raw.states)) return;
   const steps: Guide["states"] = {};
   for (const [id, s] of Object.entries(raw.states)) {
@@ -118,6 +122,18 @@ function checkStructure(raw: Loose, causes: Cause[], add: (message: string, step
     if (isFinalKind(kind) && step.type !== "final") add(`a ${kind} step is an end: give it "type": "final"`, id);
     if (!isFinalKind(kind) && step.type === "final") add(`only fixed and handoff steps are ends; a ${kind} step cannot be "type": "final"`, id);
     if (kind === "safety" && step.meta.handsOn) add("a safety step is the shut-down stop itself and cannot be hands-on", id);
+    if (kind === "safety" && step.meta.energizes) add("a safety step shuts the rig down; it cannot also put energy back", id);
+    if (step.meta.energizes && step.meta.handsOn) add("puts energy back and is hands-on: split it into the hands-on work and then the restart", id);
+    if (step.meta.checklist?.length && kind !== "safety") add("only a safety step carries a checklist", id);
+    if (kind === "safety" && Array.isArray(step.meta.checklist) && step.meta.checklist.length) {
+      const left = CORE_STOP.filter((i) => !step.meta.checklist!.includes(i));
+      if (left.length) add(`a safety step's checklist must include ${left.map((i) => `"${i}"`).join(", ")}: without them nothing is shut down`, id);
+    }
+    if (step.meta.hazards?.length && !step.meta.handsOn) add("only a hands-on step names hazards", id);
+    if (step.meta.returnsToService && (kind !== "task" || step.meta.handsOn))
+      add("a return-to-service step is a task done before the restart, not hands-on work", id);
+    const text = `${step.meta.prompt ?? ""} ${step.meta.help ?? ""}`;
+    if (sendsInsideTank(text)) add("sends someone inside the tank: reach the part from outside (hatch, drain, pole) or send the job to the shop", id);
     if (kind === "fixed") {
       if (!step.meta.cause) add("a fixed step needs a cause code", id);
       else if (!causeCodes.has(step.meta.cause)) add(`cause "${step.meta.cause}" is not in the cause list`, id);
@@ -136,11 +152,9 @@ function checkStructure(raw: Loose, causes: Cause[], add: (message: string, step
   const left = stepsToEnd(guide);
   for (const id of fromStart) if (left[id] === Infinity) add("no fixed or handoff end can be reached from here", id);
 
-  // Walk from the start without passing any safety stop: a hands-on step found is unguarded.
-  const unguarded = reachable(guide, initial, { stopAt: (id) => steps[id]?.meta.kind === "safety" });
-  for (const id of unguarded) {
-    if (steps[id].meta.handsOn && steps[id].meta.kind !== "safety") add("is hands-on but can be reached without passing a safety step", id);
-  }
+  // On every path to a hands-on step, a stop since the last restart that covers what the step exposes.
+  for (const f of unguardedSteps(guide)) add(f.message, f.step);
+  for (const f of restartsWithoutReturnToService(guide)) warn(f.message, f.step);
 }
 
 const FIELD_WORDS: Record<string, string> = {

@@ -26,6 +26,14 @@ const EXPECTED: Record<string, RegExp> = {
   "bad-kind": /step "look": meta\.kind: Invalid option/,
   "end-with-answers": /step "gone": a handoff step is an end and takes no answers/,
   "cause-on-check": /step "look": only fixed steps carry a cause/,
+  // The safety model (domain.md, "Safety"): a restart ends the shut-down; a stop covers what the step exposes.
+  "restart-then-hands-on": /step "fix": is hands-on but step "run" puts energy back and no safety step comes after it/,
+  "wet-side-uncovered": /step "fix": opens the wet side .* does not cover: suction valve closed, or the tank run down/,
+  "checklist-missing-core": /step "stop": a safety step's checklist must include "clutch-out", "engine-off-key-out", "moving-parts-stopped"/,
+  "inside-tank": /step "fix": sends someone inside the tank/,
+  "energizes-hands-on": /step "fix": puts energy back and is hands-on/,
+  "checklist-on-check": /step "look": only a safety step carries a checklist/,
+  "hazards-not-hands-on": /step "look": only a hands-on step names hazards/,
 };
 
 describe("validator", () => {
@@ -43,6 +51,47 @@ describe("validator", () => {
   it("has a fixture for every expected message and nothing else", () => {
     const files = fs.readdirSync(fixture("broken-guides")).map((f) => f.replace(/\.json$/, ""));
     expect(files.sort()).toEqual(Object.keys(EXPECTED).sort());
+  });
+
+  it("accepts a restart when a new stop covering the wet side comes before the hands-on step, and warns when nothing is put back first", () => {
+    const g = JSON.parse(fs.readFileSync(fixture("broken-guides", "restart-then-hands-on.json"), "utf8"));
+    g.id = "restart-with-new-stop";
+    g.states.run.on.NO = "stop-again";
+    g.states["stop-again"] = {
+      on: { ACK: "fix" },
+      meta: {
+        kind: "safety",
+        prompt: "Shut down again.",
+        checklist: ["clutch-out", "engine-off-key-out", "moving-parts-stopped", "pressure-relieved", "controls-tagged", "suction-closed"],
+      },
+    };
+    g.states.fix.meta.hazards = ["wet-side"];
+    const ok = validateGuide(g, { causes });
+    expect(ok.problems).toEqual([]);
+    // fix → run again without refitting: the restart is flagged, not refused.
+    g.states.fix.on.DONE = "run";
+    const warned = validateGuide(g, { causes });
+    expect(warned.problems).toEqual([]);
+    expect(warned.warnings.map(describeProblem).join("\n")).toMatch(/step "run": puts energy back after hands-on work with no return-to-service step/);
+    // A return-to-service step between them clears the warning.
+    g.states.fix.on.DONE = "refit";
+    g.states.refit = {
+      on: { DONE: "run", CANT: "gone" },
+      meta: { kind: "task", prompt: "Refit the cover and guards; everyone clear of the stream.", returnsToService: true },
+    };
+    expect(validateGuide(g, { causes }).warnings).toEqual([]);
+  });
+
+  it("holds a stop only while nothing restarts: one path with a restart is enough to refuse", () => {
+    const g = JSON.parse(fs.readFileSync(fixture("broken-guides", "restart-then-hands-on.json"), "utf8"));
+    // Two ways into fix: straight from the stop (guarded) and through the test run (not).
+    g.states.look.on.NO = "stop";
+    g.states.stop.on.ACK = "run";
+    g.states.run.on.YES = "fix";
+    g.states.run.on.NO = "fix";
+    expect(validateGuide(g, { causes }).problems.map((p) => p.step)).toContain("fix");
+    delete g.states.run.meta.energizes;
+    expect(validateGuide(g, { causes }).problems).toEqual([]);
   });
 
   it("reports every problem at once", () => {
