@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import { AGITATOR_DIRECTIONS, type AgitatorDirection } from "../app/lib/rigs/schema";
 
 import type { Guide } from "../app/lib/guides/schema";
 import { ROLES, type Role } from "../app/lib/people/roles";
@@ -87,6 +88,11 @@ export class Rig extends Model<InferAttributes<Rig>, InferCreationAttributes<Rig
   declare hoseLengthFt: number;
   declare hoseDiameterIn: number;
   declare yardElevationFt: CreationOptional<number>;
+  declare agitatorMixes: CreationOptional<AgitatorDirection>;
+  declare pumpRatedGpm: number | null;
+  declare pumpRatedPsi: number | null;
+  declare pumpNpshrFt: number | null;
+  declare carrierRatingLb: number | null;
   declare nozzleTips: NozzleTip[];
   declare torqueSpecs: CreationOptional<TorqueSpec[]>;
   declare notes: string | null;
@@ -251,6 +257,11 @@ export function initModels(sequelize: Sequelize) {
       hoseLengthFt: DataTypes.INTEGER.UNSIGNED,
       hoseDiameterIn: decimal(4, 2, "hoseDiameterIn"),
       yardElevationFt: { type: DataTypes.INTEGER, defaultValue: 0 },
+      agitatorMixes: { type: DataTypes.ENUM(...AGITATOR_DIRECTIONS), defaultValue: "forward" },
+      pumpRatedGpm: decimal(6, 1, "pumpRatedGpm"),
+      pumpRatedPsi: decimal(5, 1, "pumpRatedPsi"),
+      pumpNpshrFt: decimal(4, 1, "pumpNpshrFt"),
+      carrierRatingLb: DataTypes.INTEGER.UNSIGNED,
       nozzleTips: DataTypes.JSON,
       torqueSpecs: { type: DataTypes.JSON, defaultValue: [] },
       notes: DataTypes.TEXT,

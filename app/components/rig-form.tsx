@@ -21,7 +21,7 @@ export function RigForm({
   });
   const tips = fields.nozzleTips.getFieldList();
   const specs = fields.torqueSpecs.getFieldList();
-  const number = (f: typeof fields.tankGal) => ({ ...getInputProps(f, { type: "text" }), inputMode: "decimal" as const });
+  const number = (f: typeof fields.tankGal | typeof fields.pumpRatedGpm) => ({ ...getInputProps(f, { type: "text" }), inputMode: "decimal" as const });
 
   return (
     <Form method="post" {...getFormProps(form)} className="space-y-4 rounded-lg border-2 border-ink bg-paper p-4">
@@ -61,6 +61,31 @@ export function RigForm({
       </FormField>
       <FormField field={fields.yardElevationFt} label="Yard elevation (ft)">
         <input {...number(fields.yardElevationFt)} className={inputClass} />
+      </FormField>
+      <FormField
+        field={fields.agitatorMixes}
+        label="Agitator mixes in"
+        hint="The direction the agitator turns when it mixes; the stall guide names the other one."
+      >
+        <select {...getSelectProps(fields.agitatorMixes)} className={inputClass}>
+          <option value="forward">Forward</option>
+          <option value="reverse">Reverse</option>
+        </select>
+      </FormField>
+      <fieldset className="space-y-3 rounded-md border-2 border-rule p-3">
+        <legend className="px-1 font-bold">Pump figures (from its plate or curve; leave blank if not known)</legend>
+        <FormField field={fields.pumpRatedGpm} label="Rated flow (gpm)">
+          <input {...number(fields.pumpRatedGpm)} className={inputClass} />
+        </FormField>
+        <FormField field={fields.pumpRatedPsi} label="Rated pressure (psi)">
+          <input {...number(fields.pumpRatedPsi)} className={inputClass} />
+        </FormField>
+        <FormField field={fields.pumpNpshrFt} label="How much suction the pump needs, from its curve (ft)">
+          <input {...number(fields.pumpNpshrFt)} className={inputClass} />
+        </FormField>
+      </fieldset>
+      <FormField field={fields.carrierRatingLb} label="Truck or trailer rated to carry (lb)" hint="Leave blank if not known.">
+        <input {...number(fields.carrierRatingLb)} className={inputClass} />
       </FormField>
       <fieldset className="space-y-3 rounded-md border-2 border-rule p-3">
         <legend className="px-1 font-bold">Nozzle tips</legend>

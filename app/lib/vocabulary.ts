@@ -48,3 +48,7 @@ export const VERSION_STATUSES = ["draft", "in_review", "published", "retired"] a
 export type VersionStatus = (typeof VERSION_STATUSES)[number];
 export const STATUS_LABELS: Record<VersionStatus, string> = { draft: "Draft", in_review: "In review", published: "Published", retired: "Retired" };
 export const statusLabel = (status: string) => STATUS_LABELS[status as VersionStatus] ?? status;
+
+/** Whether a case's cause was found (a fixed end) or suspected by the crew at a hand-off; null with no cause. */
+export const causeBasis = (outcome: Outcome, causeCode: string | null): "found" | "suspected" | null =>
+  causeCode === null ? null : outcome === "handoff" ? "suspected" : "found";

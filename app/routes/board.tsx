@@ -211,6 +211,7 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
         <h2 id="pareto-h" className="text-2xl font-bold">
           Causes, most frequent first
         </h2>
+        <p>Found at a fixed end, or suspected by the crew at a hand-off (the shop confirms those); the table says how many of each were suspected.</p>
         <ParetoChart
           rows={board.pareto
             .slice(0, 12)
@@ -224,6 +225,7 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
                 <tr className="border-b-2 border-ink">
                   <th scope="col">Cause</th>
                   <th scope="col">Cases</th>
+                  <th scope="col">Of them suspected</th>
                   <th scope="col">Share</th>
                   <th scope="col">Running</th>
                   <th scope="col">Downtime</th>
@@ -234,6 +236,7 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
                   <tr key={p.cause} className="border-b border-rule">
                     <td>{name(p.cause)}</td>
                     <td>{p.count}</td>
+                    <td>{p.suspected ?? 0}</td>
                     <td>{fmt(p.share * 100, 1)} %</td>
                     <td>{fmt(p.cumulativeShare * 100, 1)} %</td>
                     <td>{h(p.downtimeHours, 1)} h</td>

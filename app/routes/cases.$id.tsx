@@ -5,7 +5,7 @@ import { ConfirmAction } from "~/components/ui/confirm-action";
 import { Markdown } from "~/components/ui/markdown";
 import { PageTitle } from "~/components/ui/page-title";
 import { formatDuration } from "~/lib/format";
-import { answerLabel, outcomeLabel } from "~/lib/vocabulary";
+import { answerLabel, causeBasis, outcomeLabel } from "~/lib/vocabulary";
 import { caseDetail } from "~/services/case-detail.server";
 import { resolveHandoff } from "~/services/cases.server";
 import { fail, requirePermission, requireUser } from "~/services/guards.server";
@@ -75,7 +75,10 @@ export default function CasePage({ loaderData: c }: Route.ComponentProps) {
     ["Closed", c.closedAt ? `${times.dateTime(c.closedAt)}` : "—"],
     ["Time taken", duration],
     ["Outcome", outcomeLabel(c.outcome)],
-    ["Cause", c.cause ? `${c.cause.name} (${c.cause.component})` : "—"],
+    [
+      "Cause",
+      c.cause ? `${c.cause.name} (${c.cause.component}) · ${causeBasis(c.outcome, c.cause.code) === "suspected" ? "suspected at hand-off" : "found"}` : "—",
+    ],
     [
       "Shut-downs acknowledged",
       stops.length ? (

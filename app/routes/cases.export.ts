@@ -1,7 +1,7 @@
 import { caseFiltersSchema } from "~/lib/cases/filters";
 import { toCsv } from "~/lib/csv";
 import { isoInZone } from "~/lib/format";
-import { outcomeLabel } from "~/lib/vocabulary";
+import { causeBasis, outcomeLabel } from "~/lib/vocabulary";
 import { listCases } from "~/services/case-list.server";
 import { requirePermission } from "~/services/guards.server";
 import { readQuery } from "~/services/read-request.server";
@@ -20,12 +20,13 @@ export async function loader({ request, context }: Route.LoaderArgs) {
       r.guideTitle,
       r.causeCode ?? "",
       r.causeCode ? (names.get(r.causeCode) ?? "") : "",
+      causeBasis(r.outcome, r.causeCode) ?? "",
       outcomeLabel(r.outcome),
       r.person ?? "",
       isoInZone(r.openedAt, user.timeZone),
       r.durationSeconds ?? "",
     ]),
-    ["case_id", "rig", "guide", "cause_code", "cause", "outcome", "opened_by", "opened_at", "duration_seconds"],
+    ["case_id", "rig", "guide", "cause_code", "cause", "cause_basis", "outcome", "opened_by", "opened_at", "duration_seconds"],
   );
   const stamp = new Date().toISOString().slice(0, 10);
   return new Response(csv, {

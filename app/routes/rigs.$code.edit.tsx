@@ -12,8 +12,26 @@ import type { Route } from "./+types/rigs.$code.edit";
 export async function loader({ request, params, context }: Route.LoaderArgs) {
   const user = await requirePermission({ request, context }, "edit-rigs");
   const rig = await findRig(user, params.code);
-  const { code, name, mount, tankGal, pumpKind, hasHourMeter, engineHours, hoseLengthFt, hoseDiameterIn, yardElevationFt, nozzleTips, torqueSpecs, notes } =
-    rig;
+  const {
+    code,
+    name,
+    mount,
+    tankGal,
+    pumpKind,
+    hasHourMeter,
+    engineHours,
+    hoseLengthFt,
+    hoseDiameterIn,
+    yardElevationFt,
+    agitatorMixes,
+    pumpRatedGpm,
+    pumpRatedPsi,
+    pumpNpshrFt,
+    carrierRatingLb,
+    nozzleTips,
+    torqueSpecs,
+    notes,
+  } = rig;
   return {
     rig: {
       code,
@@ -26,6 +44,11 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
       hoseLengthFt,
       hoseDiameterIn,
       yardElevationFt,
+      agitatorMixes,
+      pumpRatedGpm,
+      pumpRatedPsi,
+      pumpNpshrFt,
+      carrierRatingLb,
       nozzleTips,
       torqueSpecs,
       notes: notes ?? undefined,

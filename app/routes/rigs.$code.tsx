@@ -37,6 +37,13 @@ export default function RigPage({ loaderData }: Route.ComponentProps) {
     ["Engine hours", rig.hasHourMeter ? `${fmt(rig.engineHours, 1)} h` : "no hour meter"],
     ["Hose", `${fmt(rig.hoseLengthFt)} ft (${fmt(ftToM(rig.hoseLengthFt))} m) of ${rig.hoseDiameterIn} in (${fmt(inToMm(rig.hoseDiameterIn))} mm)`],
     ["Yard elevation", `${fmt(rig.yardElevationFt)} ft (${fmt(ftToM(rig.yardElevationFt))} m)`],
+    ["Agitator mixes in", rig.agitatorMixes],
+    ["Pump rated at", rig.pumpRatedGpm !== null && rig.pumpRatedPsi !== null ? `${fmt(rig.pumpRatedGpm)} gpm at ${fmt(rig.pumpRatedPsi)} psi` : "not recorded"],
+    [
+      "Suction the pump needs (from its curve)",
+      rig.pumpNpshrFt !== null ? `${fmt(rig.pumpNpshrFt, 1)} ft (${fmt(ftToM(rig.pumpNpshrFt), 1)} m)` : "not recorded",
+    ],
+    ["Carrier rated to carry", rig.carrierRatingLb !== null ? `${fmt(rig.carrierRatingLb)} lb` : "not recorded"],
   ];
   return (
     <>

@@ -1,3 +1,4 @@
+import type { Outcome } from "~/lib/vocabulary";
 import { QueryTypes } from "sequelize";
 import { ownedBy, usableGuideSql } from "./tenancy.server";
 import { PAGE_SIZE, type CaseFilters } from "~/lib/cases/filters";
@@ -22,7 +23,7 @@ export interface CaseRow {
   rigCode: string;
   guideTitle: string;
   causeCode: string | null;
-  outcome: string;
+  outcome: Outcome;
   person: string | null;
   openedAt: string;
   durationSeconds: number | null;
@@ -53,7 +54,7 @@ const toRow = (r: Record<string, unknown>): CaseRow => ({
   rigCode: String(r.code),
   guideTitle: String(r.title),
   causeCode: (r.cause_code as string) ?? null,
-  outcome: String(r.outcome),
+  outcome: String(r.outcome) as Outcome,
   person: (r.name as string) ?? null,
   openedAt: new Date(r.opened_at as string).toISOString(),
   durationSeconds: r.duration === null ? null : Number(r.duration),

@@ -145,7 +145,8 @@ export async function createGuide(user: SessionUser, title: string): Promise<{ g
   const definition: Guide = {
     id: slug,
     title,
-    summary: "What this guide is for, in a sentence.",
+    // Left empty on purpose: the checker asks for it, so no placeholder sentence reaches a crew.
+    summary: "",
     symptoms: [title.toLowerCase()],
     initial: "first-check",
     states: {

@@ -14,6 +14,7 @@ import * as m012 from "./012-time-zone-and-handoff-record";
 import * as m013 from "./013-sessions";
 import * as m014 from "./014-throttling";
 import * as m015 from "./015-field-math-name";
+import * as m016 from "./016-rig-pump-and-agitator";
 
 export interface Migration {
   name: string;
@@ -38,4 +39,5 @@ export const migrations: Migration[] = [
   { name: "013-sessions", ...m013 },
   { name: "014-throttling", ...m014 },
   { name: "015-field-math-name", ...m015 },
+  { name: "016-rig-pump-and-agitator", ...m016 },
 ];

@@ -95,7 +95,7 @@ export function StepForm({
       ) : null}
       <div className="grid grid-cols-2 gap-3">
         <label className="flex min-h-12 items-center gap-2 font-bold">
-          <input type="checkbox" checked={!!meta.handsOn} onChange={(e) => set({ handsOn: e.target.checked || undefined })} className="h-6 w-6" />
+          <input type="checkbox" checked={!!meta.handsOn} onChange={(e) => set({ handsOn: e.target.checked || undefined })} className="h-6 w-6 shrink-0" />
           Hands-on
         </label>
         <label className="block font-bold">
@@ -119,7 +119,7 @@ export function StepForm({
                   type="checkbox"
                   checked={list.includes(item)}
                   onChange={(e) => set({ checklist: e.target.checked ? [...list, item] : list.filter((i) => i !== item) })}
-                  className="h-6 w-6"
+                  className="h-6 w-6 shrink-0"
                 />
                 {CHECKLIST_LABELS[item]}
               </label>
@@ -129,7 +129,12 @@ export function StepForm({
       ) : (
         <div className="grid gap-1">
           <label className="flex min-h-12 items-center gap-2 font-bold">
-            <input type="checkbox" checked={!!meta.energizes} onChange={(e) => set({ energizes: e.target.checked || undefined })} className="h-6 w-6" />
+            <input
+              type="checkbox"
+              checked={!!meta.energizes}
+              onChange={(e) => set({ energizes: e.target.checked || undefined })}
+              className="h-6 w-6 shrink-0"
+            />
             Puts energy back (engine, clutch, pump or agitator run, line pressurised): ends the shut-down
           </label>
           {meta.kind === "task" && !meta.handsOn ? (
@@ -138,7 +143,7 @@ export function StepForm({
                 type="checkbox"
                 checked={!!meta.returnsToService}
                 onChange={(e) => set({ returnsToService: e.target.checked || undefined })}
-                className="h-6 w-6"
+                className="h-6 w-6 shrink-0"
               />
               Return to service: tips, plugs, gaskets and guards back on, everyone clear
             </label>
@@ -157,7 +162,7 @@ export function StepForm({
                   const next = e.target.checked ? [...(meta.hazards ?? []), h] : (meta.hazards ?? []).filter((x) => x !== h);
                   set({ hazards: next.length ? next : undefined });
                 }}
-                className="h-6 w-6"
+                className="h-6 w-6 shrink-0"
               />
               It {HAZARD_NEEDS[h].words}
             </label>

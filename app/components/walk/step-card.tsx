@@ -6,6 +6,8 @@ import type { StepMeta } from "~/lib/guides/schema";
 import { AnswerButtons } from "./answer-buttons";
 import { SafetyCaution } from "./safety-caution";
 import { CHECKLIST_LABELS, checklistOf } from "~/lib/guides/safety";
+import { fillRigWords } from "~/lib/guides/rig-words";
+import type { AgitatorDirection } from "~/lib/rigs/schema";
 
 /**
  * One step, driven by the guide's machine restored at that step. Answering sends the event
@@ -14,6 +16,7 @@ import { CHECKLIST_LABELS, checklistOf } from "~/lib/guides/safety";
 export function StepCard({
   machine,
   stepId,
+  rig,
   note,
   onNoteChange,
   onAdvance,
@@ -22,6 +25,8 @@ export function StepCard({
 }: {
   machine: GuideMachine;
   stepId: string;
+  /** The case's rig, for the words a step takes from it (none in the desk's preview). */
+  rig?: { agitatorMixes: AgitatorDirection } | null;
   note: string;
   onNoteChange: (note: string) => void;
   onAdvance: (answer: string, to: string) => void;
@@ -34,7 +39,8 @@ export function StepCard({
   const [showHelp, setShowHelp] = useState(false);
   const [showNote, setShowNote] = useState(note !== "");
   const here = String(snapshot.value);
-  const meta = snapshot.getMeta()[`${machine.id}.${here}`] as StepMeta;
+  const raw = snapshot.getMeta()[`${machine.id}.${here}`] as StepMeta;
+  const meta = { ...raw, prompt: fillRigWords(raw.prompt, rig), help: raw.help === undefined ? undefined : fillRigWords(raw.help, rig) };
 
   const answer = (type: string) => {
     send({ type });
@@ -56,17 +62,13 @@ export function StepCard({
           <Markdown>{meta.prompt}</Markdown>
         </div>
         {safety ? (
-          <ul aria-label="Before you go on" className="mt-3 space-y-1 text-lg">
+          <ul aria-label="Before you go on" className="mt-3 list-disc space-y-1 pl-6 text-lg font-bold">
             {checklistOf(meta).map((item) => (
-              <li key={item} className="flex gap-2">
-                <span aria-hidden="true">☐</span>
-                {CHECKLIST_LABELS[item]}
-              </li>
+              <li key={item}>{CHECKLIST_LABELS[item]}</li>
             ))}
           </ul>
         ) : null}
-        {meta.help && safety ? <Markdown className="mt-3 text-base">{meta.help}</Markdown> : null}
-        {meta.help && !safety ? (
+        {meta.help ? (
           <div className="mt-3">
             <button
               type="button"

@@ -1,4 +1,5 @@
 import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from "react";
+import type { AgitatorDirection } from "~/lib/rigs/schema";
 import { Link } from "react-router";
 import { compileGuide } from "~/lib/guides/compile";
 import type { Guide } from "~/lib/guides/schema";
@@ -15,7 +16,7 @@ export interface WalkScreenProps {
   caseId: string;
   guide: Guide;
   guideTitle: string;
-  rig: { code: string; name: string; hasHourMeter: boolean; engineHours: number };
+  rig: { code: string; name: string; hasHourMeter: boolean; engineHours: number; agitatorMixes: AgitatorDirection };
   stepsToEnd: Record<string, number>;
   causeNames: Record<string, string>;
   serverEvents: QueuedEvent[];
@@ -103,6 +104,7 @@ export function WalkScreen({ caseId, guide, guideTitle, rig, stepsToEnd, causeNa
           key={stepKey}
           machine={machine}
           stepId={here}
+          rig={rig}
           note={note}
           onNoteChange={setNote}
           onAdvance={(answer) => {

@@ -2,13 +2,15 @@ import { z } from "zod";
 import { COMPONENTS } from "./schema";
 
 /** ISO 14224 Annex B failure-mode codes our causes map to, where one fits. */
-export const ISO_14224_MODES = ["FTS", "PLU", "LOO", "ELU", "ELP", "VIB", "NOI", "OHE"] as const;
+export const ISO_14224_MODES = ["FTS", "FTO", "FTC", "PLU", "LOO", "HIO", "ERO", "ELU", "ELP", "INL", "VIB", "NOI", "OHE", "PDE", "STD", "BRD"] as const;
 
 export const causeSchema = z.strictObject({
   code: z.string().regex(/^[a-z][a-z0-9-]*$/),
   name: z.string().min(1),
   component: z.enum(COMPONENTS),
   iso14224: z.enum(ISO_14224_MODES).nullable(),
+  /** Where the mapping comes from ("from memory" until checked against the standard's table). */
+  isoNote: z.string().optional(),
 });
 
 export const causeListSchema = z.array(causeSchema).superRefine((list, ctx) => {

@@ -11,8 +11,14 @@ export interface LineCheck {
   causes: string[];
 }
 
+// Causes found at fixed ends only: a hand-off's cause is suspected, not found by a check.
 const causesFrom = (guide: Guide, from: string) =>
-  new Set([...reachable(guide, from)].map((id) => guide.states[id].meta.cause).filter((c): c is string => !!c));
+  new Set(
+    [...reachable(guide, from)]
+      .filter((id) => guide.states[id].meta.kind === "fixed")
+      .map((id) => guide.states[id].meta.cause)
+      .filter((c): c is string => !!c),
+  );
 
 /**
  * The guide's main line: the checks a crew passes while the fault is still not found. At each

@@ -176,7 +176,10 @@ export function restartsWithoutReturnToService(guide: Guide): SafetyFinding[] {
 
 const INSIDE_TANK = /\b(climb|get|step|go|crawl)\s+(in|into|inside)\s+(the\s+)?tank\b|\benter\s+the\s+tank\b/i;
 
-/** Words that send someone inside a tank (a confined space with paddles): guides reach in from outside or send it to the shop. */
+/**
+ * Words that send someone inside a tank (a confined space with paddles): guides reach in from outside or
+ * send it to the shop. A sentence that forbids it ("never climb into the tank") is the guide doing its job.
+ */
 export function sendsInsideTank(text: string): boolean {
-  return INSIDE_TANK.test(text);
+  return text.split(/(?<=[.!?])\s+|\n+/).some((sentence) => INSIDE_TANK.test(sentence) && !/\b(never|not|don't|no one|nobody)\b/i.test(sentence));
 }

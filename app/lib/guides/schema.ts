@@ -9,7 +9,22 @@ export const FINAL_KINDS: readonly StepKind[] = ["fixed", "handoff"];
 /** Field-math widgets a step may show (built by the field-math screens). */
 export const FIELD_MATH_WIDGETS = ["hose-friction", "suction-head", "load-sheet", "torque"] as const;
 
-export const COMPONENTS = ["pump", "suction", "sump", "agitator", "hose", "nozzle", "valve", "engine", "tank", "lubrication", "material", "operation"] as const;
+export const COMPONENTS = [
+  "pump",
+  "suction",
+  "sump",
+  "agitator",
+  "hose",
+  "nozzle",
+  "valve",
+  "engine",
+  "clutch",
+  "hydraulics",
+  "tank",
+  "lubrication",
+  "material",
+  "operation",
+] as const;
 
 const slug = z.string().regex(/^[a-z][a-z0-9]*(-[a-z0-9]+)*$/, "use lower-case words joined by dashes");
 
@@ -42,7 +57,7 @@ export const stepSchema = z.strictObject({
 export const guideSchema = z.strictObject({
   id: slug,
   title: z.string().trim().min(1).max(120),
-  summary: z.string().trim().min(1).max(600),
+  summary: z.string().trim().min(1, "write one sentence on what this guide is for").max(600, "keep the summary under 600 characters"),
   symptoms: z.array(z.string().trim().min(2).max(120)).min(1, "list at least one symptom phrase"),
   initial: z.string().min(1),
   states: z.record(slug, stepSchema).refine((s) => Object.keys(s).length > 0, "a guide needs at least one step"),

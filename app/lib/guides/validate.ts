@@ -4,6 +4,7 @@ import { reachable, stepsToEnd } from "./graph";
 import { ANSWER_LABELS, ANSWERS_BY_KIND, type StepAnswer } from "../vocabulary";
 import { guideSchema, isFinalKind, STEP_KINDS, type Guide, type StepKind } from "./schema";
 import { CORE_STOP, restartsWithoutReturnToService, sendsInsideTank, unguardedSteps } from "./safety";
+import { RIG_WORDS, unknownRigWords } from "./rig-words";
 
 export interface GuideProblem {
   guide: string;
@@ -133,13 +134,23 @@ function checkStructure(raw: Loose, causes: Cause[], add: (message: string, step
     if (step.meta.returnsToService && (kind !== "task" || step.meta.handsOn))
       add("a return-to-service step is a task done before the restart, not hands-on work", id);
     const text = `${step.meta.prompt ?? ""} ${step.meta.help ?? ""}`;
+    for (const name of unknownRigWords(text))
+      add(
+        `{{${name}}} is not a rig word: use ${Object.keys(RIG_WORDS)
+          .map((w) => `{{${w}}}`)
+          .join(" or ")}`,
+        id,
+      );
     if (sendsInsideTank(text)) add("sends someone inside the tank: reach the part from outside (hatch, drain, pole) or send the job to the shop", id);
     if (kind === "fixed") {
       if (!step.meta.cause) add("a fixed step needs a cause code", id);
       else if (!causeCodes.has(step.meta.cause)) add(`cause "${step.meta.cause}" is not in the cause list`, id);
       if (!step.meta.component) add("a fixed step needs a component", id);
+    } else if (kind === "handoff") {
+      // A hand-off's cause is what the crew suspects; the shop confirms it.
+      if (step.meta.cause && !causeCodes.has(step.meta.cause)) add(`suspected cause "${step.meta.cause}" is not in the cause list`, id);
     } else if (step.meta.cause) {
-      add(`only fixed steps carry a cause (found "${step.meta.cause}" on a ${kind} step)`, id);
+      add(`only fixed and hand-off steps carry a cause (found "${step.meta.cause}" on a ${kind} step)`, id);
     }
   }
 
@@ -169,5 +180,6 @@ const FIELD_WORDS: Record<string, string> = {
 export function plainProblem(message: string): string {
   return message
     .replace(/^meta\.(\w+): /, (_m, field: string) => `${FIELD_WORDS[field] ?? field}: `)
-    .replace(/\banswer (YES|NO|DONE|CANT|ACK)\b/g, (_m, a: StepAnswer) => `the “${ANSWER_LABELS[a]}” answer`);
+    .replace(/\banswer (YES|NO|DONE|CANT|ACK)\b/g, (_m, a: StepAnswer) => `the “${ANSWER_LABELS[a]}” answer`)
+    .replace(/"([^"]*)"/g, "“$1”");
 }

@@ -13,6 +13,20 @@ export const torqueSpecSchema = z.object({
   ftLb: z.number({ error: "Give the torque in ft·lb." }).min(1, "Torque must be at least 1 ft·lb.").max(2000, "Over 2,000 ft·lb is not a rig part figure."),
 });
 
+/** Which way the agitator turns when it mixes: rigs differ, and the stall guide names this rig's directions. */
+export const AGITATOR_DIRECTIONS = ["forward", "reverse"] as const;
+export type AgitatorDirection = (typeof AGITATOR_DIRECTIONS)[number];
+
+/** A figure from the pump's plate or curve that may not be known yet (blank is "not known"). */
+const pumpFigure = (what: string, min: number, max: number, unit: string) =>
+  z
+    .number({ error: `Give the ${what} in ${unit}, or leave it blank.` })
+    .min(min, `The ${what} must be at least ${min} ${unit}.`)
+    .max(max, `The ${what} over ${max.toLocaleString("en-US")} ${unit} is not a hydroseeding pump.`)
+    .nullable()
+    .optional()
+    .transform((v) => v ?? null);
+
 /** The one definition of a rig's editable fields: forms, API and seeds all use it. */
 export const rigInputSchema = z.object({
   code: z
@@ -47,6 +61,18 @@ export const rigInputSchema = z.object({
     .int("Elevation is a whole number of feet.")
     .min(-300, "Elevation below −300 ft is not plausible.")
     .max(14_000, "Elevation above 14,000 ft is not plausible."),
+  agitatorMixes: z.enum(AGITATOR_DIRECTIONS, { error: "Choose which way the agitator turns when it mixes: forward or reverse." }).default("forward"),
+  pumpRatedGpm: pumpFigure("pump's rated flow", 5, 2000, "gpm"),
+  pumpRatedPsi: pumpFigure("pump's rated pressure", 5, 500, "psi"),
+  pumpNpshrFt: pumpFigure("suction the pump needs", 0, 60, "ft"),
+  carrierRatingLb: z
+    .number({ error: "Give what the truck or trailer is rated to carry, in lb, or leave it blank." })
+    .int("Give whole pounds.")
+    .min(500, "A carrier rated under 500 lb is not plausible.")
+    .max(80_000, "Over 80,000 lb is not a hydroseeding carrier.")
+    .nullable()
+    .optional()
+    .transform((v) => v ?? null),
   nozzleTips: z.array(nozzleTipSchema).max(8, "Record at most 8 tips.").default([]),
   torqueSpecs: z.array(torqueSpecSchema).max(20, "Record at most 20 torque figures.").default([]),
   notes: z.string().trim().max(2000, "Keep notes under 2,000 characters.").optional(),

@@ -1,4 +1,4 @@
-import type { NozzleTipInput, TorqueSpecInput } from "./schema";
+import type { AgitatorDirection, NozzleTipInput, TorqueSpecInput } from "./schema";
 
 /** What the field-math screens and widgets are filled from: one rig's specs, in one shape everywhere. */
 export interface RigSpecs {
@@ -8,15 +8,37 @@ export interface RigSpecs {
   hoseLengthFt: number;
   hoseDiameterIn: number;
   yardElevationFt: number;
+  agitatorMixes: AgitatorDirection;
+  /** From the pump's plate or curve; null until someone records it. */
+  pumpRatedGpm: number | null;
+  pumpRatedPsi: number | null;
+  /** How much suction the pump needs, from its curve (NPSH required), in feet. */
+  pumpNpshrFt: number | null;
   nozzleTips: NozzleTipInput[];
   torqueSpecs: TorqueSpecInput[];
 }
 
 /** The columns a rig's specs are read from. */
-export const RIG_SPEC_FIELDS = ["code", "name", "tankGal", "hoseLengthFt", "hoseDiameterIn", "yardElevationFt", "nozzleTips", "torqueSpecs"] as const;
+export const RIG_SPEC_FIELDS = [
+  "code",
+  "name",
+  "tankGal",
+  "hoseLengthFt",
+  "hoseDiameterIn",
+  "yardElevationFt",
+  "agitatorMixes",
+  "pumpRatedGpm",
+  "pumpRatedPsi",
+  "pumpNpshrFt",
+  "nozzleTips",
+  "torqueSpecs",
+] as const;
 
 /** A rig's specs from a stored rig (its torque figures may be unset). */
-export function rigSpecsOf(rig: Omit<RigSpecs, "torqueSpecs"> & { torqueSpecs?: TorqueSpecInput[] | null }): RigSpecs {
+export function rigSpecsOf(
+  rig: Omit<RigSpecs, "torqueSpecs" | "agitatorMixes" | "pumpRatedGpm" | "pumpRatedPsi" | "pumpNpshrFt"> &
+    Partial<Pick<RigSpecs, "agitatorMixes" | "pumpRatedGpm" | "pumpRatedPsi" | "pumpNpshrFt">> & { torqueSpecs?: TorqueSpecInput[] | null },
+): RigSpecs {
   return {
     code: rig.code,
     name: rig.name,
@@ -24,6 +46,10 @@ export function rigSpecsOf(rig: Omit<RigSpecs, "torqueSpecs"> & { torqueSpecs?: 
     hoseLengthFt: rig.hoseLengthFt,
     hoseDiameterIn: rig.hoseDiameterIn,
     yardElevationFt: rig.yardElevationFt,
+    agitatorMixes: rig.agitatorMixes ?? "forward",
+    pumpRatedGpm: rig.pumpRatedGpm ?? null,
+    pumpRatedPsi: rig.pumpRatedPsi ?? null,
+    pumpNpshrFt: rig.pumpNpshrFt ?? null,
     nozzleTips: rig.nozzleTips,
     torqueSpecs: rig.torqueSpecs ?? [],
   };

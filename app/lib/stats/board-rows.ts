@@ -74,12 +74,14 @@ const top = <T extends { count: number }>(counts: Map<string, number>, make: (ke
 const add = (m: Map<string, number>, key: string, n: number) => m.set(key, (m.get(key) ?? 0) + n);
 
 export function foldMix(rows: MixRow[]): Pick<BoardAggregates, "causes" | "people"> {
-  const causes = new Map<string, { cause: string; count: number; downtimeHours: number }>();
+  const causes = new Map<string, { cause: string; count: number; suspected: number; downtimeHours: number }>();
   const people = new Map<number, { name: string; cases: number; handoffs: number; guides: Map<string, number>; causes: Map<string, number> }>();
   for (const r of rows) {
     if (r.cause) {
-      const c = causes.get(r.cause) ?? { cause: r.cause, count: 0, downtimeHours: 0 };
+      const c = causes.get(r.cause) ?? { cause: r.cause, count: 0, suspected: 0, downtimeHours: 0 };
       c.count += r.cases;
+      // A hand-off's cause is what the crew suspected; a fixed case's was found.
+      c.suspected += r.handoffs;
       c.downtimeHours += r.repairSeconds / 3600;
       causes.set(r.cause, c);
     }

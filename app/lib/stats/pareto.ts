@@ -1,6 +1,8 @@
 export interface CauseAggregate {
   cause: string;
   count: number;
+  /** Of `count`, the cases handed off with this cause suspected, not found (0 when not known). */
+  suspected?: number;
   downtimeHours: number;
 }
 

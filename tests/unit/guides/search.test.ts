@@ -60,7 +60,34 @@ const PHRASES: [string, string][] = [
   ["slurry too thick to spray", "slurry-too-thick"],
   ["load sat too long", "slurry-too-thick"],
   ["thick mix", "slurry-too-thick"],
+  ["valve wont open", "valve-trouble"],
+  ["handle on the valve is stuck", "valve-trouble"],
+  ["recirc valve jammed", "valve-trouble"],
+  ["valve plugged when we loaded", "valve-trouble"],
+  ["tips wearing out too fast", "excessive-wear"],
+  ["impeller worn out already", "excessive-wear"],
+  ["gritty fertilizer eating the pump", "excessive-wear"],
+  ["clutch wont engage", "pump-not-turning"],
+  ["pump wont turn", "pump-not-turning"],
+  ["clutch clicks nothing happens", "pump-not-turning"],
+  ["belt squeals pump not spinning", "pump-not-turning"],
+  ["hydraulic hose leaking", "hydraulic-drive"],
+  ["agitator weak and slow", "hydraulic-drive"],
+  ["hydraulic oil getting hot", "hydraulic-drive"],
 ];
+
+describe("the new fault families are found by their crew phrases", () => {
+  it.each(PHRASES.filter(([, id]) => ["valve-trouble", "excessive-wear", "pump-not-turning", "hydraulic-drive"].includes(id)))(
+    "%s → %s in the top 3",
+    (phrase, id) => {
+      expect(
+        search(phrase)
+          .slice(0, 3)
+          .map((h) => h.slug),
+      ).toContain(id);
+    },
+  );
+});
 
 describe("symptom search", () => {
   it(`puts the right guide in the top 3 for at least 90 % of ${PHRASES.length} crew phrases`, () => {

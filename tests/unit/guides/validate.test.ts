@@ -25,7 +25,7 @@ const EXPECTED: Record<string, RegExp> = {
   "hands-on-safety": /step "stop": a safety step is the shut-down stop itself/,
   "bad-kind": /step "look": meta\.kind: Invalid option/,
   "end-with-answers": /step "gone": a handoff step is an end and takes no answers/,
-  "cause-on-check": /step "look": only fixed steps carry a cause/,
+  "cause-on-check": /step "look": only fixed and hand-off steps carry a cause/,
   // The safety model (domain.md, "Safety"): a restart ends the shut-down; a stop covers what the step exposes.
   "restart-then-hands-on": /step "fix": is hands-on but step "run" puts energy back and no safety step comes after it/,
   "wet-side-uncovered": /step "fix": opens the wet side .* does not cover: suction valve closed, or the tank run down/,
