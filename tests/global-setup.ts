@@ -22,7 +22,8 @@ export async function setup(project: TestProject) {
   const root = path.resolve(import.meta.dirname, "..");
   ensureChromium();
   const base = Number(process.env.TEST_DB_PORT ?? 3417);
-  const dataDir = path.join(root, ".data/test");
+  // A second run on another port (TEST_DB_PORT) gets its own data dir: two servers on one dir would corrupt it.
+  const dataDir = path.join(root, process.env.TEST_DB_PORT ? `.data/test-${base}` : ".data/test");
   fs.rmSync(path.join(dataDir, "outbox"), { recursive: true, force: true });
   services = await startLocalServices({ dataDir, database: "tankside_test", dbPort: base, smtpPort: base + 1, s3Port: base + 2, log: () => {} });
   project.provide("serviceEnv", services.env);

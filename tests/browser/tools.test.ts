@@ -30,13 +30,20 @@ describe("field math at 360 px", () => {
     await p.goto(`${harness.app.url}/rigs/CF-07/fix`);
     await p.getByRole("button", { name: /Weak or short stream/ }).click();
     await p.waitForURL(/\/walk$/);
-    for (let i = 0; i < 3; i++) await p.getByRole("button", { name: "Yes", exact: true }).click();
+    // Throttle at speed, recirculation closed, no froth, no bubbles, hose free of kinks, stream not watery: the hose figure.
+    for (const answer of ["Yes", "Yes", "No", "No", "Yes", "No"]) await p.getByRole("button", { name: answer, exact: true }).click();
     const widget = p.getByRole("region", { name: "Hose friction for this rig" });
     await widget.waitFor();
     // CF-07 carries 300 ft of 1½ in hose: 3 sections of 100 ft, C = 24 (Rohnert Park).
     await expect.poll(() => widget.getByLabel("100 ft sections").inputValue()).toBe("3");
+    // No verdict until the crew confirms or types the flow: the rated flow is a start, not a measurement.
+    await widget.getByRole("button", { name: /Use the rated 250 gpm/ }).waitFor();
+    expect(await widget.getByText(/Friction loss/).count()).toBe(0);
+    await widget.getByLabel("Flow through the hose").fill("100");
     await widget.getByText(/Friction loss: 72 psi/).waitFor();
+    await widget.getByText(/Slurry loses more than water/).waitFor();
     await widget.getByText(/hose is eating most of the pressure/).waitFor();
+    expect(await widget.getByText(/Rohnert Park/).isVisible()).toBe(false);
     await p.close();
   });
 });

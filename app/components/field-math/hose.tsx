@@ -1,21 +1,43 @@
 import { useState } from "react";
 import { hoseFriction, reachByHoseLength } from "~/lib/field-math/hose";
-import { FRICTION_TABLES, tableFor } from "~/lib/field-math/hose-tables";
+import { FRICTION_TABLES, HAZEN_WILLIAMS, tableFor } from "~/lib/field-math/hose-tables";
 import { fmt, ftToM, psiToKpa } from "~/lib/field-math/units";
 import { NumberField, ResultBox, SourceNote, toNumber, tryFieldMath } from "./kit";
 import type { RigSpecs } from "~/lib/rigs/specs";
 
-/** Hose friction for a flow, and what each 50 ft of hose costs in reach at the pump's pressure. */
+/** The ways to work friction out, in words a crew reads (the sources stay in the details line). */
+const METHOD_WORDS: Record<string, string> = {
+  "rohnert-park": "Hose table (most hose sizes)",
+  ifsta: "Second hose table (1¾ and 2 in)",
+  [HAZEN_WILLIAMS.id]: "Rigid-pipe formula (any size)",
+};
+const sizes = (id: string) => {
+  const t = FRICTION_TABLES.find((x) => x.id === id);
+  return t
+    ? ` — ${Object.keys(t.coefficients)
+        .map(Number)
+        .sort((a, b) => a - b)
+        .join(", ")} in`
+    : "";
+};
+
+/**
+ * Hose friction for a flow, and what each 50 ft of hose costs in reach at the pump's pressure. Starts from
+ * the rig's hose and pump figures, but says nothing about the run until the flow is confirmed or typed:
+ * a default flow presented as fact would give a verdict about a pump nobody measured.
+ */
 export function HoseMath({ rig, compact = false }: { rig?: RigSpecs; compact?: boolean }) {
   const length = rig?.hoseLengthFt ?? 300;
   const [hundreds, setHundreds] = useState(String(Math.floor(length / 100)));
   const [fifties, setFifties] = useState(String(Math.round((length % 100) / 50)));
   const [diameter, setDiameter] = useState(String(rig?.hoseDiameterIn ?? 1.5));
-  const [flow, setFlow] = useState("100");
+  const rated = rig?.pumpRatedGpm ?? null;
+  const [flow, setFlow] = useState(rated !== null ? String(rated) : "");
+  const [flowConfirmed, setFlowConfirmed] = useState(false);
   const [rise, setRise] = useState("0");
-  const [pump, setPump] = useState("100");
+  const [pump, setPump] = useState(rig?.pumpRatedPsi != null ? String(rig.pumpRatedPsi) : "100");
   const [tip, setTip] = useState("0.75");
-  const [table, setTable] = useState(tableFor(rig?.hoseDiameterIn ?? 1.5)?.id ?? "rohnert-park");
+  const [table, setTable] = useState(tableFor(rig?.hoseDiameterIn ?? 1.5)?.id ?? HAZEN_WILLIAMS.id);
 
   const lengthFt = 100 * toNumber(hundreds) + 50 * toNumber(fifties);
   const friction = tryFieldMath(hoseFriction, { flowGpm: toNumber(flow), lengthFt, diameterIn: toNumber(diameter), table, elevationFt: toNumber(rise) });
@@ -27,7 +49,7 @@ export function HoseMath({ rig, compact = false }: { rig?: RigSpecs; compact?: b
     elevationFt: toNumber(rise),
     maxLengthFt: Math.max(100, Math.min(1000, lengthFt || 300)),
   });
-  const r = friction.result;
+  const r = flowConfirmed ? friction.result : null;
   const pumpPsi = toNumber(pump);
   const share = r && pumpPsi > 0 ? r.totalLossPsi / pumpPsi : null;
 
@@ -42,26 +64,52 @@ export function HoseMath({ rig, compact = false }: { rig?: RigSpecs; compact?: b
       </p>
       {friction.errors.lengthFt ? <p className="font-bold text-stop">{friction.errors.lengthFt}</p> : null}
       <NumberField id="hose-diameter" label="Hose inside diameter" value={diameter} onChange={setDiameter} unit="in" error={friction.errors.diameterIn} />
-      <label className="block font-bold">
-        Coefficient table
-        <select
-          value={table}
-          onChange={(e) => setTable(e.target.value)}
-          className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink bg-paper px-3 text-lg"
-        >
-          {FRICTION_TABLES.map((t) => (
-            <option key={t.id} value={t.id}>
-              {t.name} (
-              {Object.keys(t.coefficients)
-                .map(Number)
-                .sort((a, b) => a - b)
-                .join(", ")}{" "}
-              in)
-            </option>
-          ))}
-        </select>
-      </label>
-      <NumberField id="hose-flow" label="Flow" value={flow} onChange={setFlow} unit="gpm" error={friction.errors.flowGpm} />
+      {compact ? null : (
+        <label className="block font-bold">
+          How to work it out
+          <select
+            value={table}
+            onChange={(e) => setTable(e.target.value)}
+            className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink bg-paper px-3 text-lg"
+          >
+            {Object.keys(METHOD_WORDS).map((id) => (
+              <option key={id} value={id}>
+                {METHOD_WORDS[id]}
+                {sizes(id)}
+              </option>
+            ))}
+          </select>
+        </label>
+      )}
+      <NumberField
+        id="hose-flow"
+        label="Flow through the hose"
+        value={flow}
+        onChange={(v) => {
+          setFlow(v);
+          setFlowConfirmed(true);
+        }}
+        unit="gpm"
+        beside={
+          rated !== null
+            ? `This rig's pump is rated ${fmt(rated)} gpm; a worn pump or a long run gives less.`
+            : "Type the flow: from a flow meter, or the pump's rating."
+        }
+        error={flowConfirmed ? friction.errors.flowGpm : undefined}
+      />
+      {!flowConfirmed ? (
+        rated !== null ? (
+          <button
+            type="button"
+            onClick={() => setFlowConfirmed(true)}
+            className="min-h-14 w-full rounded-md border-2 border-ink bg-paper px-3 text-lg font-bold"
+          >
+            Use the rated {fmt(rated)} gpm
+          </button>
+        ) : (
+          <p className="font-bold">Type the flow to see what the hose costs.</p>
+        )
+      ) : null}
       {compact ? null : (
         <NumberField
           id="hose-rise"
@@ -84,8 +132,9 @@ export function HoseMath({ rig, compact = false }: { rig?: RigSpecs; compact?: b
               That is {fmt(share * 100)} % of the pump's {fmt(pumpPsi)} psi{share > 0.5 ? ": the hose is eating most of the pressure." : "."}
             </p>
           ) : null}
+          <p className="mt-1">Slurry loses more than water: read this as the least you will lose.</p>
           <SourceNote>
-            C = {r.coefficient} for {diameter} in hose, from {r.source}. {r.note}
+            {r.table === HAZEN_WILLIAMS.id ? `${r.source}.` : `C = ${r.coefficient} for ${diameter} in hose (FL = C·Q²·L), from ${r.source}.`} {r.note}
           </SourceNote>
         </ResultBox>
       ) : null}

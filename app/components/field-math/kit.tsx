@@ -66,6 +66,12 @@ export function ResultBox({ children, tone = "plain" }: { children: React.ReactN
   );
 }
 
+/** Where a figure comes from: one line to open, so the crew reads the figure and the trainer can check it. */
 export function SourceNote({ children }: { children: React.ReactNode }) {
-  return <p className="mt-2 text-sm">{children}</p>;
+  return (
+    <details className="mt-2 text-sm">
+      <summary className="min-h-10 cursor-pointer py-2 font-bold">Where this figure comes from</summary>
+      <p>{children}</p>
+    </details>
+  );
 }

@@ -1,3 +1,4 @@
+import { FiberCheckMath } from "./fiber-check";
 import { HoseMath } from "./hose";
 import { LoadSheetMath } from "./load-sheet";
 import { SuctionMath } from "./suction";
@@ -8,6 +9,7 @@ const WIDGETS = {
   "hose-friction": { title: "Hose friction for this rig", Screen: HoseMath },
   "suction-head": { title: "Suction check for this rig", Screen: SuctionMath },
   "load-sheet": { title: "Load sheet for this rig", Screen: LoadSheetMath },
+  "fiber-check": { title: "What went into this load", Screen: FiberCheckMath },
   torque: { title: "Torque figures for this rig", Screen: TorqueMath },
 } as const;
 

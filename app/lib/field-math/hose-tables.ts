@@ -27,6 +27,21 @@ export const FRICTION_TABLES: FrictionTable[] = [
 
 export const tableById = (id: string) => FRICTION_TABLES.find((t) => t.id === id);
 
+/**
+ * The rigid-pipe formula offered beside the tables, and used for a hose size no table lists (1¼ in):
+ * Hazen-Williams, US units, hf (ft of water per 100 ft) = 0.2083·(100/C)^1.852·q^1.852 / d^4.8655.
+ */
+export const HAZEN_WILLIAMS = {
+  id: "hazen-williams",
+  name: "Rigid-pipe formula (Hazen-Williams)",
+  source: "Hazen-Williams formula for water in full pipe, US units (hf = 0.2083·(100/C)^1.852·q^1.852/d^4.8655)",
+  /** Smooth rubber-lined hose (from memory; confirm C for a hose from its maker). */
+  defaultC: 140,
+} as const;
+
+/** Every way the friction of a hose run can be worked out: the tables, then the formula. */
+export const FRICTION_METHODS: [string, ...string[]] = [HAZEN_WILLIAMS.id, ...FRICTION_TABLES.map((t) => t.id)];
+
 /** The first table with a coefficient for this diameter, preferring the one asked for. */
 export function tableFor(diameterIn: number, preferred?: string): FrictionTable | undefined {
   const has = (t: FrictionTable) => String(diameterIn) in t.coefficients;

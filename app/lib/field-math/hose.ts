@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { FRICTION_TABLES, tableById, tableFor } from "./hose-tables";
+import { FRICTION_METHODS, HAZEN_WILLIAMS, tableById, tableFor } from "./hose-tables";
 import { FieldMathInputError, num, parseInput } from "./validate";
 
 /** Water figures are a floor: slurry with fiber loses more than water in the same hose. */
@@ -11,17 +11,41 @@ export const hoseFrictionInput = z.object({
   flowGpm: num("Flow", 0, 1500, { minInclusive: false }),
   lengthFt: num("Hose length", 0, 2000, { minInclusive: false }),
   diameterIn: num("Hose diameter", 0.5, 6),
-  table: z
-    .enum(FRICTION_TABLES.map((t) => t.id) as [string, ...string[]], { error: `table must be one of ${FRICTION_TABLES.map((t) => t.id).join(", ")}` })
-    .optional(),
+  table: z.enum(FRICTION_METHODS, { error: `table must be one of ${FRICTION_METHODS.join(", ")}` }).optional(),
+  /** Hazen-Williams roughness C (the formula only). */
+  hazenC: num("Hazen-Williams C", 60, 160).optional(),
   elevationFt: num("Elevation change", -500, 500).optional(),
 });
 export type HoseFrictionInput = z.infer<typeof hoseFrictionInput>;
 
-/** Friction loss FL = C·Q²·L in psi, plus the head of any rise to the nozzle (negative for downhill). */
+/** Hazen-Williams friction in psi for water through `lengthFt` of `diameterIn` hose at `flowGpm`. */
+export function hazenWilliamsPsi(flowGpm: number, lengthFt: number, diameterIn: number, c: number = HAZEN_WILLIAMS.defaultC): number {
+  const hfPer100 = (0.2083 * (100 / c) ** 1.852 * flowGpm ** 1.852) / diameterIn ** 4.8655;
+  return hfPer100 * (lengthFt / 100) * PSI_PER_FT_RISE;
+}
+
+/**
+ * Friction loss in psi, plus the head of any rise to the nozzle (negative for downhill): FL = C·Q²·L from
+ * a fire-service table, or the rigid-pipe formula when asked for or when no table lists the hose size.
+ */
 export function hoseFriction(input: unknown) {
-  const { flowGpm, lengthFt, diameterIn, table: wanted, elevationFt = 0 } = parseInput(hoseFrictionInput, input);
-  const table = tableFor(diameterIn, wanted);
+  const { flowGpm, lengthFt, diameterIn, table: wanted, hazenC, elevationFt = 0 } = parseInput(hoseFrictionInput, input);
+  const elevationPsi = PSI_PER_FT_RISE * elevationFt;
+  const table = wanted === HAZEN_WILLIAMS.id ? undefined : tableFor(diameterIn, wanted);
+  if (wanted === HAZEN_WILLIAMS.id || (!table && !wanted)) {
+    const c = hazenC ?? HAZEN_WILLIAMS.defaultC;
+    const frictionLossPsi = hazenWilliamsPsi(flowGpm, lengthFt, diameterIn, c);
+    return {
+      frictionLossPsi,
+      elevationPsi,
+      totalLossPsi: frictionLossPsi + elevationPsi,
+      coefficient: c,
+      table: HAZEN_WILLIAMS.id,
+      tableName: HAZEN_WILLIAMS.name,
+      source: `${HAZEN_WILLIAMS.source}, C = ${c}${hazenC ? "" : " for smooth rubber-lined hose (from memory; ask the hose maker)"}${wanted ? "" : `; no hose table lists ${diameterIn} in`}`,
+      note: SLURRY_NOTE,
+    };
+  }
   if (!table || (wanted && table.id !== wanted)) {
     const t = wanted ? tableById(wanted)! : undefined;
     throw new FieldMathInputError({
@@ -39,7 +63,6 @@ export function hoseFriction(input: unknown) {
   const q = flowGpm / 100;
   const l = lengthFt / 100;
   const frictionLossPsi = c * q * q * l;
-  const elevationPsi = PSI_PER_FT_RISE * elevationFt;
   return {
     frictionLossPsi,
     elevationPsi,
@@ -95,15 +118,30 @@ export const hoseReachInput = z.object({
 export function reachByHoseLength(input: unknown) {
   const { pumpPsi, tipIn, diameterIn, table: wanted, elevationFt = 0, maxLengthFt = 500 } = parseInput(hoseReachInput, input);
   const probe = hoseFriction({ flowGpm: 100, lengthFt: 100, diameterIn, table: wanted });
-  const c = probe.coefficient;
   const rise = PSI_PER_FT_RISE * elevationFt;
   if (pumpPsi - rise <= 0) throw new FieldMathInputError({ pumpPsi: "the pump cannot lift water that high" });
+  const loss = (flowGpm: number, lengthFt: number) => hoseFriction({ flowGpm, lengthFt, diameterIn, table: probe.table }).frictionLossPsi;
   const rows = [];
   for (let lengthFt = 50; lengthFt <= maxLengthFt; lengthFt += 50) {
-    const k = (c * lengthFt * TIP_FLOW_K ** 2 * tipIn ** 4) / 1e6;
-    const nozzlePsi = (pumpPsi - rise) / (1 + k);
+    const nozzlePsi = settleNozzlePsi(pumpPsi - rise, (np) => loss(tipFlowGpm(tipIn, np), lengthFt));
     const flowGpm = tipFlowGpm(tipIn, nozzlePsi);
     rows.push({ lengthFt, flowGpm, nozzlePsi, frictionLossPsi: pumpPsi - rise - nozzlePsi, reachFt: reachFt(tipIn, nozzlePsi) });
   }
   return { rows, table: probe.table, tableName: probe.tableName, source: probe.source, note: SLURRY_NOTE };
+}
+
+/**
+ * The nozzle pressure where what the pump gives (`available`, after any rise) = friction at the tip's flow
+ * + nozzle pressure. Friction grows with flow and flow with nozzle pressure, so one root lies in
+ * [0, available]; bisection finds it for the table's C·Q² and the formula's q^1.852 alike.
+ */
+function settleNozzlePsi(available: number, frictionAt: (nozzlePsi: number) => number): number {
+  let lo = 0;
+  let hi = available;
+  for (let i = 0; i < 100 && hi - lo > 1e-9; i++) {
+    const mid = (lo + hi) / 2;
+    if (mid + frictionAt(mid) > available) hi = mid;
+    else lo = mid;
+  }
+  return (lo + hi) / 2;
 }

@@ -14,6 +14,8 @@ export interface RigSpecs {
   pumpRatedPsi: number | null;
   /** How much suction the pump needs, from its curve (NPSH required), in feet. */
   pumpNpshrFt: number | null;
+  /** What the truck or trailer is rated to carry, in lb; null when not recorded. */
+  carrierRatingLb: number | null;
   nozzleTips: NozzleTipInput[];
   torqueSpecs: TorqueSpecInput[];
 }
@@ -30,14 +32,15 @@ export const RIG_SPEC_FIELDS = [
   "pumpRatedGpm",
   "pumpRatedPsi",
   "pumpNpshrFt",
+  "carrierRatingLb",
   "nozzleTips",
   "torqueSpecs",
 ] as const;
 
 /** A rig's specs from a stored rig (its torque figures may be unset). */
 export function rigSpecsOf(
-  rig: Omit<RigSpecs, "torqueSpecs" | "agitatorMixes" | "pumpRatedGpm" | "pumpRatedPsi" | "pumpNpshrFt"> &
-    Partial<Pick<RigSpecs, "agitatorMixes" | "pumpRatedGpm" | "pumpRatedPsi" | "pumpNpshrFt">> & { torqueSpecs?: TorqueSpecInput[] | null },
+  rig: Omit<RigSpecs, "torqueSpecs" | "agitatorMixes" | "pumpRatedGpm" | "pumpRatedPsi" | "pumpNpshrFt" | "carrierRatingLb"> &
+    Partial<Pick<RigSpecs, "agitatorMixes" | "pumpRatedGpm" | "pumpRatedPsi" | "pumpNpshrFt" | "carrierRatingLb">> & { torqueSpecs?: TorqueSpecInput[] | null },
 ): RigSpecs {
   return {
     code: rig.code,
@@ -50,6 +53,7 @@ export function rigSpecsOf(
     pumpRatedGpm: rig.pumpRatedGpm ?? null,
     pumpRatedPsi: rig.pumpRatedPsi ?? null,
     pumpNpshrFt: rig.pumpNpshrFt ?? null,
+    carrierRatingLb: rig.carrierRatingLb ?? null,
     nozzleTips: rig.nozzleTips,
     torqueSpecs: rig.torqueSpecs ?? [],
   };

@@ -51,7 +51,10 @@ describe("hose friction loss FL = C·Q²·L", () => {
       lengthFt: "Hose length over 2,000 is not plausible",
       diameterIn: "Hose diameter must be a number",
     });
-    expect(fields(() => hoseFriction({ flowGpm: 100, lengthFt: 100, diameterIn: 1.25 })).diameterIn).toMatch(/no published coefficient for 1.25 in/);
+    // A size no table lists is worked by the rigid-pipe formula (below), not refused; a table asked for by name still is.
+    expect(fields(() => hoseFriction({ flowGpm: 100, lengthFt: 100, diameterIn: 1.25, table: "rohnert-park" })).diameterIn).toMatch(
+      /no published coefficient for 1.25 in/,
+    );
     expect(fields(() => hoseFriction({ flowGpm: 100, lengthFt: 100, diameterIn: 1.5, table: "ifsta" })).diameterIn).toMatch(/IFSTA.*1.75, 2 in/);
     expect(fields(() => hoseFriction({ flowGpm: Infinity, lengthFt: 100, diameterIn: 1.5 })).flowGpm).toMatch(/number/);
     expect(fields(() => hoseFriction({ flowGpm: 100, lengthFt: 100, diameterIn: 1.5, table: "other" })).table).toMatch(/rohnert-park, ifsta/);
@@ -84,5 +87,39 @@ describe("reach by hose length", () => {
 
   it("says when the pump cannot lift the water that high", () => {
     expect(fields(() => reachByHoseLength({ pumpPsi: 40, tipIn: 1, diameterIn: 1.5, elevationFt: 100 })).pumpPsi).toMatch(/cannot lift/);
+  });
+});
+
+describe("Hazen-Williams beside the tables", () => {
+  // hf = 0.2083·(100/C)^1.852·q^1.852/d^4.8655 ft per 100 ft (references.md, "Hose and nozzle hydraulics"); worked by hand:
+  // 100 gpm, 1.5 in, C 140: 0.2083 × 0.5363 × 5,058.2 ÷ 7.1905 = 78.58 ft per 100 ft → × 0.434 psi/ft = 34.10 psi.
+  it("gives 34.1 psi for 100 gpm through 100 ft of 1½ in hose at C = 140 (hand-worked from the formula)", () => {
+    const r = hoseFriction({ flowGpm: 100, lengthFt: 100, diameterIn: 1.5, table: "hazen-williams", hazenC: 140 });
+    expect(r.frictionLossPsi).toBeCloseTo(34.1, 1);
+    expect(r.source).toMatch(/Hazen-Williams/);
+  });
+
+  it("gives a 1¼ in hose a figure with its source instead of an error (60 gpm × 200 ft → 64.3 psi, hand-worked)", () => {
+    const r = hoseFriction({ flowGpm: 60, lengthFt: 200, diameterIn: 1.25 });
+    expect(r.table).toBe("hazen-williams");
+    expect(r.frictionLossPsi).toBeCloseTo(64.3, 1);
+    expect(r.source).toMatch(/no hose table lists 1.25 in/);
+    expect(r.note).toMatch(/Slurry loses more pressure than water/);
+  });
+
+  it("loses more with a rougher hose (lower C) and scales with length", () => {
+    const smooth = hoseFriction({ flowGpm: 100, lengthFt: 100, diameterIn: 1.5, table: "hazen-williams", hazenC: 140 }).frictionLossPsi;
+    const rough = hoseFriction({ flowGpm: 100, lengthFt: 100, diameterIn: 1.5, table: "hazen-williams", hazenC: 100 }).frictionLossPsi;
+    const double = hoseFriction({ flowGpm: 100, lengthFt: 200, diameterIn: 1.5, table: "hazen-williams", hazenC: 140 }).frictionLossPsi;
+    expect(rough).toBeGreaterThan(smooth);
+    expect(double).toBeCloseTo(2 * smooth, 10);
+  });
+
+  it("settles reach rows for the formula too: friction at the row's flow plus nozzle pressure is the pump's", () => {
+    const { rows } = reachByHoseLength({ pumpPsi: 100, tipIn: 0.75, diameterIn: 1.25, maxLengthFt: 200 });
+    for (const r of rows) {
+      const fl = hoseFriction({ flowGpm: r.flowGpm, lengthFt: r.lengthFt, diameterIn: 1.25 }).frictionLossPsi;
+      expect(fl + r.nozzlePsi).toBeCloseTo(100, 6);
+    }
   });
 });

@@ -179,3 +179,24 @@ describe("corrected advice, by guide and step", () => {
     expect(step("pump-not-turning", "handoff-clutch").meta.cause).toBe("clutch-not-engaging");
   });
 });
+
+describe("the cause list", () => {
+  it("has no cause that no step uses", async () => {
+    const { causes } = await import("../../helpers/guides");
+    const used = new Set([...library.values()].flatMap((g) => Object.values(g.states).flatMap((s) => (s.meta.cause ? [s.meta.cause] : []))));
+    expect(causes.filter((c) => !used.has(c.code)).map((c) => c.code)).toEqual([]);
+  });
+
+  it("files ISO 14224 modes as the domain notes say: valves fail to open or close, foam and air-binding give erratic output, low oil gives low output", async () => {
+    const { causes } = await import("../../helpers/guides");
+    const mode = (code: string) => causes.find((c) => c.code === code)?.iso14224;
+    expect(mode("valve-stuck")).toBe("FTO");
+    expect(mode("valve-foreign-object")).toBe("FTC");
+    expect(mode("air-bound-pump")).toBe("ERO");
+    expect(mode("foam-over-agitation")).toBe("ERO");
+    expect(mode("hydraulic-oil-low")).toBe("LOO");
+    expect(causes.find((c) => c.code === "leak-cover-oring")?.component).toBe("pump");
+    // Every mapping says where it comes from.
+    for (const c of causes) if (c.iso14224) expect(c.isoNote, c.code).toMatch(/from memory/);
+  });
+});

@@ -5,6 +5,7 @@ import { loadLibrary } from "~/lib/guides/files.server";
 import type { Guide } from "~/lib/guides/schema";
 import { ANSWERS_BY_KIND, STEP_ANSWERS as ANSWERS } from "~/lib/vocabulary";
 import { validateGuide } from "~/lib/guides/validate";
+import { CHECKLIST_ITEMS, checklistOf, CORE_STOP, HAZARD_NEEDS, STANDARD_STOP } from "~/lib/guides/safety";
 import { causes, root, tinyGuide } from "../../helpers/guides";
 
 // Small seeded generator so a failure can be replayed.
@@ -37,6 +38,10 @@ function mutate(g: Raw, random: () => number) {
     () => delete step.type,
     () => step.meta.kind === "safety" && (step.meta.kind = "check"),
     () => delete step.meta.component,
+    // The safety model: restarts, checklists, hazards.
+    () => (step.meta.energizes = !step.meta.energizes),
+    () => (step.meta.hazards = [pick(["wet-side", "trapped-pressure", "hot-parts"])]),
+    () => (step.meta.checklist = [...STANDARD_STOP, ...(random() < 0.5 ? ["suction-closed"] : [])].filter(() => random() < 0.85)),
   ];
   pick(ops)();
 }
@@ -68,11 +73,27 @@ function breaksARule(g: Guide): string | null {
     const ends = getShortestPaths(machineFrom(id), { events }).filter((p) => p.state.status === "done");
     if (ends.length === 0) return `${id}: no end`;
   }
-  const unguarded = getShortestPaths(
-    machineFrom(g.initial, (id) => g.states[id].meta.kind === "safety"),
-    { events },
-  );
-  if (unguarded.some((p) => g.states[p.state.value as string].meta.handsOn && g.states[p.state.value as string].meta.kind !== "safety")) return "unguarded";
+  // Independently of the checker's dataflow: for each thing a stop isolates, walk from the start and from every
+  // step that puts energy back, passing any stop that does not isolate it; a hands-on step reached that needs it is unguarded.
+  const needs = (s: Guide["states"][string]) => [...STANDARD_STOP, ...(s.meta.hazards ?? []).map((h) => HAZARD_NEEDS[h].item)];
+  const starts = [g.initial, ...Object.keys(g.states).filter((id) => g.states[id].meta.energizes)];
+  for (const item of CHECKLIST_ITEMS) {
+    for (const start of starts) {
+      const walked = getShortestPaths(
+        machineFrom(start, (id) => id !== start && g.states[id].meta.kind === "safety" && checklistOf(g.states[id].meta).includes(item)),
+        { events },
+      );
+      for (const p of walked) {
+        const s = g.states[p.state.value as string];
+        if (p.state.value === start && start !== g.initial) continue;
+        if (s.meta.handsOn && s.meta.kind !== "safety" && needs(s).includes(item)) return `unguarded for ${item}`;
+      }
+    }
+  }
+  for (const [id, s] of Object.entries(g.states)) {
+    if (s.meta.kind === "safety" && s.meta.checklist?.length && !CORE_STOP.every((i) => s.meta.checklist!.includes(i))) return `${id}: stop without its core`;
+    if (s.meta.energizes && s.meta.handsOn) return `${id}: energizes and hands-on`;
+  }
   return null;
 }
 
