@@ -12,48 +12,9 @@ import type { Route } from "./+types/rigs.$code.edit";
 export async function loader({ request, params, context }: Route.LoaderArgs) {
   const user = await requirePermission({ request, context }, "edit-rigs");
   const rig = await findRig(user, params.code);
-  const {
-    code,
-    name,
-    mount,
-    tankGal,
-    pumpKind,
-    hasHourMeter,
-    engineHours,
-    hoseLengthFt,
-    hoseDiameterIn,
-    yardElevationFt,
-    agitatorMixes,
-    pumpRatedGpm,
-    pumpRatedPsi,
-    pumpNpshrFt,
-    carrierRatingLb,
-    nozzleTips,
-    torqueSpecs,
-    notes,
-  } = rig;
-  return {
-    rig: {
-      code,
-      name,
-      mount,
-      tankGal,
-      pumpKind,
-      hasHourMeter,
-      engineHours,
-      hoseLengthFt,
-      hoseDiameterIn,
-      yardElevationFt,
-      agitatorMixes,
-      pumpRatedGpm,
-      pumpRatedPsi,
-      pumpNpshrFt,
-      carrierRatingLb,
-      nozzleTips,
-      torqueSpecs,
-      notes: notes ?? undefined,
-    },
-  };
+  // The form's fields only: the record's id, company, retired flag and timestamps are not edited here.
+  const { id: _id, companyId: _company, retired: _retired, createdAt: _created, updatedAt: _updated, ...editable } = rig;
+  return { rig: { ...editable, notes: editable.notes ?? undefined } };
 }
 
 export async function action({ request, params, context }: Route.ActionArgs) {

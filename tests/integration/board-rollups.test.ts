@@ -154,7 +154,13 @@ async function byHand(from: Date, to: Date): Promise<Omit<BoardAggregates, "open
     }),
     causes: causes.map((cause) => {
       const hits = cases.filter((c) => c.causeCode === cause);
-      return { cause, count: hits.length, downtimeHours: hits.reduce((s, c) => s + seconds(c), 0) / 3600 };
+      // Hand-offs carry the crew's suspected cause; fixed cases the found one.
+      return {
+        cause,
+        count: hits.length,
+        suspected: hits.filter((c) => c.outcome === "handoff").length,
+        downtimeHours: hits.reduce((s, c) => s + seconds(c), 0) / 3600,
+      };
     }),
     repeatChains: findRepeats(
       cases

@@ -112,12 +112,12 @@ describe("drafts, review and publishing", () => {
   it("refuses to send a draft with a hands-on step that skips the safety stop", async () => {
     const draft = (await GuideVersion.findOne({ where: { guideId: Number(copyId), status: "draft" } }))!;
     const bad = structuredClone(draft.definition);
-    bad.states["air-bound"].on!.YES = "bleed-pump"; // skips stop-air-bound
+    bad.states["sputters"].on!.YES = "open-pump"; // skips stop-check-pump
     await draft.update({ definition: bad });
     const res = await form(TRAINER, "/x", { intent: "submit", number: String(draft.number), changeNote: "Shorter" }, { guideId: copyId });
     expect(res.status).toBe(422);
     expect((await draft.reload()).status).toBe("draft");
-    bad.states["air-bound"].on!.YES = "stop-air-bound";
+    bad.states["sputters"].on!.YES = "stop-check-pump";
     await draft.update({ definition: bad });
   });
 
