@@ -1,7 +1,7 @@
 import { randomUUID } from "node:crypto";
-import { ownedBy } from "./tenancy.server";
+import { ownedBy, usableBy } from "./tenancy.server";
 import { Op, UniqueConstraintError } from "sequelize";
-import type { CaseEventInput, CloseCaseInput } from "~/lib/cases/schema";
+import { LATE_START_DAYS, type CaseEventInput, type CloseCaseInput } from "~/lib/cases/schema";
 import { answerFits } from "~/lib/walk/replay";
 import { isFinalKind } from "~/lib/guides/schema";
 import { outcomeLabel } from "~/lib/vocabulary";
@@ -11,12 +11,45 @@ import { fail, notFound, type SessionUser } from "./guards.server";
 import { usableGuides } from "./guides.server";
 import { mailHandoffOnce, NO_MAIL } from "./handoff.server";
 
-/** Starts a case on one of the company's active rigs with the guide's newest published version. Resending the same id is harmless. */
-export async function startCase(user: SessionUser, input: { id?: string; rigCode: string; guideSlug: string }) {
-  const rig = await Rig.findOne({ where: ownedBy(user, { code: input.rigCode.toUpperCase(), retired: false }), attributes: ["id", "code"] });
+/**
+ * The version a case follows: the one the phone walked, if it sent one (a start made with no signal; it may
+ * have been retired since, and still counts, since the crew followed it), else the newest published one.
+ */
+async function versionToFollow(user: SessionUser, guideSlug: string, guideVersionId: number | undefined): Promise<number> {
+  if (guideVersionId === undefined) {
+    const guide = (await usableGuides(user)).find((g) => g.slug === guideSlug);
+    if (!guide) notFound(`Guide ${guideSlug}`);
+    return guide.versionId;
+  }
+  const version = await GuideVersion.findOne({
+    where: { id: guideVersionId, status: { [Op.in]: ["published", "retired"] } },
+    include: [{ model: GuideRecord, as: "guide", where: usableBy(user, { slug: guideSlug }), attributes: ["id"] }],
+    attributes: ["id"],
+  });
+  if (!version) notFound(`Version ${guideVersionId} of guide ${guideSlug}`);
+  return version.id;
+}
+
+/** A phone's opening time: up to LATE_START_DAYS old (a start kept with no signal), never ahead of the server by more than a few minutes. */
+function openingTime(openedAt: string | undefined, now = new Date()): Date {
+  if (!openedAt) return now;
+  const at = new Date(openedAt);
+  if (at.getTime() > now.getTime() + 5 * 60_000) fail(422, "openedAt is in the future: check the phone's clock.", { openedAt: "in the future" });
+  if (at.getTime() < now.getTime() - LATE_START_DAYS * 86_400_000) {
+    fail(422, `This fix was started more than ${LATE_START_DAYS} days ago and can no longer be sent. Its answers stay on this phone; tell your supervisor.`, {
+      openedAt: `more than ${LATE_START_DAYS} days old`,
+    });
+  }
+  return at;
+}
+
+/**
+ * Starts a case on one of the company's active rigs. Resending the same id is harmless. A start made on a
+ * phone with no signal arrives later with its own opening time and the version it walked.
+ */
+export async function startCase(user: SessionUser, input: { id?: string; rigCode: string; guideSlug: string; openedAt?: string; guideVersionId?: number }) {
+  const rig = await Rig.findOne({ where: ownedBy(user, { code: input.rigCode.toUpperCase() }), attributes: ["id", "code", "retired"] });
   if (!rig) notFound(`Rig ${input.rigCode}`);
-  const guide = (await usableGuides(user)).find((g) => g.slug === input.guideSlug);
-  if (!guide) notFound(`Guide ${input.guideSlug}`);
   const id = input.id ?? randomUUID();
   const existing = await Case.findByPk(id, { attributes: ["id", "companyId", "rigId", "guideVersionId"] });
   if (existing) {
@@ -24,15 +57,18 @@ export async function startCase(user: SessionUser, input: { id?: string; rigCode
     if (existing.rigId !== rig.id) fail(409, "That case id belongs to a case on another rig.");
     return { id, created: false };
   }
+  if (rig.retired) fail(409, `Rig ${rig.code} has been retired, so no new fix can be saved on it. Tell your supervisor which rig you were working on.`);
+  const guideVersionId = await versionToFollow(user, input.guideSlug, input.guideVersionId);
+  const openedAt = openingTime(input.openedAt);
   await changeCase(sequelize, user.companyId, async (transaction) => {
     const created = await Case.create(
       {
         id,
         companyId: user.companyId,
         rigId: rig.id,
-        guideVersionId: guide.versionId,
+        guideVersionId,
         openedBy: user.id,
-        openedAt: new Date(),
+        openedAt,
         closedAt: null,
         engineHours: null,
         finalStep: null,

@@ -4,10 +4,17 @@ import { ANSWERS, CLOSE_OUTCOMES } from "../vocabulary";
 const uuid = z.string().uuid("must be a UUID");
 const isoTime = z.iso.datetime({ offset: true, message: "must be an ISO 8601 time, like 2026-06-01T14:05:00Z" });
 
+/** How long a start made on a phone with no signal may wait to be sent. */
+export const LATE_START_DAYS = 7;
+
 export const startCaseSchema = z.strictObject({
   id: uuid.optional(),
   rigCode: z.string({ error: "rigCode is required" }).trim().min(1, "rigCode is required").max(16),
   guideSlug: z.string({ error: "guideSlug is required" }).trim().min(1, "guideSlug is required").max(80),
+  /** When the phone opened the case (a start made with no signal, sent later). */
+  openedAt: isoTime.optional(),
+  /** The guide version the phone walked (it may have been replaced or retired since). */
+  guideVersionId: z.number({ error: "guideVersionId must be a number" }).int().positive("guideVersionId must be a version's id").optional(),
 });
 
 export const caseEventSchema = z.strictObject({
