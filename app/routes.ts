@@ -8,6 +8,7 @@ export default [
   route("logout", "routes/logout.tsx"),
   route("healthz", "routes/healthz.ts"),
   route("api/guides/search", "routes/api.guides.search.ts"),
+  route("api/offline-kit", "routes/api.offline-kit.ts"),
   route("api/board", "routes/api.board.ts"),
   route("api/field-math/:kind", "routes/api.field-math.$kind.ts"),
   route("api/cases", "routes/api.cases.ts"),

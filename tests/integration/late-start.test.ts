@@ -112,3 +112,34 @@ describe("a start sent late", () => {
     await Rig.update({ retired: false }, { where: { code: "CF-03" } });
   });
 });
+
+describe("the kit a phone keeps for no signal", () => {
+  it("holds the company's active rigs with their specs, the guides its crews may start and cause names, and nothing of another company", async () => {
+    const { loader } = await import("~/routes/api.offline-kit");
+    const res = await run(async () => loader(args(await requestAs(DANA, "/api/offline-kit"))));
+    expect(res.status).toBe(200);
+    const kit = res.data as {
+      rigs: { code: string; agitatorMixes: string }[];
+      guides: { slug: string; versionId: number; definition: { states: object } }[];
+      causeNames: Record<string, string>;
+    };
+    const codes = kit.rigs.map((r) => r.code);
+    expect(codes).toEqual(expect.arrayContaining(["CF-03", "CF-07", "CF-11"]));
+    expect(codes.some((c) => c.startsWith("BM-"))).toBe(false);
+    expect(kit.rigs.every((r) => r.agitatorMixes === "forward" || r.agitatorMixes === "reverse")).toBe(true);
+    expect(kit.guides.length).toBeGreaterThanOrEqual(11);
+    expect(kit.guides.every((g) => g.versionId > 0 && Object.keys(g.definition.states).length > 0)).toBe(true);
+    expect(kit.causeNames["suction-air-leak"]).toMatch(/Air leaking/);
+  });
+
+  it("stays inside its size budget: 512 KB as sent, 64 KB gzipped", async () => {
+    const { gzipSync } = await import("node:zlib");
+    const { loader } = await import("~/routes/api.offline-kit");
+    const res = await run(async () => loader(args(await requestAs(DANA, "/api/offline-kit"))));
+    const body = Buffer.from(JSON.stringify(res.data));
+    const gz = gzipSync(body).length;
+    console.info(`offline kit: ${(body.length / 1024).toFixed(1)} KB, ${(gz / 1024).toFixed(1)} KB gzipped`);
+    expect(body.length).toBeLessThan(512 * 1024);
+    expect(gz).toBeLessThan(64 * 1024);
+  });
+});

@@ -36,6 +36,7 @@ const EXPECTED: Record<string, Row> = {
   "POST /logout": r(302, 302, 302, 302, 302),
   "GET /healthz": r(200, 200, 200, 200, 200),
   "GET /api/guides/search": r(401, 400, 400, 400, 400),
+  "GET /api/offline-kit": r(401, 200, 200, 200, 200),
   "GET /api/board": r(401, 403, 403, 200, 200),
   "POST /api/field-math/:kind": r(401, 400, 400, 400, 400),
   "POST /api/cases": r(401, 415, 415, 415, 415),
