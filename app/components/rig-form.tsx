@@ -84,7 +84,11 @@ export function RigForm({
           <input {...number(fields.pumpNpshrFt)} className={inputClass} />
         </FormField>
       </fieldset>
-      <FormField field={fields.carrierRatingLb} label="Truck or trailer rated to carry (lb)" hint="Leave blank if not known.">
+      <FormField
+        field={fields.carrierRatingLb}
+        label="Truck or trailer rated payload (lb)"
+        hint="What it may carry, not its gross weight rating. Leave blank if not known."
+      >
         <input {...number(fields.carrierRatingLb)} className={inputClass} />
       </FormField>
       <fieldset className="space-y-3 rounded-md border-2 border-rule p-3">

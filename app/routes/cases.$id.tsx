@@ -1,4 +1,5 @@
 import { Link } from "react-router";
+import { fillRigWords } from "~/lib/guides/rig-words";
 import { CHECKLIST_LABELS, checklistOf } from "~/lib/guides/safety";
 import { z } from "zod";
 import { ConfirmAction } from "~/components/ui/confirm-action";
@@ -20,18 +21,20 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
   const detail = await caseDetail(user, params.id);
   const cause = causeList().find((c) => c.code === detail.causeCode) ?? null;
   const states = detail.guide.definition.states;
+  // The words the crew read: this rig's directions filled in, as on the walk.
+  const words = (text: string) => fillRigWords(text, detail.rig);
   return {
     ...detail,
     canResolve: can(user, "resolve-handoffs"),
     guide: { slug: detail.guide.slug, title: detail.guide.title, version: detail.guide.version },
     cause,
-    stepPrompts: Object.fromEntries(Object.entries(states).map(([id, s]) => [id, s.meta.prompt])),
-    finalPrompt: detail.finalStep ? (states[detail.finalStep]?.meta.prompt ?? null) : null,
+    stepPrompts: Object.fromEntries(Object.entries(states).map(([id, s]) => [id, words(s.meta.prompt)])),
+    finalPrompt: detail.finalStep ? words(states[detail.finalStep]?.meta.prompt ?? "") || null : null,
     // Which stop was acknowledged, when, and what it isolated (the version's own checklist).
     stops: detail.events
       .filter((e) => e.answer === "ACK" && states[e.stepId])
       .map((e) => ({ seq: e.seq, stepId: e.stepId, at: e.at, checklist: [...checklistOf(states[e.stepId].meta)] })),
-    events: detail.events.map((e) => ({ ...e, prompt: states[e.stepId]?.meta.prompt ?? e.stepId, kind: states[e.stepId]?.meta.kind ?? "check" })),
+    events: detail.events.map((e) => ({ ...e, prompt: words(states[e.stepId]?.meta.prompt ?? e.stepId), kind: states[e.stepId]?.meta.kind ?? "check" })),
   };
 }
 
@@ -85,7 +88,7 @@ export default function CasePage({ loaderData: c }: Route.ComponentProps) {
         <ul>
           {stops.map((s) => (
             <li key={s.seq}>
-              {times.time(s.at)} at step “{s.stepId}”: {s.checklist.map((i) => CHECKLIST_LABELS[i].replace(/\.$/, "")).join("; ")}
+              {times.time(s.at)}, “{plainPrompt(states[s.stepId]) ?? s.stepId}”: {s.checklist.map((i) => CHECKLIST_LABELS[i].replace(/\.$/, "")).join("; ")}
             </li>
           ))}
         </ul>

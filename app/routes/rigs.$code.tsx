@@ -43,7 +43,7 @@ export default function RigPage({ loaderData }: Route.ComponentProps) {
       "Suction the pump needs (from its curve)",
       rig.pumpNpshrFt !== null ? `${fmt(rig.pumpNpshrFt, 1)} ft (${fmt(ftToM(rig.pumpNpshrFt), 1)} m)` : "not recorded",
     ],
-    ["Carrier rated to carry", rig.carrierRatingLb !== null ? `${fmt(rig.carrierRatingLb)} lb` : "not recorded"],
+    ["Carrier payload rating", rig.carrierRatingLb !== null ? `${fmt(rig.carrierRatingLb)} lb` : "not recorded"],
   ];
   return (
     <>

@@ -135,7 +135,7 @@ export function StepForm({
               onChange={(e) => set({ energizes: e.target.checked || undefined })}
               className="h-6 w-6 shrink-0"
             />
-            Puts energy back (engine, clutch, pump or agitator run, line pressurised): ends the shut-down
+            Puts energy back (engine, clutch, pump or agitator run, line pressurized): ends the shut-down
           </label>
           {meta.kind === "task" && !meta.handsOn ? (
             <label className="flex min-h-12 items-center gap-2 font-bold">

@@ -43,14 +43,20 @@ export function FiberCheckMath({ rig }: { rig?: RigSpecs; compact?: boolean }) {
               ? `Over the limit: ${fmt(r.fiberLb)} lb of fiber in water that carries ${fmt(r.limitLb)} lb.`
               : `Within the limit: ${fmt(r.fiberLb)} lb of fiber; the water carries ${fmt(r.limitLb)} lb.`}
           </p>
-          {r.overFiber ? <p className="text-lg">It needs about {fmt(r.waterNeededGal)} gal of water to carry that fiber.</p> : null}
+          {r.overFiber ? (
+            <p className="text-lg">
+              {rig && r.waterNeededGal > rig.tankGal
+                ? `More than the ${fmt(rig.tankGal)} gal tank holds: about ${Math.ceil((r.fiberLb - r.limitLb) / toNumber(bagLb))} bags too many for this water.`
+                : `It needs about ${fmt(r.waterNeededGal)} gal of water to carry that fiber.`}
+            </p>
+          ) : null}
           <p>
             Load weighs about {fmt(r.loadLb)} lb ({fmt(lbToKg(r.loadLb))} kg)
             {r.overCarrier === null
               ? "."
               : r.overCarrier
-                ? `: more than the ${fmt(rig!.carrierRatingLb!)} lb the carrier is rated for.`
-                : `, within the ${fmt(rig!.carrierRatingLb!)} lb rating.`}
+                ? `: more than the ${fmt(rig!.carrierRatingLb!)} lb payload the carrier is rated for.`
+                : `, within the ${fmt(rig!.carrierRatingLb!)} lb payload rating.`}
           </p>
           <SourceNote>
             Limit: {DEFAULT_FIBER_CEILING_LB_PER_100_GAL} lb of wood fiber per 100 gal of water (common practice; your company or the product may set another).

@@ -32,7 +32,7 @@ export function HoseMath({ rig, compact = false }: { rig?: RigSpecs; compact?: b
   const [fifties, setFifties] = useState(String(Math.round((length % 100) / 50)));
   const [diameter, setDiameter] = useState(String(rig?.hoseDiameterIn ?? 1.5));
   const rated = rig?.pumpRatedGpm ?? null;
-  const [flow, setFlow] = useState(rated !== null ? String(rated) : "");
+  const [flow, setFlow] = useState("");
   const [flowConfirmed, setFlowConfirmed] = useState(false);
   const [rise, setRise] = useState("0");
   const [pump, setPump] = useState(rig?.pumpRatedPsi != null ? String(rig.pumpRatedPsi) : "100");
@@ -40,12 +40,20 @@ export function HoseMath({ rig, compact = false }: { rig?: RigSpecs; compact?: b
   const [table, setTable] = useState(tableFor(rig?.hoseDiameterIn ?? 1.5)?.id ?? HAZEN_WILLIAMS.id);
 
   const lengthFt = 100 * toNumber(hundreds) + 50 * toNumber(fifties);
-  const friction = tryFieldMath(hoseFriction, { flowGpm: toNumber(flow), lengthFt, diameterIn: toNumber(diameter), table, elevationFt: toNumber(rise) });
+  // A hose table that does not list this size gives way to the formula, rather than an error.
+  const usable = table === HAZEN_WILLIAMS.id || tableFor(toNumber(diameter), table)?.id === table ? table : undefined;
+  const friction = tryFieldMath(hoseFriction, {
+    flowGpm: toNumber(flow),
+    lengthFt,
+    diameterIn: toNumber(diameter),
+    table: usable,
+    elevationFt: toNumber(rise),
+  });
   const reach = tryFieldMath(reachByHoseLength, {
     pumpPsi: toNumber(pump),
     tipIn: toNumber(tip),
     diameterIn: toNumber(diameter),
-    table,
+    table: usable,
     elevationFt: toNumber(rise),
     maxLengthFt: Math.max(100, Math.min(1000, lengthFt || 300)),
   });
@@ -101,7 +109,10 @@ export function HoseMath({ rig, compact = false }: { rig?: RigSpecs; compact?: b
         rated !== null ? (
           <button
             type="button"
-            onClick={() => setFlowConfirmed(true)}
+            onClick={() => {
+              setFlow(String(rated));
+              setFlowConfirmed(true);
+            }}
             className="min-h-14 w-full rounded-md border-2 border-ink bg-paper px-3 text-lg font-bold"
           >
             Use the rated {fmt(rated)} gpm
@@ -129,7 +140,9 @@ export function HoseMath({ rig, compact = false }: { rig?: RigSpecs; compact?: b
           {r.elevationPsi ? <p>Rise: {fmt(r.elevationPsi, 1)} psi more</p> : null}
           {share !== null ? (
             <p className="text-lg">
-              That is {fmt(share * 100)} % of the pump's {fmt(pumpPsi)} psi{share > 0.5 ? ": the hose is eating most of the pressure." : "."}
+              {share > 1
+                ? `That is more than the ${fmt(pumpPsi)} psi the pump gives: it cannot push this flow through this hose.`
+                : `That is ${fmt(share * 100)} % of the pump's ${fmt(pumpPsi)} psi${share > 0.5 ? ": the hose is eating most of the pressure." : "."}`}
             </p>
           ) : null}
           <p className="mt-1">Slurry loses more than water: read this as the least you will lose.</p>
@@ -139,7 +152,7 @@ export function HoseMath({ rig, compact = false }: { rig?: RigSpecs; compact?: b
         </ResultBox>
       ) : null}
       {compact ? null : <NumberField id="hose-tip" label="Smooth-bore tip diameter" value={tip} onChange={setTip} unit="in" error={reach.errors.tipIn} />}
-      {reach.result ? (
+      {reach.result && !compact ? (
         <table className="w-full border-collapse text-left">
           <caption className="text-left font-bold">
             Reach by hose length at {pump} psi at the pump, {tip} in tip
@@ -164,7 +177,7 @@ export function HoseMath({ rig, compact = false }: { rig?: RigSpecs; compact?: b
           </tbody>
         </table>
       ) : null}
-      {reach.result ? (
+      {reach.result && !compact ? (
         <SourceNote>
           Reach: S = NP/2 + 26 ft for a ¾ in tip, +5 ft per ⅛ in larger (Fire Engineering, Aug 1960). Flow: 29.7·d²·√NP. Water figures; slurry reaches less.
         </SourceNote>

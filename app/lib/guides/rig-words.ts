@@ -23,10 +23,10 @@ export function unknownRigWords(text: string): string[] {
 }
 
 /** A step's text with this rig's words filled in (or their plain meaning when there is no rig). */
-export function fillRigWords(text: string, rig: { agitatorMixes: AgitatorDirection } | null | undefined): string {
+export function fillRigWords(text: string, rig: { agitatorMixes?: AgitatorDirection } | null | undefined): string {
   return text.replace(TOKEN, (whole, name: string) => {
     const word = RIG_WORDS[name as RigWord];
     if (!word) return whole;
-    return rig ? word.forRig(rig.agitatorMixes) : word.unknown;
+    return rig?.agitatorMixes ? word.forRig(rig.agitatorMixes) : word.unknown;
   });
 }

@@ -18,6 +18,7 @@ export const CHECKLIST_ITEMS = [
   "hot-parts-cooled",
   "controls-tagged",
   "suction-closed",
+  "hydraulics-relieved",
 ] as const;
 export type ChecklistItem = (typeof CHECKLIST_ITEMS)[number];
 
@@ -30,6 +31,7 @@ export const CHECKLIST_LABELS: Record<ChecklistItem, string> = {
   "hot-parts-cooled": "Hot parts (engine, exhaust, pump casing) have cooled.",
   "controls-tagged": "Controls tagged so nobody starts the rig.",
   "suction-closed": "Suction valve closed, or the tank run down below this part.",
+  "hydraulics-relieved": "Hydraulic pressure let off: agitator control worked both ways with the engine off.",
 };
 
 /** A stop with no checklist means these: older guide files stay valid. */
@@ -39,14 +41,21 @@ export const STANDARD_STOP: readonly ChecklistItem[] = ["clutch-out", "engine-of
 export const CORE_STOP: readonly ChecklistItem[] = ["clutch-out", "engine-off-key-out", "moving-parts-stopped"];
 
 /** What a hands-on step may name as its hazards, and the checklist item that must be in force for each. */
-export const HAZARDS = ["wet-side", "trapped-pressure", "hot-parts"] as const;
+export const HAZARDS = ["wet-side", "trapped-pressure", "hot-parts", "hydraulic-line"] as const;
 export type Hazard = (typeof HAZARDS)[number];
 
 export const HAZARD_NEEDS: Record<Hazard, { item: ChecklistItem; words: string }> = {
   "wet-side": { item: "suction-closed", words: "opens the wet side (pump, take-off, suction piping, clamp or drain with slurry behind it)" },
   "trapped-pressure": { item: "pressure-relieved", words: "opens a line that can hold pressure behind a plug" },
   "hot-parts": { item: "hot-parts-cooled", words: "puts hands on parts that run hot" },
+  "hydraulic-line": { item: "hydraulics-relieved", words: "opens a hydraulic hose or fitting" },
 };
+
+// Words that put energy back: the checker does not trust an unticked box on a step that says them.
+const SOUNDS_ENERGIZING = /\b(restart|start the engine|engage the (pump|clutch)|switch the (pump )?clutch on|run (it|the pump|the agitator)|refill and run)\b/i;
+
+/** Whether a step's prompt says it puts energy back (restart, run, engage) — then it must be marked `energizes`. */
+export const soundsEnergizing = (prompt: string) => SOUNDS_ENERGIZING.test(prompt);
 
 /** What a stop isolates: its own checklist, or the standard five when it lists none. */
 export const checklistOf = (meta: Pick<StepMeta, "checklist">): readonly ChecklistItem[] => {

@@ -3,7 +3,7 @@ import { findDuplicateKeys } from "./duplicate-keys";
 import { reachable, stepsToEnd } from "./graph";
 import { ANSWER_LABELS, ANSWERS_BY_KIND, type StepAnswer } from "../vocabulary";
 import { guideSchema, isFinalKind, STEP_KINDS, type Guide, type StepKind } from "./schema";
-import { CORE_STOP, restartsWithoutReturnToService, sendsInsideTank, unguardedSteps } from "./safety";
+import { CORE_STOP, restartsWithoutReturnToService, sendsInsideTank, soundsEnergizing, unguardedSteps } from "./safety";
 import { RIG_WORDS, unknownRigWords } from "./rig-words";
 
 export interface GuideProblem {
@@ -124,6 +124,9 @@ function checkStructure(raw: Loose, causes: Cause[], add: (message: string, step
     if (!isFinalKind(kind) && step.type === "final") add(`only fixed and handoff steps are ends; a ${kind} step cannot be "type": "final"`, id);
     if (kind === "safety" && step.meta.handsOn) add("a safety step is the shut-down stop itself and cannot be hands-on", id);
     if (kind === "safety" && step.meta.energizes) add("a safety step shuts the rig down; it cannot also put energy back", id);
+    if (!step.meta.energizes && kind !== "safety" && !isFinalKind(kind) && typeof step.meta.prompt === "string" && soundsEnergizing(step.meta.prompt)) {
+      add("says it restarts or runs the rig, so tick “puts energy back”: a stop before it ends there", id);
+    }
     if (step.meta.energizes && step.meta.handsOn) add("puts energy back and is hands-on: split it into the hands-on work and then the restart", id);
     if (step.meta.checklist?.length && kind !== "safety") add("only a safety step carries a checklist", id);
     if (kind === "safety" && Array.isArray(step.meta.checklist) && step.meta.checklist.length) {

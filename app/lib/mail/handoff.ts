@@ -1,9 +1,10 @@
 import type { Guide } from "../guides/schema";
+import { fillRigWords } from "../guides/rig-words";
 import { formatDateTime, formatTime } from "../format";
 import { answerLabel } from "../vocabulary";
 
 export interface HandoffFacts {
-  rig: { code: string; name: string };
+  rig: { code: string; name: string; agitatorMixes?: "forward" | "reverse" };
   guide: { title: string; version: number; definition: Guide };
   openedBy: string | null;
   openedAt: string;
@@ -21,7 +22,7 @@ const plain = (markdown: string) => markdown.replace(/\*\*|__|`/g, "");
 /** The hand-off e-mail to supervisors: what the crew saw and answered, in order. */
 export function handoffMail(f: HandoffFacts): { subject: string; text: string } {
   const lines = f.events.map((e) => {
-    const prompt = plain(f.guide.definition.states[e.stepId]?.meta.prompt ?? e.stepId);
+    const prompt = plain(fillRigWords(f.guide.definition.states[e.stepId]?.meta.prompt ?? e.stepId, f.rig));
     return `  ${formatTime(e.at, f.timeZone)}  ${prompt}\n           → ${answerLabel(e.answer)}${e.note ? `  (note: ${e.note})` : ""}`;
   });
   const end = f.finalStep ? plain(f.guide.definition.states[f.finalStep]?.meta.prompt ?? "") : "";

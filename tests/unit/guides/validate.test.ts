@@ -31,6 +31,8 @@ const EXPECTED: Record<string, RegExp> = {
   "wet-side-uncovered": /step "fix": opens the wet side .* does not cover: suction valve closed, or the tank run down/,
   "checklist-missing-core": /step "stop": a safety step's checklist must include "clutch-out", "engine-off-key-out", "moving-parts-stopped"/,
   "inside-tank": /step "fix": sends someone inside the tank/,
+  // A box left unticked does not hide a restart the prompt spells out.
+  "restart-unmarked": /step "run": says it restarts or runs the rig, so tick “puts energy back”/,
   "energizes-hands-on": /step "fix": puts energy back and is hands-on/,
   "checklist-on-check": /step "look": only a safety step carries a checklist/,
   "hazards-not-hands-on": /step "look": only a hands-on step names hazards/,
@@ -90,7 +92,9 @@ describe("validator", () => {
     g.states.run.on.YES = "fix";
     g.states.run.on.NO = "fix";
     expect(validateGuide(g, { causes }).problems.map((p) => p.step)).toContain("fix");
+    // The same step as a look, with nothing restarted: the stop holds on both paths.
     delete g.states.run.meta.energizes;
+    g.states.run.meta.prompt = "Look at the stream marks on the ground. Was it strong?";
     expect(validateGuide(g, { causes }).problems).toEqual([]);
   });
 
