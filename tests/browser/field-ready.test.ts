@@ -61,7 +61,9 @@ describe("supervisor screens, as a supervisor submits them (360×640)", () => {
 
   it("asks before marking a hand-off dealt with, and keeps who and the note", async () => {
     const p = await as("mo@cedarflats.example");
-    const handoff = await Case.findOne({ where: { outcome: "handoff" }, order: [["openedAt", "DESC"]] });
+    // Mo's own company's newest hand-off (another company's would be a 404 for him).
+    const mo = (await User.findOne({ where: { email: "mo@cedarflats.example" } }))!;
+    const handoff = await Case.findOne({ where: { outcome: "handoff", companyId: mo.companyId }, order: [["openedAt", "DESC"]] });
     await handoff!.update({ handoffResolvedAt: null, handoffResolvedBy: null, handoffResolvedNote: null });
     await p.goto(`${harness.app.url}/cases/${handoff!.id}`);
     await p.getByText("Mark this hand-off dealt with").click();
