@@ -144,6 +144,22 @@ describe("the walk tells the truth (360×640)", () => {
     await p.close();
   });
 
+  it("says there is no signal, not that something went wrong, when a page it has opened before cannot be fetched", async () => {
+    // The fix page's scripts are on the phone from an earlier visit; with no signal its data cannot come.
+    const p = await crewPage();
+    await p.goto(`${harness.app.url}/rigs/CF-03/fix`);
+    await p.getByRole("link", { name: "Start a fix" }).first().click();
+    await p.getByRole("link", { name: /CF-07/ }).first().waitFor();
+    await harness.browser.context.setOffline(true);
+    onTestFinished(() => harness.browser.context.setOffline(false));
+    await p.getByRole("link", { name: /CF-07/ }).first().click();
+    await p.getByRole("heading", { level: 1, name: "No signal" }).waitFor();
+    expect(await p.getByRole("alert").textContent()).toMatch(/Answers already kept on this phone are safe/);
+    expect(await p.content()).not.toMatch(/Something went wrong/);
+    await harness.browser.context.setOffline(false);
+    await p.close();
+  });
+
   it("gives Yes and No their own word, mark and shade, both at least 56 px tall", async () => {
     const p = await crewPage();
     await startWalk(p, "foaming");
