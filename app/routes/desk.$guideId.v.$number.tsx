@@ -10,7 +10,7 @@ import { ProblemsPanel } from "~/components/desk/problems-panel";
 import { TreeDrawing } from "~/components/desk/tree-drawing";
 import { PageTitle } from "~/components/ui/page-title";
 import { ErrorList } from "~/components/ui/error-list";
-import { checkDefinition, definitionWarnings, submitDraft, versionFor } from "~/services/desk.server";
+import { definitionChecks, submitDraft, versionFor } from "~/services/desk.server";
 import { deskParams } from "~/services/desk-params.server";
 import { answerRefusal, refusedForm, requirePermission, unlessRefused } from "~/services/guards.server";
 import { readForm } from "~/services/read-request.server";
@@ -25,8 +25,7 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
     ...v,
     editable: v.version.status === "draft" && !v.guide.builtIn,
     causes: causeList(),
-    problems: checkDefinition(v.version.definition),
-    warnings: definitionWarnings(v.version.definition),
+    ...definitionChecks(v.version.definition),
   };
 }
 

@@ -1,6 +1,6 @@
 import type { Guide } from "~/lib/guides/schema";
 import { ownedBy } from "./tenancy.server";
-import { rigSpecsOf, type RigSpecs } from "~/lib/rigs/specs";
+import { walkRigOf, type WalkRig } from "~/lib/rigs/specs";
 import type { Outcome } from "~/lib/vocabulary";
 import { Case, CaseEvent, CasePhoto, GuideRecord, GuideVersion, Rig, User } from "./db.server";
 import { notFound, type SessionUser } from "./guards.server";
@@ -29,7 +29,7 @@ export interface CaseDetail {
   handoffResolvedAt: string | null;
   handoffResolvedBy: string | null;
   handoffResolvedNote: string | null;
-  rig: RigSpecs & { hasHourMeter: boolean; engineHours: number };
+  rig: WalkRig;
   guide: { slug: string; title: string; version: number; definition: Guide };
   openedBy: string | null;
   events: { id: string; seq: number; stepId: string; answer: string; at: string; note: string | null }[];
@@ -59,7 +59,7 @@ export async function caseDetail(user: SessionUser, caseId: string): Promise<Cas
     handoffResolvedAt: found.handoffResolvedAt?.toISOString() ?? null,
     handoffResolvedBy: resolver?.name ?? null,
     handoffResolvedNote: found.handoffResolvedNote,
-    rig: { ...rigSpecsOf(rig!), hasHourMeter: rig!.hasHourMeter, engineHours: rig!.engineHours },
+    rig: walkRigOf(rig!),
     guide: { slug: record!.slug, title: record!.title, version: version.number, definition: guide },
     openedBy: opener?.name ?? null,
     events: events.map((e) => ({ id: e.id, seq: e.seq, stepId: e.stepId, answer: e.answer, at: e.at.toISOString(), note: e.note })),

@@ -15,8 +15,11 @@ const MAX_DEFINITION_CHARS = 200_000;
 const hash = (definition: unknown) => createHash("sha256").update(JSON.stringify(definition)).digest("hex");
 export const checkDefinition = (definition: unknown) => validateGuide(definition, { causes: causeList() }).problems;
 
-/** What a reviewer should look at in a definition that passes (a restart with nothing put back first). */
-export const definitionWarnings = (definition: unknown) => validateGuide(definition, { causes: causeList() }).warnings;
+/** Problems and what a reviewer should look at (a restart with nothing put back first), from one run of the checker. */
+export function definitionChecks(definition: unknown) {
+  const { problems, warnings } = validateGuide(definition, { causes: causeList() });
+  return { problems, warnings };
+}
 
 /** A guide the company may see on the desk: its own, or built-in. Another company's is a 404. */
 export async function deskGuide(user: SessionUser, guideId: number) {

@@ -1,4 +1,4 @@
-import { rigSpecsOf, RIG_SPEC_FIELDS, type RigSpecs } from "~/lib/rigs/specs";
+import { RIG_SPEC_FIELDS, walkRigOf, type WalkRig } from "~/lib/rigs/specs";
 import type { Guide } from "~/lib/guides/schema";
 import { Rig } from "./db.server";
 import type { SessionUser } from "./guards.server";
@@ -10,7 +10,7 @@ export interface OfflineKit {
   /** When the server made it (the phone shows how fresh it is). */
   madeAt: string;
   companyId: number;
-  rigs: (RigSpecs & { hasHourMeter: boolean; engineHours: number })[];
+  rigs: WalkRig[];
   guides: { slug: string; title: string; summary: string; symptoms: string[]; versionId: number; version: number; definition: Guide }[];
   causeNames: Record<string, string>;
 }
@@ -23,7 +23,7 @@ export async function offlineKit(user: SessionUser): Promise<OfflineKit> {
   return {
     madeAt: new Date().toISOString(),
     companyId: user.companyId,
-    rigs: rigs.map((r) => ({ ...rigSpecsOf(r), hasHourMeter: r.hasHourMeter, engineHours: r.engineHours })),
+    rigs: rigs.map(walkRigOf),
     guides: guides.map((g) => ({
       slug: g.slug,
       title: g.title,

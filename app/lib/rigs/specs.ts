@@ -20,6 +20,9 @@ export interface RigSpecs {
   torqueSpecs: TorqueSpecInput[];
 }
 
+/** A rig as the walk-through needs it: its specs, and whether it has an hour meter and what it read. */
+export type WalkRig = RigSpecs & { hasHourMeter: boolean; engineHours: number };
+
 /** The columns a rig's specs are read from. */
 export const RIG_SPEC_FIELDS = [
   "code",
@@ -58,3 +61,10 @@ export function rigSpecsOf(
     torqueSpecs: rig.torqueSpecs ?? [],
   };
 }
+
+/** A stored rig as the walk-through needs it (the case page, the walk and the phone's offline kit). */
+export const walkRigOf = (rig: Parameters<typeof rigSpecsOf>[0] & { hasHourMeter: boolean; engineHours: number }): WalkRig => ({
+  ...rigSpecsOf(rig),
+  hasHourMeter: rig.hasHourMeter,
+  engineHours: rig.engineHours,
+});

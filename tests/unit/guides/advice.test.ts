@@ -1,10 +1,10 @@
 import { describe, expect, it } from "vitest";
-import { loadLibrary } from "~/lib/guides/files.server";
+import { checkGuideFiles, guideFilesIn, loadLibrary } from "~/lib/guides/files.server";
 import { fillRigWords } from "~/lib/guides/rig-words";
 import { isolationOnArrival } from "~/lib/guides/safety";
 import { edges } from "~/lib/guides/graph";
 import type { Guide } from "~/lib/guides/schema";
-import { root } from "../../helpers/guides";
+import { causes, root } from "../../helpers/guides";
 
 // The second edition's corrected advice, step by step (domain.md, "Fault families" and "Safety").
 // Each check names the guide and step and what it must say or do; the checker covers the safety model on every path.
@@ -32,9 +32,7 @@ describe("the library, second edition", () => {
     }
   });
 
-  it("puts a return-to-service step before every restart that follows hands-on work (no warnings)", async () => {
-    const { checkGuideFiles, guideFilesIn } = await import("~/lib/guides/files.server");
-    const { causes } = await import("../../helpers/guides");
+  it("puts a return-to-service step before every restart that follows hands-on work (no warnings)", () => {
     const results = checkGuideFiles(guideFilesIn(`${root}/content/guides`), causes);
     expect(results.flatMap((r) => r.warnings)).toEqual([]);
   });
@@ -181,14 +179,12 @@ describe("corrected advice, by guide and step", () => {
 });
 
 describe("the cause list", () => {
-  it("has no cause that no step uses", async () => {
-    const { causes } = await import("../../helpers/guides");
+  it("has no cause that no step uses", () => {
     const used = new Set([...library.values()].flatMap((g) => Object.values(g.states).flatMap((s) => (s.meta.cause ? [s.meta.cause] : []))));
     expect(causes.filter((c) => !used.has(c.code)).map((c) => c.code)).toEqual([]);
   });
 
-  it("files ISO 14224 modes as the domain notes say: valves fail to open or close, foam and air-binding give erratic output, low oil gives low output", async () => {
-    const { causes } = await import("../../helpers/guides");
+  it("files ISO 14224 modes as the domain notes say: valves fail to open or close, foam and air-binding give erratic output, low oil gives low output", () => {
     const mode = (code: string) => causes.find((c) => c.code === code)?.iso14224;
     expect(mode("valve-stuck")).toBe("FTO");
     expect(mode("valve-foreign-object")).toBe("FTC");
