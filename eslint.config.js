@@ -5,7 +5,7 @@ import reactHooks from "eslint-plugin-react-hooks";
 import tseslint from "typescript-eslint";
 
 export default tseslint.config(
-  { ignores: ["build/", ".react-router/", ".data/", "node_modules/", "public/sw.js"] },
+  { ignores: ["build/", ".react-router/", ".data/", "node_modules/"] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   // The layers: app/lib is plain TypeScript; components get data from routes; routes get plain data

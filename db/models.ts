@@ -180,6 +180,8 @@ export class CasePhoto extends Model<InferAttributes<CasePhoto>, InferCreationAt
   declare contentType: string;
   declare bytes: number;
   declare uploadedBy: number | null;
+  /** The phone's name for the photo, so a resend is stored once (null for older photos). */
+  declare phoneId: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -347,6 +349,7 @@ export function initModels(sequelize: Sequelize) {
       contentType: DataTypes.STRING(60),
       bytes: DataTypes.INTEGER.UNSIGNED,
       uploadedBy: DataTypes.INTEGER.UNSIGNED,
+      phoneId: DataTypes.CHAR(36),
       ...timestamps,
     },
     { sequelize, tableName: "case_photos" },

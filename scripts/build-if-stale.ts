@@ -4,7 +4,7 @@ import { createHash } from "node:crypto";
 import fs from "node:fs";
 import path from "node:path";
 
-const INPUTS = ["app", "content", "db", "seeds", "package-lock.json", "vite.config.ts", "react-router.config.ts", "tsconfig.json"];
+const INPUTS = ["app", "content", "db", "seeds", "package-lock.json", "vite.config.ts", "vite.sw.config.ts", "react-router.config.ts", "tsconfig.json"];
 
 function hashTree(root: string): string {
   const hash = createHash("sha256");
@@ -30,11 +30,15 @@ export function buildIfStale(root = process.cwd(), log: (line: string) => void =
   }
   log("Building the app…");
   // Always a production build, even when called from the tests (where NODE_ENV is "test").
-  execFileSync(path.join(root, "node_modules/.bin/react-router"), ["build"], {
-    cwd: root,
-    stdio: ["ignore", "ignore", "inherit"],
-    env: { ...process.env, NODE_ENV: "production" },
-  });
+  const run = (bin: string, args: string[]) =>
+    execFileSync(path.join(root, "node_modules/.bin", bin), args, {
+      cwd: root,
+      stdio: ["ignore", "ignore", "inherit"],
+      env: { ...process.env, NODE_ENV: "production" },
+    });
+  run("react-router", ["build"]);
+  // The service worker lists the built files, so it is built after them.
+  run("vite", ["build", "-c", "vite.sw.config.ts"]);
   fs.writeFileSync(stamp, current);
   return true;
 }

@@ -1,4 +1,5 @@
 import { isRouteErrorResponse } from "react-router";
+import { isNoSignal } from "~/lib/walk/no-signal";
 
 /** Each status in words a crew member or supervisor can act on; never a raw code or a router message. */
 const SAID: Record<number, { title: string; detail: string }> = {
@@ -20,12 +21,6 @@ const NO_SIGNAL = {
   detail: "This page needs signal to open. Answers already kept on this phone are safe and are sent when there is signal. Try again when you have signal.",
 };
 
-/** Whether an error is the browser failing to reach the server (offline, or the request never got out). */
-function noSignal(error: unknown): boolean {
-  if (typeof navigator !== "undefined" && navigator.onLine === false) return true;
-  return error instanceof TypeError && /fetch|network|load failed/i.test(error.message);
-}
-
 /** The title and sentence for an error a route threw; the server's own message (`{ error }`) is used when it gave one. */
 export function describeError(error: unknown): { title: string; detail: string } {
   if (isRouteErrorResponse(error)) {
@@ -35,7 +30,7 @@ export function describeError(error: unknown): { title: string; detail: string }
     return { title: said.title, detail: typeof message === "string" && message ? message : said.detail };
   }
   // A page that could not be fetched with the phone offline is a missing signal, not a fault: say so.
-  if (noSignal(error)) return NO_SIGNAL;
+  if (isNoSignal(error)) return NO_SIGNAL;
   if (import.meta.env.DEV && error instanceof Error) return { title: "Something went wrong", detail: error.message };
   return { title: "Something went wrong", detail: "Try again. If it keeps happening, tell your supervisor." };
 }

@@ -1,37 +1,68 @@
 import { useEffect, useState } from "react";
+import { data } from "react-router";
 import { FieldMathWidget } from "~/components/field-math/widget";
+import { askWorker } from "~/components/offline/worker";
 import { WalkScreen } from "~/components/walk/walk-screen";
 import { stepsToEnd } from "~/lib/guides/graph";
+import { keepWalk, namesFor, walkOnPhone, type WalkData } from "~/lib/walk/kept";
+import { isNoSignal } from "~/lib/walk/no-signal";
+import { ON_PHONE_CASE } from "~/lib/walk/pages";
+import type { Answer } from "~/lib/vocabulary";
 import { caseDetail } from "~/services/case-detail.server";
 import { requireUser } from "~/services/guards.server";
-import { causeList } from "~/services/guides.server";
-import type { Answer } from "~/lib/vocabulary";
+import { causeNames } from "~/services/guides.server";
 import type { Route } from "./+types/cases.$id.walk";
 
-export async function loader({ request, params, context }: Route.LoaderArgs) {
+export async function loader({ request, params, context }: Route.LoaderArgs): Promise<WalkData | null> {
   const user = await requireUser({ request, context });
+  // The page the phone keeps for walks started with no signal: it fills itself from the phone.
+  if (params.id === ON_PHONE_CASE) return null;
   const detail = await caseDetail(user, params.id);
-  const codes = new Set(Object.values(detail.guide.definition.states).flatMap((s) => (s.meta.cause ? [s.meta.cause] : [])));
   return {
     caseId: detail.id,
     closedAs: detail.outcome === "open" ? null : detail.outcome,
-    guide: detail.guide,
+    openedAt: detail.openedAt,
+    guide: { slug: detail.guide.slug, title: detail.guide.title, versionId: detail.guide.versionId, definition: detail.guide.definition },
     rig: detail.rig,
     stepsToEnd: stepsToEnd(detail.guide.definition),
-    causeNames: Object.fromEntries(
-      causeList()
-        .filter((c) => codes.has(c.code))
-        .map((c) => [c.code, c.name]),
-    ),
+    causeNames: namesFor(detail.guide.definition, causeNames()),
     events: detail.events.map((e) => ({ id: e.id, seq: e.seq, stepId: e.stepId, answer: e.answer as Answer, at: e.at, ...(e.note ? { note: e.note } : {}) })),
   };
 }
 
+/**
+ * The server's walk when it has it; otherwise (no signal, or a fix started on this phone that
+ * the server has not heard of yet) the walk as this phone keeps it.
+ */
+export async function clientLoader({ params, serverLoader }: Route.ClientLoaderArgs): Promise<WalkData | null> {
+  let fromServer: WalkData | null = null;
+  try {
+    fromServer = await serverLoader();
+  } catch (error) {
+    const kept = walkOnPhone(window.localStorage, params.id);
+    if (kept && (isNoSignal(error) || isMissing(error))) return kept;
+    throw error;
+  }
+  if (fromServer && fromServer.caseId === params.id) {
+    keepWalk(window.localStorage, fromServer);
+    return fromServer;
+  }
+  const kept = walkOnPhone(window.localStorage, params.id);
+  if (!kept) throw data({ error: "This walk-through is not kept on this phone, and there is no signal to fetch it." }, { status: 404 });
+  return kept;
+}
+// Runs as the page opens too: a kept page may carry another walk's data, or none.
+clientLoader.hydrate = true as const;
+
+const isMissing = (error: unknown) => typeof error === "object" && error !== null && "status" in error && (error as { status: number }).status === 404;
+
 export default function Walk({ loaderData }: Route.ComponentProps) {
   const d = loaderData;
-  const offlineReady = useKeepForNoSignal();
+  const offlineReady = useKeepForNoSignal(d?.caseId ?? null);
+  if (!d) return <OpeningFromPhone />;
   return (
     <WalkScreen
+      key={d.caseId}
       caseId={d.caseId}
       guide={d.guide.definition}
       guideTitle={d.guide.title}
@@ -41,30 +72,27 @@ export default function Walk({ loaderData }: Route.ComponentProps) {
       serverEvents={d.events}
       closedAs={d.closedAs}
       offlineReady={offlineReady}
+      fromPhone={d.fromPhone}
       renderFieldMath={(widget) => <FieldMathWidget widget={widget} rig={d.rig} />}
     />
   );
 }
 
-/** Keeps this page and its scripts on the phone so a reload with no signal still opens it; true once kept. */
-function useKeepForNoSignal(): boolean {
+function OpeningFromPhone() {
+  return (
+    <p role="status" className="rounded-md border-2 border-ink bg-paper p-4 text-lg font-bold">
+      Opening the walk-through kept on this phone…
+    </p>
+  );
+}
+
+/** Keeps this walk's page on the phone so a reload with no signal opens it; true once kept. */
+function useKeepForNoSignal(caseId: string | null): boolean {
   const [kept, setKept] = useState(false);
   useEffect(() => {
-    if (!("serviceWorker" in navigator)) return;
-    void navigator.serviceWorker
-      .register("/sw.js")
-      .then(async () => {
-        const worker = (await navigator.serviceWorker.ready).active;
-        const assets = performance
-          .getEntriesByType("resource")
-          .map((e) => e.name)
-          .filter((u) => u.startsWith(location.origin) && new URL(u).pathname.startsWith("/assets/"));
-        const channel = new MessageChannel();
-        channel.port1.onmessage = (e) => setKept(e.data?.kept === true);
-        worker?.postMessage({ type: "keep", urls: [location.href, ...assets] }, [channel.port2]);
-      })
-      .catch(() => setKept(false));
-  }, []);
+    if (!caseId || !navigator.onLine) return;
+    void askWorker({ type: "keep", urls: [`/cases/${caseId}/walk`] }).then((reply) => setKept((reply?.kept ?? 0) > 0));
+  }, [caseId]);
   return kept;
 }
 

@@ -7,6 +7,8 @@ import { PageTitle } from "~/components/ui/page-title";
 import { fieldMathScreen } from "~/lib/field-math/screens";
 import { notFound, requireUser } from "~/services/guards.server";
 import { rigSpecsFor } from "~/services/rigs.server";
+import { serverOrPhone } from "~/components/offline/server-or-phone";
+import { rigSpecsOf } from "~/lib/rigs/specs";
 import type { Route } from "./+types/field-math.$screen";
 
 export async function loader({ request, params, context }: Route.LoaderArgs) {
@@ -17,6 +19,17 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
   const wanted = new URL(request.url).searchParams.get("rig")?.toUpperCase();
   const rig = rigs.find((r) => r.code === wanted) ?? rigs[0] ?? null;
   return { screen, rigs: rigs.map((r) => ({ code: r.code, name: r.name })), rig };
+}
+
+/** With no signal, the rigs come from what the phone keeps: the math itself runs on the phone. */
+export async function clientLoader({ request, params, serverLoader }: Route.ClientLoaderArgs) {
+  return serverOrPhone(serverLoader, (kit) => {
+    const screen = fieldMathScreen(params.screen);
+    if (!screen) return null;
+    const wanted = new URL(request.url).searchParams.get("rig")?.toUpperCase();
+    const rig = kit.rigs.find((r) => r.code === wanted) ?? kit.rigs[0] ?? null;
+    return { screen, rigs: kit.rigs.map((r) => ({ code: r.code, name: r.name })), rig: rig ? rigSpecsOf(rig) : null };
+  });
 }
 
 const SCREENS = { load: LoadSheetMath, hose: HoseMath, suction: SuctionMath, torque: TorqueMath };

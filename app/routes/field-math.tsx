@@ -2,11 +2,17 @@ import { Link } from "react-router";
 import { PageTitle } from "~/components/ui/page-title";
 import { FIELD_MATH_SCREENS } from "~/lib/field-math/screens";
 import { requireUser } from "~/services/guards.server";
+import { serverOrPhone } from "~/components/offline/server-or-phone";
 import type { Route } from "./+types/field-math";
 
 export async function loader({ request, context }: Route.LoaderArgs) {
   await requireUser({ request, context });
-  return null;
+  return {};
+}
+
+/** Nothing to fetch but the sign-in check: with no signal the kept page still opens. */
+export async function clientLoader({ serverLoader }: Route.ClientLoaderArgs) {
+  return serverOrPhone(serverLoader, () => ({}));
 }
 
 export default function FieldMath() {

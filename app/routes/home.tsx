@@ -6,6 +6,8 @@ import { hiddenSections } from "~/services/env.server";
 import { lastRigIdFor } from "~/services/cases.server";
 import { requireUser } from "~/services/guards.server";
 import { listRigs } from "~/services/rigs.server";
+import { PhoneReadiness } from "~/components/offline/phone-readiness";
+import { serverOrPhone } from "~/components/offline/server-or-phone";
 import type { Route } from "./+types/home";
 
 export async function loader({ request, context }: Route.LoaderArgs) {
@@ -13,15 +15,37 @@ export async function loader({ request, context }: Route.LoaderArgs) {
   const [rigs, lastRigId] = await Promise.all([listRigs(user), lastRigIdFor(user)]);
   // The rig this person worked on last comes first: it is usually the one acting up again.
   rigs.sort((a, b) => Number(b.id === lastRigId) - Number(a.id === lastRigId));
-  return { role: user.role, firstName: user.name.split(" ")[0], rigs, lastRigId, hidden: hiddenSections() };
+  return {
+    personId: user.id,
+    role: user.role,
+    firstName: user.name.split(" ")[0],
+    rigs: rigs.map((r): HomeRig => ({ id: r.id, code: r.code, name: r.name, tankGal: r.tankGal, mount: r.mount })),
+    lastRigId,
+    hidden: hiddenSections(),
+  };
+}
+
+type HomeRig = { id: number; code: string; name: string; tankGal: number; mount: string };
+
+/** With no signal, the rigs come from what the phone keeps. */
+export async function clientLoader({ serverLoader }: Route.ClientLoaderArgs) {
+  return serverOrPhone(serverLoader, (kit) => ({
+    personId: kit.person.id,
+    role: kit.person.role,
+    firstName: kit.person.name.split(" ")[0],
+    rigs: kit.rigs.map((r) => ({ id: 0, code: r.code, name: r.name, tankGal: r.tankGal, mount: r.mount })),
+    lastRigId: null,
+    hidden: kit.hidden,
+  }));
 }
 
 export default function Home({ loaderData }: Route.ComponentProps) {
-  const { rigs, role, firstName, lastRigId, hidden } = loaderData;
+  const { rigs, role, firstName, lastRigId, hidden, personId } = loaderData;
   const more = navFor(role).filter((item) => !forEveryone(item) && !hidden.includes(item.to));
   return (
     <>
       <PageTitle lead="Pick the rig that is acting up.">Hi {firstName}. Which rig?</PageTitle>
+      <PhoneReadiness personId={personId} />
       {rigs.length === 0 ? (
         <p className="rounded-md bg-paper p-4">Your company has no active rigs yet. An admin can add them under Rigs.</p>
       ) : (

@@ -1,8 +1,12 @@
-import { randomUUID } from "node:crypto";
 import { useEffect, useState } from "react";
-import { Form, Link, redirect, useFetcher, useNavigation } from "react-router";
+import { Form, Link, redirect, useNavigation, useRouteLoaderData } from "react-router";
 import { useTimes } from "~/components/use-time-zone";
 import { z } from "zod";
+import { serverOrPhone } from "~/components/offline/server-or-phone";
+import { useGuideSearch } from "~/components/walk/use-guide-search";
+import { loadKit, openWalksOnPhone, startOnPhone } from "~/lib/walk/kept";
+import { isNoSignal } from "~/lib/walk/no-signal";
+import type { loader as shellLoader } from "./shell";
 import { openWalksOn, startCase } from "~/services/cases.server";
 import { fail, requireUser } from "~/services/guards.server";
 import { usableGuides } from "~/services/guides.server";
@@ -16,11 +20,32 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
   const [guides, openWalks] = await Promise.all([usableGuides(user), openWalksOn(user, rig.id)]);
   return {
     rig: { code: rig.code, name: rig.name, retired: rig.retired },
-    openWalks,
+    openWalks: openWalks.map((w) => ({ ...w, onPhoneOnly: false })),
     tiles: guides.map((g) => ({ slug: g.slug, title: g.title, hint: g.definition.symptoms[0] })),
     // Made with the page, so even a tap before the scripts load (or a double tap) starts one case.
-    caseId: randomUUID(),
+    caseId: crypto.randomUUID(),
   };
+}
+
+/**
+ * With no signal, the rig and the guides come from what the phone keeps. Either way the walks
+ * started on this phone and not yet sent are offered to carry on.
+ */
+export async function clientLoader({ params, serverLoader }: Route.ClientLoaderArgs) {
+  const code = params.code.toUpperCase();
+  const page = await serverOrPhone(serverLoader, (kit) => {
+    const rig = kit.rigs.find((r) => r.code === code);
+    if (!rig) return null;
+    return {
+      rig: { code: rig.code, name: rig.name, retired: false },
+      openWalks: [],
+      tiles: kit.guides.map((g) => ({ slug: g.slug, title: g.title, hint: g.symptoms[0] })),
+      caseId: crypto.randomUUID(),
+    };
+  });
+  const onServer = new Set(page.openWalks.map((w) => w.id));
+  const onPhone = openWalksOnPhone(window.localStorage, code).filter((w) => !onServer.has(w.id));
+  return { ...page, openWalks: [...onPhone, ...page.openWalks] };
 }
 
 const startForm = z.object({
@@ -40,34 +65,50 @@ export async function action({ request, params, context }: Route.ActionArgs) {
   return redirect(`/cases/${id}/walk`);
 }
 
+/** With no signal the phone starts the fix itself: it names the case and the time, and sends the start later. */
+export async function clientAction({ request, params, serverAction }: Route.ClientActionArgs) {
+  const form = await request.clone().formData();
+  try {
+    return await serverAction();
+  } catch (error) {
+    if (!isNoSignal(error)) throw error;
+    const kit = loadKit(window.localStorage);
+    if (!kit) return { problem: "No signal, and this phone has not kept the guides yet. Open Tankside once where there is signal." };
+    const caseId = String(form.get("caseId") ?? "") || crypto.randomUUID();
+    const started = startOnPhone(window.localStorage, kit, { caseId, rigCode: params.code, guideSlug: String(form.get("guideSlug") ?? ""), now: new Date() });
+    if (!started.ok) return { problem: started.problem };
+    return redirect(`/cases/${started.caseId}/walk`);
+  }
+}
+
 interface Hit {
   slug: string;
   title: string;
   score: number;
 }
 
-export default function StartFix({ loaderData }: Route.ComponentProps) {
-  const { rig, tiles, caseId, openWalks } = loaderData;
+export default function StartFix({ loaderData, actionData }: Route.ComponentProps) {
+  const { rig, tiles, openWalks } = loaderData;
   const times = useTimes();
-  const search = useFetcher<{ results?: Hit[]; error?: string }>();
+  const personId = useRouteLoaderData<typeof shellLoader>("routes/shell")?.user.id ?? 0;
   const [query, setQuery] = useState("");
+  const search = useGuideSearch(query, personId);
+  // A page kept on the phone carries the id made when it was kept: once running, every visit gets its own.
+  const [caseId, setCaseId] = useState(loaderData.caseId);
+  useEffect(() => setCaseId(crypto.randomUUID()), [loaderData]);
   const navigation = useNavigation();
   // The tapped guide shows at once that it was taken, before the server answers on a slow link.
   const opening = navigation.state !== "idle" ? (navigation.formData?.get("guideSlug")?.toString() ?? "") : null;
 
-  useEffect(() => {
-    const q = query.trim();
-    if (q.length < 2) return;
-    const t = setTimeout(() => search.load(`/api/guides/search?q=${encodeURIComponent(q)}`), 200);
-    return () => clearTimeout(t);
-    // eslint-disable-next-line react-hooks/exhaustive-deps -- search.load is stable enough; re-run on the words only
-  }, [query]);
-
-  const hits = query.trim().length >= 2 ? (search.data?.results ?? []) : [];
   return (
     <>
       <h1 className="text-3xl font-bold">What is {rig.code} doing?</h1>
       <p className="mt-1 text-lg">{rig.name}</p>
+      {actionData && "problem" in actionData ? (
+        <p role="alert" className="mt-3 rounded-md border-2 border-stop bg-paper px-3 py-2 text-lg font-bold text-stop">
+          {actionData.problem}
+        </p>
+      ) : null}
       {openWalks.length ? (
         <section aria-labelledby="open-h" className="mt-4 rounded-lg border-4 border-go bg-paper p-3">
           <h2 id="open-h" className="text-lg font-bold">
@@ -78,7 +119,10 @@ export default function StartFix({ loaderData }: Route.ComponentProps) {
               <li key={w.id}>
                 <Link to={`/cases/${w.id}/walk`} className="flex min-h-14 flex-col justify-center rounded-lg bg-go px-4 py-2 text-white no-underline">
                   <span className="text-xl font-bold">{w.guideTitle}</span>
-                  <span>started {times.dateTime(w.openedAt)}</span>
+                  <span>
+                    started {times.dateTime(w.openedAt)}
+                    {w.onPhoneOnly ? " · on this phone only, not sent yet" : ""}
+                  </span>
                 </Link>
               </li>
             ))}
@@ -91,9 +135,9 @@ export default function StartFix({ loaderData }: Route.ComponentProps) {
         <FixChooser
           query={query}
           setQuery={setQuery}
-          hits={hits}
-          searching={search.state !== "idle"}
-          searched={!!search.data}
+          hits={search.hits}
+          searching={search.searching}
+          searched={search.searched}
           tiles={tiles}
           opening={opening}
           caseId={caseId}

@@ -9,12 +9,28 @@ import { findRig, setRigRetired } from "~/services/rigs.server";
 import { useTimes } from "~/components/use-time-zone";
 import { readForm } from "~/services/read-request.server";
 import { can } from "~/lib/permissions";
+import { serverOrPhone } from "~/components/offline/server-or-phone";
+import { walkRigOf } from "~/lib/rigs/specs";
+import type { KitRig } from "~/lib/walk/kept";
 import type { Route } from "./+types/rigs.$code";
 
 export async function loader({ request, params, context }: Route.LoaderArgs) {
   const user = await requireUser({ request, context });
-  const rig = await findRig(user, params.code);
-  return { rig, canEdit: can(user, "edit-rigs"), cases: await recentRigCases(user, rig.id) };
+  const found = await findRig(user, params.code);
+  const rig: RigView = { ...walkRigOf(found), mount: found.mount, pumpKind: found.pumpKind, retired: found.retired, notes: found.notes };
+  return { rig, canEdit: can(user, "edit-rigs"), cases: await recentRigCases(user, found.id), fromPhone: false };
+}
+
+type RigView = KitRig & { retired: boolean; notes: string | null };
+
+/** With no signal, the rig's specs come from what the phone keeps (its recent cases need signal). */
+export async function clientLoader({ params, serverLoader }: Route.ClientLoaderArgs) {
+  return serverOrPhone(serverLoader, (kit) => {
+    const kept = kit.rigs.find((r) => r.code === params.code.toUpperCase());
+    if (!kept) return null;
+    const rig: RigView = { ...kept, retired: false, notes: null };
+    return { rig, canEdit: false, cases: [], fromPhone: true };
+  });
 }
 
 export async function action({ request, params, context }: Route.ActionArgs) {
@@ -29,7 +45,7 @@ export async function action({ request, params, context }: Route.ActionArgs) {
 
 export default function RigPage({ loaderData }: Route.ComponentProps) {
   const times = useTimes();
-  const { rig, canEdit, cases } = loaderData;
+  const { rig, canEdit, cases, fromPhone } = loaderData;
   const specs: [string, string][] = [
     ["Mount", rig.mount],
     ["Tank", `${fmt(rig.tankGal)} gal (${fmt(galToL(rig.tankGal))} L)`],
@@ -109,7 +125,9 @@ export default function RigPage({ loaderData }: Route.ComponentProps) {
         <h2 id="recent" className="text-xl font-bold">
           Recent cases
         </h2>
-        {cases.length ? (
+        {fromPhone ? (
+          <p className="mt-1">No signal: recent cases show when there is signal. The specs above are as this phone last kept them.</p>
+        ) : cases.length ? (
           <ul className="mt-2 space-y-2">
             {cases.map((c) => (
               <li key={c.id} className="rounded-md border-2 border-rule bg-paper p-3">

@@ -1,5 +1,10 @@
-import { Form, Link, NavLink, Outlet, useRouteLoaderData } from "react-router";
+import { Form, Link, NavLink, Outlet, useLocation, useRouteLoaderData } from "react-router";
 import { ErrorPanel } from "~/components/error-panel";
+import { useKeptSync } from "~/components/offline/kept-sync";
+import { forgetPhoneKit, useKitRefresh } from "~/components/offline/phone-kit";
+import { useOnline } from "~/components/offline/use-online";
+import { loadKit } from "~/lib/walk/kept";
+import { isNoSignal } from "~/lib/walk/no-signal";
 import { navFor } from "~/lib/navigation";
 import { ROLE_LABELS } from "~/lib/people/roles";
 import { hiddenSections } from "~/services/env.server";
@@ -11,7 +16,22 @@ export async function loader({ request, context }: Route.LoaderArgs) {
   return { user, hidden: hiddenSections() };
 }
 
+/** With no signal, the frame is drawn from the kit the phone keeps for this person. */
+export async function clientLoader({ serverLoader }: Route.ClientLoaderArgs) {
+  try {
+    return await serverLoader();
+  } catch (error) {
+    const kit = isNoSignal(error) ? loadKit(window.localStorage) : null;
+    if (!kit) throw error;
+    return { user: kit.person, hidden: kit.hidden };
+  }
+}
+
 export default function Shell({ loaderData }: Route.ComponentProps) {
+  const { pathname } = useLocation();
+  useKitRefresh(loaderData.user.id);
+  // The open walk-through sends its own answers; the rest go out from here.
+  useKeptSync(/^\/cases\/([^/]+)\/walk$/.exec(pathname)?.[1] ?? null);
   return (
     <ShellFrame {...loaderData}>
       <Outlet />
@@ -63,7 +83,7 @@ function ShellFrame({ user, hidden, children }: Awaited<ReturnType<typeof loader
                 </li>
               ))}
             <li className="ml-auto">
-              <Form method="post" action="/logout">
+              <Form method="post" action="/logout" onSubmit={() => void forgetPhoneKit()}>
                 <button type="submit" className="min-h-12 rounded-md px-2 font-bold underline">
                   Sign out
                 </button>
@@ -72,7 +92,19 @@ function ShellFrame({ user, hidden, children }: Awaited<ReturnType<typeof loader
           </ul>
         </nav>
       </header>
+      <NoSignalBanner />
       <main className="mx-auto max-w-3xl px-3 py-4">{children}</main>
     </div>
+  );
+}
+
+/** Says, on every page, that there is no signal and what still works. */
+function NoSignalBanner() {
+  const online = useOnline();
+  if (online) return null;
+  return (
+    <p role="status" className="no-print border-b-4 border-ink bg-caution px-3 py-2 text-center text-lg font-bold text-ink" data-testid="no-signal">
+      No signal. Fixes you start and answers you give are kept on this phone and sent when there is signal.
+    </p>
   );
 }

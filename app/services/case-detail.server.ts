@@ -30,7 +30,7 @@ export interface CaseDetail {
   handoffResolvedBy: string | null;
   handoffResolvedNote: string | null;
   rig: WalkRig;
-  guide: { slug: string; title: string; version: number; definition: Guide };
+  guide: { slug: string; title: string; version: number; versionId: number; definition: Guide };
   openedBy: string | null;
   events: { id: string; seq: number; stepId: string; answer: string; at: string; note: string | null }[];
   photos: { id: number; stepId: string | null; contentType: string; takenAt: string }[];
@@ -60,7 +60,7 @@ export async function caseDetail(user: SessionUser, caseId: string): Promise<Cas
     handoffResolvedBy: resolver?.name ?? null,
     handoffResolvedNote: found.handoffResolvedNote,
     rig: walkRigOf(rig!),
-    guide: { slug: record!.slug, title: record!.title, version: version.number, definition: guide },
+    guide: { slug: record!.slug, title: record!.title, version: version.number, versionId: version.id, definition: guide },
     openedBy: opener?.name ?? null,
     events: events.map((e) => ({ id: e.id, seq: e.seq, stepId: e.stepId, answer: e.answer, at: e.at.toISOString(), note: e.note })),
     photos: photos.map((p) => ({ id: p.id, stepId: p.stepId, contentType: p.contentType, takenAt: p.createdAt.toISOString() })),

@@ -3,13 +3,15 @@ import { replacedBuiltIns, usableBy } from "./tenancy.server";
 import { loadCauses } from "~/lib/guides/files.server";
 import type { Cause } from "~/lib/guides/causes";
 import type { Guide } from "~/lib/guides/schema";
-import { createGuideSearch, type SearchHit } from "~/lib/guides/search";
+import { createGuideSearch, searchDocFor, type SearchHit } from "~/lib/guides/search";
 import { GuideRecord, GuideVersion } from "./db.server";
 import type { SessionUser } from "./guards.server";
 
 let causes: Cause[] | undefined;
 /** The cause list from content/causes.json, read once per process. */
 export const causeList = () => (causes ??= loadCauses());
+/** Every cause's name by its code. */
+export const causeNames = (): Record<string, string> => Object.fromEntries(causeList().map((c) => [c.code, c.name]));
 
 export interface UsableGuide {
   guideId: number;
@@ -61,14 +63,6 @@ export async function searchGuides(user: SessionUser, query: string): Promise<Se
 }
 
 function buildIndex(guides: UsableGuide[]) {
-  const names = new Map(causeList().map((c) => [c.code, c.name]));
-  return createGuideSearch(
-    guides.map((g) => ({
-      slug: g.slug,
-      title: g.title,
-      summary: g.definition.summary,
-      symptoms: g.definition.symptoms,
-      causes: Object.values(g.definition.states).flatMap((s) => (s.meta.cause && names.has(s.meta.cause) ? [names.get(s.meta.cause)!] : [])),
-    })),
-  );
+  const names = causeNames();
+  return createGuideSearch(guides.map((g) => searchDocFor(g, names)));
 }

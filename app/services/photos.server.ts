@@ -1,4 +1,5 @@
 import { randomUUID } from "node:crypto";
+import { MAX_PHOTO_BYTES } from "~/lib/cases/schema";
 import { ownedBy } from "./tenancy.server";
 import { fileTypeFromBuffer } from "file-type";
 import sharp from "sharp";
@@ -6,7 +7,7 @@ import { Case, CasePhoto } from "./db.server";
 import { fail, notFound, type SessionUser } from "./guards.server";
 import { getObject, putObject } from "./storage.server";
 
-export const MAX_PHOTO_BYTES = 10 * 1024 * 1024;
+export { MAX_PHOTO_BYTES };
 const IMAGE_TYPES = new Set(["image/jpeg", "image/png", "image/webp", "image/heic", "image/heif", "image/avif"]);
 
 async function companyCase(user: SessionUser, caseId: string) {
@@ -16,8 +17,11 @@ async function companyCase(user: SessionUser, caseId: string) {
 }
 
 /** Stores a photo for a case under a key the server makes. The bytes, not the name, decide whether it is an image. */
-export async function addPhoto(user: SessionUser, caseId: string, stepId: string | null, bytes: Uint8Array) {
+export async function addPhoto(user: SessionUser, caseId: string, stepId: string | null, bytes: Uint8Array, phoneId: string | null = null) {
   await companyCase(user, caseId);
+  // Sent again after a dropped connection: the first copy stands.
+  const already = phoneId ? await CasePhoto.findOne({ where: { caseId, phoneId }, attributes: ["id"] }) : null;
+  if (already) return { id: already.id, created: false };
   if (bytes.byteLength === 0) fail(400, "The photo is empty.", { photo: "empty file" });
   if (bytes.byteLength > MAX_PHOTO_BYTES) fail(413, "Photos can be at most 10 MB.", { photo: "over 10 MB" });
   const type = await fileTypeFromBuffer(bytes);
@@ -27,8 +31,25 @@ export async function addPhoto(user: SessionUser, caseId: string, stepId: string
   const clean = await withoutMetadata(bytes, type.mime);
   const key = `companies/${user.companyId}/cases/${caseId}/${randomUUID()}.${clean.ext}`;
   await putObject(key, clean.bytes, clean.mime);
-  const photo = await CasePhoto.create({ caseId, stepId, storageKey: key, contentType: clean.mime, bytes: clean.bytes.byteLength, uploadedBy: user.id });
-  return { id: photo.id };
+  try {
+    const photo = await CasePhoto.create({
+      caseId,
+      stepId,
+      storageKey: key,
+      contentType: clean.mime,
+      bytes: clean.bytes.byteLength,
+      uploadedBy: user.id,
+      phoneId,
+    });
+    return { id: photo.id, created: true };
+  } catch (error) {
+    // Two copies sent at once: the unique (case, phone id) index keeps one.
+    if (phoneId && (error as { name?: string }).name === "SequelizeUniqueConstraintError") {
+      const first = await CasePhoto.findOne({ where: { caseId, phoneId }, attributes: ["id"] });
+      if (first) return { id: first.id, created: false };
+    }
+    throw error;
+  }
 }
 
 /**

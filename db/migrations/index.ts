@@ -15,6 +15,7 @@ import * as m013 from "./013-sessions";
 import * as m014 from "./014-throttling";
 import * as m015 from "./015-field-math-name";
 import * as m016 from "./016-rig-pump-and-agitator";
+import * as m017 from "./017-photo-phone-id";
 
 export interface Migration {
   name: string;
@@ -40,4 +41,5 @@ export const migrations: Migration[] = [
   { name: "014-throttling", ...m014 },
   { name: "015-field-math-name", ...m015 },
   { name: "016-rig-pump-and-agitator", ...m016 },
+  { name: "017-photo-phone-id", ...m017 },
 ];

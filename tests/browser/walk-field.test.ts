@@ -144,12 +144,15 @@ describe("the walk tells the truth (360×640)", () => {
     await p.close();
   });
 
-  it("says there is no signal, not that something went wrong, when a page it has opened before cannot be fetched", async () => {
-    // The fix page's scripts are on the phone from an earlier visit; with no signal its data cannot come.
+  it("says there is no signal, not that something went wrong, when a page cannot be fetched and nothing for it is kept", async () => {
+    // The fix page's scripts are on the phone from an earlier visit, but the kit of rigs and guides
+    // is gone (cleared by the browser): with no signal its data cannot come.
     const p = await crewPage();
     await p.goto(`${harness.app.url}/rigs/CF-03/fix`);
     await p.getByRole("link", { name: "Start a fix" }).first().click();
     await p.getByRole("link", { name: /CF-07/ }).first().waitFor();
+    await expect.poll(() => p.evaluate(() => localStorage.getItem("tankside:kit") !== null), { timeout: 20_000 }).toBe(true);
+    await p.evaluate(() => localStorage.removeItem("tankside:kit"));
     await harness.browser.context.setOffline(true);
     onTestFinished(() => harness.browser.context.setOffline(false));
     await p.getByRole("link", { name: /CF-07/ }).first().click();

@@ -31,9 +31,10 @@ const phonePhoto = async () =>
       .withMetadata({ orientation: 6 })
       .toBuffer(),
   );
-const upload = async (email: string, id: string, bytes: Uint8Array<ArrayBuffer>, name: string) => {
+const upload = async (email: string, id: string, bytes: Uint8Array<ArrayBuffer>, name: string, phoneId?: string) => {
   const form = new FormData();
   form.set("stepId", "agitator-speed");
+  if (phoneId !== undefined) form.set("phoneId", phoneId);
   form.set("photo", new File([bytes], name, { type: "image/jpeg" }));
   return run(async () => photoAction(args(await requestAs(email, `/api/cases/${id}/photos`, { method: "POST", body: form }), { id })));
 };
@@ -57,6 +58,21 @@ describe("photos", () => {
     const served = (await photoLoader(args(await requestAs(DANA, "/x"), { id: caseId, photoId: String(res.data.id) }))) as Response;
     expect(served.headers.get("Content-Type")).toBe("image/jpeg");
     expect(new Uint8Array(await served.arrayBuffer()).slice(0, 3)).toEqual(new Uint8Array([0xff, 0xd8, 0xff]));
+  });
+
+  it("stores a photo resent by a phone (same phone id) once, and answers the first copy's id", async () => {
+    const phoneId = randomUUID();
+    const first = await upload(DANA, caseId, await phonePhoto(), "kept.jpg", phoneId);
+    expect(first.status).toBe(201);
+    const again = await upload(DANA, caseId, await phonePhoto(), "kept.jpg", phoneId);
+    expect(again.status).toBe(200);
+    expect(again.data.id).toBe(first.data.id);
+    expect(await CasePhoto.count({ where: { caseId, phoneId } })).toBe(1);
+    const before = await CasePhoto.count();
+    const bad = await upload(DANA, caseId, await phonePhoto(), "kept.jpg", "not-a-uuid");
+    expect(bad.status).toBe(400);
+    expect(bad.data).toMatchObject({ error: "phoneId must be a UUID made by the phone.", fields: { phoneId: "not a UUID" } });
+    expect(await CasePhoto.count()).toBe(before);
   });
 
   it("strips the phone's position and other metadata, keeping the picture upright", async () => {

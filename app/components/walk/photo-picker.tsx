@@ -1,47 +1,28 @@
 import { useState } from "react";
-
-interface Upload {
-  name: string;
-  progress: number;
-  error?: string;
-  photoId?: number;
-}
+import type { QueuedPhoto } from "~/lib/walk/queue";
 
 /**
- * Adds photos to the case at the current step. XMLHttpRequest rather than fetch, because
- * only it reports upload progress, which matters on a weak signal.
+ * Adds photos to the case at the current step. A photo is kept on the phone first and sent when
+ * there is signal, with its progress shown; a refusal is said beside the photo.
  */
-export function PhotoPicker({ caseId, stepId, online }: { caseId: string; stepId: string; online: boolean }) {
-  const [uploads, setUploads] = useState<Upload[]>([]);
-  const set = (i: number, change: Partial<Upload>) => setUploads((u) => u.map((x, k) => (k === i ? { ...x, ...change } : x)));
-
-  const upload = (file: File) => {
-    const index = uploads.length;
-    setUploads((u) => [...u, { name: file.name, progress: 0 }]);
-    const form = new FormData();
-    form.set("stepId", stepId);
-    form.set("photo", file);
-    const xhr = new XMLHttpRequest();
-    xhr.open("POST", `/api/cases/${caseId}/photos`);
-    xhr.upload.onprogress = (e) => e.lengthComputable && set(index, { progress: Math.round((e.loaded / e.total) * 100) });
-    xhr.onload = () => {
-      const body = (() => {
-        try {
-          return JSON.parse(xhr.responseText) as { id?: number; error?: string };
-        } catch {
-          return {};
-        }
-      })();
-      if (xhr.status >= 200 && xhr.status < 300) set(index, { progress: 100, photoId: body.id });
-      else set(index, { error: body.error ?? `Upload refused (${xhr.status}).` });
-    };
-    xhr.onerror = () => set(index, { error: "No signal: photo not sent. Try again when you have signal." });
-    xhr.send(form);
-  };
-
+export function PhotoPicker({
+  caseId,
+  photos,
+  progress,
+  online,
+  onTake,
+}: {
+  caseId: string;
+  photos: QueuedPhoto[];
+  progress: Record<string, number>;
+  online: boolean;
+  /** Keeps the photo; answers what is wrong with it, or null once kept. */
+  onTake: (file: File) => Promise<string | null>;
+}) {
+  const [problem, setProblem] = useState<string | null>(null);
   return (
     <div>
-      <label className={`flex min-h-12 w-fit items-center rounded-md border-2 border-ink bg-paper px-3 font-bold ${online ? "" : "opacity-70"}`}>
+      <label className="flex min-h-12 w-fit items-center rounded-md border-2 border-ink bg-paper px-3 font-bold">
         Add a photo
         <input
           type="file"
@@ -50,28 +31,30 @@ export function PhotoPicker({ caseId, stepId, online }: { caseId: string; stepId
           className="sr-only"
           onChange={(e) => {
             const file = e.target.files?.[0];
-            if (file) upload(file);
             e.target.value = "";
+            if (file) void onTake(file).then(setProblem);
           }}
         />
       </label>
-      {online ? null : <p className="mt-1">Photos need signal; your answers do not.</p>}
+      {problem ? <p className="mt-1 font-bold text-stop">{problem}</p> : null}
       <ul className="mt-2 space-y-2">
-        {uploads.map((u, i) => (
-          <li key={i} className="flex items-center gap-3">
-            {u.photoId ? (
-              <img src={`/cases/${caseId}/photos/${u.photoId}`} alt={`Photo ${i + 1}`} className="h-16 w-16 rounded border-2 border-ink object-cover" />
+        {photos.map((p, i) => (
+          <li key={p.id} className="flex items-center gap-3">
+            {p.sentAs ? (
+              <img src={`/cases/${caseId}/photos/${p.sentAs}`} alt={`Photo ${i + 1}`} className="h-16 w-16 rounded border-2 border-ink object-cover" />
             ) : null}
             <span>
-              {u.name}:{" "}
-              {u.error ? (
-                <strong className="text-stop">{u.error}</strong>
-              ) : u.photoId ? (
+              {p.name}:{" "}
+              {p.error ? (
+                <strong className="text-stop">{p.error}</strong>
+              ) : p.sentAs ? (
                 "saved"
-              ) : (
-                <progress max={100} value={u.progress} aria-label={`Uploading ${u.name}`}>
-                  {u.progress}%
+              ) : online && progress[p.id] !== undefined ? (
+                <progress max={100} value={progress[p.id]} aria-label={`Sending ${p.name}`}>
+                  {progress[p.id]}%
                 </progress>
+              ) : (
+                "kept on this phone, sent when there is signal"
               )}
             </span>
           </li>

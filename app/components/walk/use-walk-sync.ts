@@ -1,69 +1,42 @@
 import { useCallback, useEffect, useRef, useState } from "react";
-import { closePending, markSynced, unsynced, type WalkRecord } from "~/lib/walk/queue";
+import { closePending, unsynced, type WalkRecord } from "~/lib/walk/queue";
+import { sendKept } from "~/components/offline/send-kept";
 
 const RETRY_MS = 4000;
 
 /**
- * Sends the answers the phone holds, in batches, whenever there is a connection: on a timer,
- * when the browser comes back online, and when the page is hidden. Answering itself never
- * waits for the network. A 4xx answer (other than sign-in) stops the retries and is shown.
+ * Sends what the phone holds for the open walk-through whenever there is a connection: on a
+ * timer, when the browser comes back online, and when the page is hidden. Answering itself
+ * never waits for the network.
  */
 export function useWalkSync(record: WalkRecord, update: (change: (r: WalkRecord) => WalkRecord) => void) {
   const [online, setOnline] = useState(true);
-  const [sending, setSending] = useState(false);
+  const [signedOut, setSignedOut] = useState(false);
+  const [photoProgress, setPhotoProgress] = useState<Record<string, number>>({});
   const latest = useRef(record);
   latest.current = record;
   const busy = useRef(false);
 
-  const post = (path: string, body: unknown, keepalive = false) =>
-    fetch(path, { method: "POST", headers: { "Content-Type": "application/json" }, body: JSON.stringify(body), credentials: "same-origin", keepalive });
-
-  const refuse = useCallback(
-    async (res: Response) => {
-      if (res.status >= 400 && res.status < 500 && ![401, 408, 429].includes(res.status)) {
-        const body = (await res.json().catch(() => ({}))) as { error?: string };
-        update((r) => ({ ...r, rejected: body.error ?? `The server refused the answers (${res.status}).` }));
+  const flush = useCallback(
+    async (keepalive = false) => {
+      if (busy.current || !navigator.onLine) return;
+      busy.current = true;
+      try {
+        const outcome = await sendKept({
+          read: () => latest.current,
+          update: (change) => {
+            latest.current = change(latest.current);
+            update(change);
+          },
+          keepalive,
+          onPhotoProgress: (id, pct) => setPhotoProgress((p) => (p[id] === pct ? p : { ...p, [id]: pct })),
+        });
+        setSignedOut(outcome === "signed-out");
+      } finally {
+        busy.current = false;
       }
     },
     [update],
-  );
-
-  const flush = useCallback(
-    async (keepalive = false) => {
-      if (busy.current || !navigator.onLine || latest.current.rejected) return;
-      busy.current = true;
-      setSending(true);
-      try {
-        const caseId = latest.current.caseId;
-        const pending = unsynced(latest.current);
-        if (pending.length) {
-          const res = await post(`/api/cases/${caseId}/events`, { events: pending }, keepalive);
-          if (!res.ok) return void (await refuse(res));
-          update((r) =>
-            markSynced(
-              r,
-              pending.map((e) => e.id),
-            ),
-          );
-          latest.current = markSynced(
-            latest.current,
-            pending.map((e) => e.id),
-          );
-        }
-        if (closePending(latest.current) && unsynced(latest.current).length === 0) {
-          const res = await post(`/api/cases/${caseId}/close`, latest.current.close, keepalive);
-          if (!res.ok) return void (await refuse(res));
-          const result = (await res.json()) as { notified: string[]; mailedAt?: string | null; mailFailed?: boolean };
-          update((r) => ({ ...r, closeResult: { notified: result.notified ?? [], mailedAt: result.mailedAt ?? null, mailFailed: result.mailFailed } }));
-        }
-      } catch {
-        // No connection after all: the timer tries again.
-      } finally {
-        busy.current = false;
-        setSending(false);
-      }
-    },
-    [refuse, update],
   );
 
   useEffect(() => {
@@ -78,6 +51,7 @@ export function useWalkSync(record: WalkRecord, update: (change: (r: WalkRecord)
     window.addEventListener("offline", goOffline);
     document.addEventListener("visibilitychange", hidden);
     const timer = window.setInterval(() => void flush(), RETRY_MS);
+    void flush();
     return () => {
       window.removeEventListener("online", goOnline);
       window.removeEventListener("offline", goOffline);
@@ -86,6 +60,8 @@ export function useWalkSync(record: WalkRecord, update: (change: (r: WalkRecord)
     };
   }, [flush]);
 
-  const waiting = unsynced(record).length + (closePending(record) ? 1 : 0);
-  return { online, sending, waiting, flushNow: () => void flush() };
+  const photosWaiting = (record.photos ?? []).filter((p) => !p.sentAs && !p.error).length;
+  const waiting = unsynced(record).length + (closePending(record) ? 1 : 0) + photosWaiting;
+  const startWaiting = !!record.start && !record.startSent;
+  return { online, signedOut, waiting, startWaiting, photoProgress, flushNow: () => void flush() };
 }

@@ -6,6 +6,9 @@ import type { Guide } from "~/lib/guides/schema";
 import { replayWalk } from "~/lib/walk/replay";
 import { outcomeLabel, type Outcome } from "~/lib/vocabulary";
 import { appendEvent, loadRecord, mergeServerEvents, saveRecord, type QueuedEvent, type WalkRecord } from "~/lib/walk/queue";
+import { MAX_PHOTO_BYTES } from "~/lib/cases/schema";
+import { PHOTO_WAIT_CAP_BYTES, waitingPhotoBytes } from "~/lib/walk/kept";
+import { keepPhotoBytes } from "~/components/offline/photo-store";
 import { EndCard } from "./end-card";
 import { PhotoPicker } from "./photo-picker";
 import { StepCard } from "./step-card";
@@ -23,13 +26,31 @@ export interface WalkScreenProps {
   /** How the server has the case closed, or null while it is open. */
   closedAs: Outcome | null;
   offlineReady?: boolean;
+  /** The data was rebuilt on the phone (not drawn by the server): the phone's answers can be read at once. */
+  fromPhone?: boolean;
   renderFieldMath?: (widget: string) => React.ReactNode;
 }
 
 /** The crew's walk-through: state lives on the phone, the server hears about it in batches. */
-export function WalkScreen({ caseId, guide, guideTitle, rig, stepsToEnd, causeNames, serverEvents, closedAs, offlineReady, renderFieldMath }: WalkScreenProps) {
+export function WalkScreen({
+  caseId,
+  guide,
+  guideTitle,
+  rig,
+  stepsToEnd,
+  causeNames,
+  serverEvents,
+  closedAs,
+  offlineReady,
+  fromPhone,
+  renderFieldMath,
+}: WalkScreenProps) {
   const machine = useMemo(() => compileGuide(guide), [guide]);
-  const [record, setRecord] = useState<WalkRecord>(() => mergeServerEvents({ caseId, events: [], synced: [] }, serverEvents));
+  // A page the server drew starts from the server's answers (the phone's are read after hydration);
+  // one rebuilt on the phone opens straight at the phone's step.
+  const [record, setRecord] = useState<WalkRecord>(() =>
+    mergeServerEvents(fromPhone ? loadRecord(window.localStorage, caseId) : { caseId, events: [], synced: [] }, serverEvents),
+  );
   const [note, setNote] = useState("");
 
   // After hydration: what this phone kept (possibly more than the server has) wins.
@@ -70,6 +91,24 @@ export function WalkScreen({ caseId, guide, guideTitle, rig, stepsToEnd, causeNa
     window.scrollTo({ top: 0, left: 0, behavior: "instant" });
     top.current?.querySelector<HTMLElement>("[data-step-heading]")?.focus({ preventScroll: true });
   }, [stepKey]);
+
+  const takePhoto = async (file: File): Promise<string | null> => {
+    if (file.size === 0) return "That photo is empty.";
+    if (file.size > MAX_PHOTO_BYTES)
+      return `Photos can be at most ${MAX_PHOTO_BYTES / 1024 / 1024} MB; this one is ${(file.size / 1024 / 1024).toFixed(1)} MB.`;
+    if (waitingPhotoBytes(window.localStorage) + file.size > PHOTO_WAIT_CAP_BYTES) {
+      return `This phone already holds ${PHOTO_WAIT_CAP_BYTES / 1024 / 1024} MB of photos waiting for signal. Send those first (find signal), then add more.`;
+    }
+    const id = crypto.randomUUID();
+    try {
+      await keepPhotoBytes(id, file);
+    } catch {
+      return "This phone has no room to keep the photo. Free some space, or add it when there is signal.";
+    }
+    update((r) => ({ ...r, photos: [...(r.photos ?? []), { id, stepId: here, name: file.name || "photo.jpg", bytes: file.size }] }));
+    setTimeout(sync.flushNow, 0);
+    return null;
+  };
 
   const record_ = (answer: QueuedEvent["answer"], stepId: string) =>
     update((r) => appendEvent(r, { id: crypto.randomUUID(), stepId, answer, at: new Date().toISOString(), ...(note.trim() ? { note: note.trim() } : {}) }));
@@ -113,10 +152,16 @@ export function WalkScreen({ caseId, guide, guideTitle, rig, stepsToEnd, causeNa
           }}
         >
           {meta.fieldMath && renderFieldMath ? renderFieldMath(meta.fieldMath) : null}
-          <PhotoPicker caseId={caseId} stepId={here} online={sync.online} />
+          <PhotoPicker
+            caseId={caseId}
+            photos={(record.photos ?? []).filter((p) => p.stepId === here)}
+            progress={sync.photoProgress}
+            online={sync.online}
+            onTake={takePhoto}
+          />
         </StepCard>
       )}
-      <SyncBadge online={sync.online} waiting={sync.waiting} rejected={record.rejected} />
+      <SyncBadge online={sync.online} waiting={sync.waiting} startWaiting={sync.startWaiting} rejected={record.rejected} signedOut={sync.signedOut} />
       {offlineReady ? <p className="text-base">This walk-through is kept on this phone: it opens again even with no signal.</p> : null}
       {path.length > 1 && !record.close && !closedElsewhere ? (
         <button

@@ -1,4 +1,5 @@
 import Fuse from "fuse.js";
+import type { Guide } from "./schema";
 
 export interface SearchDoc {
   slug: string;
@@ -12,6 +13,17 @@ export interface SearchHit {
   slug: string;
   title: string;
   score: number;
+}
+
+/** A guide as search reads it: its words, and the names of the causes it can end with. */
+export function searchDocFor(guide: { slug: string; title: string; definition: Guide }, causeNames: Record<string, string>): SearchDoc {
+  return {
+    slug: guide.slug,
+    title: guide.title,
+    summary: guide.definition.summary,
+    symptoms: guide.definition.symptoms,
+    causes: Object.values(guide.definition.states).flatMap((s) => (s.meta.cause && causeNames[s.meta.cause] ? [causeNames[s.meta.cause]] : [])),
+  };
 }
 
 /** Words crews use for the same thing; a query with one also looks for the others. */

@@ -22,10 +22,34 @@ export interface QueuedClose {
   at: string;
 }
 
+/** A fix started with no signal: sent before its answers when there is signal. */
+export interface QueuedStart {
+  rigCode: string;
+  guideSlug: string;
+  guideVersionId: number;
+  openedAt: string;
+}
+
+/** A photo waiting on the phone (its bytes are kept apart, under its id). */
+export interface QueuedPhoto {
+  /** Made by the phone; the server stores a resend once. */
+  id: string;
+  stepId: string;
+  name: string;
+  bytes: number;
+  /** The server's id once stored. */
+  sentAs?: number;
+  /** Why the server refused it (it is not sent again). */
+  error?: string;
+}
+
 export interface WalkRecord {
   caseId: string;
+  start?: QueuedStart;
+  startSent?: boolean;
   events: QueuedEvent[];
   synced: string[];
+  photos?: QueuedPhoto[];
   close?: QueuedClose;
   closeResult?: { notified: string[]; mailedAt?: string | null; mailFailed?: boolean };
   rejected?: string;

@@ -1,0 +1,40 @@
+import { Link } from "react-router";
+import { useTimes } from "~/components/use-time-zone";
+import { useKeptSummary } from "./kept-sync";
+import { useKitStatus } from "./phone-kit";
+
+/** Says on the home screen whether this phone can start a fix with no signal, and what waits to be sent. */
+export function PhoneReadiness({ personId }: { personId: number }) {
+  const { status, read } = useKitStatus(personId);
+  const kept = useKeptSummary();
+  const times = useTimes();
+  if (!read) return null;
+  const ready = status && status.pagesAt && status.pagesFailed === 0;
+  return (
+    <div className="mb-4 space-y-2" data-testid="phone-readiness">
+      <p className={`rounded-md border-2 px-3 py-2 font-bold ${ready ? "border-go bg-paper text-go" : "border-ink bg-caution text-ink"}`}>
+        {ready
+          ? `Ready for no signal · updated ${times.time(status.madeAt)}`
+          : status
+            ? `Partly ready for no signal · rigs and guides updated ${times.time(status.madeAt)}; some pages are not kept yet.`
+            : "Not ready for no signal yet: keep Tankside open for a moment while there is signal."}
+      </p>
+      {kept && kept.waiting > 0 ? (
+        <p role="status" className="rounded-md border-2 border-ink bg-caution px-3 py-2 font-bold">
+          {kept.signedOut
+            ? `${kept.waiting} fix${kept.waiting === 1 ? "" : "es"} kept on this phone: your sign-in ended before they were sent. Sign in again and they will be sent.`
+            : `${kept.waiting} fix${kept.waiting === 1 ? "" : "es"} kept on this phone, to be sent when there is signal.`}
+        </p>
+      ) : null}
+      {kept?.refused.map((r) => (
+        <p key={r.caseId} role="alert" className="rounded-md border-2 border-stop bg-paper px-3 py-2 font-bold text-stop">
+          Not saved to Tankside. {r.message}
+          {/supervisor/i.test(r.message) ? "" : " Tell your supervisor."} The answers stay on this phone.{" "}
+          <Link to={`/cases/${r.caseId}/walk`} className="text-stop">
+            Open it
+          </Link>
+        </p>
+      ))}
+    </div>
+  );
+}

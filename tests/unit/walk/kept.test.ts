@@ -1,0 +1,125 @@
+import { describe, expect, it } from "vitest";
+import { loadKit, openWalksOnPhone, saveKit, startOnPhone, waitingPhotoBytes, waitingToSend, walkOnPhone, type OfflineKit } from "~/lib/walk/kept";
+import { appendEvent, loadRecord, saveRecord } from "~/lib/walk/queue";
+import { tinyGuide } from "../../helpers/guides";
+
+/** localStorage's shape, in memory. */
+const phone = () => {
+  const data = new Map<string, string>();
+  return {
+    data,
+    getItem: (k: string) => data.get(k) ?? null,
+    setItem: (k: string, v: string) => void data.set(k, v),
+    removeItem: (k: string) => void data.delete(k),
+    get length() {
+      return data.size;
+    },
+    key: (i: number) => [...data.keys()][i] ?? null,
+  };
+};
+
+const rig = (code: string) => ({
+  code,
+  name: `Rig ${code}`,
+  tankGal: 1500,
+  hoseLengthFt: 150,
+  hoseDiameterIn: 2,
+  yardElevationFt: 4000,
+  agitatorMixes: "forward" as const,
+  pumpRatedGpm: null,
+  pumpRatedPsi: null,
+  pumpNpshrFt: null,
+  carrierRatingLb: null,
+  nozzleTips: [],
+  torqueSpecs: [],
+  hasHourMeter: true,
+  engineHours: 812,
+  mount: "trailer",
+  pumpKind: "centrifugal",
+});
+
+const kit = (): OfflineKit => ({
+  madeAt: "2026-12-02T08:12:00.000Z",
+  person: { id: 7, name: "Dana Ortiz", email: "dana@example.test", role: "crew", companyId: 1, companyName: "Test Co", timeZone: "America/Denver" },
+  hidden: [],
+  rigs: [rig("CF-07"), rig("CF-11")],
+  guides: [{ slug: "tiny", title: "Tiny guide", summary: "s", symptoms: ["it stops"], versionId: 41, version: 3, definition: tinyGuide() }],
+  causeNames: { "low-water": "Tank water low", "not-in-guide": "Other" },
+});
+
+const NOW = new Date("2026-12-02T09:30:00.000Z");
+
+describe("starting a fix on the phone with no signal", () => {
+  it("names the case and the opening time, follows the version the phone holds, and keeps what the walk needs", () => {
+    const store = phone();
+    const started = startOnPhone(store, kit(), { caseId: "case-1", rigCode: "cf-07", guideSlug: "tiny", now: NOW });
+    expect(started).toEqual({ ok: true, caseId: "case-1" });
+    expect(loadRecord(store, "case-1").start).toEqual({ rigCode: "CF-07", guideSlug: "tiny", guideVersionId: 41, openedAt: NOW.toISOString() });
+    const walk = walkOnPhone(store, "case-1")!;
+    expect(walk).toMatchObject({ caseId: "case-1", openedAt: NOW.toISOString(), closedAs: null, onPhoneOnly: true, fromPhone: true, events: [] });
+    expect(walk.guide).toMatchObject({ slug: "tiny", versionId: 41 });
+    expect(walk.rig).not.toHaveProperty("mount");
+    expect(walk.stepsToEnd[tinyGuide().initial]).toBeGreaterThan(0);
+  });
+
+  it("opens the same case on a second tap rather than a second case", () => {
+    const store = phone();
+    startOnPhone(store, kit(), { caseId: "case-1", rigCode: "CF-07", guideSlug: "tiny", now: NOW });
+    const later = new Date(NOW.getTime() + 5000);
+    expect(startOnPhone(store, kit(), { caseId: "case-1", rigCode: "CF-07", guideSlug: "tiny", now: later })).toEqual({ ok: true, caseId: "case-1" });
+    expect(loadRecord(store, "case-1").start!.openedAt).toBe(NOW.toISOString());
+  });
+
+  it("says what is missing when the phone does not hold the rig or the guide", () => {
+    const store = phone();
+    const noRig = startOnPhone(store, kit(), { caseId: "c", rigCode: "BM-02", guideSlug: "tiny", now: NOW });
+    expect(noRig).toEqual({ ok: false, problem: expect.stringMatching(/Rig BM-02 is not on this phone's list/) });
+    const noGuide = startOnPhone(store, kit(), { caseId: "c", rigCode: "CF-07", guideSlug: "nope", now: NOW });
+    expect(noGuide).toEqual({ ok: false, problem: expect.stringMatching(/not kept on this phone/) });
+    expect(store.data.size).toBe(0);
+  });
+});
+
+describe("what the phone keeps", () => {
+  it("keeps the kit per person: another person's kit is not used", () => {
+    const store = phone();
+    saveKit(store, kit());
+    expect(loadKit(store, 7)?.rigs.map((r) => r.code)).toEqual(["CF-07", "CF-11"]);
+    expect(loadKit(store, 8)).toBeNull();
+    store.setItem("tankside:kit", "{broken");
+    expect(loadKit(store)).toBeNull();
+  });
+
+  it("offers unfinished walks on the rig to carry on, newest first, and not closed or refused ones", () => {
+    const store = phone();
+    startOnPhone(store, kit(), { caseId: "old", rigCode: "CF-07", guideSlug: "tiny", now: NOW });
+    startOnPhone(store, kit(), { caseId: "new", rigCode: "CF-07", guideSlug: "tiny", now: new Date(NOW.getTime() + 60_000) });
+    startOnPhone(store, kit(), { caseId: "other-rig", rigCode: "CF-11", guideSlug: "tiny", now: NOW });
+    startOnPhone(store, kit(), { caseId: "closed", rigCode: "CF-07", guideSlug: "tiny", now: NOW });
+    saveRecord(store, { ...loadRecord(store, "closed"), close: { outcome: "abandoned", at: NOW.toISOString() } });
+    startOnPhone(store, kit(), { caseId: "refused", rigCode: "CF-07", guideSlug: "tiny", now: NOW });
+    saveRecord(store, { ...loadRecord(store, "refused"), rejected: "Rig CF-07 has been retired." });
+    expect(openWalksOnPhone(store, "CF-07").map((w) => w.id)).toEqual(["new", "old"]);
+  });
+
+  it("knows what still waits to be sent: the start, answers, photos and the close", () => {
+    const store = phone();
+    startOnPhone(store, kit(), { caseId: "c", rigCode: "CF-07", guideSlug: "tiny", now: NOW });
+    let r = loadRecord(store, "c");
+    expect(waitingToSend(r)).toBe(true);
+    r = { ...r, startSent: true };
+    expect(waitingToSend(r)).toBe(false);
+    r = appendEvent(r, { id: "e1", stepId: "s", answer: "YES", at: NOW.toISOString() });
+    expect(waitingToSend(r)).toBe(true);
+    r = { ...r, synced: ["e1"], photos: [{ id: "p1", stepId: "s", name: "a.jpg", bytes: 2_000_000 }] };
+    expect(waitingToSend(r)).toBe(true);
+    saveRecord(store, r);
+    expect(waitingPhotoBytes(store)).toBe(2_000_000);
+    r = { ...r, photos: [{ id: "p1", stepId: "s", name: "a.jpg", bytes: 2_000_000, sentAs: 9 }] };
+    saveRecord(store, r);
+    expect(waitingPhotoBytes(store)).toBe(0);
+    expect(waitingToSend(r)).toBe(false);
+    r = { ...r, close: { outcome: "fixed", at: NOW.toISOString() } };
+    expect(waitingToSend(r)).toBe(true);
+  });
+});
