@@ -1,6 +1,6 @@
-import { useEffect, useState } from "react";
+import { lazy, Suspense, useEffect, useMemo, useState } from "react";
+import { GuideTextProvider, treeRenderer } from "~/components/ui/guide-text";
 import { data } from "react-router";
-import { FieldMathWidget } from "~/components/field-math/widget";
 import { askWorker } from "~/components/offline/worker";
 import { WalkScreen } from "~/components/walk/walk-screen";
 import { stepsToEnd } from "~/lib/guides/graph";
@@ -9,9 +9,13 @@ import { isNoSignal } from "~/lib/walk/no-signal";
 import { ON_PHONE_CASE } from "~/lib/walk/pages";
 import type { Answer } from "~/lib/vocabulary";
 import { caseDetail } from "~/services/case-detail.server";
+import { guideTexts } from "~/services/guide-text.server";
 import { requireUser } from "~/services/guards.server";
 import { causeNames } from "~/services/guides.server";
 import type { Route } from "./+types/cases.$id.walk";
+
+// One step in twenty has a calculator: its code loads only on such a step (kept on the phone all the same).
+const FieldMathWidget = lazy(() => import("~/components/field-math/widget").then((m) => ({ default: m.FieldMathWidget })));
 
 export async function loader({ request, params, context }: Route.LoaderArgs): Promise<WalkData | null> {
   const user = await requireUser({ request, context });
@@ -22,7 +26,13 @@ export async function loader({ request, params, context }: Route.LoaderArgs): Pr
     caseId: detail.id,
     closedAs: detail.outcome === "open" ? null : detail.outcome,
     openedAt: detail.openedAt,
-    guide: { slug: detail.guide.slug, title: detail.guide.title, versionId: detail.guide.versionId, definition: detail.guide.definition },
+    guide: {
+      slug: detail.guide.slug,
+      title: detail.guide.title,
+      versionId: detail.guide.versionId,
+      definition: detail.guide.definition,
+      texts: guideTexts(detail.guide.versionId, detail.guide.definition),
+    },
     rig: detail.rig,
     stepsToEnd: stepsToEnd(detail.guide.definition),
     causeNames: namesFor(detail.guide.definition, causeNames()),
@@ -59,22 +69,29 @@ const isMissing = (error: unknown) => typeof error === "object" && error !== nul
 export default function Walk({ loaderData }: Route.ComponentProps) {
   const d = loaderData;
   const offlineReady = useKeepForNoSignal(d?.caseId ?? null);
+  const texts = useMemo(() => treeRenderer(d?.guide.texts ?? {}), [d?.guide.texts]);
   if (!d) return <OpeningFromPhone />;
   return (
-    <WalkScreen
-      key={d.caseId}
-      caseId={d.caseId}
-      guide={d.guide.definition}
-      guideTitle={d.guide.title}
-      rig={d.rig}
-      stepsToEnd={d.stepsToEnd}
-      causeNames={d.causeNames}
-      serverEvents={d.events}
-      closedAs={d.closedAs}
-      offlineReady={offlineReady}
-      fromPhone={d.fromPhone}
-      renderFieldMath={(widget) => <FieldMathWidget widget={widget} rig={d.rig} />}
-    />
+    <GuideTextProvider value={texts}>
+      <WalkScreen
+        key={d.caseId}
+        caseId={d.caseId}
+        guide={d.guide.definition}
+        guideTitle={d.guide.title}
+        rig={d.rig}
+        stepsToEnd={d.stepsToEnd}
+        causeNames={d.causeNames}
+        serverEvents={d.events}
+        closedAs={d.closedAs}
+        offlineReady={offlineReady}
+        fromPhone={d.fromPhone}
+        renderFieldMath={(widget) => (
+          <Suspense fallback={<p className="text-lg">Opening the calculator…</p>}>
+            <FieldMathWidget widget={widget} rig={d.rig} />
+          </Suspense>
+        )}
+      />
+    </GuideTextProvider>
   );
 }
 

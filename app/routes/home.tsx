@@ -8,39 +8,51 @@ import { requireUser } from "~/services/guards.server";
 import { listRigs } from "~/services/rigs.server";
 import { PhoneReadiness } from "~/components/offline/phone-readiness";
 import { serverOrPhone } from "~/components/offline/server-or-phone";
+import { lastRigOnPhone } from "~/lib/walk/kept";
 import type { Route } from "./+types/home";
 
 export async function loader({ request, context }: Route.LoaderArgs) {
   const user = await requireUser({ request, context });
   const [rigs, lastRigId] = await Promise.all([listRigs(user), lastRigIdFor(user)]);
-  // The rig this person worked on last comes first: it is usually the one acting up again.
-  rigs.sort((a, b) => Number(b.id === lastRigId) - Number(a.id === lastRigId));
   return {
     personId: user.id,
     role: user.role,
     firstName: user.name.split(" ")[0],
-    rigs: rigs.map((r): HomeRig => ({ id: r.id, code: r.code, name: r.name, tankGal: r.tankGal, mount: r.mount })),
-    lastRigId,
+    rigs: lastFirst(
+      rigs.map((r): HomeRig => ({ code: r.code, name: r.name, tankGal: r.tankGal, mount: r.mount })),
+      rigs.find((r) => r.id === lastRigId)?.code ?? null,
+    ),
+    lastRigCode: rigs.find((r) => r.id === lastRigId)?.code ?? null,
     hidden: hiddenSections(),
   };
 }
 
-type HomeRig = { id: number; code: string; name: string; tankGal: number; mount: string };
+type HomeRig = { code: string; name: string; tankGal: number; mount: string };
+
+/** The rig this person worked on last comes first: it is usually the one acting up again. */
+const lastFirst = (rigs: HomeRig[], last: string | null) => [...rigs].sort((a, b) => Number(b.code === last) - Number(a.code === last));
 
 /** With no signal, the rigs come from what the phone keeps. */
 export async function clientLoader({ serverLoader }: Route.ClientLoaderArgs) {
-  return serverOrPhone(serverLoader, (kit) => ({
-    personId: kit.person.id,
-    role: kit.person.role,
-    firstName: kit.person.name.split(" ")[0],
-    rigs: kit.rigs.map((r) => ({ id: 0, code: r.code, name: r.name, tankGal: r.tankGal, mount: r.mount })),
-    lastRigId: null,
-    hidden: kit.hidden,
-  }));
+  return serverOrPhone(serverLoader, (kit) => {
+    // The last rig: one worked on with no signal since the kit was made, else the server's.
+    const last = lastRigOnPhone(window.localStorage, kit.madeAt) ?? kit.lastRigCode;
+    return {
+      personId: kit.person.id,
+      role: kit.person.role,
+      firstName: kit.person.name.split(" ")[0],
+      rigs: lastFirst(
+        kit.rigs.map((r) => ({ code: r.code, name: r.name, tankGal: r.tankGal, mount: r.mount })),
+        last,
+      ),
+      lastRigCode: last,
+      hidden: kit.hidden,
+    };
+  });
 }
 
 export default function Home({ loaderData }: Route.ComponentProps) {
-  const { rigs, role, firstName, lastRigId, hidden, personId } = loaderData;
+  const { rigs, role, firstName, lastRigCode, hidden, personId } = loaderData;
   const more = navFor(role).filter((item) => !forEveryone(item) && !hidden.includes(item.to));
   return (
     <>
@@ -58,7 +70,7 @@ export default function Home({ loaderData }: Route.ComponentProps) {
               >
                 <span className="text-2xl font-bold">
                   {rig.code}
-                  {rig.id === lastRigId ? <span className="ml-2 text-base font-normal">(your last rig)</span> : null}
+                  {rig.code === lastRigCode ? <span className="ml-2 text-base font-normal">(your last rig)</span> : null}
                 </span>
                 <span>
                   {rig.name} · {rig.tankGal.toLocaleString("en-US")} gal {rig.mount}

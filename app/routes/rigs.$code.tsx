@@ -10,6 +10,7 @@ import { useTimes } from "~/components/use-time-zone";
 import { readForm } from "~/services/read-request.server";
 import { can } from "~/lib/permissions";
 import { serverOrPhone } from "~/components/offline/server-or-phone";
+import { useOnline } from "~/components/offline/use-online";
 import { walkRigOf } from "~/lib/rigs/specs";
 import type { KitRig } from "~/lib/walk/kept";
 import type { Route } from "./+types/rigs.$code";
@@ -46,6 +47,8 @@ export async function action({ request, params, context }: Route.ActionArgs) {
 export default function RigPage({ loaderData }: Route.ComponentProps) {
   const times = useTimes();
   const { rig, canEdit, cases, fromPhone } = loaderData;
+  // A page the phone kept earlier, opened with no signal, says so: its hours and cases may be old.
+  const stale = !useOnline() && !fromPhone;
   const specs: [string, string][] = [
     ["Mount", rig.mount],
     ["Tank", `${fmt(rig.tankGal)} gal (${fmt(galToL(rig.tankGal))} L)`],
@@ -80,6 +83,11 @@ export default function RigPage({ loaderData }: Route.ComponentProps) {
           </Link>
         </div>
       )}
+      {stale ? (
+        <p role="status" className="mb-4 rounded-md border-2 border-ink bg-caution px-3 py-2 font-bold">
+          No signal: this page is as this phone last kept it. Engine hours and recent cases may be out of date.
+        </p>
+      ) : null}
       <section aria-labelledby="specs" className="rounded-lg border-2 border-ink bg-paper p-4">
         <h2 id="specs" className="text-xl font-bold">
           Specs

@@ -5,14 +5,32 @@ import type { Outcome } from "~/lib/vocabulary";
 import { Case, CaseEvent, CasePhoto, GuideRecord, GuideVersion, Rig, User } from "./db.server";
 import { notFound, type SessionUser } from "./guards.server";
 
+type VersionInfo = { id: number; number: number; guideId: number; definition: Guide };
+
+// A version a case follows is published or retired, and neither changes once published: read
+// once per process rather than 12 KB of definition for every batch of answers.
+const versions = new Map<number, VersionInfo>();
+
+async function guideVersion(id: number): Promise<VersionInfo> {
+  let version = versions.get(id);
+  if (!version) {
+    const row = await GuideVersion.findByPk(id, { attributes: ["id", "number", "definition", "guideId", "status"] });
+    if (!row) throw new Error(`Guide version ${id} is missing`);
+    version = { id: row.id, number: row.number, guideId: row.guideId, definition: row.definition };
+    // A draft can still change (a case never follows one, but be safe): keep only settled versions.
+    if (row.status !== "draft") {
+      if (versions.size >= 2000) versions.delete(versions.keys().next().value!);
+      versions.set(id, version);
+    }
+  }
+  return version;
+}
+
 /** The company's case with the guide version it follows; another company's id is a 404. */
 export async function findCaseWithGuide(user: SessionUser, caseId: string) {
-  const found = await Case.findOne({
-    where: ownedBy(user, { id: caseId }),
-    include: [{ model: GuideVersion, as: "guideVersion", attributes: ["id", "number", "definition", "guideId"] }],
-  });
+  const found = await Case.findOne({ where: ownedBy(user, { id: caseId }) });
   if (!found) notFound("That case");
-  const version = (found as Case & { guideVersion: GuideVersion }).guideVersion;
+  const version = await guideVersion(found.guideVersionId);
   return { found, guide: version.definition, version };
 }
 

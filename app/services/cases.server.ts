@@ -1,6 +1,6 @@
 import { randomUUID } from "node:crypto";
 import { ownedBy, usableBy } from "./tenancy.server";
-import { Op, UniqueConstraintError } from "sequelize";
+import { Op, UniqueConstraintError, type Transaction } from "sequelize";
 import { LATE_START_DAYS, type CaseEventInput, type CloseCaseInput } from "~/lib/cases/schema";
 import { answerFits } from "~/lib/walk/replay";
 import { isFinalKind } from "~/lib/guides/schema";
@@ -60,26 +60,33 @@ export async function startCase(user: SessionUser, input: { id?: string; rigCode
   if (rig.retired) fail(409, `Rig ${rig.code} has been retired, so no new fix can be saved on it. Tell your supervisor which rig you were working on.`);
   const guideVersionId = await versionToFollow(user, input.guideSlug, input.guideVersionId);
   const openedAt = openingTime(input.openedAt);
-  await changeCase(sequelize, user.companyId, async (transaction) => {
-    const created = await Case.create(
-      {
-        id,
-        companyId: user.companyId,
-        rigId: rig.id,
-        guideVersionId,
-        openedBy: user.id,
-        openedAt,
-        closedAt: null,
-        engineHours: null,
-        finalStep: null,
-        causeCode: null,
-        safetyAckAt: null,
-        note: null,
-      },
-      { transaction },
-    );
-    return { id, companyId: user.companyId, rigId: rig.id, causeCode: null, openedAt: created.openedAt };
-  });
+  try {
+    await changeCase(sequelize, user.companyId, async (transaction) => {
+      const created = await Case.create(
+        {
+          id,
+          companyId: user.companyId,
+          rigId: rig.id,
+          guideVersionId,
+          openedBy: user.id,
+          openedAt,
+          closedAt: null,
+          engineHours: null,
+          finalStep: null,
+          causeCode: null,
+          safetyAckAt: null,
+          note: null,
+        },
+        { transaction },
+      );
+      return { id, companyId: user.companyId, rigId: rig.id, causeCode: null, openedAt: created.openedAt };
+    });
+  } catch (error) {
+    // The same start sent twice at once (two tabs, or a resend racing the first): the first one stands.
+    if (error instanceof UniqueConstraintError && (await Case.count({ where: { id, companyId: user.companyId, rigId: rig.id } })))
+      return { id, created: false };
+    throw error;
+  }
   return { id, created: true };
 }
 
@@ -99,6 +106,19 @@ export async function storeEvents(user: SessionUser, caseId: string, events: Cas
     const held = await CaseEvent.count({ where: { caseId, id: events.map((e) => e.id) } });
     if (held === new Set(events.map((e) => e.id)).size) return { stored: 0, duplicates: events.length };
     fail(409, `Nothing stored: this case was closed as ${outcomeLabel(found.outcome).toLowerCase()} and takes no more answers.`);
+  }
+
+  // The usual batch is new answers only: one multi-row INSERT, which InnoDB stores whole or not at
+  // all, with no transaction or lock around it. A resend (or a clash) takes the careful way below.
+  const rows = events.map((e) => ({ id: e.id, caseId, seq: e.seq, stepId: e.stepId, answer: e.answer, at: new Date(e.at), note: e.note?.trim() || null }));
+  if (new Set(events.map((e) => e.id)).size === events.length) {
+    try {
+      await CaseEvent.bulkCreate(rows);
+      await noteFirstAck(found, events);
+      return { stored: events.length, duplicates: 0 };
+    } catch (error) {
+      if (!(error instanceof UniqueConstraintError)) throw error;
+    }
   }
 
   return withDeadlockRetry(() =>
@@ -126,14 +146,19 @@ export async function storeEvents(user: SessionUser, caseId: string, events: Cas
         if (error instanceof UniqueConstraintError) fail(409, "Nothing stored: two events in the batch share a sequence number.");
         throw error;
       }
-      const firstAck = fresh
-        .filter((e) => e.answer === "ACK")
-        .map((e) => new Date(e.at))
-        .sort((a, b) => +a - +b)[0];
-      if (firstAck && (!found.safetyAckAt || firstAck < found.safetyAckAt)) await found.update({ safetyAckAt: firstAck }, { transaction });
+      await noteFirstAck(found, fresh, transaction);
       return { stored: fresh.length, duplicates: events.length - fresh.length };
     }),
   );
+}
+
+/** The case remembers when a shut-down stop was first acknowledged. */
+async function noteFirstAck(found: Case, events: CaseEventInput[], transaction?: Transaction) {
+  const firstAck = events
+    .filter((e) => e.answer === "ACK")
+    .map((e) => new Date(e.at))
+    .sort((a, b) => +a - +b)[0];
+  if (firstAck && (!found.safetyAckAt || firstAck < found.safetyAckAt)) await found.update({ safetyAckAt: firstAck }, { transaction });
 }
 
 /** Runs a transaction again (up to three times) when InnoDB picks it as a deadlock victim. */

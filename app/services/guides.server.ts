@@ -33,18 +33,35 @@ export async function usableGuides(user: SessionUser): Promise<UsableGuide[]> {
   });
   const replaced = replacedBuiltIns(records);
   const chosen = records.filter((r) => !replaced.has(r.id));
+  if (!chosen.length) return [];
   const versions = await GuideVersion.findAll({
     where: { [Op.or]: chosen.map((r) => ({ guideId: r.id, number: r.publishedVersion! })) },
-    attributes: ["id", "guideId", "number", "definition"],
+    attributes: ["id", "guideId", "number"],
   });
+  const definitions = await publishedDefinitions(versions.map((v) => v.id));
   const byGuide = new Map(versions.map((v) => [v.guideId, v]));
   return chosen
     .filter((r) => byGuide.has(r.id))
     .map((r) => {
       const v = byGuide.get(r.id)!;
-      return { guideId: r.id, slug: r.slug, title: r.title, versionId: v.id, version: v.number, definition: v.definition };
+      return { guideId: r.id, slug: r.slug, title: r.title, versionId: v.id, version: v.number, definition: definitions.get(v.id)! };
     })
     .sort((a, b) => a.title.localeCompare(b.title));
+}
+
+// A published version's definition never changes: each is read from the database once per process
+// (the fix page, search and the offline kit ask for every usable guide on every request).
+const definitionCache = new Map<number, Guide>();
+
+async function publishedDefinitions(ids: number[]): Promise<Map<number, Guide>> {
+  const missing = ids.filter((id) => !definitionCache.has(id));
+  if (missing.length) {
+    for (const v of await GuideVersion.findAll({ where: { id: missing }, attributes: ["id", "definition"] })) {
+      if (definitionCache.size >= 2000) definitionCache.delete(definitionCache.keys().next().value!);
+      definitionCache.set(v.id, v.definition);
+    }
+  }
+  return new Map(ids.map((id) => [id, definitionCache.get(id)!]));
 }
 
 // Search indexes by the exact set of guide versions they cover: a new publish changes the key.

@@ -1,6 +1,8 @@
 import { RIG_SPEC_FIELDS, walkRigOf } from "~/lib/rigs/specs";
 import type { OfflineKit } from "~/lib/walk/kept";
+import { lastRigIdFor } from "./cases.server";
 import { Rig } from "./db.server";
+import { guideTexts } from "./guide-text.server";
 import { hiddenSections } from "./env.server";
 import type { SessionUser } from "./guards.server";
 import { causeNames, usableGuides } from "./guides.server";
@@ -10,13 +12,14 @@ export type { OfflineKit };
 
 /** What a phone keeps so its person can start a fix with no signal: the company's active rigs, the guides they may start, cause names. */
 export async function offlineKit(user: SessionUser): Promise<OfflineKit> {
-  const [rigs, guides] = await Promise.all([
+  const [rigs, guides, lastRigId] = await Promise.all([
     Rig.findAll({
       where: ownedBy(user, { retired: false }),
-      attributes: [...RIG_SPEC_FIELDS, "hasHourMeter", "engineHours", "mount", "pumpKind"],
+      attributes: ["id", ...RIG_SPEC_FIELDS, "hasHourMeter", "engineHours", "mount", "pumpKind"],
       order: [["code", "ASC"]],
     }),
     usableGuides(user),
+    lastRigIdFor(user),
   ]);
   return {
     madeAt: new Date().toISOString(),
@@ -31,6 +34,7 @@ export async function offlineKit(user: SessionUser): Promise<OfflineKit> {
     },
     hidden: hiddenSections(),
     rigs: rigs.map((r) => ({ ...walkRigOf(r), mount: r.mount, pumpKind: r.pumpKind })),
+    lastRigCode: rigs.find((r) => r.id === lastRigId)?.code ?? null,
     guides: guides.map((g) => ({
       slug: g.slug,
       title: g.title,
@@ -39,6 +43,7 @@ export async function offlineKit(user: SessionUser): Promise<OfflineKit> {
       versionId: g.versionId,
       version: g.version,
       definition: g.definition,
+      texts: guideTexts(g.versionId, g.definition),
     })),
     causeNames: causeNames(),
   };

@@ -1,5 +1,5 @@
 import { randomUUID } from "node:crypto";
-import { MAX_PHOTO_BYTES } from "~/lib/cases/schema";
+import { MAX_PHOTO_BYTES } from "~/lib/cases/limits";
 import { ownedBy } from "./tenancy.server";
 import { fileTypeFromBuffer } from "file-type";
 import sharp from "sharp";

@@ -216,7 +216,9 @@ describe("no signal from the first tap (360×640)", () => {
     await harness.browser.context.clearCookies(); // the session ended meanwhile
 
     await signalOn(p);
-    await p.getByText(/kept on this phone: your sign-in has ended\. Sign in again on this phone and they will be sent\./).waitFor({ timeout: 20_000 });
+    await p
+      .getByText(/^Kept on this phone: 1 answer\. Your sign-in has ended: sign in again on this phone and they will be sent\.$/)
+      .waitFor({ timeout: 20_000 });
     expect(await Case.findByPk(id)).toBeNull();
     await signIn(p, harness.app.url, "dana@cedarflats.example");
     // Sent from whatever page is open once signed in again.

@@ -39,6 +39,16 @@ describe("a start sent late", () => {
     expect(await CaseEvent.count({ where: { caseId: id } })).toBe(1);
   });
 
+  it("stores a start sent twice at once (two tabs of one phone) once, answering both without an error", async () => {
+    const id = randomUUID();
+    const body = { id, rigCode: "CF-07", guideSlug: "leaks", openedAt: new Date(Date.now() - 60_000).toISOString() };
+    const statuses = (await Promise.all([start(DANA, body), start(DANA, body), start(DANA, body)])).map((r) => r.status).sort();
+    expect(statuses[0]).toBe(200);
+    expect(statuses.filter((s) => s === 201)).toHaveLength(1);
+    expect(statuses.every((s) => s === 200 || s === 201)).toBe(true);
+    expect(await Case.count({ where: { id } })).toBe(1);
+  });
+
   it("accepts a version retired since: the crew followed it", async () => {
     const current = await publishedVersion("foaming");
     const guide = (await GuideRecord.findByPk(current.guideId))!;

@@ -1,5 +1,6 @@
 import { useMemo, useState } from "react";
-import { Markdown } from "~/components/ui/markdown";
+import { GuideTextProvider } from "~/components/ui/guide-text";
+import { Markdown, markdownRenderer } from "~/components/ui/markdown";
 import { StepCard } from "~/components/walk/step-card";
 import { compileGuide } from "~/lib/guides/compile";
 import { stepsToEnd } from "~/lib/guides/graph";
@@ -14,40 +15,42 @@ export function PreviewWalk({ guide }: { guide: Guide }) {
   const meta = guide.states[here].meta;
   const end = meta.kind === "fixed" || meta.kind === "handoff";
   return (
-    <div className="mx-auto w-[360px] max-w-full rounded-xl border-8 border-ink bg-field p-3">
-      <p className="mb-2 text-base">
-        Preview · step {path.length}
-        {end ? " · end" : ` · at least ${left[here]} more to an end`}
-      </p>
-      {end ? (
-        <section className={`rounded-lg border-4 bg-paper p-4 ${meta.kind === "fixed" ? "border-go" : "border-stop"}`}>
-          <h2 className="text-2xl font-bold">{meta.kind === "fixed" ? "Fixed" : "Handed off"}</h2>
-          <Markdown className="mt-2 text-xl">{meta.prompt}</Markdown>
-        </section>
-      ) : (
-        <StepCard
-          key={`${here}-${path.length}`}
-          machine={machine}
-          stepId={here}
-          note=""
-          onNoteChange={() => {}}
-          onAdvance={(_answer, to) => setPath([...path, to])}
-          headingLevel={2}
-        />
-      )}
-      <div className="mt-3 grid grid-cols-2 gap-2">
-        <button
-          type="button"
-          disabled={path.length < 2}
-          onClick={() => setPath(path.slice(0, -1))}
-          className="min-h-12 rounded-md border-2 border-ink bg-paper font-bold"
-        >
-          Back one step
-        </button>
-        <button type="button" onClick={() => setPath([guide.initial])} className="min-h-12 rounded-md border-2 border-ink bg-paper font-bold">
-          Start again
-        </button>
+    <GuideTextProvider value={markdownRenderer}>
+      <div className="mx-auto w-[360px] max-w-full rounded-xl border-8 border-ink bg-field p-3">
+        <p className="mb-2 text-base">
+          Preview · step {path.length}
+          {end ? " · end" : ` · at least ${left[here]} more to an end`}
+        </p>
+        {end ? (
+          <section className={`rounded-lg border-4 bg-paper p-4 ${meta.kind === "fixed" ? "border-go" : "border-stop"}`}>
+            <h2 className="text-2xl font-bold">{meta.kind === "fixed" ? "Fixed" : "Handed off"}</h2>
+            <Markdown className="mt-2 text-xl">{meta.prompt}</Markdown>
+          </section>
+        ) : (
+          <StepCard
+            key={`${here}-${path.length}`}
+            machine={machine}
+            stepId={here}
+            note=""
+            onNoteChange={() => {}}
+            onAdvance={(_answer, to) => setPath([...path, to])}
+            headingLevel={2}
+          />
+        )}
+        <div className="mt-3 grid grid-cols-2 gap-2">
+          <button
+            type="button"
+            disabled={path.length < 2}
+            onClick={() => setPath(path.slice(0, -1))}
+            className="min-h-12 rounded-md border-2 border-ink bg-paper font-bold"
+          >
+            Back one step
+          </button>
+          <button type="button" onClick={() => setPath([guide.initial])} className="min-h-12 rounded-md border-2 border-ink bg-paper font-bold">
+            Start again
+          </button>
+        </div>
       </div>
-    </div>
+    </GuideTextProvider>
   );
 }

@@ -1,6 +1,7 @@
+import { Link } from "react-router";
 import { useState } from "react";
 import { ErrorList } from "~/components/ui/error-list";
-import { Markdown } from "~/components/ui/markdown";
+import { GuideText } from "~/components/ui/guide-text";
 import type { StepMeta } from "~/lib/guides/schema";
 import type { QueuedClose, WalkRecord } from "~/lib/walk/queue";
 import { useTimes } from "../use-time-zone";
@@ -55,21 +56,28 @@ export function EndCard({
       <h1 id="end-title" tabIndex={-1} data-step-heading className={`text-2xl font-bold ${fixed ? "text-go" : "text-stop"}`}>
         {fixed ? "Fixed" : "Handed off"}
       </h1>
-      <Markdown className="mt-2 text-xl">{meta.prompt}</Markdown>
+      <GuideText text={meta.prompt} className="mt-2 text-xl" />
       {fixed && causeName ? (
         <p className="mt-2 text-lg">
           <strong>Cause:</strong> {causeName}
           {meta.component ? ` (${meta.component})` : ""}
         </p>
       ) : null}
-      {meta.help ? <Markdown className="mt-3 text-lg">{meta.help}</Markdown> : null}
+      {meta.help ? <GuideText text={meta.help} className="mt-3 text-lg" /> : null}
       {!fixed ? (
         <p className="mt-3 text-lg font-bold" data-testid="handoff-mail">
           {handoffNews(record, finished, online, time)}
         </p>
       ) : null}
       {finished ? (
-        <p className="mt-4 text-lg font-bold">{record.closeResult ? "Case closed and saved." : "Finished. The case closes when this phone has signal."}</p>
+        <>
+          <p className="mt-4 text-lg font-bold">{record.closeResult ? "Case closed and saved." : "Finished. The case closes when this phone has signal."}</p>
+          <p className="mt-4">
+            <Link to="/" className="inline-flex min-h-14 items-center rounded-lg border-2 border-ink bg-paper px-4 text-lg font-bold no-underline">
+              Start a new fix
+            </Link>
+          </p>
+        </>
       ) : (
         <div className="mt-4 space-y-3">
           {hourMeter.has ? (

@@ -1,6 +1,6 @@
-import { useMachine } from "@xstate/react";
-import { useState } from "react";
-import { Markdown } from "~/components/ui/markdown";
+import { useMemo, useState } from "react";
+import { transition } from "xstate";
+import { GuideText } from "~/components/ui/guide-text";
 import type { GuideMachine } from "~/lib/guides/compile";
 import type { StepMeta } from "~/lib/guides/schema";
 import { AnswerButtons } from "./answer-buttons";
@@ -10,8 +10,9 @@ import { fillRigWords } from "~/lib/guides/rig-words";
 import type { AgitatorDirection } from "~/lib/rigs/schema";
 
 /**
- * One step, driven by the guide's machine restored at that step. Answering sends the event
- * to the machine and reports where it went; nothing here touches the network.
+ * One step of the guide's machine. Answering asks the machine (a pure transition, no actor)
+ * where the answer leads and reports it; nothing here touches the network. The card stays
+ * mounted from step to step: only what changed is redrawn.
  */
 export function StepCard({
   machine,
@@ -35,17 +36,21 @@ export function StepCard({
   headingLevel?: 1 | 2;
 }) {
   const Heading = headingLevel === 1 ? "h1" : "h2";
-  const [snapshot, send, actor] = useMachine(machine, { snapshot: machine.resolveState({ value: stepId }) });
-  const [showHelp, setShowHelp] = useState(false);
-  const [showNote, setShowNote] = useState(note !== "");
-  const here = String(snapshot.value);
-  const raw = snapshot.getMeta()[`${machine.id}.${here}`] as StepMeta;
-  const meta = { ...raw, prompt: fillRigWords(raw.prompt, rig), help: raw.help === undefined ? undefined : fillRigWords(raw.help, rig) };
+  const snapshot = useMemo(() => machine.resolveState({ value: stepId }), [machine, stepId]);
+  // Help and the note box open per step: a new step starts with both as a fresh card would.
+  const [open, setOpen] = useState({ step: stepId, help: false, note: note !== "" });
+  if (open.step !== stepId) setOpen({ step: stepId, help: false, note: note !== "" });
+  const showHelp = open.step === stepId && open.help;
+  const showNote = open.step === stepId ? open.note : note !== "";
+  const setShowHelp = (help: boolean) => setOpen((o) => ({ ...o, help }));
+  const setShowNote = (shown: boolean) => setOpen((o) => ({ ...o, note: shown }));
+  const meta = snapshot.getMeta()[`${machine.id}.${stepId}`] as StepMeta;
+  const fill = (text: string) => fillRigWords(text, rig);
 
   const answer = (type: string) => {
-    send({ type });
-    const to = String(actor.getSnapshot().value);
-    if (to !== here) onAdvance(type, to);
+    const [next] = transition(machine, snapshot, { type });
+    const to = String(next.value);
+    if (to !== stepId) onAdvance(type, to);
   };
 
   const safety = meta.kind === "safety";
@@ -59,7 +64,7 @@ export function StepCard({
           {meta.handsOn ? " · hands-on" : ""}
         </Heading>
         <div id="step-prompt" tabIndex={-1} data-step-heading className={`mt-1 leading-snug ${safety ? "text-xl" : "text-[1.45rem] font-bold"}`}>
-          <Markdown>{meta.prompt}</Markdown>
+          <GuideText text={meta.prompt} fill={fill} />
         </div>
         {safety ? (
           <ul aria-label="Before you go on" className="mt-3 list-disc space-y-1 pl-6 text-lg font-bold">
@@ -78,7 +83,7 @@ export function StepCard({
             >
               {showHelp ? "Less" : "More about this"}
             </button>
-            {showHelp ? <Markdown className="mt-2 text-lg">{meta.help}</Markdown> : null}
+            {showHelp ? <GuideText text={meta.help} fill={fill} className="mt-2 text-lg" /> : null}
           </div>
         ) : null}
       </div>

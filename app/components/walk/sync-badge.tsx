@@ -8,7 +8,7 @@ export function SyncBadge({
 }: {
   online: boolean;
   /** Answers, photos and the close still only on this phone. */
-  waiting: number;
+  waiting: { answers: number; photos: number; close: boolean };
   /** The fix itself (started with no signal) is not on the server yet. */
   startWaiting?: boolean;
   rejected?: string;
@@ -16,27 +16,35 @@ export function SyncBadge({
 }) {
   let text: string;
   let tone: string;
+  const what = [
+    waiting.answers ? `${waiting.answers} answer${waiting.answers === 1 ? "" : "s"}` : "",
+    waiting.photos ? `${waiting.photos} photo${waiting.photos === 1 ? "" : "s"}` : "",
+    waiting.close ? "the end of the fix" : "",
+  ].filter(Boolean);
+  const count = what.length;
+  const listed = what.length > 1 ? `${what.slice(0, -1).join(", ")} and ${what[what.length - 1]}` : (what[0] ?? "");
   if (rejected) {
     text = `Not saved to Tankside. ${rejected}${/supervisor/i.test(rejected) ? "" : " Tell your supervisor."} Everything you answered stays on this phone.`;
     tone = "border-stop bg-paper text-stop";
-  } else if (waiting === 0 && !startWaiting) {
+  } else if (count === 0 && !startWaiting) {
     text = "All answers saved to Tankside.";
     tone = "border-go bg-paper text-go";
-  } else if (waiting === 0) {
+  } else if (count === 0) {
     text = online ? "Sending the fix to Tankside…" : "This fix is kept on this phone — no signal; it will be sent when there is.";
     tone = "border-ink bg-caution text-ink";
   } else if (signedOut) {
-    text = `${waiting} kept on this phone: your sign-in has ended. Sign in again on this phone and they will be sent.`;
+    text = `Kept on this phone: ${listed}. Your sign-in has ended: sign in again on this phone and they will be sent.`;
     tone = "border-ink bg-caution text-ink";
   } else {
-    text = `${waiting} answer${waiting === 1 ? "" : "s"} kept on this phone${online ? ", sending…" : ` — no signal; ${waiting === 1 ? "it" : "they"} will be sent when there is.`}`;
+    const one = what.length === 1 && (waiting.answers === 1 || waiting.photos === 1 || waiting.close);
+    text = `${listed[0].toUpperCase()}${listed.slice(1)} kept on this phone${online ? ", sending…" : ` — no signal; ${one ? "it" : "they"} will be sent when there is.`}`;
     tone = "border-ink bg-caution text-ink";
   }
   return (
     <p
       role="status"
       aria-live="polite"
-      data-synced={waiting === 0 && !startWaiting && !rejected ? "yes" : "no"}
+      data-synced={count === 0 && !startWaiting && !rejected ? "yes" : "no"}
       className={`rounded-md border-2 px-3 py-2 text-base font-bold ${tone}`}
     >
       {text}

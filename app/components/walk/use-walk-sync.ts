@@ -60,8 +60,11 @@ export function useWalkSync(record: WalkRecord, update: (change: (r: WalkRecord)
     };
   }, [flush]);
 
-  const photosWaiting = (record.photos ?? []).filter((p) => !p.sentAs && !p.error).length;
-  const waiting = unsynced(record).length + (closePending(record) ? 1 : 0) + photosWaiting;
+  const waiting = {
+    answers: unsynced(record).length,
+    photos: (record.photos ?? []).filter((p) => !p.sentAs && !p.error).length,
+    close: closePending(record),
+  };
   const startWaiting = !!record.start && !record.startSent;
   return { online, signedOut, waiting, startWaiting, photoProgress, flushNow: () => void flush() };
 }

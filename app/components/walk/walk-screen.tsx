@@ -3,10 +3,10 @@ import type { AgitatorDirection } from "~/lib/rigs/schema";
 import { Link } from "react-router";
 import { compileGuide } from "~/lib/guides/compile";
 import type { Guide } from "~/lib/guides/schema";
-import { replayWalk } from "~/lib/walk/replay";
+import { replayFrom, replayWalk } from "~/lib/walk/replay";
 import { outcomeLabel, type Outcome } from "~/lib/vocabulary";
 import { appendEvent, loadRecord, mergeServerEvents, saveRecord, type QueuedEvent, type WalkRecord } from "~/lib/walk/queue";
-import { MAX_PHOTO_BYTES } from "~/lib/cases/schema";
+import { MAX_PHOTO_BYTES } from "~/lib/cases/limits";
 import { PHOTO_WAIT_CAP_BYTES, waitingPhotoBytes } from "~/lib/walk/kept";
 import { keepPhotoBytes } from "~/components/offline/photo-store";
 import { EndCard } from "./end-card";
@@ -67,7 +67,22 @@ export function WalkScreen({
   }, []);
   const sync = useWalkSync(record, update);
 
-  const path = replayWalk(machine, record.events);
+  // Replayed when the answers change, not on every render; a new answer goes on from the last
+  // path rather than replaying the whole walk.
+  const replayed = useRef<{ events: QueuedEvent[]; path: string[] } | null>(null);
+  const path = useMemo(() => {
+    const before = replayed.current;
+    const events = record.events;
+    const lastSeq = before?.events[before.events.length - 1]?.seq ?? 0;
+    const goesOn =
+      before !== null &&
+      before.events.length <= events.length &&
+      before.events.every((e, i) => events[i].id === e.id) &&
+      events.slice(before.events.length).every((e) => e.seq > lastSeq);
+    const next = goesOn ? replayFrom(machine, before.path, events.slice(before.events.length)) : replayWalk(machine, events);
+    replayed.current = { events, path: next };
+    return next;
+  }, [machine, record.events]);
   const here = path[path.length - 1];
   const meta = guide.states[here].meta;
   const atEnd = meta.kind === "fixed" || meta.kind === "handoff";
@@ -140,7 +155,6 @@ export function WalkScreen({
         />
       ) : (
         <StepCard
-          key={stepKey}
           machine={machine}
           stepId={here}
           rig={rig}

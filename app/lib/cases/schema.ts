@@ -4,8 +4,7 @@ import { ANSWERS, CLOSE_OUTCOMES } from "../vocabulary";
 const uuid = z.string().uuid("must be a UUID");
 const isoTime = z.iso.datetime({ offset: true, message: "must be an ISO 8601 time, like 2026-06-01T14:05:00Z" });
 
-/** Largest photo the server takes (the phone checks it before keeping one). */
-export const MAX_PHOTO_BYTES = 10 * 1024 * 1024;
+export { MAX_PHOTO_BYTES } from "./limits";
 
 /** How long a start made on a phone with no signal may wait to be sent. */
 export const LATE_START_DAYS = 7;

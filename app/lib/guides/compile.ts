@@ -1,5 +1,6 @@
 import { createMachine } from "xstate";
-import { isFinalKind, type Guide } from "./schema";
+import { isFinalKind } from "./kinds";
+import type { Guide } from "./schema";
 
 /** A valid guide becomes the XState machine that drives the walk-through. */
 export function compileGuide(guide: Guide) {

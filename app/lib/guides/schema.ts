@@ -2,29 +2,10 @@ import { z } from "zod";
 import { STEP_ANSWERS } from "../vocabulary";
 import { CHECKLIST_ITEMS, HAZARDS } from "./safety";
 
-export const STEP_KINDS = ["check", "task", "safety", "fixed", "handoff"] as const;
-export type StepKind = (typeof STEP_KINDS)[number];
-export const FINAL_KINDS: readonly StepKind[] = ["fixed", "handoff"];
+import { COMPONENTS, FIELD_MATH_WIDGETS, STEP_KINDS } from "./kinds";
 
-/** Field-math widgets a step may show (built by the field-math screens). */
-export const FIELD_MATH_WIDGETS = ["hose-friction", "suction-head", "load-sheet", "fiber-check", "torque"] as const;
-
-export const COMPONENTS = [
-  "pump",
-  "suction",
-  "sump",
-  "agitator",
-  "hose",
-  "nozzle",
-  "valve",
-  "engine",
-  "clutch",
-  "hydraulics",
-  "tank",
-  "lubrication",
-  "material",
-  "operation",
-] as const;
+// The plain lists live in kinds.ts, which the phone's walk-through can load without zod.
+export { COMPONENTS, FIELD_MATH_WIDGETS, FINAL_KINDS, isFinalKind, STEP_KINDS, type StepKind } from "./kinds";
 
 const slug = z.string().regex(/^[a-z][a-z0-9]*(-[a-z0-9]+)*$/, "use lower-case words joined by dashes");
 
@@ -66,8 +47,6 @@ export const guideSchema = z.strictObject({
 export type Guide = z.infer<typeof guideSchema>;
 export type Step = z.infer<typeof stepSchema>;
 export type StepMeta = z.infer<typeof stepMetaSchema>;
-
-export const isFinalKind = (kind: StepKind) => FINAL_KINDS.includes(kind);
 
 /**
  * What a draft may be while a trainer is still writing it: unfinished (empty prompts, answers not yet

@@ -1,4 +1,5 @@
 import type { Guide } from "../guides/schema";
+import type { GuideTexts } from "../guides/text-tree";
 import { stepsToEnd } from "../guides/graph";
 import type { WalkRig } from "../rigs/specs";
 import type { Role } from "../people/roles";
@@ -21,6 +22,8 @@ export interface KitGuide {
   versionId: number;
   version: number;
   definition: Guide;
+  /** Its prompts and help as element trees (the phone has no markdown parser). */
+  texts: GuideTexts;
 }
 
 /** Made by the server (GET /api/offline-kit) for one person; refreshed whenever there is signal. */
@@ -32,6 +35,8 @@ export interface OfflineKit {
   /** Sections this installation hides from the menu. */
   hidden: string[];
   rigs: KitRig[];
+  /** The rig this person last started a fix on, as the server knew when it made the kit. */
+  lastRigCode: string | null;
   guides: KitGuide[];
   causeNames: Record<string, string>;
 }
@@ -41,7 +46,7 @@ export interface WalkData {
   caseId: string;
   closedAs: Outcome | null;
   openedAt: string;
-  guide: { slug: string; title: string; versionId: number; definition: Guide };
+  guide: { slug: string; title: string; versionId: number; definition: Guide; texts: GuideTexts };
   rig: WalkRig;
   stepsToEnd: Record<string, number>;
   causeNames: Record<string, string>;
@@ -127,7 +132,7 @@ export function startOnPhone(store: KeyValueStore, kit: OfflineKit, input: { cas
   saveView(store, {
     caseId: input.caseId,
     openedAt,
-    guide: { slug: guide.slug, title: guide.title, versionId: guide.versionId, definition: guide.definition },
+    guide: { slug: guide.slug, title: guide.title, versionId: guide.versionId, definition: guide.definition, texts: guide.texts },
     rig: walkRig,
     causeNames: namesFor(guide.definition, kit.causeNames),
   });
@@ -196,4 +201,13 @@ export function openWalksOnPhone(
       return [{ id, guideTitle: view.guide.title, openedAt: view.openedAt, onPhoneOnly: !!record.start && !record.startSent }];
     })
     .sort((a, b) => b.openedAt.localeCompare(a.openedAt));
+}
+
+/** The rig of the newest walk started on this phone after `since`, if any. */
+export function lastRigOnPhone(store: KeyValueStore & { length: number; key(index: number): string | null }, since: string): string | null {
+  const newest = keptCaseIds(store)
+    .map((id) => loadView(store, id))
+    .filter((v): v is KeptView => !!v && v.openedAt > since)
+    .sort((a, b) => b.openedAt.localeCompare(a.openedAt))[0];
+  return newest?.rig.code ?? null;
 }

@@ -26,8 +26,17 @@ export function answerFits(guide: Guide, stepId: string, answer: string): string
  * guide's machine; BACK undoes the answer before it. The last step is where the crew is.
  */
 export function replayWalk(machine: GuideMachine, answers: WalkAnswer[]): string[] {
-  const path = [String(machine.config.initial)];
-  for (const a of [...answers].sort((x, y) => x.seq - y.seq)) {
+  return replayFrom(
+    machine,
+    [String(machine.config.initial)],
+    [...answers].sort((x, y) => x.seq - y.seq),
+  );
+}
+
+/** Goes on from a path already replayed with answers that come after it (in order): an answer costs one step, not the whole walk. */
+export function replayFrom(machine: GuideMachine, from: string[], answers: WalkAnswer[]): string[] {
+  const path = [...from];
+  for (const a of answers) {
     if (a.answer === "BACK") {
       if (path.length > 1) path.pop();
       continue;

@@ -1,5 +1,15 @@
 import { describe, expect, it } from "vitest";
-import { loadKit, openWalksOnPhone, saveKit, startOnPhone, waitingPhotoBytes, waitingToSend, walkOnPhone, type OfflineKit } from "~/lib/walk/kept";
+import {
+  lastRigOnPhone,
+  loadKit,
+  openWalksOnPhone,
+  saveKit,
+  startOnPhone,
+  waitingPhotoBytes,
+  waitingToSend,
+  walkOnPhone,
+  type OfflineKit,
+} from "~/lib/walk/kept";
 import { appendEvent, loadRecord, saveRecord } from "~/lib/walk/queue";
 import { tinyGuide } from "../../helpers/guides";
 
@@ -43,7 +53,8 @@ const kit = (): OfflineKit => ({
   person: { id: 7, name: "Dana Ortiz", email: "dana@example.test", role: "crew", companyId: 1, companyName: "Test Co", timeZone: "America/Denver" },
   hidden: [],
   rigs: [rig("CF-07"), rig("CF-11")],
-  guides: [{ slug: "tiny", title: "Tiny guide", summary: "s", symptoms: ["it stops"], versionId: 41, version: 3, definition: tinyGuide() }],
+  lastRigCode: "CF-11",
+  guides: [{ slug: "tiny", title: "Tiny guide", summary: "s", symptoms: ["it stops"], versionId: 41, version: 3, definition: tinyGuide(), texts: {} }],
   causeNames: { "low-water": "Tank water low", "not-in-guide": "Other" },
 });
 
@@ -121,5 +132,16 @@ describe("what the phone keeps", () => {
     expect(waitingToSend(r)).toBe(false);
     r = { ...r, close: { outcome: "fixed", at: NOW.toISOString() } };
     expect(waitingToSend(r)).toBe(true);
+  });
+});
+
+describe("the last rig, with no signal", () => {
+  it("is the rig of the newest walk started on the phone since the kit was made, else none", () => {
+    const store = phone();
+    expect(lastRigOnPhone(store, kit().madeAt)).toBeNull();
+    startOnPhone(store, kit(), { caseId: "a", rigCode: "CF-11", guideSlug: "tiny", now: NOW });
+    startOnPhone(store, kit(), { caseId: "b", rigCode: "CF-07", guideSlug: "tiny", now: new Date(NOW.getTime() + 60_000) });
+    expect(lastRigOnPhone(store, kit().madeAt)).toBe("CF-07");
+    expect(lastRigOnPhone(store, "2026-12-03T00:00:00.000Z")).toBeNull();
   });
 });
