@@ -5,7 +5,9 @@
  * framework's inline scripts), a same-origin check on every request that changes something, and an
  * access log that never shows a sign-in link's token. Plain JavaScript so it runs on `node` alone.
  */
+import cluster from "node:cluster";
 import { randomBytes } from "node:crypto";
+import os from "node:os";
 import path from "node:path";
 import { pathToFileURL } from "node:url";
 import { createRequestHandler } from "@react-router/express";
@@ -97,13 +99,28 @@ export async function createApp({ buildPath = path.resolve("build/server/index.j
   return app;
 }
 
-// `node server.js`: serve on HOST:PORT.
+// `node server.js`: serve on HOST:PORT, in APP_PROCESSES processes (a number, or "auto" for one
+// per core; default 1). The processes share nothing but the database, so a sign-in made on one
+// works on every other; each answers with its number in X-Tankside-Process.
 if (import.meta.url === pathToFileURL(process.argv[1] ?? "").href) {
+  const wanted = process.env.APP_PROCESSES === "auto" ? os.availableParallelism() : Number(process.env.APP_PROCESSES ?? 1);
+  const processes = Number.isInteger(wanted) && wanted >= 1 ? Math.min(wanted, 64) : 1;
+  if (processes > 1 && cluster.isPrimary) await supervise(processes);
+  else await serve(cluster.isWorker ? Number(process.env.TANKSIDE_PROCESS) : null);
+}
+
+async function serve(processNumber) {
   const port = Number(process.env.PORT ?? 3000);
   const host = process.env.HOST ?? "127.0.0.1";
   process.env.NODE_ENV ??= "production";
   const app = await createApp({ appUrl: process.env.APP_URL ?? `http://${host}:${port}` });
-  const server = app.listen(port, host, () => console.log(`[tankside] http://${host}:${port}`));
+  const server = (
+    processNumber
+      ? express()
+          .use((_req, res, next) => (res.setHeader("X-Tankside-Process", String(processNumber)), next()))
+          .use(app)
+      : app
+  ).listen(port, host, () => console.log(`[tankside] http://${host}:${port}${processNumber ? ` (process ${processNumber})` : ""}`));
   // Stop taking requests, let the ones under way finish (a few seconds at most), then exit: the
   // database pools would otherwise keep the process alive.
   for (const signal of ["SIGTERM", "SIGINT"]) {
@@ -111,6 +128,22 @@ if (import.meta.url === pathToFileURL(process.argv[1] ?? "").href) {
       server.close(() => process.exit(0));
       server.closeIdleConnections();
       setTimeout(() => process.exit(0), 3000).unref();
+    });
+  }
+}
+
+/** Runs the app processes; one that dies is replaced, and a stop signal stops them all. */
+async function supervise(processes) {
+  let stopping = false;
+  const start = (n) => cluster.fork({ TANKSIDE_PROCESS: String(n) }).on("exit", () => !stopping && start(n));
+  for (let n = 1; n <= processes; n++) start(n);
+  for (const signal of ["SIGTERM", "SIGINT"]) {
+    process.once(signal, () => {
+      stopping = true;
+      for (const worker of Object.values(cluster.workers ?? {})) worker?.kill("SIGTERM");
+      const check = setInterval(() => Object.keys(cluster.workers ?? {}).length === 0 && process.exit(0), 100);
+      setTimeout(() => process.exit(0), 5000).unref();
+      check.unref?.();
     });
   }
 }
