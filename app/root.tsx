@@ -2,6 +2,13 @@ import { Links, Meta, Outlet, Scripts, ScrollRestoration } from "react-router";
 import { ErrorPanel } from "~/components/error-panel";
 import type { Route } from "./+types/root";
 import "./app.css";
+import regularFont from "@fontsource/atkinson-hyperlegible/files/atkinson-hyperlegible-latin-400-normal.woff2?url";
+import boldFont from "@fontsource/atkinson-hyperlegible/files/atkinson-hyperlegible-latin-700-normal.woff2?url";
+
+// The shipped font is fetched with the page rather than after the styles are read, so text is
+// rarely drawn twice (once in the fallback, then again when the font arrives).
+export const links: Route.LinksFunction = () =>
+  [regularFont, boldFont].map((href) => ({ rel: "preload", href, as: "font", type: "font/woff2", crossOrigin: "anonymous" as const }));
 
 export function Layout({ children }: { children: React.ReactNode }) {
   return (

@@ -34,7 +34,11 @@ const headers = { "Content-Type": "application/json", Cookie: cookie, Origin: ba
 const cases: { id: string; seq: number }[] = [];
 for (let i = 0; i < caseCount; i++) {
   const id = randomUUID();
-  const res = await fetch(`${base}/api/cases`, { method: "POST", headers, body: JSON.stringify({ id, rigCode: ["CF-03", "CF-07", "CF-11"][i % 3], guideSlug: "foaming" }) });
+  const res = await fetch(`${base}/api/cases`, {
+    method: "POST",
+    headers,
+    body: JSON.stringify({ id, rigCode: ["CF-03", "CF-07", "CF-11"][i % 3], guideSlug: "foaming" }),
+  });
   if (!res.ok) throw new Error(`Could not open a case (${res.status}): ${await res.text()}`);
   cases.push({ id, seq: 0 });
 }
