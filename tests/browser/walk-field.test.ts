@@ -208,8 +208,8 @@ describe("the walk tells the truth (360×640)", () => {
       .first()
       .click();
     await p.waitForURL(new RegExp(`/cases/${id}/walk$`));
-    p.once("dialog", (d) => void d.accept());
     await p.getByRole("button", { name: "Stop without finishing" }).click();
+    await p.getByRole("button", { name: "Yes, stop it" }).click();
     await p.getByRole("heading", { name: "Stopped without finishing" }).waitFor();
     for (const name of ["Yes", "No", "Done", "Back one step"]) expect(await p.getByRole("button", { name, exact: true }).count(), name).toBe(0);
     await expect.poll(async () => (await Case.findByPk(id))!.outcome).toBe("abandoned");

@@ -52,6 +52,7 @@ export function WalkScreen({
     mergeServerEvents(fromPhone ? loadRecord(window.localStorage, caseId) : { caseId, events: [], synced: [] }, serverEvents),
   );
   const [note, setNote] = useState("");
+  const [confirmStop, setConfirmStop] = useState(false);
 
   // After hydration: what this phone kept (possibly more than the server has) wins.
   useEffect(() => {
@@ -191,17 +192,35 @@ export function WalkScreen({
         </button>
       ) : null}
       {!atEnd && !record.close && !closedElsewhere ? (
-        <button
-          type="button"
-          onClick={() => {
-            if (!window.confirm("Stop this walk-through without an answer? It is saved as abandoned.")) return;
-            update((r) => ({ ...r, close: { outcome: "abandoned", finalStep: undefined, at: new Date().toISOString() } }));
-            setTimeout(sync.flushNow, 0);
-          }}
-          className="min-h-12 text-base underline"
-        >
-          Stop without finishing
-        </button>
+        confirmStop ? (
+          // Asked on the page with big buttons (gloves), not in the browser's small dialog.
+          <section aria-labelledby="stop-q" className="rounded-lg border-4 border-stop bg-paper p-4">
+            <h2 id="stop-q" className="text-xl font-bold">
+              Stop this walk-through without an answer?
+            </h2>
+            <p className="mt-1 text-lg">It is saved as abandoned{sync.online ? "" : " when this phone has signal"} and takes no more answers.</p>
+            <div className="mt-3 grid grid-cols-2 gap-2">
+              <button
+                type="button"
+                onClick={() => {
+                  update((r) => ({ ...r, close: { outcome: "abandoned", finalStep: undefined, at: new Date().toISOString() } }));
+                  setConfirmStop(false);
+                  setTimeout(sync.flushNow, 0);
+                }}
+                className="min-h-14 rounded-lg bg-stop text-lg font-bold text-white"
+              >
+                Yes, stop it
+              </button>
+              <button type="button" onClick={() => setConfirmStop(false)} className="min-h-14 rounded-lg border-2 border-ink bg-paper text-lg font-bold">
+                Keep going
+              </button>
+            </div>
+          </section>
+        ) : (
+          <button type="button" onClick={() => setConfirmStop(true)} className="min-h-12 text-base underline">
+            Stop without finishing
+          </button>
+        )
       ) : null}
     </div>
   );
