@@ -6,6 +6,7 @@
  *  2. Answer → next prompt painted, in Chromium at 4× CPU slowdown, over 80 answers (answer, then
  *     "back one step", repeated), p50 and p95. Runs against the app at BENCH_URL (default: start
  *     `npm start` first, http://127.0.0.1:3000) as the demo crew member.
+ *  3. Cold loads on slow 4G at 4× CPU, cache off: first paint and layout shift per page.
  */
 import fs from "node:fs";
 import path from "node:path";
@@ -114,5 +115,62 @@ async function answerTimes() {
   }
 }
 
+/** Each page loaded cold on slow 4G at 4× CPU: first paint, and how much the layout shifted. */
+async function coldLoads() {
+  const dir = fs.mkdtempSync(path.join(root, ".data", "bench-walk-"));
+  const context = await chromium.launchPersistentContext(dir, {
+    executablePath: "/usr/bin/chromium",
+    headless: true,
+    viewport: { width: 360, height: 640 },
+    args: ["--no-sandbox", "--disable-gpu"],
+  });
+  try {
+    const page = await context.newPage();
+    await page.goto(`${base}/login`);
+    await page.getByLabel("E-mail").fill("dana@cedarflats.example");
+    await page.getByLabel("Password").fill("field-demo-2026");
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await page.waitForURL((u) => u.pathname !== "/login");
+    console.log("Cold load, slow 4G (150 ms, 1.6 Mbps down) and 4× CPU, cache off:");
+    for (const [label, address] of [
+      ["sign-in (signed out)", "/login?signed-out"],
+      ["home", "/"],
+      ["start a fix", "/rigs/CF-07/fix"],
+    ]) {
+      const q = await context.newPage();
+      if (address.startsWith("/login")) await context.clearCookies();
+      const cdp = await context.newCDPSession(q);
+      await cdp.send("Network.enable");
+      await cdp.send("Network.setCacheDisabled", { cacheDisabled: true });
+      await cdp.send("Network.emulateNetworkConditions", {
+        offline: false,
+        latency: 150,
+        downloadThroughput: (1.6 * 1024 * 1024) / 8,
+        uploadThroughput: (750 * 1024) / 8,
+      });
+      await cdp.send("Emulation.setCPUThrottlingRate", { rate: 4 });
+      await q.addInitScript(() => {
+        const w = window as unknown as { __shift: number };
+        w.__shift = 0;
+        new PerformanceObserver((list) => {
+          for (const e of list.getEntries() as (PerformanceEntry & { value: number; hadRecentInput: boolean })[]) if (!e.hadRecentInput) w.__shift += e.value;
+        }).observe({ type: "layout-shift", buffered: true });
+      });
+      await q.goto(`${base}${address}`, { waitUntil: "load" });
+      await q.waitForTimeout(2000);
+      const { fcp, shift } = await q.evaluate(() => ({
+        fcp: performance.getEntriesByName("first-contentful-paint")[0]?.startTime ?? NaN,
+        shift: (window as unknown as { __shift: number }).__shift,
+      }));
+      console.log(`  ${label.padEnd(26)} first paint ${(fcp / 1000).toFixed(2)} s, layout shift ${shift.toFixed(3)}`);
+      await q.close();
+    }
+  } finally {
+    await context.close();
+    fs.rmSync(dir, { recursive: true, force: true });
+  }
+}
+
 bundleReport();
 await answerTimes();
+await coldLoads();
