@@ -1,3 +1,4 @@
+import { useEffect, useState } from "react";
 import { Link } from "react-router";
 import { useTimes } from "~/components/use-time-zone";
 import { useKeptSummary } from "./kept-sync";
@@ -8,6 +9,16 @@ export function PhoneReadiness({ personId }: { personId: number }) {
   const { status, read } = useKitStatus(personId);
   const kept = useKeptSummary();
   const times = useTimes();
+  // Once fixes were waiting here, say when the last of them has gone, rather than just going quiet.
+  const [wasWaiting, setWasWaiting] = useState(false);
+  const [allSent, setAllSent] = useState(false);
+  useEffect(() => {
+    if (!kept) return;
+    if (kept.waiting > 0) {
+      setWasWaiting(true);
+      setAllSent(false);
+    } else if (wasWaiting && kept.refused.length === 0) setAllSent(true);
+  }, [kept, wasWaiting]);
   if (!read) return null;
   const ready = status && status.pagesAt && status.pagesFailed === 0;
   return (
@@ -24,6 +35,11 @@ export function PhoneReadiness({ personId }: { personId: number }) {
           {kept.signedOut
             ? `${kept.waiting} fix${kept.waiting === 1 ? "" : "es"} kept on this phone: your sign-in ended before they were sent. Sign in again and they will be sent.`
             : `${kept.waiting} fix${kept.waiting === 1 ? "" : "es"} kept on this phone, to be sent when there is signal.`}
+        </p>
+      ) : null}
+      {allSent ? (
+        <p role="status" className="rounded-md border-2 border-go bg-paper px-3 py-2 font-bold text-go">
+          All fixes kept on this phone are now saved to Tankside.
         </p>
       ) : null}
       {kept?.refused.map((r) => (

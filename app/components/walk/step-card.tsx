@@ -61,7 +61,7 @@ export function StepCard({
         <Heading className="text-sm font-bold tracking-wide uppercase">
           {safety ? "Shut-down stop" : meta.kind === "check" ? "Check" : "Do this"}
           {meta.minutes ? ` · about ${meta.minutes < 1 ? "½" : meta.minutes} min` : ""}
-          {meta.handsOn ? " · hands-on" : ""}
+          {meta.handsOn ? " · hands\u2011on" : ""}
         </Heading>
         <div id="step-prompt" tabIndex={-1} data-step-heading className={`mt-1 leading-snug ${safety ? "text-xl" : "text-[1.45rem] font-bold"}`}>
           <GuideText text={meta.prompt} fill={fill} />

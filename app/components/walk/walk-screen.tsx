@@ -7,7 +7,7 @@ import { replayFrom, replayWalk } from "~/lib/walk/replay";
 import { outcomeLabel, type Outcome } from "~/lib/vocabulary";
 import { appendEvent, loadRecord, mergeServerEvents, saveRecord, type QueuedEvent, type WalkRecord } from "~/lib/walk/queue";
 import { MAX_PHOTO_BYTES } from "~/lib/cases/limits";
-import { PHOTO_WAIT_CAP_BYTES, waitingPhotoBytes } from "~/lib/walk/kept";
+import { lastHoursOnPhone, noteHoursOnPhone, PHOTO_WAIT_CAP_BYTES, waitingPhotoBytes } from "~/lib/walk/kept";
 import { keepPhotoBytes } from "~/components/offline/photo-store";
 import { EndCard } from "./end-card";
 import { PhotoPicker } from "./photo-picker";
@@ -53,6 +53,23 @@ export function WalkScreen({
   );
   const [note, setNote] = useState("");
   const [confirmStop, setConfirmStop] = useState(false);
+  const stopQuestion = useRef<HTMLHeadingElement>(null);
+  const stopButton = useRef<HTMLButtonElement>(null);
+  // The question opens in view with focus on it; "Keep going" gives focus back to where it was.
+  const askedStop = useRef(false);
+  useEffect(() => {
+    if (confirmStop) {
+      askedStop.current = true;
+      stopQuestion.current?.scrollIntoView({ block: "center" });
+      stopQuestion.current?.focus({ preventScroll: true });
+    } else if (askedStop.current) {
+      askedStop.current = false;
+      stopButton.current?.focus();
+    }
+  }, [confirmStop]);
+  // The newest hour-meter reading this phone knows (a fix finished here with no signal counts).
+  const [phoneHours, setPhoneHours] = useState<number | null>(null);
+  useEffect(() => setPhoneHours(lastHoursOnPhone(window.localStorage, rig.code)), [rig.code]);
 
   // After hydration: what this phone kept (possibly more than the server has) wins.
   useEffect(() => {
@@ -135,10 +152,12 @@ export function WalkScreen({
         <p className="text-lg">
           <strong>{rig.code}</strong> · {guideTitle}
         </p>
-        <p className="text-base" aria-label="Progress">
-          Step {path.length}
-          {atEnd ? " · end" : ` · at least ${stepsToEnd[here]} more to an end`}
-        </p>
+        {closedElsewhere || stoppedHere ? null : (
+          <p className="text-base" aria-label="Progress">
+            Step {path.length}
+            {atEnd ? " · end" : ` · at least ${stepsToEnd[here]} more to an end`}
+          </p>
+        )}
       </header>
       {closedElsewhere || stoppedHere ? (
         <ClosedCard outcome={stoppedHere ? "abandoned" : closedAs!} synced={stoppedHere ? !!record.closeResult : true} />
@@ -147,9 +166,10 @@ export function WalkScreen({
           meta={meta}
           causeName={meta.cause ? causeNames[meta.cause] : undefined}
           record={record}
-          hourMeter={{ has: rig.hasHourMeter, current: rig.engineHours }}
+          hourMeter={{ has: rig.hasHourMeter, current: Math.max(rig.engineHours, phoneHours ?? 0) }}
           online={sync.online}
           onFinish={(close) => {
+            if (close.engineHours !== undefined) noteHoursOnPhone(window.localStorage, rig.code, close.engineHours);
             update((r) => ({ ...r, close: { ...close, outcome: meta.kind as "fixed" | "handoff", finalStep: here, at: new Date().toISOString() } }));
             setTimeout(sync.flushNow, 0);
           }}
@@ -195,10 +215,12 @@ export function WalkScreen({
         confirmStop ? (
           // Asked on the page with big buttons (gloves), not in the browser's small dialog.
           <section aria-labelledby="stop-q" className="rounded-lg border-4 border-stop bg-paper p-4">
-            <h2 id="stop-q" className="text-xl font-bold">
+            <h2 id="stop-q" ref={stopQuestion} tabIndex={-1} className="text-xl font-bold">
               Stop this walk-through without an answer?
             </h2>
-            <p className="mt-1 text-lg">It is saved as abandoned{sync.online ? "" : " when this phone has signal"} and takes no more answers.</p>
+            <p className="mt-1 text-lg">
+              The walk-through takes no more answers and is saved as abandoned{sync.online ? "." : " when this phone has signal."}
+            </p>
             <div className="mt-3 grid grid-cols-2 gap-2">
               <button
                 type="button"
@@ -217,7 +239,7 @@ export function WalkScreen({
             </div>
           </section>
         ) : (
-          <button type="button" onClick={() => setConfirmStop(true)} className="min-h-12 text-base underline">
+          <button type="button" ref={stopButton} onClick={() => setConfirmStop(true)} className="min-h-12 text-base underline">
             Stop without finishing
           </button>
         )

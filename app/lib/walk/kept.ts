@@ -211,3 +211,19 @@ export function lastRigOnPhone(store: KeyValueStore & { length: number; key(inde
     .sort((a, b) => b.openedAt.localeCompare(a.openedAt))[0];
   return newest?.rig.code ?? null;
 }
+
+/**
+ * The newest hour-meter reading this phone knows for a rig: the kit's, or one entered on this
+ * phone since (a fix finished with no signal), whichever is higher.
+ */
+export function lastHoursOnPhone(store: KeyValueStore, rigCode: string): number | null {
+  return loadKit(store)?.rigs.find((r) => r.code === rigCode)?.engineHours ?? null;
+}
+
+/** Keeps a reading entered on this phone, so the next fix on the rig offers it as the last one. */
+export function noteHoursOnPhone(store: KeyValueStore, rigCode: string, hours: number): void {
+  const kit = loadKit(store);
+  const rig = kit?.rigs.find((r) => r.code === rigCode);
+  if (!kit || !rig || rig.engineHours >= hours) return;
+  saveKit(store, { ...kit, rigs: kit.rigs.map((r) => (r.code === rigCode ? { ...r, engineHours: hours } : r)) });
+}

@@ -1,5 +1,7 @@
 import { describe, expect, it } from "vitest";
 import {
+  lastHoursOnPhone,
+  noteHoursOnPhone,
   lastRigOnPhone,
   loadKit,
   openWalksOnPhone,
@@ -143,5 +145,19 @@ describe("the last rig, with no signal", () => {
     startOnPhone(store, kit(), { caseId: "b", rigCode: "CF-07", guideSlug: "tiny", now: new Date(NOW.getTime() + 60_000) });
     expect(lastRigOnPhone(store, kit().madeAt)).toBe("CF-07");
     expect(lastRigOnPhone(store, "2026-12-03T00:00:00.000Z")).toBeNull();
+  });
+});
+
+describe("hour-meter readings entered with no signal", () => {
+  it("offers the higher of the kit's reading and one entered on this phone since, and never lowers it", () => {
+    const store = phone();
+    saveKit(store, kit());
+    expect(lastHoursOnPhone(store, "CF-07")).toBe(812);
+    noteHoursOnPhone(store, "CF-07", 815.5);
+    expect(lastHoursOnPhone(store, "CF-07")).toBe(815.5);
+    noteHoursOnPhone(store, "CF-07", 813);
+    expect(lastHoursOnPhone(store, "CF-07")).toBe(815.5);
+    expect(lastHoursOnPhone(store, "CF-11")).toBe(812);
+    expect(lastHoursOnPhone(store, "BM-02")).toBeNull();
   });
 });
