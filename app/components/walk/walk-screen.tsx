@@ -218,9 +218,7 @@ export function WalkScreen({
             <h2 id="stop-q" ref={stopQuestion} tabIndex={-1} className="text-xl font-bold">
               Stop this walk-through without an answer?
             </h2>
-            <p className="mt-1 text-lg">
-              The walk-through takes no more answers and is saved as abandoned{sync.online ? "." : " when this phone has signal."}
-            </p>
+            <p className="mt-1 text-lg">The walk-through takes no more answers and is saved as abandoned{sync.online ? "." : " when this phone has signal."}</p>
             <div className="mt-3 grid grid-cols-2 gap-2">
               <button
                 type="button"
