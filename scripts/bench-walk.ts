@@ -11,7 +11,7 @@
 import fs from "node:fs";
 import path from "node:path";
 import { gzipSync } from "node:zlib";
-import { chromium } from "playwright-core";
+import { chromium, type BrowserContext, type Page } from "playwright-core";
 
 const root = path.resolve(import.meta.dirname, "..");
 const client = path.join(root, "build/client");
@@ -58,7 +58,8 @@ const percentile = (xs: number[], p: number) => {
   return s[Math.min(s.length - 1, Math.ceil((p / 100) * s.length) - 1)];
 };
 
-async function answerTimes() {
+/** Runs `work` in a fresh phone-sized Chromium, signed in as the demo crew member. */
+async function asCrewMember(work: (context: BrowserContext, page: Page) => Promise<void>) {
   const dir = fs.mkdtempSync(path.join(root, ".data", "bench-walk-"));
   const context = await chromium.launchPersistentContext(dir, {
     executablePath: "/usr/bin/chromium",
@@ -73,6 +74,15 @@ async function answerTimes() {
     await page.getByLabel("Password").fill("field-demo-2026");
     await page.getByRole("button", { name: "Sign in" }).click();
     await page.waitForURL((u) => u.pathname !== "/login");
+    await work(context, page);
+  } finally {
+    await context.close();
+    fs.rmSync(dir, { recursive: true, force: true });
+  }
+}
+
+async function answerTimes() {
+  await asCrewMember(async (context, page) => {
     await page.goto(`${base}/rigs/CF-07/fix`);
     await page.getByRole("button", { name: /Foam in the tank/ }).click();
     await page.waitForURL(/\/walk$/);
@@ -109,28 +119,12 @@ async function answerTimes() {
     console.log(
       `Answer → next prompt painted (Event Timing), 4× CPU slowdown, ${answers} taps: p50 ${say(p(50))}, p95 ${say(p(95))}, max ${say(Math.max(...times))}; ${slow.length} over 16 ms`,
     );
-  } finally {
-    await context.close();
-    fs.rmSync(dir, { recursive: true, force: true });
-  }
+  });
 }
 
 /** Each page loaded cold on slow 4G at 4× CPU: first paint, and how much the layout shifted. */
 async function coldLoads() {
-  const dir = fs.mkdtempSync(path.join(root, ".data", "bench-walk-"));
-  const context = await chromium.launchPersistentContext(dir, {
-    executablePath: "/usr/bin/chromium",
-    headless: true,
-    viewport: { width: 360, height: 640 },
-    args: ["--no-sandbox", "--disable-gpu"],
-  });
-  try {
-    const page = await context.newPage();
-    await page.goto(`${base}/login`);
-    await page.getByLabel("E-mail").fill("dana@cedarflats.example");
-    await page.getByLabel("Password").fill("field-demo-2026");
-    await page.getByRole("button", { name: "Sign in" }).click();
-    await page.waitForURL((u) => u.pathname !== "/login");
+  await asCrewMember(async (context) => {
     console.log("Cold load, slow 4G (150 ms, 1.6 Mbps down) and 4× CPU, cache off:");
     for (const [label, address] of [
       ["sign-in (signed out)", "/login?signed-out"],
@@ -165,10 +159,7 @@ async function coldLoads() {
       console.log(`  ${label.padEnd(26)} first paint ${(fcp / 1000).toFixed(2)} s, layout shift ${shift.toFixed(3)}`);
       await q.close();
     }
-  } finally {
-    await context.close();
-    fs.rmSync(dir, { recursive: true, force: true });
-  }
+  });
 }
 
 bundleReport();

@@ -42,6 +42,20 @@ async function signalOn(p: Page) {
   await p.evaluate(() => window.dispatchEvent(new Event("online")));
 }
 
+/** A ready phone whose signal is cut before the first tap; from the home screen it starts `guide` on `rig` by its tile. */
+async function startedWithNoSignal(rig: string, guide: RegExp) {
+  const p = await readyPhone();
+  await signalOff(p);
+  await p.reload();
+  await p
+    .getByRole("link", { name: new RegExp(rig) })
+    .first()
+    .click();
+  await p.getByRole("button", { name: guide }).click();
+  await p.waitForURL(/\/cases\/[^/]+\/walk$/);
+  return { p, id: caseIdOf(p) };
+}
+
 const tinyJpeg = (p: Page) =>
   p.evaluate(() => {
     const c = document.createElement("canvas");
@@ -167,15 +181,9 @@ describe("no signal from the first tap (360×640)", () => {
   });
 
   it("stores the guide version the phone walked when a newer one was published meanwhile", async () => {
-    const p = await readyPhone();
     const guide = (await GuideRecord.findOne({ where: { slug: "foaming", companyId: null } }))!;
     const walked = (await GuideVersion.findOne({ where: { guideId: guide.id, number: guide.publishedVersion! } }))!;
-    await signalOff(p);
-    await p.reload();
-    await p.getByRole("link", { name: /CF-07/ }).first().click();
-    await p.getByRole("button", { name: /Foam in the tank/ }).click();
-    await p.waitForURL(/\/cases\/[^/]+\/walk$/);
-    const id = caseIdOf(p);
+    const { p, id } = await startedWithNoSignal("CF-07", /Foam in the tank/);
     await answer(p, "Yes");
     const next = await GuideVersion.create({
       guideId: guide.id,
@@ -205,13 +213,7 @@ describe("no signal from the first tap (360×640)", () => {
   });
 
   it("keeps the answers when the sign-in ends with no signal, and sends them after signing in again", async () => {
-    const p = await readyPhone();
-    await signalOff(p);
-    await p.reload();
-    await p.getByRole("link", { name: /CF-07/ }).first().click();
-    await p.getByRole("button", { name: /Foam in the tank/ }).click();
-    await p.waitForURL(/\/cases\/[^/]+\/walk$/);
-    const id = caseIdOf(p);
+    const { p, id } = await startedWithNoSignal("CF-07", /Foam in the tank/);
     await answer(p, "Yes");
     await harness.browser.context.clearCookies(); // the session ended meanwhile
 
