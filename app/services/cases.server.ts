@@ -110,10 +110,10 @@ export async function storeEvents(user: SessionUser, caseId: string, events: Cas
 
   // The usual batch is new answers only: one multi-row INSERT, which InnoDB stores whole or not at
   // all, with no transaction or lock around it. A resend (or a clash) takes the careful way below.
-  const rows = events.map((e) => ({ id: e.id, caseId, seq: e.seq, stepId: e.stepId, answer: e.answer, at: new Date(e.at), note: e.note?.trim() || null }));
+  const rowOf = (e: CaseEventInput) => ({ id: e.id, caseId, seq: e.seq, stepId: e.stepId, answer: e.answer, at: new Date(e.at), note: e.note?.trim() || null });
   if (new Set(events.map((e) => e.id)).size === events.length) {
     try {
-      await CaseEvent.bulkCreate(rows);
+      await CaseEvent.bulkCreate(events.map(rowOf));
       await noteFirstAck(found, events);
       return { stored: events.length, duplicates: 0 };
     } catch (error) {
@@ -138,10 +138,7 @@ export async function storeEvents(user: SessionUser, caseId: string, events: Cas
         if (seqOwner.has(e.seq) && seqOwner.get(e.seq) !== e.id) fail(409, `Nothing stored: event ${e.seq} is already taken by another event.`);
       }
       try {
-        await CaseEvent.bulkCreate(
-          fresh.map((e) => ({ id: e.id, caseId, seq: e.seq, stepId: e.stepId, answer: e.answer, at: new Date(e.at), note: e.note?.trim() || null })),
-          { transaction },
-        );
+        await CaseEvent.bulkCreate(fresh.map(rowOf), { transaction });
       } catch (error) {
         if (error instanceof UniqueConstraintError) fail(409, "Nothing stored: two events in the batch share a sequence number.");
         throw error;
