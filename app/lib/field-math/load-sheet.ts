@@ -1,28 +1,20 @@
 import { z } from "zod";
+import { DEFAULT_FIBER_CEILING_LB_PER_100_GAL, MATERIAL_KINDS, SEED_IN_TANK_MINUTES, type MaterialKind } from "./load-rules";
 import { SQFT_PER_ACRE } from "./units";
 import { FieldMathInputError, num, parseInput } from "./validate";
 
-/** About 50 lb of wood fiber per 100 gal of water is a usual ceiling (common practice; set per rig and product). */
-export const DEFAULT_FIBER_CEILING_LB_PER_100_GAL = 50;
-/** Seed should stay in the tank no more than 30 minutes (USDA NRCS Wyoming, Hydroseeding and Hydromulching Fact Sheet). */
-export const SEED_IN_TANK_MINUTES = 30;
-
-/** Loading order (USDA NRCS Wyoming fact sheet; the half / three-quarter marks are common practice). */
-export const LOADING_ORDER = [
-  "Water in to about half, agitator running.",
-  "Lightest materials next.",
-  "Fiber mulch only once the tank is at least half full; all of it in by about three-quarters full.",
-  "Tackifier, then fertilizer.",
-  `Seed last, just before spraying: no more than ${SEED_IN_TANK_MINUTES} minutes in the tank.`,
-  "Do not over-agitate once loaded.",
-];
+export { DEFAULT_FIBER_CEILING_LB_PER_100_GAL, SEED_IN_TANK_MINUTES };
 
 export const materialInput = z.object({
   name: z.string({ error: "name the material" }).trim().min(1, "name the material").max(60),
   lbPerAcre: num("Rate", 0, 10_000, { minInclusive: false }),
+  /** What it is, for its place in the loading order; `fiber: true` is the older way to say kind "fiber". */
+  kind: z.enum(MATERIAL_KINDS, { error: `kind must be one of ${MATERIAL_KINDS.join(", ")}` }).optional(),
   fiber: z.boolean().optional(),
   bagLb: num("Bag size", 0, 2000, { minInclusive: false }).optional(),
 });
+export type MaterialInput = z.infer<typeof materialInput>;
+export const kindOf = (m: MaterialInput): MaterialKind => m.kind ?? (m.fiber ? "fiber" : "other");
 
 export const loadSheetInput = z.object({
   areaSqFt: num("Area", 0, 100 * SQFT_PER_ACRE, { minInclusive: false }),
@@ -54,14 +46,24 @@ export interface Load {
  */
 export function loadSheet(input: unknown) {
   const i = parseInput(loadSheetInput, input);
-  const acres = i.areaSqFt / SQFT_PER_ACRE;
-  const fiberRate = i.materials.filter((m) => m.fiber).reduce((s, m) => s + m.lbPerAcre, 0);
+  const { fiberRate, waterPerAcre } = sizing(i);
+  return planLoads(i, i.tankGal / waterPerAcre, fiberRate, waterPerAcre);
+}
+export type LoadSheet = ReturnType<typeof loadSheet>;
+export type ParsedLoadSheetInput = z.infer<typeof loadSheetInput>;
+
+/** Fiber per acre, and the water each acre needs: enough to carry its fiber under the ceiling, and at least the water rate. */
+export function sizing(i: ParsedLoadSheetInput) {
+  const fiberRate = i.materials.filter((m) => kindOf(m) === "fiber").reduce((s, m) => s + m.lbPerAcre, 0);
   if (fiberRate === 0 && !i.waterGalPerAcre) {
     throw new FieldMathInputError({ materials: "mark the fiber mulch as fiber, or give a water rate, so the loads can be sized" });
   }
-  // Water each acre needs: enough to carry its fiber under the ceiling, and at least the water rate.
-  const waterPerAcre = Math.max(i.waterGalPerAcre ?? 0, (fiberRate * 100) / i.maxFiberLbPer100Gal);
-  const acresPerFullLoad = i.tankGal / waterPerAcre;
+  return { fiberRate, waterPerAcre: Math.max(i.waterGalPerAcre ?? 0, (fiberRate * 100) / i.maxFiberLbPer100Gal) };
+}
+
+/** Loads of `acresPerFullLoad` each until the area is covered; the last load takes what is left. */
+export function planLoads(i: ParsedLoadSheetInput, acresPerFullLoad: number, fiberRate: number, waterPerAcre: number) {
+  const acres = i.areaSqFt / SQFT_PER_ACRE;
   const loadCount = Math.max(1, Math.ceil(acres / acresPerFullLoad - 1e-9));
 
   const loads: Load[] = [];
@@ -87,7 +89,6 @@ export function loadSheet(input: unknown) {
     totals,
     fiberPerFullLoadLb: fiberRate * acresPerFullLoad,
     limitedBy: i.waterGalPerAcre && i.waterGalPerAcre * i.maxFiberLbPer100Gal > fiberRate * 100 ? ("water rate" as const) : ("fiber ceiling" as const),
-    loadingOrder: LOADING_ORDER,
     seedInTankMinutes: SEED_IN_TANK_MINUTES,
   };
 }

@@ -11,6 +11,12 @@ export const SQM_PER_HA = 10_000;
 export const LBF_TO_N = 4.4482216152605;
 export const FTLBF_TO_NM = LBF_TO_N * FT_TO_M; // 1.3558179483…
 export const PSI_TO_KPA = LBF_TO_N / (0.0254 * 0.0254) / 1000; // 6.894757…
+/**
+ * Water near 60 °F weighs about 8.34 lb per US gal: 999.0 kg/m³ at 15.6 °C (CRC Handbook of
+ * Chemistry and Physics, density of water table) × the exact gallon and pound → 8.337 lb/gal.
+ */
+export const WATER_KG_PER_M3_AT_60F = 999.0;
+export const WATER_LB_PER_GAL = (WATER_KG_PER_M3_AT_60F * GAL_TO_L) / 1000 / LB_TO_KG;
 /** ft of water head per psi: 2.31 (NDSU Extension AE1057, Table 1). */
 export const FT_HEAD_PER_PSI = 2.31;
 

@@ -1,0 +1,93 @@
+import { z } from "zod";
+import { nozzleTipSchema } from "../rigs/schema";
+import { hoseFriction, hoseFrictionInput, PSI_PER_FT_RISE } from "./hose";
+import { FieldMathInputError, num, parseInput } from "./validate";
+
+/**
+ * Reach falls by half a foot for each psi lost before the nozzle: the smooth-bore rule
+ * S = NP/2 + 26 ft (Fire Engineering, Aug 1960, citing Fire Service Hydraulics p. 171) has slope ½.
+ */
+export const REACH_FT_PER_PSI = 0.5;
+
+export const tipChoiceInput = z.object({
+  tips: z.array(nozzleTipSchema).max(8),
+  /** From where the sprayer stands to the far edge of the area. */
+  distanceFt: num("Distance to the far edge", 0, 1000, { minInclusive: false }),
+  /** How long the strip is, along the edge the sprayer walks. */
+  widthFt: num("Width to cover", 0, 5000, { minInclusive: false }),
+  hoseLengthFt: num("Hose in use", 0, 2000),
+  diameterIn: hoseFrictionInput.shape.diameterIn,
+  flowGpm: num("Flow", 0, 1500, { minInclusive: false }),
+  riseFt: num("Rise to the nozzle", -500, 500).optional(),
+});
+export type TipChoiceInput = z.input<typeof tipChoiceInput>;
+
+export interface TipOption {
+  name: string;
+  ratedReachFt: number;
+  /** Rated reach less what the hose and any rise cost. */
+  reachFt: number;
+  widthFt: number;
+  /** Lines the sprayer works along to cover the distance. */
+  passes: number;
+  /** Sweeps of the pattern's width along each line. */
+  sweeps: number;
+  reaches: boolean;
+  from: string[];
+}
+
+/**
+ * Which of the rig's tips covers a slope with the fewest passes: reach less what the hose costs
+ * decides how many lines the sprayer works from; among tips with as few passes, the widest
+ * pattern covers the length in the fewest sweeps. Rated reach is taken as the maker's figure
+ * with the tip at the pump (no hose) — a stated assumption, since makers rate tips differently.
+ */
+export function tipChoice(input: unknown) {
+  const i = parseInput(tipChoiceInput, input);
+  if (!i.tips.length) {
+    throw new FieldMathInputError({ tips: "no tips are recorded for this rig: add each tip's rated reach and pattern width on the rig's page" });
+  }
+  const hose = i.hoseLengthFt > 0 ? hoseFriction({ flowGpm: i.flowGpm, lengthFt: i.hoseLengthFt, diameterIn: i.diameterIn }) : null;
+  const frictionPsi = hose?.frictionLossPsi ?? 0;
+  const risePsi = PSI_PER_FT_RISE * (i.riseFt ?? 0);
+  // Spraying downhill gains a little; the rated reach is kept as the most a tip is counted for.
+  const reachLossFt = Math.max(0, frictionPsi + risePsi) * REACH_FT_PER_PSI;
+
+  const options: TipOption[] = i.tips.map((t) => {
+    const reachFt = Math.max(0, t.reachFt - reachLossFt);
+    const passes = reachFt > 0 ? Math.ceil(i.distanceFt / reachFt - 1e-9) : Infinity;
+    return {
+      name: t.name,
+      ratedReachFt: t.reachFt,
+      reachFt,
+      widthFt: t.widthFt,
+      passes,
+      sweeps: Math.ceil(i.widthFt / t.widthFt - 1e-9),
+      reaches: passes === 1,
+      from: positions(passes, reachFt, i.distanceFt),
+    };
+  });
+  const ranked = [...options].sort((a, b) => a.passes - b.passes || a.sweeps - b.sweeps || a.reachFt - b.reachFt);
+  return {
+    best: Number.isFinite(ranked[0].passes) ? ranked[0] : null,
+    options: ranked,
+    frictionPsi,
+    risePsi,
+    reachLossFt,
+    hoseSource: hose?.source ?? null,
+    note: "Reach and friction are worked for clear water: slurry loses more, so allow a few feet more than the figures say.",
+  };
+}
+export type TipChoice = ReturnType<typeof tipChoice>;
+
+/** Where to stand for each pass: the near edge, then the far edge, then lines stepped in by the reach. */
+function positions(passes: number, reachFt: number, distanceFt: number): string[] {
+  if (!Number.isFinite(passes)) return [];
+  if (passes === 1) return ["From the near edge, spraying out to the far edge."];
+  if (passes === 2) return ["From the near edge, out to about half way.", "From the far edge (top or far side), back to meet the first pass."];
+  return Array.from({ length: passes }, (_, k) =>
+    k === 0
+      ? `From the near edge, out to ${Math.round(reachFt)} ft.`
+      : `From a line ${Math.round(Math.min(k * reachFt, distanceFt))} ft in, out to ${Math.round(Math.min((k + 1) * reachFt, distanceFt))} ft.`,
+  );
+}

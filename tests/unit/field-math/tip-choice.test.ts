@@ -1,0 +1,58 @@
+import { describe, expect, it } from "vitest";
+import { tipChoice } from "~/lib/field-math/tip-choice";
+
+// Rig tips, invented for the test: rated reach and pattern width in feet.
+const tips = [
+  { name: "Wide fan", reachFt: 40, widthFt: 30 },
+  { name: "Narrow fan", reachFt: 70, widthFt: 12 },
+  { name: "Long range", reachFt: 110, widthFt: 6 },
+];
+// 200 gpm through 100 ft of 2½ in hose loses 8 psi (Rohnert Park fire training 3-8, C = 2); at ½ ft of
+// reach per psi (slope of S = NP/2 + 26, Fire Engineering 1960) that costs 4 ft of reach.
+const run = { hoseLengthFt: 100, diameterIn: 2.5, flowGpm: 200 };
+
+describe("tip chooser", () => {
+  it("takes the hose friction off the rated reach", () => {
+    const r = tipChoice({ tips, distanceFt: 60, widthFt: 120, ...run });
+    expect(r.frictionPsi).toBeCloseTo(8, 10);
+    expect(r.reachLossFt).toBeCloseTo(4, 10);
+    expect(r.options.find((o) => o.name === "Narrow fan")!.reachFt).toBeCloseTo(66, 10);
+  });
+
+  it("60 ft deep, 120 ft long: the narrow fan reaches in one pass with fewer sweeps than the long-range tip", () => {
+    const r = tipChoice({ tips, distanceFt: 60, widthFt: 120, ...run });
+    expect(r.best!.name).toBe("Narrow fan");
+    expect(r.best!).toMatchObject({ passes: 1, sweeps: 10, reaches: true });
+    expect(r.options.map((o) => [o.name, o.passes])).toEqual([
+      ["Narrow fan", 1],
+      ["Long range", 1],
+      ["Wide fan", 2],
+    ]);
+  });
+
+  it("30 ft deep: the wide fan reaches and covers fastest", () => {
+    expect(tipChoice({ tips, distanceFt: 30, widthFt: 120, ...run }).best).toMatchObject({ name: "Wide fan", passes: 1, sweeps: 4 });
+  });
+
+  it("250 ft deep: no tip reaches, the long-range tip takes 3 passes stepped in by its reach", () => {
+    const best = tipChoice({ tips, distanceFt: 250, widthFt: 120, ...run }).best!;
+    expect(best).toMatchObject({ name: "Long range", passes: 3, reaches: false });
+    expect(best.from).toEqual(["From the near edge, out to 106 ft.", "From a line 106 ft in, out to 212 ft.", "From a line 212 ft in, out to 250 ft."]);
+  });
+
+  it("two passes: one from each edge", () => {
+    const best = tipChoice({ tips: [tips[0]], distanceFt: 70, widthFt: 50, hoseLengthFt: 0, diameterIn: 2.5, flowGpm: 200 }).best!;
+    expect(best.passes).toBe(2);
+    expect(best.from[1]).toMatch(/far edge/);
+  });
+
+  it("spraying uphill costs 0.434 psi a foot of rise (NDSU AE1057) on top of the hose", () => {
+    const r = tipChoice({ tips, distanceFt: 60, widthFt: 120, ...run, riseFt: 20 });
+    expect(r.risePsi).toBeCloseTo(8.68, 10);
+    expect(r.reachLossFt).toBeCloseTo((8 + 8.68) / 2, 10);
+  });
+
+  it("a rig without tips gets a message naming what to record", () => {
+    expect(() => tipChoice({ tips: [], distanceFt: 60, widthFt: 120, ...run })).toThrow(/no tips are recorded for this rig/);
+  });
+});
