@@ -24,6 +24,8 @@ export class Company extends Model<InferAttributes<Company>, InferCreationAttrib
   declare slug: string;
   /** IANA zone the company works in: screens, mail and the digest show its local times. */
   declare timeZone: CreationOptional<string>;
+  /** The company's loading rules for the load card; null until an admin sets them (the defaults apply). */
+  declare loadRules: CreationOptional<Record<string, unknown> | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -37,6 +39,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare role: Role;
   /** Set when an admin turns the person's sign-in off. */
   declare accessRemovedAt: CreationOptional<Date | null>;
+  /** The person's own walking pace, for strips paced out on a slope; null takes the company's. */
+  declare paceFt: CreationOptional<number | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -202,7 +206,14 @@ const decimal = (precision: number, scale: number, field: string) => ({
 /** Binds every model to the one Sequelize instance. Called once, by db/index.ts. */
 export function initModels(sequelize: Sequelize) {
   Company.init(
-    { id, name: DataTypes.STRING(120), slug: DataTypes.STRING(60), timeZone: { type: DataTypes.STRING(64), defaultValue: "America/Denver" }, ...timestamps },
+    {
+      id,
+      name: DataTypes.STRING(120),
+      slug: DataTypes.STRING(60),
+      timeZone: { type: DataTypes.STRING(64), defaultValue: "America/Denver" },
+      loadRules: DataTypes.JSON,
+      ...timestamps,
+    },
     { sequelize, tableName: "companies" },
   );
   User.init(
@@ -213,6 +224,7 @@ export function initModels(sequelize: Sequelize) {
       passwordHash: DataTypes.STRING(100),
       role: DataTypes.ENUM(...ROLES),
       accessRemovedAt: DataTypes.DATE,
+      paceFt: decimal(3, 1, "paceFt"),
       ...timestamps,
     },
     { sequelize, tableName: "users" },

@@ -10,6 +10,7 @@ import { parseForm } from "~/lib/forms/parse";
 import { changePasswordSchema } from "~/lib/people/schema";
 import { ROLE_LABELS } from "~/lib/people/roles";
 import { changePassword, endOneSession, listSessions } from "~/services/account.server";
+import { loadRulesFor, savePace } from "~/services/company.server";
 import { fail, requireUser } from "~/services/guards.server";
 import { readForm } from "~/services/read-request.server";
 import { ABSOLUTE_DAYS, currentSessionKey, endSessions, IDLE_DAYS } from "~/services/session.server";
@@ -17,8 +18,9 @@ import type { Route } from "./+types/account";
 
 export async function loader({ request, context }: Route.LoaderArgs) {
   const user = await requireUser({ request, context });
-  const [sessions, current] = await Promise.all([listSessions(user), currentSessionKey(request)]);
+  const [sessions, current, rules] = await Promise.all([listSessions(user), currentSessionKey(request), loadRulesFor(user)]);
   return {
+    pace: { ft: rules.paceFt, own: rules.ownPace },
     name: user.name,
     email: user.email,
     role: user.role,
@@ -29,6 +31,22 @@ export async function loader({ request, context }: Route.LoaderArgs) {
   };
 }
 
+/** A person's pace for strips on a slope: a number of feet, or blank for the company's. */
+const paceAction = z.object({
+  intent: z.literal("pace"),
+  paceFt: z
+    .string()
+    .trim()
+    .transform((v) => (v === "" ? null : Number(v.replace(",", "."))))
+    .pipe(
+      z
+        .number({ error: "Give your pace in feet, like 2.5, or leave it blank." })
+        .min(1, "A pace under 1 ft is not plausible.")
+        .max(6, "A pace over 6 ft is not plausible.")
+        .nullable(),
+    ),
+});
+
 const deviceAction = z.discriminatedUnion("intent", [
   z.object({ intent: z.literal("end-device"), key: z.string().regex(/^[0-9a-f]{64}$/, "Pick a device from the list.") }),
   z.object({ intent: z.literal("end-others") }),
@@ -38,6 +56,16 @@ export async function action({ request, context }: Route.ActionArgs) {
   const user = await requireUser({ request, context });
   const form = await readForm(request);
   const current = await currentSessionKey(request);
+  if (form.get("intent") === "pace") {
+    const parsed = paceAction.safeParse(Object.fromEntries(form));
+    if (!parsed.success) return data({ result: null, message: null, paceError: parsed.error.issues[0].message }, { status: 400 });
+    await savePace(user, parsed.data.paceFt);
+    return {
+      result: null,
+      message:
+        parsed.data.paceFt === null ? "Your pace is back to the company's." : `Saved. Strips on the load card now count paces of ${parsed.data.paceFt} ft.`,
+    };
+  }
   if (form.get("intent") === "end-device" || form.get("intent") === "end-others") {
     const parsed = deviceAction.safeParse(Object.fromEntries(form));
     if (!parsed.success) fail(400, parsed.error.issues[0].message);
@@ -64,6 +92,29 @@ export default function Account({ loaderData, actionData }: Route.ComponentProps
       <DoneNote message={actionData?.message} />
       <h2 className="text-2xl font-bold">Change your password</h2>
       <ChoosePasswordForm lastResult={actionData?.result ?? undefined} submitLabel="Change password" askCurrent />
+      <h2 className="mt-8 text-2xl font-bold">Your pace</h2>
+      <Form method="post" className="mt-2 space-y-2">
+        <label htmlFor="paceFt" className="block font-bold">
+          One step, heel to heel, in feet
+        </label>
+        <p id="pace-hint" className="text-sm">
+          The load card shows each load as a strip you can pace out. Pace 100 ft and divide by your steps. Blank uses the company&apos;s
+          {loaderData.pace.own ? "" : ` (${loaderData.pace.ft} ft)`}.
+        </p>
+        <input
+          id="paceFt"
+          name="paceFt"
+          inputMode="decimal"
+          defaultValue={loaderData.pace.own ? String(loaderData.pace.ft) : ""}
+          aria-describedby="pace-hint"
+          aria-invalid={actionData && "paceError" in actionData ? true : undefined}
+          className="block min-h-14 w-full rounded-md border-2 border-ink bg-paper px-3 text-lg"
+        />
+        {actionData && "paceError" in actionData ? <p className="font-bold text-stop">{actionData.paceError}</p> : null}
+        <button name="intent" value="pace" className="min-h-14 w-full rounded-md border-2 border-ink bg-paper px-4 text-lg font-bold">
+          Save my pace
+        </button>
+      </Form>
       <h2 className="mt-8 text-2xl font-bold">Where you are signed in</h2>
       <ul className="mt-2 space-y-2">
         {loaderData.devices.map((d) => (

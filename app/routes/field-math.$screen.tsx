@@ -1,12 +1,16 @@
 import { Form, useSubmit } from "react-router";
 import { HoseMath } from "~/components/field-math/hose";
-import { LoadSheetMath } from "~/components/field-math/load-sheet";
+import { LoadCardMath } from "~/components/field-math/load-card";
+import { RateMath } from "~/components/field-math/rate";
+import { TipMath } from "~/components/field-math/tip";
 import { SuctionMath } from "~/components/field-math/suction";
 import { TorqueMath } from "~/components/field-math/torque";
 import { PageTitle } from "~/components/ui/page-title";
 import { fieldMathScreen } from "~/lib/field-math/screens";
 import { notFound, requireUser } from "~/services/guards.server";
 import { rigSpecsFor } from "~/services/rigs.server";
+import { loadRulesFor } from "~/services/company.server";
+import { DEFAULT_LOAD_RULES } from "~/lib/field-math/load-rules";
 import { serverOrPhone } from "~/components/offline/server-or-phone";
 import { rigSpecsOf } from "~/lib/rigs/specs";
 import type { Route } from "./+types/field-math.$screen";
@@ -15,10 +19,10 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
   const user = await requireUser({ request, context });
   const screen = fieldMathScreen(params.screen);
   if (!screen) notFound("That field-math screen");
-  const rigs = await rigSpecsFor(user);
+  const [rigs, { ownPace: _, ...rules }] = await Promise.all([rigSpecsFor(user), loadRulesFor(user)]);
   const wanted = new URL(request.url).searchParams.get("rig")?.toUpperCase();
   const rig = rigs.find((r) => r.code === wanted) ?? rigs[0] ?? null;
-  return { screen, rigs: rigs.map((r) => ({ code: r.code, name: r.name })), rig };
+  return { screen, rigs: rigs.map((r) => ({ code: r.code, name: r.name })), rig, rules };
 }
 
 /** With no signal, the rigs come from what the phone keeps: the math itself runs on the phone. */
@@ -28,20 +32,28 @@ export async function clientLoader({ request, params, serverLoader }: Route.Clie
     if (!screen) return null;
     const wanted = new URL(request.url).searchParams.get("rig")?.toUpperCase();
     const rig = kit.rigs.find((r) => r.code === wanted) ?? kit.rigs[0] ?? null;
-    return { screen, rigs: kit.rigs.map((r) => ({ code: r.code, name: r.name })), rig: rig ? rigSpecsOf(rig) : null };
+    return {
+      screen,
+      rigs: kit.rigs.map((r) => ({ code: r.code, name: r.name })),
+      rig: rig ? rigSpecsOf(rig) : null,
+      rules: kit.loadRules ?? DEFAULT_LOAD_RULES,
+    };
   });
 }
 
-const SCREENS = { load: LoadSheetMath, hose: HoseMath, suction: SuctionMath, torque: TorqueMath };
+const SCREENS = { load: LoadCardMath, tip: TipMath, hose: HoseMath, suction: SuctionMath, torque: TorqueMath, rate: RateMath };
 
 export default function FieldMathScreen({ loaderData }: Route.ComponentProps) {
-  const { screen, rigs, rig } = loaderData;
+  const { screen, rigs, rig, rules } = loaderData;
   const submit = useSubmit();
   const Screen = SCREENS[screen.id];
   return (
     <>
-      <PageTitle lead={screen.lead}>{screen.title}</PageTitle>
-      {rigs.length ? (
+      {/* The printed load card carries its own heading: job, date and rig. */}
+      <div className={screen.id === "load" ? "print:hidden" : undefined}>
+        <PageTitle lead={screen.lead}>{screen.title}</PageTitle>
+      </div>
+      {rigs.length && screen.id !== "rate" ? (
         <Form method="get" className="no-print mb-4" onChange={(e) => submit(e.currentTarget)}>
           <label htmlFor="rig" className="block font-bold">
             Filled from rig
@@ -59,10 +71,10 @@ export default function FieldMathScreen({ loaderData }: Route.ComponentProps) {
         </Form>
       ) : null}
       {/* Re-mount on a new rig so every field starts from that rig's specs. */}
-      <Screen key={rig?.code ?? "none"} rig={rig ?? undefined} />
+      <Screen key={rig?.code ?? "none"} rig={rig ?? undefined} rules={rules} />
       {screen.id === "load" ? (
         <button type="button" onClick={() => window.print()} className="no-print mt-4 min-h-14 w-full rounded-md bg-go text-lg font-bold text-white">
-          Print the load sheet
+          Print the load card
         </button>
       ) : null}
     </>

@@ -1,6 +1,7 @@
 import { RIG_SPEC_FIELDS, walkRigOf } from "~/lib/rigs/specs";
 import type { OfflineKit } from "~/lib/walk/kept";
 import { lastRigIdFor } from "./cases.server";
+import { loadRulesFor } from "./company.server";
 import { Rig } from "./db.server";
 import { guideTexts } from "./guide-text.server";
 import { hiddenSections } from "./env.server";
@@ -12,7 +13,7 @@ export type { OfflineKit };
 
 /** What a phone keeps so its person can start a fix with no signal: the company's active rigs, the guides they may start, cause names. */
 export async function offlineKit(user: SessionUser): Promise<OfflineKit> {
-  const [rigs, guides, lastRigId] = await Promise.all([
+  const [rigs, guides, lastRigId, { ownPace: _, ...loadRules }] = await Promise.all([
     Rig.findAll({
       where: ownedBy(user, { retired: false }),
       attributes: ["id", ...RIG_SPEC_FIELDS, "hasHourMeter", "engineHours", "mount", "pumpKind"],
@@ -20,6 +21,7 @@ export async function offlineKit(user: SessionUser): Promise<OfflineKit> {
     }),
     usableGuides(user),
     lastRigIdFor(user),
+    loadRulesFor(user),
   ]);
   return {
     madeAt: new Date().toISOString(),
@@ -46,5 +48,6 @@ export async function offlineKit(user: SessionUser): Promise<OfflineKit> {
       texts: guideTexts(g.versionId, g.definition),
     })),
     causeNames: causeNames(),
+    loadRules,
   };
 }

@@ -16,6 +16,7 @@ import * as m014 from "./014-throttling";
 import * as m015 from "./015-field-math-name";
 import * as m016 from "./016-rig-pump-and-agitator";
 import * as m017 from "./017-photo-phone-id";
+import * as m018 from "./018-load-rules-and-pace";
 
 export interface Migration {
   name: string;
@@ -42,4 +43,5 @@ export const migrations: Migration[] = [
   { name: "015-field-math-name", ...m015 },
   { name: "016-rig-pump-and-agitator", ...m016 },
   { name: "017-photo-phone-id", ...m017 },
+  { name: "018-load-rules-and-pace", ...m018 },
 ];

@@ -135,7 +135,7 @@ export function reachByHoseLength(input: unknown) {
  * + nozzle pressure. Friction grows with flow and flow with nozzle pressure, so one root lies in
  * [0, available]; bisection finds it for the table's C·Q² and the formula's q^1.852 alike.
  */
-function settleNozzlePsi(available: number, frictionAt: (nozzlePsi: number) => number): number {
+export function settleNozzlePsi(available: number, frictionAt: (nozzlePsi: number) => number): number {
   let lo = 0;
   let hi = available;
   for (let i = 0; i < 100 && hi - lo > 1e-9; i++) {

@@ -84,7 +84,12 @@ export function loadCard(input: unknown, rules: LoadRules = DEFAULT_LOAD_RULES) 
   }
   const sheet = planLoads(i, acresPerFullLoad, fiberRate, waterPerAcre);
 
-  const amounts = i.materials.map((m) => allot(sheet.perLoad.map((l) => m.lbPerAcre * l.acres), m.bagLb ?? null));
+  const amounts = i.materials.map((m) =>
+    allot(
+      sheet.perLoad.map((l) => m.lbPerAcre * l.acres),
+      m.bagLb ?? null,
+    ),
+  );
   const startGal = (i.tankGal * rules.fiberStartPercent) / 100;
   const doneGal = (i.tankGal * rules.fiberDonePercent) / 100;
 
@@ -169,7 +174,7 @@ export function groupLoads(loads: CardLoad[]): { numbers: number[]; load: CardLo
 /** "1–3, 5" for a list of load numbers. */
 export function loadNumbers(numbers: number[]): string {
   const parts: string[] = [];
-  for (let k = 0; k < numbers.length; ) {
+  for (let k = 0; k < numbers.length;) {
     let end = k;
     while (end + 1 < numbers.length && numbers[end + 1] === numbers[end] + 1) end++;
     parts.push(end > k ? `${numbers[k]}–${numbers[end]}` : String(numbers[k]));

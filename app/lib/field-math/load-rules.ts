@@ -70,7 +70,11 @@ export const loadRulesSchema = z
       .array(
         z.object({
           step: z.enum(LOAD_STEPS, { error: `Each place is one of: ${LOAD_STEPS.join(", ")}.` }),
-          reason: z.string({ error: "Give the reason for this place." }).trim().min(1, "Give the reason for this place.").max(240, "Keep each reason under 240 characters."),
+          reason: z
+            .string({ error: "Give the reason for this place." })
+            .trim()
+            .min(1, "Give the reason for this place.")
+            .max(240, "Keep each reason under 240 characters."),
         }),
       )
       .length(LOAD_STEPS.length, `The order has one place for each of: ${LOAD_STEPS.map((s) => LOAD_STEP_LABELS[s]).join(", ")}.`),

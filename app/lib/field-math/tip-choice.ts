@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { nozzleTipSchema } from "../rigs/schema";
-import { hoseFriction, hoseFrictionInput, PSI_PER_FT_RISE } from "./hose";
+import { hoseFriction, hoseFrictionInput, PSI_PER_FT_RISE, settleNozzlePsi } from "./hose";
 import { FieldMathInputError, num, parseInput } from "./validate";
 
 /**
@@ -17,6 +17,8 @@ export const tipChoiceInput = z.object({
   widthFt: num("Width to cover", 0, 5000, { minInclusive: false }),
   hoseLengthFt: num("Hose in use", 0, 2000),
   diameterIn: hoseFrictionInput.shape.diameterIn,
+  /** The pump's pressure and the flow it gives through the tip with no hose (its rated point). */
+  pumpPsi: num("Pump pressure", 0, 500, { minInclusive: false }),
   flowGpm: num("Flow", 0, 1500, { minInclusive: false }),
   riseFt: num("Rise to the nozzle", -500, 500).optional(),
 });
@@ -39,19 +41,28 @@ export interface TipOption {
 /**
  * Which of the rig's tips covers a slope with the fewest passes: reach less what the hose costs
  * decides how many lines the sprayer works from; among tips with as few passes, the widest
- * pattern covers the length in the fewest sweeps. Rated reach is taken as the maker's figure
- * with the tip at the pump (no hose) — a stated assumption, since makers rate tips differently.
+ * pattern covers the length in the fewest sweeps. Stated assumptions: rated reach is the maker's
+ * figure at the pump's pressure with no hose, every tip passes about the pump's rated flow there,
+ * and the pump holds its pressure as the flow drops.
  */
 export function tipChoice(input: unknown) {
   const i = parseInput(tipChoiceInput, input);
   if (!i.tips.length) {
     throw new FieldMathInputError({ tips: "no tips are recorded for this rig: add each tip's rated reach and pattern width on the rig's page" });
   }
-  const hose = i.hoseLengthFt > 0 ? hoseFriction({ flowGpm: i.flowGpm, lengthFt: i.hoseLengthFt, diameterIn: i.diameterIn }) : null;
-  const frictionPsi = hose?.frictionLossPsi ?? 0;
+  // The tip passes Q = k·√NP, with k from the rated point (flow at the pump's pressure, no hose). With hose,
+  // flow and nozzle pressure settle where pump pressure = friction at that flow + rise + nozzle pressure.
   const risePsi = PSI_PER_FT_RISE * (i.riseFt ?? 0);
-  // Spraying downhill gains a little; the rated reach is kept as the most a tip is counted for.
-  const reachLossFt = Math.max(0, frictionPsi + risePsi) * REACH_FT_PER_PSI;
+  const available = i.pumpPsi - risePsi;
+  if (available <= 0) throw new FieldMathInputError({ riseFt: "the pump cannot lift water that high" });
+  const k = i.flowGpm / Math.sqrt(i.pumpPsi);
+  const friction = (np: number) =>
+    i.hoseLengthFt > 0 ? hoseFriction({ flowGpm: Math.max(k * Math.sqrt(np), 1e-6), lengthFt: i.hoseLengthFt, diameterIn: i.diameterIn }) : null;
+  const nozzlePsi = settleNozzlePsi(available, (np) => friction(np)?.frictionLossPsi ?? 0);
+  const settled = friction(nozzlePsi);
+  const frictionPsi = settled?.frictionLossPsi ?? 0;
+  // Downhill gains a little pressure; the rated reach stays the most a tip is counted for.
+  const reachLossFt = Math.max(0, i.pumpPsi - nozzlePsi) * REACH_FT_PER_PSI;
 
   const options: TipOption[] = i.tips.map((t) => {
     const reachFt = Math.max(0, t.reachFt - reachLossFt);
@@ -73,8 +84,10 @@ export function tipChoice(input: unknown) {
     options: ranked,
     frictionPsi,
     risePsi,
+    nozzlePsi,
+    flowGpm: k * Math.sqrt(nozzlePsi),
     reachLossFt,
-    hoseSource: hose?.source ?? null,
+    hoseSource: settled?.source ?? null,
     note: "Reach and friction are worked for clear water: slurry loses more, so allow a few feet more than the figures say.",
   };
 }

@@ -4,7 +4,7 @@ export type StepKind = (typeof STEP_KINDS)[number];
 export const FINAL_KINDS: readonly StepKind[] = ["fixed", "handoff"];
 
 /** Field-math widgets a step may show (built by the field-math screens). */
-export const FIELD_MATH_WIDGETS = ["hose-friction", "suction-head", "load-sheet", "fiber-check", "torque"] as const;
+export const FIELD_MATH_WIDGETS = ["hose-friction", "suction-head", "load-sheet", "fiber-check", "torque", "tip-choice"] as const;
 
 export const COMPONENTS = [
   "pump",

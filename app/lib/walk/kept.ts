@@ -1,3 +1,4 @@
+import type { LoadRules } from "../field-math/load-rules";
 import type { Guide } from "../guides/schema";
 import type { GuideTexts } from "../guides/text-tree";
 import { stepsToEnd } from "../guides/graph";
@@ -39,6 +40,8 @@ export interface OfflineKit {
   lastRigCode: string | null;
   guides: KitGuide[];
   causeNames: Record<string, string>;
+  /** The company's loading rules with this person's pace, for the load card with no signal. Older kits lack it. */
+  loadRules?: LoadRules;
 }
 
 /** The walk-through screen's data, from the server or rebuilt on the phone. */

@@ -22,7 +22,15 @@ describe("water weight", () => {
 describe("load card", () => {
   // Worked by hand: 50 lb fiber per 100 gal (common practice ceiling) → 3,000 gal of water per acre at
   // 1,500 lb/ac; a 1,500 gal tank covers 0.5 ac = 21,780 ft² (43,560 ft² per acre, NIST Handbook 44).
-  const card = loadCard({ areaSqFt: 2 * 43_560, tankGal: 1500, maxFiberLbPer100Gal: 50, materials: wsdoe, slopeWidthFt: 60, carrierRatingLb: 12_000, paceFt: 2.5 });
+  const card = loadCard({
+    areaSqFt: 2 * 43_560,
+    tankGal: 1500,
+    maxFiberLbPer100Gal: 50,
+    materials: wsdoe,
+    slopeWidthFt: 60,
+    carrierRatingLb: 12_000,
+    paceFt: 2.5,
+  });
 
   it("gives the fiber marks from the company's half and three-quarter rules", () => {
     expect(card.loads).toHaveLength(4);
