@@ -50,7 +50,7 @@ export default function CompanyPage({ loaderData, actionData }: Route.ComponentP
           </select>
         </FormField>
         <button type="submit" className="min-h-14 w-full rounded-lg bg-go text-lg font-bold text-white">
-          Save
+          Save time zone
         </button>
       </Form>
       <LoadRulesForm rules={company.loadRules} lastResult={actionData?.rulesResult ?? null} />

@@ -46,6 +46,8 @@ describe("every page at 360×640 passes axe with AAA contrast, has a title and o
       "/field-math/hose",
       "/field-math/suction",
       "/field-math/torque",
+      "/field-math/tip",
+      "/field-math/rate",
       "/account",
     ];
     expect(await checkPages(p, [...pages, `/cases/${started.id}/walk`, "/cases/00000000-0000-4000-8000-000000000000/walk"])).toEqual([]);

@@ -121,7 +121,7 @@ describe("admin screens", () => {
     expect((await Rig.findOne({ where: { code: "CF-11" } }))!.tankGal).toBe(1200);
     await p.goto(`${harness.app.url}/admin/company`);
     await p.getByLabel("Time zone").selectOption("America/Chicago");
-    await p.getByRole("button", { name: "Save" }).click();
+    await p.getByRole("button", { name: "Save time zone" }).click();
     await p.getByText("Times now show in America/Chicago").waitFor();
     await p.goto(`${harness.app.url}/cases`);
     await p
@@ -130,7 +130,7 @@ describe("admin screens", () => {
       .waitFor();
     await p.goto(`${harness.app.url}/admin/company`);
     await p.getByLabel("Time zone").selectOption("America/Denver");
-    await p.getByRole("button", { name: "Save" }).click();
+    await p.getByRole("button", { name: "Save time zone" }).click();
     await p.getByText("Times now show in America/Denver").waitFor();
     await p.close();
   });

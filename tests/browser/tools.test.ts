@@ -4,11 +4,11 @@ import { signIn, appAndBrowserForFile } from "../helpers/app";
 const harness = appAndBrowserForFile();
 
 describe("field math at 360 px", () => {
-  it("fills the load sheet from a rig and updates as the crew types", async () => {
+  it("fills the load card from a rig and updates as the crew types", async () => {
     const p = await harness.browser.context.newPage();
     await signIn(p, harness.app.url, "dana@cedarflats.example");
     await p.getByRole("link", { name: "Field math" }).click();
-    await p.getByRole("link", { name: /Load sheet/ }).click();
+    await p.getByRole("link", { name: /Load card/ }).click();
     await p.getByLabel("Filled from rig").selectOption("CF-07");
     await expect.poll(() => p.getByLabel("Tank size").inputValue()).toBe("1500");
     // 1 acre at 1,500 lb/ac of fiber, 50 lb per 100 gal: 750 lb per 1,500 gal load → 2 loads.
