@@ -203,6 +203,32 @@ const decimal = (precision: number, scale: number, field: string) => ({
   },
 });
 
+/** A rig's routine service rule: every so many engine hours, days, or whichever comes first. */
+export class ServiceRule extends Model<InferAttributes<ServiceRule>, InferCreationAttributes<ServiceRule>> {
+  declare id: CreationOptional<number>;
+  declare companyId: number;
+  declare rigId: number;
+  declare name: string;
+  declare everyHours: number | null;
+  declare everyDays: number | null;
+  declare retired: CreationOptional<boolean>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+/** One time a service was done, with the hour meter as read then (null on a rig with no meter). */
+export class ServiceRecord extends Model<InferAttributes<ServiceRecord>, InferCreationAttributes<ServiceRecord>> {
+  declare id: CreationOptional<number>;
+  declare companyId: number;
+  declare rigId: number;
+  declare ruleId: number;
+  declare doneAt: Date;
+  declare engineHours: number | null;
+  declare doneBy: number | null;
+  declare note: string | null;
+  declare createdAt: CreationOptional<Date>;
+}
+
 /** Binds every model to the one Sequelize instance. Called once, by db/index.ts. */
 export function initModels(sequelize: Sequelize) {
   Company.init(
@@ -365,6 +391,34 @@ export function initModels(sequelize: Sequelize) {
       ...timestamps,
     },
     { sequelize, tableName: "case_photos" },
+  );
+
+  ServiceRule.init(
+    {
+      id,
+      companyId: DataTypes.INTEGER.UNSIGNED,
+      rigId: DataTypes.INTEGER.UNSIGNED,
+      name: DataTypes.STRING(80),
+      everyHours: decimal(6, 1, "everyHours"),
+      everyDays: DataTypes.INTEGER.UNSIGNED,
+      retired: { type: DataTypes.BOOLEAN, defaultValue: false },
+      ...timestamps,
+    },
+    { sequelize, tableName: "service_rules" },
+  );
+  ServiceRecord.init(
+    {
+      id,
+      companyId: DataTypes.INTEGER.UNSIGNED,
+      rigId: DataTypes.INTEGER.UNSIGNED,
+      ruleId: DataTypes.INTEGER.UNSIGNED,
+      doneAt: DataTypes.DATE(3),
+      engineHours: decimal(8, 1, "engineHours"),
+      doneBy: DataTypes.INTEGER.UNSIGNED,
+      note: DataTypes.STRING(500),
+      createdAt: DataTypes.DATE,
+    },
+    { sequelize, tableName: "service_records", updatedAt: false },
   );
 
   Company.hasMany(User, { foreignKey: "companyId" });

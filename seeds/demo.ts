@@ -2,6 +2,7 @@
  * The demo scenario: two invented companies, their people and rigs. Runs only on an empty
  * database, so a second `npm start` keeps whatever was changed since.
  */
+import { seedServiceRules } from "./demo-service";
 import { db, Company, Rig, User } from "../db/index";
 import { hashPassword } from "../app/services/password.server";
 import type { z } from "zod";
@@ -148,6 +149,7 @@ export async function seedDemo(log: (line: string) => void = console.log): Promi
         const input = rigInputSchema.parse(rig);
         await Rig.create({ ...input, notes: input.notes ?? null, companyId: company.id }, { transaction });
       }
+      await seedServiceRules(company.id, transaction);
     }
   });
   log(`Seeded the demo: ${COMPANIES.length} companies, ${DEMO_PEOPLE.length} people.`);

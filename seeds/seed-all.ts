@@ -1,6 +1,7 @@
 import { loadLibrary } from "../app/lib/guides/files.server";
 import { seedDemo } from "./demo";
 import { seedDemoHistory } from "./demo-history";
+import { seedServiceHistory } from "./demo-service";
 import { importBuiltinGuides } from "./import-guides";
 
 /**
@@ -11,5 +12,8 @@ export async function seedAll({ history = false, log = console.log }: { history?
   const fresh = await seedDemo(log);
   const { created, updated } = await importBuiltinGuides(loadLibrary());
   if (created || updated) log(`Guide library: ${created} new, ${updated} updated.`);
-  if (fresh && history) await seedDemoHistory(new Date(), log);
+  if (fresh && history) {
+    await seedDemoHistory(new Date(), log);
+    log(`Demo service records: ${await seedServiceHistory(new Date())}.`);
+  }
 }

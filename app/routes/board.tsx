@@ -13,6 +13,8 @@ import { causeList } from "~/services/guides.server";
 import { listRigs } from "~/services/rigs.server";
 import { useTimes } from "~/components/use-time-zone";
 import { can } from "~/lib/permissions";
+import { serviceToDo } from "~/services/service.server";
+import { ServiceToDo } from "~/components/service-to-do";
 import type { Route } from "./+types/board";
 
 export async function loader({ request, context }: Route.LoaderArgs) {
@@ -27,7 +29,7 @@ export async function loader({ request, context }: Route.LoaderArgs) {
     if (!formError) throw thrown;
     q = boardQuerySchema.parse({});
   }
-  const [board, rigs] = await Promise.all([boardFor(user, q), listRigs(user, { includeRetired: true })]);
+  const [board, rigs, service] = await Promise.all([boardFor(user, q), listRigs(user, { includeRetired: true }), serviceToDo(user)]);
   return {
     board,
     formError,
@@ -35,6 +37,7 @@ export async function loader({ request, context }: Route.LoaderArgs) {
     rigs: rigs.map((r) => r.code),
     causeNames: Object.fromEntries(causeList().map((c) => [c.code, c.name])),
     canSendDigest: can(user, "send-digest"),
+    service,
   };
 }
 
@@ -60,6 +63,7 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
       <PageTitle lead={`${window.from} to ${window.to}${window.rig ? ` · ${window.rig}` : " · all rigs"} · ${board.fleet.cases.toLocaleString("en-US")} cases`}>
         Fault board
       </PageTitle>
+      <ServiceToDo lines={loaderData.service} />
 
       <section aria-label="What to act on" className="grid gap-3 sm:grid-cols-2">
         <div className="rounded-lg border-4 border-stop bg-paper p-4">

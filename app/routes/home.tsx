@@ -6,6 +6,8 @@ import { hiddenSections } from "~/services/env.server";
 import { lastRigIdFor } from "~/services/cases.server";
 import { requireUser } from "~/services/guards.server";
 import { listRigs } from "~/services/rigs.server";
+import { serviceToDo } from "~/services/service.server";
+import { ServiceToDo } from "~/components/service-to-do";
 import { PhoneReadiness } from "~/components/offline/phone-readiness";
 import { serverOrPhone } from "~/components/offline/server-or-phone";
 import { lastRigOnPhone } from "~/lib/walk/kept";
@@ -13,7 +15,7 @@ import type { Route } from "./+types/home";
 
 export async function loader({ request, context }: Route.LoaderArgs) {
   const user = await requireUser({ request, context });
-  const [rigs, lastRigId] = await Promise.all([listRigs(user), lastRigIdFor(user)]);
+  const [rigs, lastRigId, service] = await Promise.all([listRigs(user), lastRigIdFor(user), serviceToDo(user)]);
   return {
     personId: user.id,
     role: user.role,
@@ -24,6 +26,7 @@ export async function loader({ request, context }: Route.LoaderArgs) {
     ),
     lastRigCode: rigs.find((r) => r.id === lastRigId)?.code ?? null,
     hidden: hiddenSections(),
+    service,
   };
 }
 
@@ -47,12 +50,14 @@ export async function clientLoader({ serverLoader }: Route.ClientLoaderArgs) {
       ),
       lastRigCode: last,
       hidden: kit.hidden,
+      // What service is due needs the server's records: with no signal the list waits.
+      service: [],
     };
   });
 }
 
 export default function Home({ loaderData }: Route.ComponentProps) {
-  const { rigs, role, firstName, lastRigCode, hidden, personId } = loaderData;
+  const { rigs, role, firstName, lastRigCode, hidden, personId, service } = loaderData;
   const more = navFor(role).filter((item) => !forEveryone(item) && !hidden.includes(item.to));
   return (
     <>
@@ -80,6 +85,7 @@ export default function Home({ loaderData }: Route.ComponentProps) {
           ))}
         </ul>
       )}
+      <ServiceToDo lines={service} />
       {more.length ? (
         <section aria-labelledby="more-h" className="mt-8 rounded-lg bg-paper p-4">
           <h2 id="more-h" className="text-xl font-bold">

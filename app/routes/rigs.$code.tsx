@@ -6,6 +6,8 @@ import { recentRigCases } from "~/services/cases.server";
 import { fail, requirePermission, requireUser } from "~/services/guards.server";
 import { ConfirmAction } from "~/components/ui/confirm-action";
 import { findRig, setRigRetired } from "~/services/rigs.server";
+import { serviceLines } from "~/services/service.server";
+import { serviceCounts } from "~/lib/rigs/service";
 import { useTimes } from "~/components/use-time-zone";
 import { readForm } from "~/services/read-request.server";
 import { can } from "~/lib/permissions";
@@ -19,7 +21,8 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
   const user = await requireUser({ request, context });
   const found = await findRig(user, params.code);
   const rig: RigView = { ...walkRigOf(found), mount: found.mount, pumpKind: found.pumpKind, retired: found.retired, notes: found.notes };
-  return { rig, canEdit: can(user, "edit-rigs"), cases: await recentRigCases(user, found.id), fromPhone: false };
+  const [cases, service] = await Promise.all([recentRigCases(user, found.id), serviceLines(user, { rigId: found.id })]);
+  return { rig, canEdit: can(user, "edit-rigs"), cases, service: serviceCounts(service) as ReturnType<typeof serviceCounts> | null, fromPhone: false };
 }
 
 type RigView = KitRig & { retired: boolean; notes: string | null };
@@ -30,7 +33,7 @@ export async function clientLoader({ params, serverLoader }: Route.ClientLoaderA
     const kept = kit.rigs.find((r) => r.code === params.code.toUpperCase());
     if (!kept) return null;
     const rig: RigView = { ...kept, retired: false, notes: null };
-    return { rig, canEdit: false, cases: [], fromPhone: true };
+    return { rig, canEdit: false, cases: [], service: null, fromPhone: true };
   });
 }
 
@@ -46,7 +49,7 @@ export async function action({ request, params, context }: Route.ActionArgs) {
 
 export default function RigPage({ loaderData }: Route.ComponentProps) {
   const times = useTimes();
-  const { rig, canEdit, cases, fromPhone } = loaderData;
+  const { rig, canEdit, cases, service, fromPhone } = loaderData;
   // A page the phone kept earlier, opened with no signal, says so: its hours and cases may be old.
   const stale = !useOnline() && !fromPhone;
   const specs: [string, string][] = [
@@ -129,6 +132,23 @@ export default function RigPage({ loaderData }: Route.ComponentProps) {
         )}
         {rig.notes ? <p className="mt-4 whitespace-pre-line">{rig.notes}</p> : null}
       </section>
+      {service ? (
+        <section aria-labelledby="service" className="mt-5 rounded-lg border-2 border-ink bg-paper p-4">
+          <h2 id="service" className="text-xl font-bold">
+            Service
+          </h2>
+          <p className={service.overdue ? "font-bold text-stop" : undefined}>
+            {service.total === 0
+              ? "No routine service set for this rig."
+              : service.toDo === 0
+                ? `All ${service.total} up to date.`
+                : `${service.toDo} of ${service.total} to do${service.overdue ? `, ${service.overdue} overdue` : ""}.`}
+          </p>
+          <Link to={`/rigs/${rig.code}/service`} className="mt-2 flex min-h-12 items-center font-bold">
+            Service for {rig.code}: what is due, record it done
+          </Link>
+        </section>
+      ) : null}
       <section aria-labelledby="recent" className="mt-5">
         <h2 id="recent" className="text-xl font-bold">
           Recent cases

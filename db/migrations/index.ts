@@ -17,6 +17,7 @@ import * as m015 from "./015-field-math-name";
 import * as m016 from "./016-rig-pump-and-agitator";
 import * as m017 from "./017-photo-phone-id";
 import * as m018 from "./018-load-rules-and-pace";
+import * as m019 from "./019-service-rules";
 
 export interface Migration {
   name: string;
@@ -44,4 +45,5 @@ export const migrations: Migration[] = [
   { name: "016-rig-pump-and-agitator", ...m016 },
   { name: "017-photo-phone-id", ...m017 },
   { name: "018-load-rules-and-pace", ...m018 },
+  { name: "019-service-rules", ...m019 },
 ];

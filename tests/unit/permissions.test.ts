@@ -20,10 +20,12 @@ describe("the permission map", () => {
     expect(navFor("crew").map((i) => i.label)).toEqual(["Start a fix", "Rigs", "Field math"]);
     expect(navFor("admin")).toHaveLength(NAV_ITEMS.length);
     expect([landingFor("crew"), landingFor("trainer"), landingFor("supervisor"), landingFor("admin")]).toEqual(["/", "/", "/board", "/board"]);
-    expect(roleDescription("crew")).toBe("start a fix on a rig and walk through a guide, see the rigs and use the field math");
+    expect(roleDescription("crew")).toBe(
+      "start a fix on a rig and walk through a guide, see the rigs, use the field math and record routine service done on a rig",
+    );
     expect(roleDescription("trainer")).toBe("also write and edit guides on the guide desk");
     expect(roleDescription("admin")).toMatch(
-      /^also add, edit and retire rigs, invite people and set their roles, set the company's time zone and send the weekly digest at once$/,
+      /^also add, edit and retire rigs, invite people and set their roles, set the company's time zone and loading rules and send the weekly digest at once$/,
     );
   });
 });

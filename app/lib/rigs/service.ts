@@ -1,0 +1,127 @@
+import { z } from "zod";
+import { fmt } from "../field-math/units";
+import { isoInZone } from "../format";
+
+/** Where a piece of routine service stands, worst first. */
+export const SERVICE_STATUSES = ["overdue", "due", "never", "soon", "ok", "no-meter"] as const;
+export type ServiceStatus = (typeof SERVICE_STATUSES)[number];
+export const SERVICE_STATUS_LABELS: Record<ServiceStatus, string> = {
+  overdue: "Overdue",
+  due: "Due now",
+  never: "Never recorded",
+  soon: "Due soon",
+  ok: "Done",
+  "no-meter": "No hour meter",
+};
+/** Statuses that put a rig on the crew's home and the supervisor's board. */
+export const NEEDS_DOING: readonly ServiceStatus[] = ["overdue", "due", "never"];
+
+/** A company's rule for one rig: every so many engine hours, days, or whichever comes first. */
+export const serviceRuleSchema = z
+  .object({
+    name: z.string({ error: "Name the service." }).trim().min(1, "Name the service.").max(80, "Keep the name under 80 characters."),
+    everyHours: z
+      .number({ error: "Give the engine hours between services, or leave it blank." })
+      .min(1, "At least 1 engine hour between services.")
+      .max(5000, "Over 5,000 engine hours between services is not plausible.")
+      .nullable()
+      .optional()
+      .transform((v) => v ?? null),
+    everyDays: z
+      .number({ error: "Give the days between services, or leave it blank." })
+      .int("Give whole days.")
+      .min(1, "At least 1 day between services.")
+      .max(730, "Over two years between services is not plausible.")
+      .nullable()
+      .optional()
+      .transform((v) => v ?? null),
+  })
+  .refine((r) => r.everyHours !== null || r.everyDays !== null, { path: ["everyHours"], message: "Give the engine hours, the days, or both." });
+export type ServiceRuleInput = z.infer<typeof serviceRuleSchema>;
+
+/** Recording a service done: the engine hours read at the time (blank on a rig with no meter) and a note. */
+export const serviceDoneSchema = z.object({
+  engineHours: z
+    .number({ error: "Give the engine hours as read now, or leave it blank." })
+    .min(0, "Engine hours cannot be negative.")
+    .max(100_000, "Over 100,000 engine hours is not plausible.")
+    .nullable()
+    .optional()
+    .transform((v) => v ?? null),
+  note: z.string().trim().max(500, "Keep the note under 500 characters.").optional(),
+});
+
+export interface ServiceDue {
+  status: ServiceStatus;
+  /** Engine hours until due (negative: over by), when the rule counts hours and the rig has a meter. */
+  hoursLeft: number | null;
+  /** Calendar days until due (negative: over by), when the rule counts days. */
+  daysLeft: number | null;
+}
+
+const rank = (s: ServiceStatus) => SERVICE_STATUSES.indexOf(s);
+const worst = (a: ServiceStatus, b: ServiceStatus) => (rank(a) <= rank(b) ? a : b);
+/** Left of an interval: over is overdue, exactly nothing left is due, the last tenth is soon. */
+const statusOf = (left: number, soonWithin: number): ServiceStatus => (left < 0 ? "overdue" : left === 0 ? "due" : left <= soonWithin ? "soon" : "ok");
+
+/** Whole calendar days between two instants as the company's clock reads them. */
+export function calendarDaysBetween(from: Date | string, to: Date | string, timeZone: string): number {
+  const day = (at: Date | string) => Date.parse(`${isoInZone(at, timeZone).slice(0, 10)}T00:00:00Z`);
+  return Math.round((day(to) - day(from)) / 86_400_000);
+}
+
+/**
+ * When a rule is next due: hours since the last service against the rig's hour meter now, and
+ * calendar days since it in the company's zone; with both, whichever is worse decides.
+ */
+export function serviceDue(
+  rule: { everyHours: number | null; everyDays: number | null },
+  last: { doneAt: Date | string; engineHours: number | null } | null,
+  rig: { hasHourMeter: boolean; engineHours: number },
+  now: Date,
+  timeZone: string,
+): ServiceDue {
+  if (!last) return { status: "never", hoursLeft: null, daysLeft: null };
+  let status: ServiceStatus | null = null;
+  let hoursLeft: number | null = null;
+  let daysLeft: number | null = null;
+  if (rule.everyHours !== null && rig.hasHourMeter && last.engineHours !== null) {
+    // Round to the meter's tenth so 250.0 hours after is exactly due, not a float's hair over.
+    hoursLeft = Math.round((rule.everyHours - (rig.engineHours - last.engineHours)) * 10) / 10;
+    status = statusOf(hoursLeft, rule.everyHours / 10);
+  }
+  if (rule.everyDays !== null) {
+    daysLeft = rule.everyDays - calendarDaysBetween(last.doneAt, now, timeZone);
+    const byDays = statusOf(daysLeft, Math.floor(rule.everyDays / 10));
+    status = status ? worst(status, byDays) : byDays;
+  }
+  return { status: status ?? "no-meter", hoursLeft, daysLeft };
+}
+
+/** "12.5 h left", "over by 3 days", in the words a crew reads. */
+export function dueText(due: ServiceDue): string {
+  if (due.status === "never") return "never recorded";
+  if (due.status === "no-meter") return "counts engine hours: this rig has no hour meter";
+  const parts: string[] = [];
+  const fmt = (n: number, unit: string) => `${Math.abs(n).toLocaleString("en-US", { maximumFractionDigits: 1 })} ${unit}${Math.abs(n) === 1 ? "" : "s"}`;
+  if (due.hoursLeft !== null) parts.push(due.hoursLeft < 0 ? `over by ${fmt(due.hoursLeft, "engine hour")}` : `${fmt(due.hoursLeft, "engine hour")} left`);
+  if (due.daysLeft !== null)
+    parts.push(due.daysLeft < 0 ? `over by ${fmt(due.daysLeft, "day")}` : due.daysLeft === 0 ? "due today" : `${fmt(due.daysLeft, "day")} left`);
+  return parts.join(", ");
+}
+
+/** "every 50 engine hours", "every day", "every 250 engine hours or 365 days, whichever first". */
+export function intervalWords(line: { everyHours: number | null; everyDays: number | null }): string {
+  const hours = line.everyHours !== null ? `${fmt(line.everyHours, 1)} engine hours` : null;
+  const days = line.everyDays !== null ? (line.everyDays === 1 ? "day" : `${line.everyDays} days`) : null;
+  return hours && days ? `every ${hours} or ${days}, whichever first` : `every ${hours ?? days}`;
+}
+
+/** How many of a rig's services need doing now, and how many are overdue. */
+export function serviceCounts(lines: { due: ServiceDue }[]) {
+  return {
+    total: lines.length,
+    toDo: lines.filter((l) => NEEDS_DOING.includes(l.due.status)).length,
+    overdue: lines.filter((l) => l.due.status === "overdue").length,
+  };
+}
