@@ -38,7 +38,7 @@ export default function CompanyPage({ loaderData, actionData }: Route.ComponentP
   return (
     <>
       <PageTitle lead={company.name}>Company settings</PageTitle>
-      <DoneNote message={actionData?.message} />
+      <DoneNote message={actionData?.rulesResult ? null : actionData?.message} />
       <Form method="post" {...getFormProps(form)} className="space-y-4 rounded-lg border-2 border-ink bg-paper p-4">
         <FormField field={fields.timeZone} label="Time zone" hint="Screens, e-mails, the digest and CSV files show times in this zone.">
           <select {...getSelectProps(fields.timeZone)} key={fields.timeZone.key} className={inputClass}>
@@ -53,7 +53,7 @@ export default function CompanyPage({ loaderData, actionData }: Route.ComponentP
           Save time zone
         </button>
       </Form>
-      <LoadRulesForm rules={company.loadRules} lastResult={actionData?.rulesResult ?? null} />
+      <LoadRulesForm rules={company.loadRules} lastResult={actionData?.rulesResult ?? null} message={actionData?.rulesResult ? actionData.message : null} />
     </>
   );
 }
@@ -62,9 +62,11 @@ export default function CompanyPage({ loaderData, actionData }: Route.ComponentP
 function LoadRulesForm({
   rules,
   lastResult,
+  message,
 }: {
   rules: Route.ComponentProps["loaderData"]["company"]["loadRules"];
   lastResult: SubmissionResult<string[]> | null;
+  message: string | null;
 }) {
   const [form, fields] = useCheckedForm(loadRulesSchema, { id: "load-rules", lastResult, defaultValue: rules });
   const order = fields.order.getFieldList();
@@ -125,6 +127,7 @@ function LoadRulesForm({
                   <div className="mt-2 grid grid-cols-2 gap-2">
                     <button
                       {...form.reorder.getButtonProps({ name: fields.order.name, from: n, to: n - 1 })}
+                      aria-label={`Move ${LOAD_STEP_LABELS[step] ?? step} up`}
                       disabled={n === 1}
                       className="min-h-12 rounded-md border-2 border-ink bg-paper font-bold disabled:opacity-40"
                     >
@@ -132,6 +135,7 @@ function LoadRulesForm({
                     </button>
                     <button
                       {...form.reorder.getButtonProps({ name: fields.order.name, from: n, to: n + 1 })}
+                      aria-label={`Move ${LOAD_STEP_LABELS[step] ?? step} down`}
                       disabled={n === order.length - 1}
                       className="min-h-12 rounded-md border-2 border-ink bg-paper font-bold disabled:opacity-40"
                     >
@@ -146,6 +150,8 @@ function LoadRulesForm({
           })}
         </ol>
       </fieldset>
+      {/* Said beside the button pressed: the top of this long form is out of sight. */}
+      <DoneNote message={message} />
       <button type="submit" className="min-h-14 w-full rounded-lg bg-go text-lg font-bold text-white">
         Save loading rules
       </button>

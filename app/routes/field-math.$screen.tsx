@@ -13,14 +13,17 @@ import { loadRulesFor } from "~/services/company.server";
 import { DEFAULT_LOAD_RULES } from "~/lib/field-math/load-rules";
 import { serverOrPhone } from "~/components/offline/server-or-phone";
 import { rigSpecsOf } from "~/lib/rigs/specs";
+import { lastRigOnPhone } from "~/lib/walk/kept";
+import { lastRigCodeFor } from "~/services/cases.server";
 import type { Route } from "./+types/field-math.$screen";
 
 export async function loader({ request, params, context }: Route.LoaderArgs) {
   const user = await requireUser({ request, context });
   const screen = fieldMathScreen(params.screen);
   if (!screen) notFound("That field-math screen");
-  const [rigs, { ownPace: _, ...rules }] = await Promise.all([rigSpecsFor(user), loadRulesFor(user)]);
-  const wanted = new URL(request.url).searchParams.get("rig")?.toUpperCase();
+  const [rigs, { ownPace: _, ...rules }, lastRig] = await Promise.all([rigSpecsFor(user), loadRulesFor(user), lastRigCodeFor(user)]);
+  // The rig asked for, else the one this person last worked on (usually the one at hand), else the first.
+  const wanted = new URL(request.url).searchParams.get("rig")?.toUpperCase() ?? lastRig;
   const rig = rigs.find((r) => r.code === wanted) ?? rigs[0] ?? null;
   return { screen, rigs: rigs.map((r) => ({ code: r.code, name: r.name })), rig, rules };
 }
@@ -30,7 +33,7 @@ export async function clientLoader({ request, params, serverLoader }: Route.Clie
   return serverOrPhone(serverLoader, (kit) => {
     const screen = fieldMathScreen(params.screen);
     if (!screen) return null;
-    const wanted = new URL(request.url).searchParams.get("rig")?.toUpperCase();
+    const wanted = new URL(request.url).searchParams.get("rig")?.toUpperCase() ?? lastRigOnPhone(window.localStorage, kit.madeAt) ?? kit.lastRigCode;
     const rig = kit.rigs.find((r) => r.code === wanted) ?? kit.rigs[0] ?? null;
     return {
       screen,

@@ -1,3 +1,4 @@
+import { SeedClockBar } from "~/components/field-math/seed-clock";
 import { Form, Link, NavLink, Outlet, useLocation, useRouteLoaderData } from "react-router";
 import { ErrorPanel } from "~/components/error-panel";
 import { useKeptSync } from "~/components/offline/kept-sync";
@@ -51,18 +52,26 @@ function ShellFrame({ user, hidden, children }: Awaited<ReturnType<typeof loader
   return (
     <div className="min-h-dvh">
       <header className="no-print bg-go text-white">
-        <div className="mx-auto flex max-w-3xl items-center justify-between gap-2 px-3 pt-2">
-          <a href="/" className="text-xl font-bold text-white no-underline">
+        <div className="mx-auto flex max-w-3xl items-center gap-2 px-3 pt-2">
+          <a href="/" className="flex min-h-12 items-center text-xl font-bold text-white no-underline">
             Tankside
           </a>
-          <p className="truncate text-right text-sm leading-tight">
-            <Link to="/account" className="font-bold text-white underline" aria-label={`Your account: ${user.name}`}>
-              {user.name}
-            </Link>{" "}
-            · {ROLE_LABELS[user.role]}
-            <span className="sr-only"> at </span>
-            <span className="block">{user.companyName}</span>
-          </p>
+          {/* The person's name is the way to their account; a target as tall as a gloved thumb. */}
+          <Link
+            to="/account"
+            className="ml-auto flex min-h-12 min-w-0 flex-col justify-center text-right text-sm leading-tight text-white no-underline"
+            aria-label={`Your account: ${user.name}, ${ROLE_LABELS[user.role]} at ${user.companyName}`}
+          >
+            <span className="truncate font-bold underline">{user.name}</span>
+            <span className="truncate">
+              {ROLE_LABELS[user.role]} · {user.companyName}
+            </span>
+          </Link>
+          <Form method="post" action="/logout" onSubmit={() => void forgetPhoneKit()} className="shrink-0">
+            <button type="submit" className="min-h-12 rounded-md border-2 border-white px-2 font-bold">
+              Sign out
+            </button>
+          </Form>
         </div>
         <nav aria-label="Main" className="mx-auto max-w-3xl px-1 pb-1">
           {/* One row that scrolls sideways on a phone, so the menu does not push the page down. */}
@@ -82,17 +91,11 @@ function ShellFrame({ user, hidden, children }: Awaited<ReturnType<typeof loader
                   </NavLink>
                 </li>
               ))}
-            <li className="ml-auto">
-              <Form method="post" action="/logout" onSubmit={() => void forgetPhoneKit()}>
-                <button type="submit" className="min-h-12 rounded-md px-2 font-bold underline">
-                  Sign out
-                </button>
-              </Form>
-            </li>
           </ul>
         </nav>
       </header>
       <NoSignalBanner />
+      <SeedClockBar />
       <main className="mx-auto max-w-3xl px-3 py-4">{children}</main>
     </div>
   );

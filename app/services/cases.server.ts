@@ -258,6 +258,13 @@ export async function lastRigIdFor(user: SessionUser): Promise<number | null> {
   return last?.rigId ?? null;
 }
 
+/** The unit code of the rig this person last started a fix on, if it is still active. */
+export async function lastRigCodeFor(user: SessionUser): Promise<string | null> {
+  const id = await lastRigIdFor(user);
+  if (id === null) return null;
+  return (await Rig.findOne({ where: ownedBy(user, { id, retired: false }), attributes: ["code"] }))?.code ?? null;
+}
+
 /** A supervisor marks a hand-off as dealt with, so it leaves the board's open list. */
 export async function resolveHandoff(user: SessionUser, caseId: string, note: string | null) {
   const { found } = await findCaseWithGuide(user, caseId);

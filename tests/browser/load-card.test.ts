@@ -23,15 +23,12 @@ describe("the load card at 360×640", () => {
     await p.getByLabel("Filled from rig").selectOption("CF-07");
     // 1 acre at WSDOE rates in CF-07's 1,500 gal tank: 2 loads of 15 bags of fiber, water to the 750 gal half mark first.
     await p.getByTestId("load-count").filter({ hasText: "2 tank loads" }).waitFor();
-    const first = p.getByRole("region", { name: "Load 1" });
+    const first = p.getByRole("region", { name: "Load 1–2" });
     await first.getByText("Water to 750 gal (the 50 % mark), agitator running.").waitFor();
     await first.getByText(/Wood fiber mulch: 15 bags \(750 lb\)\. From 750 gal; all of it in by 1,125 gal/).waitFor();
-    // Seed: 60 lb a load of 50 lb bags → 1 bag, then 2 (the leftover carried, the last load rounded up).
-    await first.getByText(/Seed mix: 1 bag \(50 lb\)/).waitFor();
-    await p
-      .getByRole("region", { name: "Load 2" })
-      .getByText(/Seed mix: 2 bags \(100 lb\)/)
-      .waitFor();
+    // Seed: 60 lb a load of 50 lb bags → 1 bag and 10 lb weighed, on both loads (one recipe).
+    await first.getByText("Seed mix: 1 bag + 10 lb from an open bag (60 lb). Start the seed clock: spray within 30 minutes.").waitFor();
+    await first.getByRole("heading", { name: "Loads 1–2" }).waitFor();
     await first.getByText(/a strip 363 ft long, about 145 paces/).waitFor();
     expect(await p.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(360);
 
@@ -39,7 +36,15 @@ describe("the load card at 360×640", () => {
     await expect.poll(() => p.getByTestId("seed-clock").innerText()).toMatch(/^(29:5\d|30:00)$/);
     await p.reload();
     await expect.poll(() => p.getByTestId("seed-clock").innerText()).toMatch(/^(29:[45]\d|30:00)$/);
+    // Off the card (a guide opened because the pump plugged), the clock stays in sight and one tap from the card.
+    await p.goto(`${harness.app.url}/rigs/CF-07/fix`);
+    await p
+      .getByTestId("seed-clock-bar")
+      .filter({ hasText: /Seed clock · .*: 29:[0-5]\d left/ })
+      .click();
+    await p.waitForURL(/\/field-math\/load$/);
     await p.getByRole("button", { name: "Load sprayed: stop the clock" }).click();
+    await p.getByRole("button", { name: "Yes, load sprayed" }).click();
     await p.getByRole("button", { name: /Seed is in/ }).waitFor();
     await p.close();
   });
@@ -98,8 +103,8 @@ describe("the company's loading rules", () => {
     await crew.goto(`${harness.app.url}/field-math/load?rig=CF-07`);
     await crew.getByRole("button", { name: "Seed is in: start the 25-minute clock" }).waitFor();
     await crew
-      .getByRole("region", { name: "Load 1" })
       .getByText(/spray within 25 minutes/)
+      .first()
       .waitFor();
     await crew.close();
   });

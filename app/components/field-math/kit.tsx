@@ -10,8 +10,17 @@ export function tryFieldMath<T>(fn: (input: unknown) => T, input: unknown): { re
   }
 }
 
-/** "12" → 12, "" or "abc" → NaN (which the calculators reject by name). */
-export const toNumber = (s: string) => (s.trim() === "" ? Number.NaN : Number(s.replace(/,/g, "")));
+/**
+ * "12" → 12, "1,200" → 1200, "1,5" → 1.5 (a decimal comma, as many phones type it); "" or "abc" →
+ * NaN (which the calculators reject by name). A comma followed by exactly three digits groups thousands.
+ */
+export function toNumber(s: string): number {
+  const t = s.trim();
+  if (t === "") return Number.NaN;
+  if (/^[-+]?\d{1,3}(,\d{3})+(\.\d+)?$/.test(t)) return Number(t.replace(/,/g, ""));
+  if (/^[-+]?\d+,\d+$/.test(t)) return Number(t.replace(",", "."));
+  return Number(t);
+}
 
 export function NumberField({
   id,

@@ -1,5 +1,5 @@
-import { useState } from "react";
-import { loadCard, loadNumbers, loadSteps, type CardLoad, type CardMaterial, type LoadCard } from "~/lib/field-math/load-card";
+import { useEffect, useState } from "react";
+import { lbText, loadCard, loadNumbers, loadSteps, type CardLoad, type CardMaterial, type LoadCard } from "~/lib/field-math/load-card";
 import { DEFAULT_LOAD_RULES, MATERIAL_KIND_LABELS, MATERIAL_KINDS, type LoadRules, type MaterialKind } from "~/lib/field-math/load-rules";
 import { acresToSqFt, fmt, galToL, lbPerAcreToKgPerHa, lbToKg, sqFtToAcres, sqMToSqFt } from "~/lib/field-math/units";
 import { NumberField, ResultBox, SourceNote, toNumber, tryFieldMath } from "./kit";
@@ -24,6 +24,25 @@ const STARTER: Row[] = [
 const AREA_UNITS = { sqft: "ft²", acres: "acres", sqm: "m²" } as const;
 const today = () => new Date().toLocaleDateString("en-CA");
 
+/** What the crew typed, kept on the phone so a trip to another screen or a reload does not lose it. */
+const KEPT_INPUTS = "tankside.load-card";
+interface KeptInputs {
+  job: string;
+  area: string;
+  areaUnit: keyof typeof AREA_UNITS;
+  slopeWidth: string;
+  waterRate: string;
+  rows: Row[];
+}
+function keptInputs(): KeptInputs | null {
+  try {
+    const kept = JSON.parse(localStorage.getItem(KEPT_INPUTS) ?? "null") as KeptInputs | null;
+    return kept && Array.isArray(kept.rows) && kept.rows.length ? kept : null;
+  } catch {
+    return null;
+  }
+}
+
 /** The load sheet as the tank-side card: marks, whole bags, order, weight, strips and the seed clock; prints on one page. */
 export function LoadCardMath({ rig, rules = DEFAULT_LOAD_RULES, compact = false }: { rig?: RigSpecs; rules?: LoadRules; compact?: boolean }) {
   const [job, setJob] = useState("");
@@ -33,8 +52,27 @@ export function LoadCardMath({ rig, rules = DEFAULT_LOAD_RULES, compact = false 
   const [tank, setTank] = useState(String(rig?.tankGal ?? 1000));
   const [ceiling, setCeiling] = useState(String(rules.fiberCeilingLbPer100Gal));
   const [slopeWidth, setSlopeWidth] = useState("60");
+  const [waterRate, setWaterRate] = useState("");
   const [rows, setRows] = useState<Row[]>(STARTER);
   const setRow = (key: number, change: Partial<Row>) => setRows(rows.map((r) => (r.key === key ? { ...r, ...change } : r)));
+  // The job, area and materials come back as the crew left them (the full screen only; a guide's figure starts fresh).
+  const [restored, setRestored] = useState(compact);
+  useEffect(() => {
+    if (compact) return;
+    const kept = keptInputs();
+    if (kept) {
+      setJob(kept.job);
+      setArea(kept.area);
+      setAreaUnit(kept.areaUnit);
+      setSlopeWidth(kept.slopeWidth);
+      setWaterRate(kept.waterRate ?? "");
+      setRows(kept.rows);
+    }
+    setRestored(true);
+  }, [compact]);
+  useEffect(() => {
+    if (restored && !compact) localStorage.setItem(KEPT_INPUTS, JSON.stringify({ job, area, areaUnit, slopeWidth, waterRate, rows } satisfies KeptInputs));
+  }, [restored, compact, job, area, areaUnit, slopeWidth, waterRate, rows]);
 
   const a = toNumber(area);
   const areaSqFt = areaUnit === "acres" ? acresToSqFt(a) : areaUnit === "sqm" ? sqMToSqFt(a) : a;
@@ -43,6 +81,7 @@ export function LoadCardMath({ rig, rules = DEFAULT_LOAD_RULES, compact = false 
     tankGal: toNumber(tank),
     maxFiberLbPer100Gal: toNumber(ceiling),
     ...(slopeWidth.trim() ? { slopeWidthFt: toNumber(slopeWidth) } : {}),
+    ...(waterRate.trim() ? { waterGalPerAcre: toNumber(waterRate) } : {}),
     carrierRatingLb: rig?.carrierRatingLb ?? null,
     paceFt: rules.paceFt,
     materials: rows.map((row) => ({
@@ -104,8 +143,21 @@ export function LoadCardMath({ rig, rules = DEFAULT_LOAD_RULES, compact = false 
           value={tank}
           onChange={setTank}
           unit="gal"
-          beside={`${fmt(galToL(toNumber(tank) || 0))} L`}
+          beside={
+            rig && toNumber(tank) > rig.tankGal
+              ? `More than ${rig.code}'s ${fmt(rig.tankGal)} gal tank: check the figure.`
+              : `${fmt(galToL(toNumber(tank) || 0))} L`
+          }
           error={errors.tankGal}
+        />
+        <NumberField
+          id="load-water-rate"
+          label="Water per acre (optional)"
+          value={waterRate}
+          onChange={setWaterRate}
+          unit="gal"
+          beside="From the spec, if it sets one. Blank: as much as the fiber needs under the ceiling."
+          error={errors.waterGalPerAcre}
         />
         <NumberField
           id="load-ceiling"
@@ -216,18 +268,24 @@ function CardResult({
   const over = card.loads.some((l) => l.overRatingLb !== null);
   return (
     <>
-      {hasSeed ? <SeedClock limitMinutes={rules.seedLimitMinutes} label={job.trim() || (rig ? rig.code : "this load")} /> : null}
       <ResultBox tone={over ? "bad" : "plain"}>
         <div className="load-card">
           <p className="hidden text-2xl font-bold print:block">
-            Load card · {job.trim() || "Job not named"} · {date} · {rig ? `${rig.code} ${rig.name}` : "rig not chosen"}
+            Load card · {job.trim() || "Job not named"} · <span className="whitespace-nowrap">{date}</span> ·{" "}
+            <span className="whitespace-nowrap">{rig ? `${rig.code} ${rig.name}` : "rig not chosen"}</span>
           </p>
           <p className="text-2xl font-bold" data-testid="load-count">
             {card.sheet.loads} tank load{card.sheet.loads === 1 ? "" : "s"}
           </p>
           <p>
-            A full load: fill to {fmt(first.fillToGal)} gal, covers {fmt(first.areaSqFt)} ft² ({fmt(first.acres, 3)} ac).
+            {card.sheet.loads === 1 ? "The load" : "A full load"}: fill to {fmt(first.fillToGal)} gal, covers {fmt(first.areaSqFt)} ft² ({fmt(first.acres, 3)}{" "}
+            ac).
           </p>
+          {hasSeed ? (
+            <div className="mt-2">
+              <SeedClock limitMinutes={rules.seedLimitMinutes} label={job.trim() || (rig ? rig.code : "this load")} />
+            </div>
+          ) : null}
           {card.notes.map((note) => (
             <p
               key={note}
@@ -244,8 +302,14 @@ function CardResult({
           </div>
           <PrintedLoads card={card} rules={rules} />
           <p className="mt-3">
-            Totals: {fmt(card.sheet.totals.waterGal)} gal water ({fmt(galToL(card.sheet.totals.waterGal))} L);{" "}
-            {card.totals.map((m) => `${m.name} ${m.bags !== null ? `${m.bags} bags, ` : ""}${fmt(m.lb)} lb (${fmt(lbToKg(m.lb))} kg)`).join("; ")}.
+            Totals: {fmt(card.waterGal)} gal water ({fmt(galToL(card.waterGal))} L);{" "}
+            {card.totals
+              .map(
+                (m) =>
+                  `${m.name} ${m.bags ? `${m.bags} bag${m.bags === 1 ? "" : "s"}${m.weighLb > 0 ? ` + ${lbText(m.weighLb)}` : ""}, ` : ""}${lbText(m.lb)} (${fmt(lbToKg(m.lb), m.lb < 10 ? 1 : 0)} kg)`,
+              )
+              .join("; ")}
+            .
           </p>
           {compact ? null : (
             <p className="text-sm print:hidden">
@@ -257,8 +321,9 @@ function CardResult({
           <div className="print:hidden">
             <SourceNote>
               Seed limit {rules.seedLimitMinutes} minutes and the loading order: your company&apos;s rules (defaults from the USDA NRCS Wyoming hydroseeding
-              fact sheet; the half and three-quarter marks and the fiber ceiling are common practice). Area per load = fiber ÷ rate × 43,560 ft². Water weighs{" "}
-              {fmt(card.waterLbPerGal, 3)} lb/gal near 60 °F (CRC Handbook density table, 999.0 kg/m³ at 15.6 °C). Pace {rules.paceFt} ft.
+              fact sheet; fiber from the {rules.fiberStartPercent} % mark, all in by {rules.fiberDonePercent} %, and the fiber ceiling are your company&apos;s
+              figures, half and three-quarters being common practice). Area per load = fiber ÷ rate × 43,560 ft². Water weighs {fmt(card.waterLbPerGal, 3)}{" "}
+              lb/gal near 60 °F (CRC Handbook density table, 999.0 kg/m³ at 15.6 °C). Pace {rules.paceFt} ft.
             </SourceNote>
           </div>
         </div>
@@ -267,7 +332,8 @@ function CardResult({
   );
 }
 
-const shortAmount = (m: CardMaterial) => (m.bags !== null ? `${m.bags} bag${m.bags === 1 ? "" : "s"}` : `${fmt(m.lb)} lb${m.weighed ? " (weigh)" : ""}`);
+const shortAmount = (m: CardMaterial) =>
+  m.bags ? `${m.bags} bag${m.bags === 1 ? "" : "s"}${m.weighLb > 0 ? ` + ${lbText(m.weighLb)}` : ""}` : `${lbText(m.lb)}${m.bags === 0 ? " (weigh)" : ""}`;
 
 /** On paper, the recipes side by side: one row per step in the company's order, one column per group of loads. */
 function PrintedLoads({ card, rules }: { card: LoadCard; rules: LoadRules }) {
@@ -304,7 +370,10 @@ function PrintedLoads({ card, rules }: { card: LoadCard; rules: LoadRules }) {
           loads.map((l) =>
             step === "fiber" && l.fiberDoneGal !== null ? (
               <>
-                <b>{shortAmount(l.materials[k])}</b>, all in by {fmt(l.fiberDoneGal)} gal; then water to {fmt(l.fillToGal)} gal
+                <b>{shortAmount(l.materials[k])}</b>,{" "}
+                {l.fillToGal > l.fiberDoneGal
+                  ? `all in by ${fmt(l.fiberDoneGal)} gal; then water to ${fmt(l.fillToGal)} gal`
+                  : `all in by ${fmt(l.fillToGal)} gal, water stops`}
               </>
             ) : (
               <b>{shortAmount(l.materials[k])}</b>
@@ -382,7 +451,12 @@ function LoadGroup({
           </li>
         ))}
       </ol>
-      {load.raisedForFiber ? <p className="text-sm">Water raised to the {rules.fiberStartPercent} % mark so the fiber goes in over covered paddles.</p> : null}
+      {load.raisedForFiber ? (
+        <p className="font-bold">
+          Water raised to the {rules.fiberStartPercent} % mark so the fiber goes in over covered paddles: this load is thinner than the rest. Spray it over the
+          same area; it goes on wetter.
+        </p>
+      ) : null}
       <p className="mt-1">
         Covers {fmt(load.areaSqFt)} ft² ({fmt(load.acres, 3)} ac)
         {load.stripFt !== null ? (

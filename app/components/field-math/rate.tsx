@@ -38,7 +38,8 @@ export function RateMath() {
       <fieldset className="space-y-3 rounded-md border-2 border-rule p-3">
         <legend className="px-1 font-bold">Area sprayed, measured</legend>
         <NumberField id="rate-length" label="Length" value={length} onChange={setLength} unit="ft" />
-        <NumberField id="rate-width" label="Width" value={width} onChange={setWidth} unit="ft" error={errors.areaSqFt} />
+        <NumberField id="rate-width" label="Width" value={width} onChange={setWidth} unit="ft" />
+        {errors.areaSqFt ? <p className="font-bold text-stop">{errors.areaSqFt}: give the length and the width in feet.</p> : null}
       </fieldset>
       <fieldset className="space-y-3 rounded-md border-2 border-rule p-3">
         <legend className="px-1 font-bold">What went into the tanks</legend>

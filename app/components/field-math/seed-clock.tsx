@@ -1,7 +1,9 @@
 import { useEffect, useState } from "react";
-import { seedClock } from "~/lib/field-math/load-card";
+import { Link, useLocation } from "react-router";
+import { seedClock } from "~/lib/field-math/seed-clock";
 
 const KEY = "tankside.seed-clock";
+const CHANGED = "tankside:seed-clock";
 
 interface Running {
   startedAt: number;
@@ -9,42 +11,57 @@ interface Running {
   label: string;
 }
 
+function readClock(): Running | null {
+  try {
+    const kept = JSON.parse(localStorage.getItem(KEY) ?? "null") as Running | null;
+    return kept && typeof kept.startedAt === "number" ? kept : null;
+  } catch {
+    return null;
+  }
+}
+
 /**
- * Counts down from the moment seed goes in. Kept on the phone, so a reload, a lost signal or
- * a locked screen does not lose it.
+ * The seed clock as the phone keeps it: a reload, a lost signal, a locked screen or another
+ * screen (a guide opened because the pump plugged) does not lose it. Ticks once a second while running.
  */
-export function SeedClock({ limitMinutes, label }: { limitMinutes: number; label: string }) {
+function useSeedClock() {
   const [running, setRunning] = useState<Running | null>(null);
   const [now, setNow] = useState(() => Date.now());
-
   useEffect(() => {
-    try {
-      const kept = JSON.parse(localStorage.getItem(KEY) ?? "null") as Running | null;
-      if (kept && typeof kept.startedAt === "number") setRunning(kept);
-    } catch {
-      // An unreadable clock is no clock.
-    }
+    const read = () => setRunning(readClock());
+    read();
+    window.addEventListener(CHANGED, read);
+    window.addEventListener("storage", read);
+    return () => {
+      window.removeEventListener(CHANGED, read);
+      window.removeEventListener("storage", read);
+    };
   }, []);
   useEffect(() => {
     if (!running) return;
+    setNow(Date.now());
     const tick = setInterval(() => setNow(Date.now()), 1000);
     return () => clearInterval(tick);
   }, [running]);
-
-  const start = () => {
-    const r = { startedAt: Date.now(), limitMinutes, label };
-    localStorage.setItem(KEY, JSON.stringify(r));
-    setNow(r.startedAt);
-    setRunning(r);
+  const set = (next: Running | null) => {
+    if (next) localStorage.setItem(KEY, JSON.stringify(next));
+    else localStorage.removeItem(KEY);
+    window.dispatchEvent(new Event(CHANGED));
   };
-  const stop = () => {
-    localStorage.removeItem(KEY);
-    setRunning(null);
-  };
+  return { running, now, start: (limitMinutes: number, label: string) => set({ startedAt: Date.now(), limitMinutes, label }), stop: () => set(null) };
+}
 
+/** On the load card: start the clock when the seed goes in; while it runs, the time left and a stop that asks first. */
+export function SeedClock({ limitMinutes, label }: { limitMinutes: number; label: string }) {
+  const { running, now, start, stop } = useSeedClock();
+  const [confirming, setConfirming] = useState(false);
   if (!running) {
     return (
-      <button type="button" onClick={start} className="no-print min-h-16 w-full rounded-lg border-4 border-ink bg-caution px-3 text-xl font-bold text-ink">
+      <button
+        type="button"
+        onClick={() => start(limitMinutes, label)}
+        className="no-print min-h-16 w-full rounded-lg border-4 border-ink bg-caution px-3 text-xl font-bold text-ink"
+      >
         Seed is in: start the {limitMinutes}-minute clock
       </button>
     );
@@ -64,9 +81,48 @@ export function SeedClock({ limitMinutes, label }: { limitMinutes: number; label
           ? "Spray this load now. Next time, put the seed in closer to spraying."
           : `Spray before it reaches 0:00 (${running.limitMinutes} minutes from seed in).`}
       </p>
-      <button type="button" onClick={stop} className="mt-2 min-h-14 w-full rounded-lg border-2 border-ink bg-paper text-lg font-bold text-ink">
-        Load sprayed: stop the clock
-      </button>
+      {confirming ? (
+        <div className="mt-2 grid grid-cols-2 gap-2">
+          <button
+            type="button"
+            onClick={() => {
+              stop();
+              setConfirming(false);
+            }}
+            className="min-h-14 rounded-lg bg-go text-lg font-bold text-white"
+          >
+            Yes, load sprayed
+          </button>
+          <button type="button" onClick={() => setConfirming(false)} className="min-h-14 rounded-lg border-2 border-ink bg-paper text-lg font-bold text-ink">
+            Keep it running
+          </button>
+        </div>
+      ) : (
+        <button
+          type="button"
+          onClick={() => setConfirming(true)}
+          className="mt-2 min-h-14 w-full rounded-lg border-2 border-ink bg-paper text-lg font-bold text-ink"
+        >
+          Load sprayed: stop the clock
+        </button>
+      )}
     </section>
+  );
+}
+
+/** On every other screen while the clock runs (a guide opened mid-load included): the time left, one tap from the card. */
+export function SeedClockBar() {
+  const { running, now } = useSeedClock();
+  const onCard = useLocation().pathname === "/field-math/load";
+  if (!running || onCard) return null;
+  const clock = seedClock(running.startedAt, now, running.limitMinutes);
+  return (
+    <p
+      className={`no-print border-b-4 px-3 py-1 text-center text-lg font-bold ${clock.over ? "border-stop bg-paper text-stop" : "border-ink bg-caution text-ink"}`}
+    >
+      <Link to="/field-math/load" className="inline-flex min-h-12 items-center text-inherit" data-testid="seed-clock-bar">
+        Seed clock · {running.label}: {clock.over ? `over by ${clock.text}` : `${clock.text} left`}
+      </Link>
+    </p>
   );
 }

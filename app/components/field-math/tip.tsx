@@ -1,6 +1,6 @@
 import { useState } from "react";
 import { Link } from "react-router";
-import { tipChoice } from "~/lib/field-math/tip-choice";
+import { MAX_PASSES, tipChoice } from "~/lib/field-math/tip-choice";
 import { fmt } from "~/lib/field-math/units";
 import { NumberField, ResultBox, SourceNote, toNumber, tryFieldMath } from "./kit";
 import type { RigSpecs } from "~/lib/rigs/specs";
@@ -109,8 +109,15 @@ export function TipMath({ rig, compact = false }: { rig?: RigSpecs; compact?: bo
                 ))}
               </ol>
             </>
+          ) : r.tooLittlePressure ? (
+            <p className="text-xl font-bold" data-testid="tip-choice">
+              Only about {fmt(r.nozzlePsi)} psi reaches the nozzle: too little for a stream worth counting on. Take off hose you do not need or move the rig
+              closer.
+            </p>
           ) : (
-            <p className="text-xl font-bold">None of this rig&apos;s tips reaches past the hose loss. Shorten the hose or move the rig closer.</p>
+            <p className="text-xl font-bold" data-testid="tip-choice">
+              No tip on this rig covers {fmt(toNumber(distance))} ft in {MAX_PASSES} passes or fewer. Move the rig closer or spray from the far side too.
+            </p>
           )}
           <p className="mt-2">
             With this hose the flow settles near {fmt(r.flowGpm)} gpm and {fmt(r.nozzlePsi)} psi at the nozzle: the hose costs {fmt(r.frictionPsi, 1)} psi
@@ -130,9 +137,9 @@ export function TipMath({ rig, compact = false }: { rig?: RigSpecs; compact?: bo
                 <tr key={o.name} className="border-b border-rule">
                   <td className="font-bold">{o.name}</td>
                   <td>
-                    {fmt(o.reachFt)} ft <span className="text-sm">(rated {fmt(o.ratedReachFt)})</span>
+                    {r.tooLittlePressure ? "—" : `${fmt(o.reachFt)} ft`} <span className="text-sm">(rated {fmt(o.ratedReachFt)})</span>
                   </td>
-                  <td>{Number.isFinite(o.passes) ? o.passes : "—"}</td>
+                  <td>{o.workable ? o.passes : "won't reach"}</td>
                 </tr>
               ))}
             </tbody>

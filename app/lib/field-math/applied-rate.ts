@@ -10,7 +10,7 @@ export const appliedRateInput = z.object({
       z.object({
         name: z.string({ error: "name the material" }).trim().min(1, "name the material").max(60),
         /** What went into the tanks sprayed over that area. */
-        lb: num("Amount used", 0, 1_000_000, { minInclusive: false }),
+        lb: num("Amount used", 0, 1_000_000),
         specLbPerAcre: num("Spec rate", 0, 10_000, { minInclusive: false }),
       }),
     )

@@ -13,7 +13,7 @@ export const loadCardInput = loadSheetInput.extend({
 });
 export type LoadCardInput = z.input<typeof loadCardInput>;
 
-/** How much of one material goes into one load: whole bags, or pounds weighed out. */
+/** How much of one material goes into one load: whole bags, and pounds weighed from an open bag. */
 export interface CardMaterial {
   name: string;
   kind: MaterialKind;
@@ -21,10 +21,11 @@ export interface CardMaterial {
   lb: number;
   /** What the area of this load needs at the spec rate. */
   neededLb: number;
+  /** Whole bags (null when the material has no bag size). */
   bags: number | null;
   bagLb: number | null;
-  /** True when the amount is weighed out rather than counted in whole bags. */
-  weighed: boolean;
+  /** Pounds weighed out: from an open bag, or all of it for a material with no bag size. */
+  weighLb: number;
 }
 
 export interface CardLoad {
@@ -54,8 +55,11 @@ export interface CardStep {
   reason: string;
 }
 
+/** Within this share of a load's need, a part bag is left for the next load (or a bag topped up) rather than weighed. */
+export const BAG_TOLERANCE = 0.1;
+
 export const BAG_RULE =
-  "Bags are whole. Each load gets the bags that keep the running total nearest what the area needs so far: what one load is over, the next is under, and the last load rounds up so the job is never short. Fiber is rounded down on full loads so it stays under the ceiling, and the load is sized to those bags. A material needing less than one bag a load is weighed out from an open bag.";
+  "Bags: each load takes whole bags, and what is left over is weighed from an open bag. A leftover under a tenth of the load's need is carried to the next load instead (and a bag short by less than that is filled up to a whole one), so the rate stays within 10 % on every load and the job total comes out right; the last load takes exactly what remains. Full loads take the whole bags of fiber that stay under the ceiling, and each load is sized to them.";
 
 const GAL_STEP = 10;
 
@@ -128,34 +132,58 @@ export function loadCard(input: unknown, rules: LoadRules = DEFAULT_LOAD_RULES) 
   const totals = i.materials.map((m, k) => ({
     name: m.name,
     lb: loads.reduce((s, l) => s + l.materials[k].lb, 0),
-    bags: amounts[k].every((a) => a.bags !== null) ? amounts[k].reduce((s, a) => s + (a.bags ?? 0), 0) : null,
+    bags: amounts[k][0].bags !== null ? amounts[k].reduce((s, a) => s + (a.bags ?? 0), 0) : null,
+    weighLb: amounts[k].reduce((s, a) => s + a.weighLb, 0),
   }));
   const overLoads = loads.filter((l) => l.overRatingLb !== null);
   if (overLoads.length) {
     notes.push(
-      `Over the carrier rating on ${overLoads.length === loads.length ? "every load" : `load ${overLoads.map((l) => l.number).join(", ")}`}: plan smaller loads (a tank size of ${fmt(Math.min(...overLoads.map((l) => l.withinRatingGal!)))} gal keeps this mix within it).`,
+      `Over the carrier rating on ${overLoads.length === loads.length ? "every load" : `load ${overLoads.map((l) => l.number).join(", ")}`}: plan loads of at most ${fmt(Math.min(...overLoads.map((l) => l.withinRatingGal!)))} gal (set that as the tank size) to keep this mix within it.`,
     );
   }
-  return { sheet: sheet satisfies LoadSheet, loads, groups: groupLoads(loads), totals, notes, rules, waterLbPerGal: WATER_LB_PER_GAL, bagRule: BAG_RULE };
+  // The water the crew hauls: what each load is filled to, small loads raised to the fiber mark included.
+  const waterGal = loads.reduce((s, l) => s + l.fillToGal, 0);
+  return {
+    sheet: sheet satisfies LoadSheet,
+    loads,
+    groups: groupLoads(loads),
+    totals,
+    waterGal,
+    notes,
+    rules,
+    waterLbPerGal: WATER_LB_PER_GAL,
+    bagRule: BAG_RULE,
+  };
 }
 export type LoadCard = ReturnType<typeof loadCard>;
 
 /**
- * Whole bags for one material across the loads: each load gets the bags that bring the running
- * total nearest the running need, and the last load rounds up. A load left with none, or a
- * material that needs under one bag a load, is weighed out instead.
+ * Whole bags for one material across the loads, the rest weighed. A remainder under
+ * `tolerance` of the load's need is carried to the next load (a bag short by under that is
+ * filled up, the extra carried as a debt), so no load is off by more than that and the running
+ * total stays right; the last load takes exactly what remains.
  */
-export function allot(neededLb: number[], bagLb: number | null): { lb: number; bags: number | null; weighed: boolean }[] {
-  const weighed = (lb: number) => ({ lb, bags: null, weighed: bagLb !== null });
-  if (!bagLb || Math.max(...neededLb) / bagLb < 1 - 1e-9) return neededLb.map(weighed);
-  let running = 0;
-  let given = 0;
-  return neededLb.map((lb, n) => {
-    running += lb / bagLb;
-    const upTo = n === neededLb.length - 1 ? Math.ceil(running - 1e-9) : Math.round(running);
-    const bags = upTo - given;
-    given = upTo;
-    return bags === 0 && lb > 0 ? weighed(lb) : { lb: bags * bagLb, bags, weighed: false };
+export function allot(neededLb: number[], bagLb: number | null, tolerance = BAG_TOLERANCE): { lb: number; bags: number | null; weighLb: number }[] {
+  if (!bagLb) return neededLb.map((lb) => ({ lb, bags: null, weighLb: lb }));
+  let carry = 0;
+  return neededLb.map((need, n) => {
+    const target = Math.max(0, need + carry);
+    const whole = Math.floor(target / bagLb + 1e-9);
+    const rest = target - whole * bagLb;
+    const last = n === neededLb.length - 1;
+    const slack = tolerance * need;
+    let bags = whole;
+    let weighLb = 0;
+    if (rest < 1e-6) carry = 0;
+    else if (!last && rest <= slack && whole > 0) carry = rest;
+    else if (bagLb - rest <= slack) {
+      bags = whole + 1;
+      carry = rest - bagLb;
+    } else {
+      weighLb = rest;
+      carry = 0;
+    }
+    return { lb: bags * bagLb + weighLb, bags, weighLb };
   });
 }
 
@@ -163,7 +191,7 @@ export function allot(neededLb: number[], bagLb: number | null): { lb: number; b
 export function groupLoads(loads: CardLoad[]): { numbers: number[]; load: CardLoad }[] {
   const groups = new Map<string, { numbers: number[]; load: CardLoad }>();
   for (const l of loads) {
-    const key = JSON.stringify([l.fillToGal, Math.round(l.areaSqFt / 10), l.materials.map((m) => (m.bags !== null ? `${m.bags}b` : Math.round(m.lb)))]);
+    const key = JSON.stringify([l.fillToGal, Math.round(l.areaSqFt / 10), l.materials.map((m) => [m.bags, Math.round(m.weighLb * 10)])]);
     const g = groups.get(key);
     if (g) g.numbers.push(l.number);
     else groups.set(key, { numbers: [l.number], load: l });
@@ -185,9 +213,15 @@ export function loadNumbers(numbers: number[]): string {
 
 /** How much of a material, as the crew counts it. */
 export function amountText(m: CardMaterial): string {
-  if (m.bags !== null) return `${m.bags} bag${m.bags === 1 ? "" : "s"} (${fmt(m.lb)} lb)`;
-  return m.weighed ? `${fmt(m.lb)} lb, weighed from an open bag` : `${fmt(m.lb)} lb`;
+  const lb = lbText(m.lb);
+  if (m.bags === null) return lb;
+  const bags = `${m.bags} bag${m.bags === 1 ? "" : "s"}`;
+  if (m.bags === 0) return `${lb} from an open bag`;
+  return m.weighLb > 0 ? `${bags} + ${lbText(m.weighLb)} from an open bag (${lb})` : `${bags} (${lb})`;
 }
+
+/** Pounds as a crew weighs them: tenths under 10 lb, whole pounds above. */
+export const lbText = (lb: number) => `${fmt(lb, lb < 10 ? 1 : 0)} lb`;
 
 /** One load's loading order with the amounts filled in, in the company's order, with its reasons. */
 export function loadSteps(load: CardLoad, rules: LoadRules, seedLimitMinutes = rules.seedLimitMinutes): CardStep[] {
@@ -205,19 +239,17 @@ export function loadSteps(load: CardLoad, rules: LoadRules, seedLimitMinutes = r
     const these = load.materials.filter((m) => m.kind === step);
     if (!these.length) continue;
     let text = these.map((m) => `${m.name}: ${amountText(m)}.`).join(" ");
-    if (step === "fiber" && load.fiberStartGal !== null && load.fiberDoneGal !== null) {
-      text += ` From ${fmt(load.fiberStartGal)} gal; all of it in by ${fmt(load.fiberDoneGal)} gal. Then water to ${fmt(load.fillToGal)} gal.`;
-    }
+    if (step === "fiber" && load.fiberStartGal !== null && load.fiberDoneGal !== null)
+      text += ` ${fiberWhen(load.fiberStartGal, load.fiberDoneGal, load.fillToGal)}`;
     if (step === "seed") text += ` Start the seed clock: spray within ${seedLimitMinutes} minutes.`;
     steps.push({ step, label, text, reason });
   }
   return steps;
 }
 
-/** Minutes and seconds left on the seed clock (negative once over). */
-export function seedClock(startedAtMs: number, nowMs: number, limitMinutes: number) {
-  const leftMs = startedAtMs + limitMinutes * 60_000 - nowMs;
-  const abs = Math.abs(leftMs);
-  const text = `${Math.floor(abs / 60_000)}:${String(Math.floor((abs % 60_000) / 1000)).padStart(2, "0")}`;
-  return { leftMs, over: leftMs < 0, text };
+/** When the fiber goes in against the water marks, without saying the same mark three times. */
+export function fiberWhen(startGal: number, doneGal: number, fillToGal: number): string {
+  if (fillToGal > doneGal) return `From ${fmt(startGal)} gal; all of it in by ${fmt(doneGal)} gal. Then water to ${fmt(fillToGal)} gal.`;
+  if (fillToGal > startGal) return `From ${fmt(startGal)} gal; all of it in by ${fmt(fillToGal)} gal, where the water stops.`;
+  return `All of it at ${fmt(startGal)} gal, with the water off: this load needs no more water.`;
 }

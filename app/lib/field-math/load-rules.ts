@@ -8,7 +8,7 @@ export const MATERIAL_KIND_LABELS: Record<MaterialKind, string> = {
   seed: "Seed",
   fertilizer: "Fertilizer",
   tackifier: "Tackifier",
-  other: "Other (dye, additives)",
+  other: "Light materials (dye, additives)",
 };
 
 /** The places in the loading order: water first, then each kind of material. */
@@ -16,7 +16,7 @@ export const LOAD_STEPS = ["water", "other", "fiber", "fertilizer", "tackifier",
 export type LoadStep = (typeof LOAD_STEPS)[number];
 export const LOAD_STEP_LABELS: Record<LoadStep, string> = {
   water: "Water",
-  other: "Light materials",
+  other: "Light materials (dye, additives)",
   fiber: "Fiber mulch",
   fertilizer: "Fertilizer",
   tackifier: "Tackifier",
@@ -40,7 +40,7 @@ export const DEFAULT_LOADING_ORDER: { step: LoadStep; reason: string }[] = [
   { step: "other", reason: "Lightest materials next, while the water is still coming in: they wet out and spread easily." },
   { step: "fiber", reason: "Fiber only once the tank is at least at the first mark: fiber in a low tank bends paddles and plugs valves." },
   { step: "fertilizer", reason: "Fertilizer after the fiber, so the fiber has wet out first." },
-  { step: "tackifier", reason: "Tackifier where its maker's sheet says: some want it early with the water, some late. Change this place to suit yours." },
+  { step: "tackifier", reason: "Tackifier where its maker's sheet says: some want it early with the water, some late. Your company sets this place." },
   { step: "seed", reason: "Seed last, just before spraying: it swells in water, and the seed clock starts when it goes in." },
 ];
 

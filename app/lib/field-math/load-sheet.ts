@@ -56,7 +56,7 @@ export type ParsedLoadSheetInput = z.infer<typeof loadSheetInput>;
 export function sizing(i: ParsedLoadSheetInput) {
   const fiberRate = i.materials.filter((m) => kindOf(m) === "fiber").reduce((s, m) => s + m.lbPerAcre, 0);
   if (fiberRate === 0 && !i.waterGalPerAcre) {
-    throw new FieldMathInputError({ materials: "mark the fiber mulch as fiber, or give a water rate, so the loads can be sized" });
+    throw new FieldMathInputError({ materials: "Mark one material as fiber mulch, or give the water per acre, so the loads can be sized." });
   }
   return { fiberRate, waterPerAcre: Math.max(i.waterGalPerAcre ?? 0, (fiberRate * 100) / i.maxFiberLbPer100Gal) };
 }

@@ -8,6 +8,10 @@ import { FieldMathInputError, num, parseInput } from "./validate";
  * S = NP/2 + 26 ft (Fire Engineering, Aug 1960, citing Fire Service Hydraulics p. 171) has slope ½.
  */
 export const REACH_FT_PER_PSI = 0.5;
+/** That rule holds above 30 psi at the nozzle; below it a stream has no reach worth counting on. */
+export const MIN_NOZZLE_PSI = 30;
+/** More lines than this to cover one slope is no plan: move the rig or use another tip. */
+export const MAX_PASSES = 4;
 
 export const tipChoiceInput = z.object({
   tips: z.array(nozzleTipSchema).max(8),
@@ -35,6 +39,8 @@ export interface TipOption {
   /** Sweeps of the pattern's width along each line. */
   sweeps: number;
   reaches: boolean;
+  /** Covers the distance in at most MAX_PASSES lines. */
+  workable: boolean;
   from: string[];
 }
 
@@ -64,9 +70,11 @@ export function tipChoice(input: unknown) {
   // Downhill gains a little pressure; the rated reach stays the most a tip is counted for.
   const reachLossFt = Math.max(0, i.pumpPsi - nozzlePsi) * REACH_FT_PER_PSI;
 
+  const tooLittlePressure = nozzlePsi <= MIN_NOZZLE_PSI;
   const options: TipOption[] = i.tips.map((t) => {
-    const reachFt = Math.max(0, t.reachFt - reachLossFt);
-    const passes = reachFt > 0 ? Math.ceil(i.distanceFt / reachFt - 1e-9) : Infinity;
+    const reachFt = tooLittlePressure ? 0 : Math.max(0, t.reachFt - reachLossFt);
+    const fit = reachFt > 0 ? Math.ceil(i.distanceFt / reachFt - 1e-9) : Infinity;
+    const passes = fit <= MAX_PASSES ? fit : Infinity;
     return {
       name: t.name,
       ratedReachFt: t.reachFt,
@@ -76,11 +84,13 @@ export function tipChoice(input: unknown) {
       sweeps: Math.ceil(i.widthFt / t.widthFt - 1e-9),
       reaches: passes === 1,
       from: positions(passes, reachFt, i.distanceFt),
+      workable: Number.isFinite(passes),
     };
   });
   const ranked = [...options].sort((a, b) => a.passes - b.passes || a.sweeps - b.sweeps || a.reachFt - b.reachFt);
   return {
-    best: Number.isFinite(ranked[0].passes) ? ranked[0] : null,
+    best: ranked[0].workable ? ranked[0] : null,
+    tooLittlePressure,
     options: ranked,
     frictionPsi,
     risePsi,
@@ -96,7 +106,13 @@ export type TipChoice = ReturnType<typeof tipChoice>;
 /** Where to stand for each pass: the near edge, then the far edge, then lines stepped in by the reach. */
 function positions(passes: number, reachFt: number, distanceFt: number): string[] {
   if (!Number.isFinite(passes)) return [];
-  if (passes === 1) return ["From the near edge, spraying out to the far edge."];
+  if (passes === 1) {
+    return [
+      reachFt > 1.5 * distanceFt
+        ? `From the near edge, aiming short: it throws about ${Math.round(reachFt)} ft, well past the far edge at ${Math.round(distanceFt)} ft.`
+        : "From the near edge, spraying out to the far edge.",
+    ];
+  }
   if (passes === 2) return ["From the near edge, out to about half way.", "From the far edge (top or far side), back to meet the first pass."];
   return Array.from({ length: passes }, (_, k) =>
     k === 0

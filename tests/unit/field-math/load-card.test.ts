@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { appliedRate } from "~/lib/field-math/applied-rate";
-import { allot, loadCard, loadNumbers, loadSteps, seedClock } from "~/lib/field-math/load-card";
+import { allot, fiberWhen, loadCard, loadNumbers, loadSteps } from "~/lib/field-math/load-card";
+import { seedClock } from "~/lib/field-math/seed-clock";
 import { DEFAULT_LOAD_RULES, loadRulesOf, loadRulesSchema } from "~/lib/field-math/load-rules";
 import { WATER_LB_PER_GAL } from "~/lib/field-math/units";
 import { FieldMathInputError } from "~/lib/field-math/validate";
@@ -42,20 +43,21 @@ describe("load card", () => {
     }
   });
 
-  it("counts whole bags and carries the leftover: seed 1.2 bags a load → 1, 1, 2, 1 (5 bags for the 4.8 needed)", () => {
+  it("counts whole bags and weighs the rest: seed 60 lb a load → 1 bag + 10 lb, on every load", () => {
     expect(card.loads.map((l) => l.materials[0].bags)).toEqual([15, 15, 15, 15]);
-    expect(card.loads.map((l) => l.materials[1].bags)).toEqual([1, 1, 2, 1]);
-    expect(card.totals[1]).toEqual({ name: "Seed mix", lb: 250, bags: 5 });
-    // 45 lb of fertilizer a load is under one 50 lb bag: weighed out, never rounded to nothing.
-    expect(card.loads.map((l) => [l.materials[2].lb, l.materials[2].bags, l.materials[2].weighed])).toEqual(Array(4).fill([45, null, true]));
+    expect(card.loads.map((l) => [l.materials[1].bags, l.materials[1].weighLb])).toEqual(Array(4).fill([1, 10]));
+    expect(card.totals[1]).toEqual({ name: "Seed mix", lb: 240, bags: 4, weighLb: 40 });
+    // 45 lb of fertilizer a load is under one 50 lb bag and 5 lb short of it (over a tenth): weighed out.
+    expect(card.loads.map((l) => [l.materials[2].lb, l.materials[2].bags, l.materials[2].weighLb])).toEqual(Array(4).fill([45, 0, 45]));
+    expect(card.waterGal).toBe(6000);
   });
 
   it("weighs the load against the carrier rating: water at 8.337 lb/gal plus materials", () => {
     const l = card.loads[0];
-    expect(l.weightLb).toBeCloseTo(1500 * 8.3371 + 750 + 50 + 45, 0);
+    expect(l.weightLb).toBeCloseTo(1500 * 8.3371 + 750 + 60 + 45, 0);
     expect(l.overRatingLb).toBeCloseTo(l.weightLb - 12_000, 6);
-    expect(l.withinRatingGal).toBe(1340); // 1,500 × 12,000 ÷ 13,351 = 1,348 → 1,340 gal in steps of 10
-    expect(card.notes.join(" ")).toMatch(/Over the carrier rating on every load.*1,340 gal/);
+    expect(l.withinRatingGal).toBe(1340); // 1,500 × 12,000 ÷ 13,361 = 1,347 → 1,340 gal in steps of 10
+    expect(card.notes.join(" ")).toMatch(/Over the carrier rating on every load: plan loads of at most 1,340 gal/);
     const light = loadCard({ areaSqFt: 43_560, tankGal: 1500, materials: wsdoe, carrierRatingLb: 20_000 });
     expect(light.loads.every((x) => x.overRatingLb === null)).toBe(true);
   });
@@ -72,13 +74,16 @@ describe("load card", () => {
     expect(c.loads.map((l) => l.fillToGal)).toEqual([1200, 1200, 630]);
     expect(c.loads[2].raisedForFiber).toBe(true); // 600 gal needed, fiber starts at 625 gal
     expect(c.loads[2].fiberDoneGal).toBe(630);
+    // The water hauled is what the loads are filled to, the raised last load included.
+    expect(c.waterGal).toBe(1200 + 1200 + 630);
     for (const l of c.loads) expect((l.materials[0].lb / l.fillToGal) * 100).toBeLessThanOrEqual(50);
   });
 
   it("says so when one bag of fiber is more than the tank can carry, and weighs part bags", () => {
     const c = loadCard({ areaSqFt: 2000, tankGal: 100, maxFiberLbPer100Gal: 40, materials: [fiber(1500)] });
     expect(c.notes[0]).toMatch(/One 50 lb bag of Wood fiber needs 125 gal.*100 gal\. Weigh out part bags/);
-    expect(c.loads[0].materials[0]).toMatchObject({ bags: null, weighed: true });
+    expect(c.loads[0].materials[0]).toMatchObject({ bags: 0 });
+    expect(c.loads[0].materials[0].weighLb).toBeCloseTo(40, 8);
     expect(c.loads[0].materials[0].lb).toBeCloseTo(40, 8);
   });
 
@@ -95,14 +100,23 @@ describe("load card", () => {
     expect(steps.map((s) => s.step)).toEqual(["water", "fiber", "fertilizer", "seed"]);
     expect(steps[0].text).toBe("Water to 750 gal (the 50 % mark), agitator running.");
     expect(steps[1].text).toBe("Wood fiber: 15 bags (750 lb). From 750 gal; all of it in by 1,125 gal. Then water to 1,500 gal.");
-    expect(steps[3].text).toMatch(/^Seed mix: 2 bags \(100 lb\)\. Start the seed clock: spray within 30 minutes\.$/);
+    expect(steps[2].text).toBe("Fertilizer 10-4-6: 45 lb from an open bag.");
+    expect(steps[3].text).toBe("Seed mix: 1 bag + 10 lb from an open bag (60 lb). Start the seed clock: spray within 30 minutes.");
     expect(steps.every((s) => s.reason.length > 10)).toBe(true);
     const reordered = { ...DEFAULT_LOAD_RULES, order: [DEFAULT_LOAD_RULES.order[0], ...DEFAULT_LOAD_RULES.order.slice(1).reverse()] };
     expect(loadSteps(card.loads[2], reordered).map((s) => s.step)).toEqual(["water", "seed", "fertilizer", "fiber"]);
   });
 
+  it("words the fiber marks without repeating one mark three times", () => {
+    expect(fiberWhen(750, 1125, 1500)).toBe("From 750 gal; all of it in by 1,125 gal. Then water to 1,500 gal.");
+    expect(fiberWhen(750, 900, 900)).toBe("From 750 gal; all of it in by 900 gal, where the water stops.");
+    expect(fiberWhen(750, 750, 750)).toBe("All of it at 750 gal, with the water off: this load needs no more water.");
+  });
+
   it("groups loads with the same recipe", () => {
-    expect(card.groups.map((g) => loadNumbers(g.numbers))).toEqual(["1–2, 4", "3"]);
+    expect(card.groups.map((g) => loadNumbers(g.numbers))).toEqual(["1–4"]);
+    const c = loadCard({ areaSqFt: 43_560, tankGal: 1250, materials: [fiber(1500)] });
+    expect(c.groups.map((g) => loadNumbers(g.numbers))).toEqual(["1–2", "3"]);
     expect(loadNumbers([1, 2, 3, 5, 7, 8])).toBe("1–3, 5, 7–8");
   });
 
@@ -113,20 +127,28 @@ describe("load card", () => {
 });
 
 describe("whole bags", () => {
-  it("rounds the running total, the last load up", () => {
-    expect(allot([60, 60, 60, 60], 50).map((a) => a.bags)).toEqual([1, 1, 2, 1]);
-    expect(allot([75, 75, 30], 50).map((a) => a.bags)).toEqual([2, 1, 1]); // 1.5→2, 3.0→3, 3.6→4
+  it("weighs what is over the whole bags, so every load gets its rate", () => {
+    expect(allot([75, 75, 30], 50)).toEqual([
+      { lb: 75, bags: 1, weighLb: 25 },
+      { lb: 75, bags: 1, weighLb: 25 },
+      { lb: 30, bags: 0, weighLb: 30 },
+    ]);
     expect(allot([30, 30], null)).toEqual([
-      { lb: 30, bags: null, weighed: false },
-      { lb: 30, bags: null, weighed: false },
+      { lb: 30, bags: null, weighLb: 30 },
+      { lb: 30, bags: null, weighLb: 30 },
     ]);
   });
-  it("weighs a load the rounding would leave empty", () => {
-    // Running 1.6 → 2 bags, then 1.65 → still 2: the last load would get none, so its 2.5 lb is weighed.
-    expect(allot([80, 2.5], 50)).toEqual([
-      { lb: 100, bags: 2, weighed: false },
-      { lb: 2.5, bags: null, weighed: true },
+  it("carries a leftover under a tenth of the load to the next load; the last takes exactly what remains", () => {
+    // 52 lb a load of 50 lb bags: 2 lb (under 5.2) waits, then 4 lb waits, the last load weighs the 6 lb.
+    expect(allot([52, 52, 52], 50)).toEqual([
+      { lb: 50, bags: 1, weighLb: 0 },
+      { lb: 50, bags: 1, weighLb: 0 },
+      { lb: 56, bags: 1, weighLb: 6 },
     ]);
+  });
+  it("fills a bag that is short by under a tenth, carrying the extra as a debt", () => {
+    // 48 lb: a whole bag is 2 lb over (under 4.8); the next needs 46, again a bag, 4 lb over. Never short.
+    expect(allot([48, 48], 50).map((a) => a.bags)).toEqual([1, 1]);
   });
 });
 

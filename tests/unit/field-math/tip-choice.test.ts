@@ -57,11 +57,22 @@ describe("tip chooser", () => {
     expect(r.reachLossFt).toBeCloseTo((100 - 91.32 / 1.08) / 2, 6);
   });
 
-  it("a long thin hose throttles the flow instead of losing more than the pump gives", () => {
-    // 250 gpm at 100 psi (k = 25) through 300 ft of 1½ in (C = 24): NP = 100 / (1 + 24·0.0625·3) = 100 / 5.5.
+  it("a long thin hose throttles the flow; under 30 psi at the nozzle no tip is counted on to reach", () => {
+    // 250 gpm at 100 psi (k = 25) through 300 ft of 1½ in (C = 24): NP = 100 / (1 + 24·0.0625·3) = 100 / 5.5 = 18 psi.
     const r = tipChoice({ tips, distanceFt: 40, widthFt: 100, hoseLengthFt: 300, diameterIn: 1.5, pumpPsi: 100, flowGpm: 250 });
     expect(r.nozzlePsi).toBeCloseTo(100 / 5.5, 6);
-    expect(r.options.find((o) => o.name === "Long range")!.reachFt).toBeCloseTo(110 - (100 - 100 / 5.5) / 2, 6);
+    expect(r.tooLittlePressure).toBe(true);
+    expect(r.best).toBeNull();
+    // 100 ft of it: NP = 100 / 2.5 = 40 psi, above 30: 30 ft off each tip.
+    const shorter = tipChoice({ tips, distanceFt: 40, widthFt: 100, hoseLengthFt: 100, diameterIn: 1.5, pumpPsi: 100, flowGpm: 250 });
+    expect(shorter.options.find((o) => o.name === "Long range")!.reachFt).toBeCloseTo(80, 6);
+  });
+
+  it("more than four passes is no plan, and a tip throwing far past the edge is aimed short", () => {
+    const r = tipChoice({ tips, distanceFt: 250, widthFt: 120, ...run });
+    expect(r.options.find((o) => o.name === "Wide fan")).toMatchObject({ workable: false, passes: Infinity });
+    const near = tipChoice({ tips: [tips[2]], distanceFt: 40, widthFt: 120, ...run }).best!;
+    expect(near.from[0]).toMatch(/aiming short: it throws about 106 ft/);
   });
 
   it("a rig without tips gets a message naming what to record", () => {
