@@ -55,7 +55,7 @@ describe("the load card at 360×640", () => {
     // (0.4 ac, 1,200 gal) is within it.
     await p.goto(`${harness.app.url}/field-math/load?rig=CF-03`);
     await p.getByLabel("Tank size").fill("1800");
-    await p.getByText(/Over the carrier rating on load 1: plan smaller loads/).waitFor();
+    await p.getByText(/Over the carrier rating on load 1: plan loads of at most/).waitFor();
     await p
       .getByText(/over the rig's 14,000 lb rating by/)
       .first()
@@ -93,7 +93,7 @@ describe("the company's loading rules", () => {
     await p.getByText("Give the seed limit in minutes.").waitFor();
     await limit.fill("25");
     // Tackifier (5th) moves above fertilizer (4th).
-    await p.getByRole("listitem").filter({ hasText: "5. Tackifier" }).getByRole("button", { name: "Move up" }).click();
+    await p.getByRole("listitem").filter({ hasText: "5. Tackifier" }).getByRole("button", { name: "Move Tackifier up" }).click();
     await p.getByRole("listitem").filter({ hasText: "4. Tackifier" }).waitFor();
     await p.getByRole("button", { name: "Save loading rules" }).click();
     await p.getByText("Load cards now use these rules.").waitFor();
@@ -120,8 +120,8 @@ describe("choosing a tip", () => {
     for (const answer of ["Yes", "Yes", "No", "No", "Yes", "No", "Yes"]) await p.getByRole("button", { name: answer, exact: true }).click();
     const widget = p.getByRole("region", { name: "Tips on this rig for the distance" });
     await widget.waitFor();
-    // CF-07: 100 psi, 250 gpm; 300 ft of 1½ in (C = 24): NP = 100 / 5.5 = 18 psi, so only the long-range tip reaches 60 ft.
-    await widget.getByTestId("tip-choice").filter({ hasText: "Long range: one pass" }).waitFor();
+    // CF-07: 100 psi, 250 gpm; 300 ft of 1½ in (C = 24): NP = 100 / 5.5 = 18 psi, under the 30 psi the reach rule holds above.
+    await widget.getByTestId("tip-choice").filter({ hasText: "Only about 18 psi reaches the nozzle" }).waitFor();
     // With 100 ft of hose: NP = 100 / 2.5 = 40 psi, 30 ft off each tip; the narrow fan reaches 60 ft with fewer sweeps.
     await widget.getByLabel("Hose in use").fill("100");
     await widget.getByTestId("tip-choice").filter({ hasText: "Narrow fan: one pass" }).waitFor();
