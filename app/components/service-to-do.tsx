@@ -12,11 +12,11 @@ export function ServiceToDo({ lines }: { lines: { ruleId: number; rigCode: strin
       <ul className="mt-2 space-y-2">
         {lines.map((l) => (
           <li key={l.ruleId}>
-            <Link to={`/rigs/${l.rigCode}/service`} className="flex min-h-12 flex-col justify-center font-bold">
+            <Link to={`/rigs/${l.rigCode}/service#service-${l.ruleId}`} className="flex min-h-12 flex-col justify-center font-bold">
               <span>
-                {l.rigCode} · {l.name}: {SERVICE_STATUS_LABELS[l.due.status].toLowerCase()}
+                {l.rigCode} · {l.name}: {l.due.status === "never" ? "never recorded" : SERVICE_STATUS_LABELS[l.due.status].toLowerCase()}
               </span>
-              <span className="text-sm font-normal">{dueText(l.due)}</span>
+              {l.due.status === "never" ? null : <span className="text-sm font-normal">{dueText(l.due)}</span>}
             </Link>
           </li>
         ))}

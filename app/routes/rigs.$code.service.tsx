@@ -6,11 +6,21 @@ import { useTimes } from "~/components/use-time-zone";
 import { fmt } from "~/lib/field-math/units";
 import { parseForm } from "~/lib/forms/parse";
 import { can } from "~/lib/permissions";
-import { dueText, intervalWords, SERVICE_STATUS_LABELS, serviceDoneSchema, serviceRuleSchema, type ServiceStatus } from "~/lib/rigs/service";
+import { dueText, intervalWords, readingProblem, SERVICE_STATUS_LABELS, serviceDoneSchema, serviceRuleSchema, type ServiceStatus } from "~/lib/rigs/service";
 import { fail, requirePermission, requireUser } from "~/services/guards.server";
 import { readForm } from "~/services/read-request.server";
 import { findRig } from "~/services/rigs.server";
-import { addServiceRule, recordService, retireServiceRule, serviceLines, updateServiceRule, type ServiceLine } from "~/services/service.server";
+import {
+  addServiceRule,
+  recordService,
+  ruleOf,
+  retireServiceRule,
+  sameNameOnRig,
+  serviceLines,
+  updateServiceRule,
+  type ServiceLine,
+} from "~/services/service.server";
+import { ConfirmAction } from "~/components/ui/confirm-action";
 import type { Route } from "./+types/rigs.$code.service";
 
 export async function loader({ request, params, context }: Route.LoaderArgs) {
@@ -41,8 +51,11 @@ export async function action({ request, params, context }: Route.ActionArgs) {
     case "done": {
       await requirePermission({ request, context }, "record-service");
       const id = pickRule();
+      await ruleOf(user, rig.id, id);
       const submission = parseForm(form, serviceDoneSchema);
       if (submission.status !== "success") return data({ ruleId: id, result: submission.reply(), message: null }, { status: 400 });
+      const problem = readingProblem(submission.value.engineHours, rig);
+      if (problem) return data({ ruleId: id, result: submission.reply({ fieldErrors: { engineHours: [problem] } }), message: null }, { status: 400 });
       await recordService(user, rig, id, submission.value);
       const hours = rig.hasHourMeter && submission.value.engineHours !== null ? ` at ${fmt(submission.value.engineHours, 1)} engine hours` : "";
       return { ruleId: id, result: null, message: `Recorded as done now${hours}.` };
@@ -53,6 +66,10 @@ export async function action({ request, params, context }: Route.ActionArgs) {
       const id = intent === "edit-rule" ? pickRule() : null;
       const submission = parseForm(form, serviceRuleSchema);
       if (submission.status !== "success") return data({ ruleId: id ?? "new", result: submission.reply(), message: null }, { status: 400 });
+      if (await sameNameOnRig(user, rig.id, submission.value.name, id ?? undefined)) {
+        const taken = `${rig.code} already keeps “${submission.value.name}”. Change that one instead.`;
+        return data({ ruleId: id ?? "new", result: submission.reply({ fieldErrors: { name: [taken] } }), message: null }, { status: 400 });
+      }
       if (id === null) await addServiceRule(user, rig.id, submission.value);
       else await updateServiceRule(user, rig.id, id, submission.value);
       return { ruleId: id ?? "new", result: null, message: `Saved: ${submission.value.name}.` };
@@ -60,8 +77,9 @@ export async function action({ request, params, context }: Route.ActionArgs) {
     case "retire-rule": {
       await requirePermission({ request, context }, "edit-service-rules");
       const id = pickRule();
+      if (form.get("confirmed") !== "yes") fail(400, "Confirm that this service is no longer kept.");
       await retireServiceRule(user, rig.id, id);
-      return { ruleId: id, result: null, message: "That service is no longer kept for this rig." };
+      return { ruleId: "new", result: null, message: "Stopped: that service is no longer kept for this rig." };
     }
     default:
       fail(400, "Say what to do: record a service done, or add, change or retire a service.");
@@ -113,7 +131,12 @@ export default function RigService({ loaderData, actionData }: Route.ComponentPr
             Add a service
           </h2>
           <DoneNote message={actionData?.ruleId === "new" ? actionData.message : null} />
-          <RuleFields intent="add-rule" errors={actionData?.ruleId === "new" ? actionData.result?.error : undefined} />
+          {/* A fresh form after each save, so a second tap cannot add the same service again. */}
+          <RuleFields
+            key={actionData?.ruleId === "new" && actionData.message ? actionData.message : "add"}
+            intent="add-rule"
+            errors={actionData?.ruleId === "new" ? actionData.result?.error : undefined}
+          />
         </section>
       ) : null}
     </>
@@ -143,7 +166,7 @@ function ServiceCard({
   const busy = useNavigation().state === "submitting";
   const hoursError = errorOf(errors, "engineHours");
   return (
-    <li className={`rounded-lg border-4 p-3 ${TONES[line.due.status]}`} aria-label={line.name}>
+    <li id={`service-${line.ruleId}`} className={`scroll-mt-4 rounded-lg border-4 p-3 ${TONES[line.due.status]}`} aria-label={line.name}>
       <p className="text-xl font-bold">
         {line.name} · {SERVICE_STATUS_LABELS[line.due.status]}
       </p>
@@ -161,7 +184,7 @@ function ServiceCard({
           <input type="hidden" name="ruleId" value={line.ruleId} />
           {rig.hasHourMeter ? (
             <label className="block font-bold">
-              Hour meter now
+              Hour meter now (required)
               <input
                 name="engineHours"
                 inputMode="decimal"
@@ -185,12 +208,15 @@ function ServiceCard({
         <details className="mt-2 text-ink">
           <summary className="min-h-12 cursor-pointer py-3 font-bold">Change or stop this service</summary>
           <RuleFields intent="edit-rule" line={line} errors={errors} />
-          <Form method="post" className="mt-2">
-            <input type="hidden" name="ruleId" value={line.ruleId} />
-            <button name="intent" value="retire-rule" className="min-h-12 w-full rounded-lg border-2 border-stop bg-paper font-bold text-stop">
-              Stop keeping this service
-            </button>
-          </Form>
+          <div className="mt-2">
+            <ConfirmAction
+              label="Stop keeping this service"
+              question={`Stop keeping “${line.name}” on this rig? It leaves the list; its records stay.`}
+              confirmLabel="Yes, stop keeping it"
+              intent="retire-rule"
+              hidden={{ ruleId: String(line.ruleId) }}
+            />
+          </div>
         </details>
       ) : null}
     </li>

@@ -66,10 +66,17 @@ export async function serviceToDo(user: SessionUser): Promise<ServiceLine[]> {
   return (await serviceLines(user)).filter((l) => NEEDS_DOING.includes(l.due.status));
 }
 
-async function ruleOf(user: SessionUser, rigId: number, ruleId: number) {
+/** One of this rig's kept services; another company's (or another rig's) answers 404. */
+export async function ruleOf(user: SessionUser, rigId: number, ruleId: number) {
   const rule = await ServiceRule.findOne({ where: ownedBy(user, { id: ruleId, rigId, retired: false }) });
   if (!rule) notFound("That service");
   return rule;
+}
+
+/** A rig keeps each service once: a second with the same name (a double tap) is refused, not stored. */
+export async function sameNameOnRig(user: SessionUser, rigId: number, name: string, except?: number) {
+  const rules = await ServiceRule.findAll({ where: ownedBy(user, { rigId, retired: false }), attributes: ["id", "name"] });
+  return rules.some((r) => r.id !== except && r.name.trim().toLowerCase() === name.trim().toLowerCase());
 }
 
 export async function addServiceRule(user: SessionUser, rigId: number, input: ServiceRuleInput) {

@@ -42,7 +42,8 @@ describe("the load card at 360×640", () => {
       .getByTestId("seed-clock-bar")
       .filter({ hasText: /Seed clock · .*: 29:[0-5]\d left/ })
       .click();
-    await p.waitForURL(/\/field-math\/load$/);
+    await p.waitForURL(/\/field-math\/load#seed-clock$/);
+    await expect.poll(() => p.getByRole("region", { name: "Seed clock" }).evaluate((el) => el.getBoundingClientRect().top < window.innerHeight)).toBe(true);
     await p.getByRole("button", { name: "Load sprayed: stop the clock" }).click();
     await p.getByRole("button", { name: "Yes, load sprayed" }).click();
     await p.getByRole("button", { name: /Seed is in/ }).waitFor();
@@ -122,9 +123,10 @@ describe("choosing a tip", () => {
     await widget.waitFor();
     // CF-07: 100 psi, 250 gpm; 300 ft of 1½ in (C = 24): NP = 100 / 5.5 = 18 psi, under the 30 psi the reach rule holds above.
     await widget.getByTestId("tip-choice").filter({ hasText: "Only about 18 psi reaches the nozzle" }).waitFor();
-    // With 100 ft of hose: NP = 100 / 2.5 = 40 psi, 30 ft off each tip; the narrow fan reaches 60 ft with fewer sweeps.
+    // With 100 ft of hose: NP = 100 / 2.5 = 40 psi, 30 ft off each tip. The narrow fan's 60 ft leaves no margin for
+    // slurry (66 ft needed for 60 ft), so the long-range tip's 120 ft covers it in one pass.
     await widget.getByLabel("Hose in use").fill("100");
-    await widget.getByTestId("tip-choice").filter({ hasText: "Narrow fan: one pass" }).waitFor();
+    await widget.getByTestId("tip-choice").filter({ hasText: "Long range: one pass" }).waitFor();
     await p.close();
   });
 

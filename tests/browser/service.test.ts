@@ -23,7 +23,7 @@ describe("service at 360×640", () => {
     await signIn(p, harness.app.url, "dana@cedarflats.example");
     const todo = p.getByRole("region", { name: "Service to do" });
     await todo.getByRole("link", { name: /CF-07 · Grease points: overdue/ }).click();
-    await p.waitForURL(/\/rigs\/CF-07\/service$/);
+    await p.waitForURL(/\/rigs\/CF-07\/service#service-\d+$/);
     const card = p.getByRole("listitem", { name: "Grease points" });
     await card.getByText("over by 10 engine hours").waitFor();
     await card.getByLabel("Hour meter now").fill(String(rig.engineHours + 1.5));
@@ -31,7 +31,7 @@ describe("service at 360×640", () => {
     await card.getByText(/Recorded as done now at [\d,.]+ engine hours\./).waitFor();
     await p
       .getByRole("listitem", { name: "Grease points" })
-      .getByText(/Grease points · Done/)
+      .getByText(/Grease points · Up to date/)
       .waitFor();
     expect(await p.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(360);
     const box = await card.getByRole("button", { name: "Done now: record it" }).boundingBox();

@@ -25,21 +25,35 @@ describe("rig service", () => {
     expect(res.data.lines.every((l: { due: { status: string } }) => l.due.status === "never")).toBe(true);
   });
 
-  it("a crew member records grease done; the hour meter moves up, never back", async () => {
+  it("a crew member records grease done; the hour meter moves up", async () => {
     const ruleId = String((await grease()).ruleId);
     const done = await post("dana@cedarflats.example", { intent: "done", ruleId, engineHours: "2,400", note: "All six points" });
     expect(done.data.message).toBe("Recorded as done now at 2,400 engine hours.");
     expect((await Rig.findOne({ where: { code: "CF-07" } }))!.engineHours).toBe(2400);
     expect(await grease()).toMatchObject({ due: { status: "ok", hoursLeft: 50 } });
-    // A late entry read lower is kept as read; the rig keeps its higher figure.
-    await post("dana@cedarflats.example", { intent: "done", ruleId, engineHours: "2390" });
+  });
+
+  it("refuses a reading lower than the last, a wild jump, or none on a rig with a meter; nothing is stored", async () => {
+    const ruleId = String((await grease()).ruleId);
+    const before = await ServiceRecord.count();
+    const cases: [string, RegExp][] = [
+      ["2390", /last read 2,400 h; a reading taken now cannot be lower/],
+      ["99999", /over 1,000 h above the last reading \(2,400 h\)/],
+      ["", /Give the hour meter reading: this rig has one/],
+    ];
+    for (const [engineHours, message] of cases) {
+      const res = await post("dana@cedarflats.example", { intent: "done", ruleId, engineHours });
+      expect(res.status).toBe(400);
+      expect(res.data.result.error.engineHours.join(" ")).toMatch(message);
+    }
+    expect(await ServiceRecord.count()).toBe(before);
     expect((await Rig.findOne({ where: { code: "CF-07" } }))!.engineHours).toBe(2400);
   });
 
-  it("is due at exactly the interval and overdue past it (every 50 h from 2,390)", async () => {
-    await Rig.update({ engineHours: 2440 }, { where: { code: "CF-07" } });
+  it("is due at exactly the interval and overdue past it (every 50 h from 2,400)", async () => {
+    await Rig.update({ engineHours: 2450 }, { where: { code: "CF-07" } });
     expect((await grease()).due).toMatchObject({ status: "due", hoursLeft: 0 });
-    await Rig.update({ engineHours: 2440.1 }, { where: { code: "CF-07" } });
+    await Rig.update({ engineHours: 2450.1 }, { where: { code: "CF-07" } });
     expect((await grease()).due).toMatchObject({ status: "overdue", hoursLeft: -0.1 });
   });
 
@@ -58,6 +72,11 @@ describe("rig service", () => {
     expect(none.data.result.error.everyHours).toEqual(["Give the engine hours, the days, or both."]);
     const added = await post("mo@cedarflats.example", { intent: "add-rule", name: "Tank flush", everyDays: "1" });
     expect(added.data.message).toBe("Saved: Tank flush.");
+    // A second tap of the same form is refused, not a second copy.
+    const again = await post("mo@cedarflats.example", { intent: "add-rule", name: "tank flush ", everyDays: "1" });
+    expect(again.status).toBe(400);
+    expect(again.data.result.error.name[0]).toMatch(/CF-07 already keeps/);
+    expect(await ServiceRule.count({ where: { name: "Tank flush", retired: false } })).toBe(1);
     expect(await line("Tank flush")).toMatchObject({ due: { status: "never" } });
   });
 
@@ -77,13 +96,15 @@ describe("rig service", () => {
     expect((await page("li@bluemesa.example")).status).toBe(404);
     expect((await post("li@bluemesa.example", { intent: "add-rule", name: "X", everyDays: "3" })).status).toBe(404);
     const cfRule = (await ServiceRule.findOne({ where: { name: "Tank flush" } }))!.id;
-    expect((await post("li@bluemesa.example", { intent: "retire-rule", ruleId: String(cfRule) }, "BM-01")).status).toBe(404);
+    expect((await post("li@bluemesa.example", { intent: "retire-rule", ruleId: String(cfRule), confirmed: "yes" }, "BM-01")).status).toBe(404);
     expect((await post("sam@bluemesa.example", { intent: "done", ruleId: String(cfRule) }, "BM-01")).status).toBe(404);
   });
 
   it("a retired rule leaves the list", async () => {
     const flush = await line("Tank flush");
-    await post("mo@cedarflats.example", { intent: "retire-rule", ruleId: String(flush.ruleId) });
+    expect((await post("mo@cedarflats.example", { intent: "retire-rule", ruleId: String(flush.ruleId) })).status).toBe(400);
+    expect(await line("Tank flush")).toBeDefined();
+    await post("mo@cedarflats.example", { intent: "retire-rule", ruleId: String(flush.ruleId), confirmed: "yes" });
     expect(await line("Tank flush")).toBeUndefined();
   });
 });

@@ -306,7 +306,7 @@ function CardResult({
             {card.totals
               .map(
                 (m) =>
-                  `${m.name} ${m.bags ? `${m.bags} bag${m.bags === 1 ? "" : "s"}${m.weighLb > 0 ? ` + ${lbText(m.weighLb)}` : ""}, ` : ""}${lbText(m.lb)} (${fmt(lbToKg(m.lb), m.lb < 10 ? 1 : 0)} kg)`,
+                  `${m.name} ${lbText(m.lb)} (${fmt(lbToKg(m.lb), m.lb < 10 ? 1 : 0)} kg)${m.bringBags !== null ? `: bring ${m.bringBags} bag${m.bringBags === 1 ? "" : "s"}` : ""}`,
               )
               .join("; ")}
             .

@@ -55,6 +55,14 @@ function useSeedClock() {
 export function SeedClock({ limitMinutes, label }: { limitMinutes: number; label: string }) {
   const { running, now, start, stop } = useSeedClock();
   const [confirming, setConfirming] = useState(false);
+  // Arriving from the bar on another screen, the clock comes into view, not the top of the form.
+  const { hash } = useLocation();
+  useEffect(() => {
+    if (hash !== "#seed-clock" || !running) return;
+    // After the card has filled in what the phone kept (which moves the clock down the page).
+    const later = setTimeout(() => document.getElementById("seed-clock")?.scrollIntoView({ block: "center" }), 150);
+    return () => clearTimeout(later);
+  }, [hash, running]);
   if (!running) {
     return (
       <button
@@ -69,6 +77,7 @@ export function SeedClock({ limitMinutes, label }: { limitMinutes: number; label
   const clock = seedClock(running.startedAt, now, running.limitMinutes);
   return (
     <section
+      id="seed-clock"
       aria-label="Seed clock"
       className={`no-print rounded-lg border-4 p-3 ${clock.over ? "border-stop bg-paper text-stop" : "border-ink bg-caution text-ink"}`}
     >
@@ -120,7 +129,7 @@ export function SeedClockBar() {
     <p
       className={`no-print border-b-4 px-3 py-1 text-center text-lg font-bold ${clock.over ? "border-stop bg-paper text-stop" : "border-ink bg-caution text-ink"}`}
     >
-      <Link to="/field-math/load" className="inline-flex min-h-12 items-center text-inherit" data-testid="seed-clock-bar">
+      <Link to="/field-math/load#seed-clock" className="inline-flex min-h-12 items-center text-inherit" data-testid="seed-clock-bar">
         Seed clock · {running.label}: {clock.over ? `over by ${clock.text}` : `${clock.text} left`}
       </Link>
     </p>

@@ -119,7 +119,7 @@ export function TipMath({ rig, compact = false }: { rig?: RigSpecs; compact?: bo
               No tip on this rig covers {fmt(toNumber(distance))} ft in {MAX_PASSES} passes or fewer. Move the rig closer or spray from the far side too.
             </p>
           )}
-          <p className="mt-2">
+          <p className={`mt-2 ${r.tooLittlePressure ? "hidden" : ""}`}>
             With this hose the flow settles near {fmt(r.flowGpm)} gpm and {fmt(r.nozzlePsi)} psi at the nozzle: the hose costs {fmt(r.frictionPsi, 1)} psi
             {r.risePsi ? ` and the rise ${fmt(r.risePsi, 1)} psi` : ""}, about {fmt(r.reachLossFt)} ft of reach off every tip.
           </p>

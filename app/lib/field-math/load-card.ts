@@ -132,8 +132,8 @@ export function loadCard(input: unknown, rules: LoadRules = DEFAULT_LOAD_RULES) 
   const totals = i.materials.map((m, k) => ({
     name: m.name,
     lb: loads.reduce((s, l) => s + l.materials[k].lb, 0),
-    bags: amounts[k][0].bags !== null ? amounts[k].reduce((s, a) => s + (a.bags ?? 0), 0) : null,
-    weighLb: amounts[k].reduce((s, a) => s + a.weighLb, 0),
+    /** Bags to bring for the whole job: every pound counted, part bags rounded up. */
+    bringBags: m.bagLb ? Math.ceil(loads.reduce((s, l) => s + l.materials[k].lb, 0) / m.bagLb - 1e-9) : null,
   }));
   const overLoads = loads.filter((l) => l.overRatingLb !== null);
   if (overLoads.length) {

@@ -10,6 +10,8 @@ import { FieldMathInputError, num, parseInput } from "./validate";
 export const REACH_FT_PER_PSI = 0.5;
 /** That rule holds above 30 psi at the nozzle; below it a stream has no reach worth counting on. */
 export const MIN_NOZZLE_PSI = 30;
+/** Reach kept in hand: slurry falls shorter than the water these figures are for (common practice). */
+export const REACH_MARGIN = 0.1;
 /** More lines than this to cover one slope is no plan: move the rig or use another tip. */
 export const MAX_PASSES = 4;
 
@@ -73,7 +75,7 @@ export function tipChoice(input: unknown) {
   const tooLittlePressure = nozzlePsi <= MIN_NOZZLE_PSI;
   const options: TipOption[] = i.tips.map((t) => {
     const reachFt = tooLittlePressure ? 0 : Math.max(0, t.reachFt - reachLossFt);
-    const fit = reachFt > 0 ? Math.ceil(i.distanceFt / reachFt - 1e-9) : Infinity;
+    const fit = reachFt > 0 ? Math.ceil((i.distanceFt * (1 + REACH_MARGIN)) / reachFt - 1e-9) : Infinity;
     const passes = fit <= MAX_PASSES ? fit : Infinity;
     return {
       name: t.name,
@@ -98,7 +100,7 @@ export function tipChoice(input: unknown) {
     flowGpm: k * Math.sqrt(nozzlePsi),
     reachLossFt,
     hoseSource: settled?.source ?? null,
-    note: "Reach and friction are worked for clear water: slurry loses more, so allow a few feet more than the figures say.",
+    note: "Reach and friction are worked for clear water: slurry falls shorter, so a tip is only counted on where it reaches 10 % past the far edge.",
   };
 }
 export type TipChoice = ReturnType<typeof tipChoice>;

@@ -8,9 +8,9 @@ export type ServiceStatus = (typeof SERVICE_STATUSES)[number];
 export const SERVICE_STATUS_LABELS: Record<ServiceStatus, string> = {
   overdue: "Overdue",
   due: "Due now",
-  never: "Never recorded",
+  never: "Never recorded: do it and record it",
   soon: "Due soon",
-  ok: "Done",
+  ok: "Up to date",
   "no-meter": "No hour meter",
 };
 /** Statuses that put a rig on the crew's home and the supervisor's board. */
@@ -42,7 +42,7 @@ export type ServiceRuleInput = z.infer<typeof serviceRuleSchema>;
 /** Recording a service done: the engine hours read at the time (blank on a rig with no meter) and a note. */
 export const serviceDoneSchema = z.object({
   engineHours: z
-    .number({ error: "Give the engine hours as read now, or leave it blank." })
+    .number({ error: "Give the hour meter reading as a number, like 2,315.5." })
     .min(0, "Engine hours cannot be negative.")
     .max(100_000, "Over 100,000 engine hours is not plausible.")
     .nullable()
@@ -113,8 +113,21 @@ export function dueText(due: ServiceDue): string {
 /** "every 50 engine hours", "every day", "every 250 engine hours or 365 days, whichever first". */
 export function intervalWords(line: { everyHours: number | null; everyDays: number | null }): string {
   const hours = line.everyHours !== null ? `${fmt(line.everyHours, 1)} engine hours` : null;
-  const days = line.everyDays !== null ? (line.everyDays === 1 ? "day" : `${line.everyDays} days`) : null;
-  return hours && days ? `every ${hours} or ${days}, whichever first` : `every ${hours ?? days}`;
+  const days = line.everyDays !== null ? `${line.everyDays} day${line.everyDays === 1 ? "" : "s"}` : null;
+  if (hours && days) return `every ${hours} or ${days}, whichever first`;
+  return line.everyDays === 1 && !hours ? "every day" : `every ${hours ?? days}`;
+}
+
+/** A service done now on a rig with an hour meter needs the reading, no lower than the last one and no wild jump. */
+export const MAX_HOURS_JUMP = 1000;
+export function readingProblem(reading: number | null, rig: { hasHourMeter: boolean; engineHours: number }): string | null {
+  if (!rig.hasHourMeter) return null;
+  const last = rig.engineHours.toLocaleString("en-US", { maximumFractionDigits: 1 });
+  if (reading === null) return "Give the hour meter reading: this rig has one.";
+  if (reading < rig.engineHours) return `The hour meter last read ${last} h; a reading taken now cannot be lower. Check the meter.`;
+  if (reading > rig.engineHours + MAX_HOURS_JUMP)
+    return `That is over ${MAX_HOURS_JUMP.toLocaleString("en-US")} h above the last reading (${last} h). Check the meter.`;
+  return null;
 }
 
 /** How many of a rig's services need doing now, and how many are overdue. */

@@ -46,7 +46,8 @@ describe("load card", () => {
   it("counts whole bags and weighs the rest: seed 60 lb a load → 1 bag + 10 lb, on every load", () => {
     expect(card.loads.map((l) => l.materials[0].bags)).toEqual([15, 15, 15, 15]);
     expect(card.loads.map((l) => [l.materials[1].bags, l.materials[1].weighLb])).toEqual(Array(4).fill([1, 10]));
-    expect(card.totals[1]).toEqual({ name: "Seed mix", lb: 240, bags: 4, weighLb: 40 });
+    // 240 lb of seed in 50 lb bags: bring 5 (4.8 rounded up).
+    expect(card.totals[1]).toEqual({ name: "Seed mix", lb: 240, bringBags: 5 });
     // 45 lb of fertilizer a load is under one 50 lb bag and 5 lb short of it (over a tenth): weighed out.
     expect(card.loads.map((l) => [l.materials[2].lb, l.materials[2].bags, l.materials[2].weighLb])).toEqual(Array(4).fill([45, 0, 45]));
     expect(card.waterGal).toBe(6000);

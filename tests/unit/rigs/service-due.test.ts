@@ -68,3 +68,16 @@ describe("service rules", () => {
     expect(serviceRuleSchema.parse({ name: "Lubricator", everyDays: 1 })).toEqual({ name: "Lubricator", everyHours: null, everyDays: 1 });
   });
 });
+
+describe("readings with a service", () => {
+  it("need the meter on a rig that has one, no lower than the last, no jump over 1,000 h", async () => {
+    const { readingProblem } = await import("~/lib/rigs/service");
+    const rig = { hasHourMeter: true, engineHours: 2310.5 };
+    expect(readingProblem(2310.5, rig)).toBeNull();
+    expect(readingProblem(3310.5, rig)).toBeNull();
+    expect(readingProblem(3310.6, rig)).toMatch(/over 1,000 h above/);
+    expect(readingProblem(2310.4, rig)).toMatch(/cannot be lower/);
+    expect(readingProblem(null, rig)).toMatch(/this rig has one/);
+    expect(readingProblem(null, { hasHourMeter: false, engineHours: 0 })).toBeNull();
+  });
+});
