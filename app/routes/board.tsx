@@ -63,7 +63,6 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
       <PageTitle lead={`${window.from} to ${window.to}${window.rig ? ` · ${window.rig}` : " · all rigs"} · ${board.fleet.cases.toLocaleString("en-US")} cases`}>
         Fault board
       </PageTitle>
-      <ServiceToDo lines={loaderData.service} />
 
       <section aria-label="What to act on" className="grid gap-3 sm:grid-cols-2">
         <div className="rounded-lg border-4 border-stop bg-paper p-4">
@@ -155,6 +154,8 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
         </button>
       </Form>
 
+      {/* After what failed and who is waiting: service that is due is the next thing to plan. */}
+      <ServiceToDo lines={loaderData.service} />
       <section aria-labelledby="rigs-h" className="mt-6">
         <h2 id="rigs-h" className="text-2xl font-bold">
           Rigs

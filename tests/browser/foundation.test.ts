@@ -25,7 +25,7 @@ describe("sign-in and navigation at 360 px", () => {
   ])("%s sees the %s navigation and their company", async (email, role, expected) => {
     const p = await freshPage();
     await signIn(p, harness.app.url, email);
-    await p.getByText(`· ${role}`).waitFor();
+    await p.getByRole("link", { name: new RegExp(`^Your account: .*, ${role} at Cedar Flats Erosion Control$`) }).waitFor();
     await p.getByText("Cedar Flats Erosion Control").waitFor();
     expect(await navLabels(p)).toEqual(expected);
     expect(await p.getByText("BM-01").count()).toBe(0);

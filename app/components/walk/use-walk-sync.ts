@@ -1,6 +1,7 @@
 import { useCallback, useEffect, useRef, useState } from "react";
 import { closePending, unsynced, type WalkRecord } from "~/lib/walk/queue";
 import { sendKept } from "~/components/offline/send-kept";
+import { useOnline } from "~/components/offline/use-online";
 
 const RETRY_MS = 4000;
 
@@ -10,7 +11,8 @@ const RETRY_MS = 4000;
  * never waits for the network.
  */
 export function useWalkSync(record: WalkRecord, update: (change: (r: WalkRecord) => WalkRecord) => void) {
-  const [online, setOnline] = useState(true);
+  // The one reading of "is there signal" (navigator.onLine, or a failed request when that lies).
+  const online = useOnline();
   const [signedOut, setSignedOut] = useState(false);
   const [photoProgress, setPhotoProgress] = useState<Record<string, number>>({});
   const latest = useRef(record);
@@ -40,21 +42,14 @@ export function useWalkSync(record: WalkRecord, update: (change: (r: WalkRecord)
   );
 
   useEffect(() => {
-    setOnline(navigator.onLine);
-    const goOnline = () => {
-      setOnline(true);
-      void flush();
-    };
-    const goOffline = () => setOnline(false);
+    const goOnline = () => void flush();
     const hidden = () => document.visibilityState === "hidden" && void flush(true);
     window.addEventListener("online", goOnline);
-    window.addEventListener("offline", goOffline);
     document.addEventListener("visibilitychange", hidden);
     const timer = window.setInterval(() => void flush(), RETRY_MS);
     void flush();
     return () => {
       window.removeEventListener("online", goOnline);
-      window.removeEventListener("offline", goOffline);
       document.removeEventListener("visibilitychange", hidden);
       window.clearInterval(timer);
     };
