@@ -10,7 +10,7 @@ import { parseForm } from "~/lib/forms/parse";
 import { changePasswordSchema } from "~/lib/people/schema";
 import { ROLE_LABELS } from "~/lib/people/roles";
 import { changePassword, endOneSession, listSessions } from "~/services/account.server";
-import { loadRulesFor, savePace } from "~/services/company.server";
+import { paceAndRules, savePace } from "~/services/company.server";
 import { fail, requireUser } from "~/services/guards.server";
 import { readForm } from "~/services/read-request.server";
 import { ABSOLUTE_DAYS, currentSessionKey, endSessions, IDLE_DAYS } from "~/services/session.server";
@@ -18,9 +18,9 @@ import type { Route } from "./+types/account";
 
 export async function loader({ request, context }: Route.LoaderArgs) {
   const user = await requireUser({ request, context });
-  const [sessions, current, rules] = await Promise.all([listSessions(user), currentSessionKey(request), loadRulesFor(user)]);
+  const [sessions, current, { rules, ownPace }] = await Promise.all([listSessions(user), currentSessionKey(request), paceAndRules(user)]);
   return {
-    pace: { ft: rules.paceFt, own: rules.ownPace },
+    pace: { ft: rules.paceFt, own: ownPace },
     name: user.name,
     email: user.email,
     role: user.role,

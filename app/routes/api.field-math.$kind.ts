@@ -17,8 +17,7 @@ export async function action({ request, params, context }: Route.ActionArgs) {
     fail(400, "The body must be JSON.");
   }
   try {
-    const { ownPace: _, ...rules } = await loadRulesFor(user);
-    return Response.json(FIELD_MATH_KINDS[params.kind](body, rules));
+    return Response.json(FIELD_MATH_KINDS[params.kind](body, await loadRulesFor(user)));
   } catch (error) {
     if (error instanceof FieldMathInputError) fail(400, `Check ${Object.keys(error.fields).join(", ")}.`, error.fields);
     throw error;

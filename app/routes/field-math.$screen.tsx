@@ -21,7 +21,7 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
   const user = await requireUser({ request, context });
   const screen = fieldMathScreen(params.screen);
   if (!screen) notFound("That field-math screen");
-  const [rigs, { ownPace: _, ...rules }, lastRig] = await Promise.all([rigSpecsFor(user), loadRulesFor(user), lastRigCodeFor(user)]);
+  const [rigs, rules, lastRig] = await Promise.all([rigSpecsFor(user), loadRulesFor(user), lastRigCodeFor(user)]);
   // The rig asked for, else the one this person last worked on (usually the one at hand), else the first.
   const wanted = new URL(request.url).searchParams.get("rig")?.toUpperCase() ?? lastRig;
   const rig = rigs.find((r) => r.code === wanted) ?? rigs[0] ?? null;

@@ -6,8 +6,9 @@ import { useTimes } from "~/components/use-time-zone";
 import { fmt } from "~/lib/field-math/units";
 import { parseForm } from "~/lib/forms/parse";
 import { can } from "~/lib/permissions";
-import { dueText, intervalWords, readingProblem, SERVICE_STATUS_LABELS, serviceDoneSchema, serviceRuleSchema, type ServiceStatus } from "~/lib/rigs/service";
-import { fail, requirePermission, requireUser } from "~/services/guards.server";
+import { dueText, intervalWords, readingProblem, SERVICE_STATUS_LABELS, type ServiceStatus } from "~/lib/rigs/service";
+import { serviceDoneSchema, serviceRuleSchema } from "~/lib/rigs/service-forms";
+import { fail, requireCan, requireUser } from "~/services/guards.server";
 import { readForm } from "~/services/read-request.server";
 import { findRig } from "~/services/rigs.server";
 import {
@@ -49,7 +50,7 @@ export async function action({ request, params, context }: Route.ActionArgs) {
   };
   switch (intent) {
     case "done": {
-      await requirePermission({ request, context }, "record-service");
+      requireCan(user, "record-service");
       const id = pickRule();
       await ruleOf(user, rig.id, id);
       const submission = parseForm(form, serviceDoneSchema);
@@ -62,7 +63,7 @@ export async function action({ request, params, context }: Route.ActionArgs) {
     }
     case "add-rule":
     case "edit-rule": {
-      await requirePermission({ request, context }, "edit-service-rules");
+      requireCan(user, "edit-service-rules");
       const id = intent === "edit-rule" ? pickRule() : null;
       const submission = parseForm(form, serviceRuleSchema);
       if (submission.status !== "success") return data({ ruleId: id ?? "new", result: submission.reply(), message: null }, { status: 400 });
@@ -75,7 +76,7 @@ export async function action({ request, params, context }: Route.ActionArgs) {
       return { ruleId: id ?? "new", result: null, message: `Saved: ${submission.value.name}.` };
     }
     case "retire-rule": {
-      await requirePermission({ request, context }, "edit-service-rules");
+      requireCan(user, "edit-service-rules");
       const id = pickRule();
       if (form.get("confirmed") !== "yes") fail(400, "Confirm that this service is no longer kept.");
       await retireServiceRule(user, rig.id, id);

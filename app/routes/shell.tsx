@@ -1,4 +1,5 @@
-import { SeedClockBar } from "~/components/field-math/seed-clock";
+import { lazy, Suspense, useEffect, useState } from "react";
+import { SEED_CLOCK_CHANGED, SEED_CLOCK_KEY } from "~/lib/field-math/seed-clock";
 import { Form, Link, NavLink, Outlet, useLocation, useRouteLoaderData } from "react-router";
 import { ErrorPanel } from "~/components/error-panel";
 import { useKeptSync } from "~/components/offline/kept-sync";
@@ -95,13 +96,36 @@ function ShellFrame({ user, hidden, children }: Awaited<ReturnType<typeof loader
         </nav>
       </header>
       <NoSignalBanner />
-      <SeedClockBar />
+      <KeptSeedClock />
       <main className="mx-auto max-w-3xl px-3 py-4">{children}</main>
     </div>
   );
 }
 
 /** Says, on every page, that there is no signal and what still works. */
+// The bar's code loads only on a phone with a clock running: most page loads never need it.
+const SeedClockBar = lazy(() => import("~/components/field-math/seed-clock").then((m) => ({ default: m.SeedClockBar })));
+
+/** A running seed clock stays in sight on every screen. */
+function KeptSeedClock() {
+  const [kept, setKept] = useState(false);
+  useEffect(() => {
+    const read = () => setKept(localStorage.getItem(SEED_CLOCK_KEY) !== null);
+    read();
+    window.addEventListener(SEED_CLOCK_CHANGED, read);
+    window.addEventListener("storage", read);
+    return () => {
+      window.removeEventListener(SEED_CLOCK_CHANGED, read);
+      window.removeEventListener("storage", read);
+    };
+  }, []);
+  return kept ? (
+    <Suspense fallback={null}>
+      <SeedClockBar />
+    </Suspense>
+  ) : null;
+}
+
 function NoSignalBanner() {
   const online = useOnline();
   if (online) return null;

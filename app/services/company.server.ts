@@ -17,13 +17,18 @@ export async function saveLoadRules(user: SessionUser, rules: LoadRules) {
 }
 
 /** The rules the load card works to for this person: the company's, with the person's own pace when they set one. */
-export async function loadRulesFor(user: SessionUser): Promise<LoadRules & { ownPace: boolean }> {
+export async function loadRulesFor(user: SessionUser): Promise<LoadRules> {
+  return (await paceAndRules(user)).rules;
+}
+
+/** The same, saying whether the pace is the person's own (their account page offers to change it). */
+export async function paceAndRules(user: SessionUser): Promise<{ rules: LoadRules; ownPace: boolean }> {
   const [company, person] = await Promise.all([
     Company.findByPk(user.companyId, { attributes: ["loadRules"] }),
     User.findByPk(user.id, { attributes: ["paceFt"] }),
   ]);
   const rules = loadRulesOf(company?.loadRules ?? null);
-  return person?.paceFt ? { ...rules, paceFt: person.paceFt, ownPace: true } : { ...rules, ownPace: false };
+  return person?.paceFt ? { rules: { ...rules, paceFt: person.paceFt }, ownPace: true } : { rules, ownPace: false };
 }
 
 /** A person's own pace, or null to go back to the company's. */

@@ -62,7 +62,11 @@ export async function requireUser(args: RequestArgs): Promise<SessionUser> {
 
 /** The signed-in person if they may do `action` (the permission map in lib/permissions); otherwise a 403. */
 export async function requirePermission(args: RequestArgs, action: Permission): Promise<SessionUser> {
-  const user = await requireUser(args);
+  return requireCan(await requireUser(args), action);
+}
+
+/** The same check for a person already read (an action whose intents need different permissions). */
+export function requireCan(user: SessionUser, action: Permission): SessionUser {
   if (!can(user, action)) fail(403, `This needs the ${lowestRole(action)} role or above.`);
   return user;
 }

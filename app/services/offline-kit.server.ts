@@ -13,7 +13,7 @@ export type { OfflineKit };
 
 /** What a phone keeps so its person can start a fix with no signal: the company's active rigs, the guides they may start, cause names. */
 export async function offlineKit(user: SessionUser): Promise<OfflineKit> {
-  const [rigs, guides, lastRigId, { ownPace: _, ...loadRules }] = await Promise.all([
+  const [rigs, guides, lastRigId, loadRules] = await Promise.all([
     Rig.findAll({
       where: ownedBy(user, { retired: false }),
       attributes: ["id", ...RIG_SPEC_FIELDS, "hasHourMeter", "engineHours", "mount", "pumpKind"],

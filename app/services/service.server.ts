@@ -1,5 +1,6 @@
 import { Op } from "sequelize";
-import { NEEDS_DOING, SERVICE_STATUSES, serviceDue, type ServiceDue, type ServiceRuleInput } from "~/lib/rigs/service";
+import { NEEDS_DOING, SERVICE_STATUSES, serviceDue, type ServiceDue } from "~/lib/rigs/service";
+import type { ServiceRuleInput } from "~/lib/rigs/service-forms";
 import { Rig, sequelize, ServiceRecord, ServiceRule, User } from "./db.server";
 import { notFound, type SessionUser } from "./guards.server";
 import { ownedBy } from "./tenancy.server";
@@ -27,12 +28,14 @@ export async function serviceLines(user: SessionUser, opts: { rigId?: number; no
   if (!rigs.length) return [];
   const rules = await ServiceRule.findAll({ where: ownedBy(user, { rigId: rigs.map((r) => r.id), retired: false }), order: [["name", "ASC"]] });
   if (!rules.length) return [];
-  const latest = await ServiceRecord.findAll({
-    where: {
-      companyId: user.companyId,
-      id: { [Op.in]: sequelize.literal(`(SELECT MAX(id) FROM service_records WHERE company_id = ${Number(user.companyId)} GROUP BY rule_id)`) },
-    },
+  // The newest record of each rule shown: one grouped query over those rules alone.
+  const newest = await ServiceRecord.findAll({
+    where: { companyId: user.companyId, ruleId: rules.map((r) => r.id) },
+    attributes: [[sequelize.fn("MAX", sequelize.col("id")), "id"]],
+    group: ["rule_id"],
+    raw: true,
   });
+  const latest = newest.length ? await ServiceRecord.findAll({ where: { id: newest.map((r) => r.id) } }) : [];
   const byRule = new Map(latest.map((r) => [r.ruleId, r]));
   const names = new Map(
     (await User.findAll({ where: { id: [...new Set(latest.map((r) => r.doneBy).filter((v): v is number => v !== null))] }, attributes: ["id", "name"] })).map(

@@ -1,9 +1,6 @@
 import { useEffect, useState } from "react";
 import { Link, useLocation } from "react-router";
-import { seedClock } from "~/lib/field-math/seed-clock";
-
-const KEY = "tankside.seed-clock";
-const CHANGED = "tankside:seed-clock";
+import { SEED_CLOCK_CHANGED as CHANGED, SEED_CLOCK_KEY as KEY, seedClock } from "~/lib/field-math/seed-clock";
 
 interface Running {
   startedAt: number;

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { calendarDaysBetween, dueText, serviceDue, serviceRuleSchema } from "~/lib/rigs/service";
+import { calendarDaysBetween, dueText, serviceDue } from "~/lib/rigs/service";
+import { serviceRuleSchema } from "~/lib/rigs/service-forms";
 
 const DENVER = "America/Denver";
 const meter = (engineHours: number) => ({ hasHourMeter: true, engineHours });
