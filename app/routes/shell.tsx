@@ -102,7 +102,6 @@ function ShellFrame({ user, hidden, children }: Awaited<ReturnType<typeof loader
   );
 }
 
-/** Says, on every page, that there is no signal and what still works. */
 // The bar's code loads only on a phone with a clock running: most page loads never need it.
 const SeedClockBar = lazy(() => import("~/components/field-math/seed-clock").then((m) => ({ default: m.SeedClockBar })));
 
@@ -126,6 +125,7 @@ function KeptSeedClock() {
   ) : null;
 }
 
+/** Says, on every page, that there is no signal and what still works. */
 function NoSignalBanner() {
   const online = useOnline();
   if (online) return null;

@@ -154,7 +154,7 @@ describe("closing a case", () => {
     expect(mails[0].text).toMatch(/ 8:0[1-3]:00 AM MDT {2}Is the leak at a hose cam-lock coupling\?/);
   });
 
-  it("sends one hand-off mail for twenty closes arriving at once", async () => {
+  it("sends one hand-off mail for twenty closes arriving at once, and tells each of them who was mailed", async () => {
     const id = randomUUID();
     await start(DANA, "CF-07", "leaks", id);
     await sendEvents(DANA, id, [ev(1, "at-coupling", "YES"), ev(2, "stop-coupling", "ACK"), ev(3, "fix-coupling", "CANT")]);
@@ -165,6 +165,8 @@ describe("closing a case", () => {
       ),
     );
     expect(results.map((r) => r.status)).toEqual(Array(20).fill(200));
+    // The closes that lost the race waited for the one sending: none settles for "not confirmed".
+    expect(results.map((r) => (r.data as { notified: string[] }).notified)).toEqual(Array(20).fill(["Mo Brennan"]));
     await new Promise((r) => setTimeout(r, 300));
     expect((await outbox()).slice(before).filter((m) => m.text.includes(`/cases/${id}`))).toHaveLength(1);
     expect((await Case.findByPk(id))!.handoffMailedTo).toBe("Mo Brennan");

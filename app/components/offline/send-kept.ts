@@ -65,8 +65,11 @@ export async function sendKept({ read, update, keepalive = false, onPhotoProgres
     if (closePending(record) && unsynced(record).length === 0) {
       const sent = await answered(await post(`/api/cases/${caseId}/close`, record.close, keepalive), update, "The server did not take the end of this fix");
       if (!sent.ok) return sent.outcome;
-      const result = (await sent.res.json()) as { notified?: string[]; mailedAt?: string | null; mailFailed?: boolean };
-      update((r) => ({ ...r, closeResult: { notified: result.notified ?? [], mailedAt: result.mailedAt ?? null, mailFailed: result.mailFailed } }));
+      const result = (await sent.res.json()) as { notified?: string[]; mailedAt?: string | null; mailFailed?: boolean; mailPending?: boolean };
+      update((r) => ({
+        ...r,
+        closeResult: { notified: result.notified ?? [], mailedAt: result.mailedAt ?? null, mailFailed: result.mailFailed, mailPending: result.mailPending },
+      }));
     }
     return "sent";
   } catch {

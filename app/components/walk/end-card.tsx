@@ -11,6 +11,7 @@ function handoffNews(record: WalkRecord, finished: boolean, online: boolean, tim
   const result = record.closeResult;
   if (result?.mailFailed) return "The e-mail to your supervisor could not be sent. Call your supervisor.";
   if (result?.notified.length) return `E-mailed to ${result.notified.join(", ")}${result.mailedAt ? ` at ${time(result.mailedAt)}` : ""}.`;
+  if (result?.mailPending) return "The case is closed; the e-mail to your supervisor is being sent.";
   if (result) return "The case is closed; the e-mail to your supervisor is not confirmed yet. Call if it is urgent.";
   if (!finished) return "When you finish, your supervisor will be e-mailed with your answers.";
   return online ? "Sending… your supervisor will be e-mailed when the server has the case." : "Your supervisor will be e-mailed when this phone has signal.";

@@ -5,7 +5,7 @@ import { stepsToEnd } from "../guides/graph";
 import type { WalkRig } from "../rigs/specs";
 import type { Role } from "../people/roles";
 import type { Outcome } from "../vocabulary";
-import { loadRecord, saveRecord, type KeyValueStore, type QueuedEvent, type WalkRecord } from "./queue";
+import { closePending, loadRecord, saveRecord, type KeyValueStore, type QueuedEvent, type WalkRecord } from "./queue";
 
 /**
  * What the phone keeps so its person can start and walk a fix with no signal, and how a walk
@@ -177,7 +177,7 @@ export function namesFor(guide: Guide, all: Record<string, string>): Record<stri
 export function waitingToSend(record: WalkRecord): boolean {
   const unsent = record.events.some((e) => !record.synced.includes(e.id));
   const photos = (record.photos ?? []).some((p) => !p.sentAs && !p.error);
-  return (!!record.start && !record.startSent) || unsent || photos || (!!record.close && !record.closeResult);
+  return (!!record.start && !record.startSent) || unsent || photos || closePending(record);
 }
 
 /** Most that photos waiting on the phone may take together; a photo past it is refused with this said. */

@@ -51,7 +51,7 @@ export interface WalkRecord {
   synced: string[];
   photos?: QueuedPhoto[];
   close?: QueuedClose;
-  closeResult?: { notified: string[]; mailedAt?: string | null; mailFailed?: boolean };
+  closeResult?: { notified: string[]; mailedAt?: string | null; mailFailed?: boolean; mailPending?: boolean };
   rejected?: string;
 }
 
@@ -96,4 +96,5 @@ export const unsynced = (record: WalkRecord) => record.events.filter((e) => !rec
 
 export const markSynced = (record: WalkRecord, ids: string[]): WalkRecord => ({ ...record, synced: [...new Set([...record.synced, ...ids])] });
 
-export const closePending = (record: WalkRecord) => !!record.close && !record.closeResult;
+/** A close not yet answered, or answered while another request was still sending its hand-off mail (asked again). */
+export const closePending = (record: WalkRecord) => !!record.close && (!record.closeResult || !!record.closeResult.mailPending);

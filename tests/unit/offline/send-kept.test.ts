@@ -57,6 +57,19 @@ describe("sending what the phone kept", () => {
     expect(sent.map((s) => s.path)).toEqual(["/api/cases/c1/events", "/api/cases/c1/close"]);
   });
 
+  it("asks again when the hand-off mail was still being sent by another request, and then keeps the answer", async () => {
+    let sent = server({ "/close": { status: 200, body: { notified: [], mailedAt: null, mailFailed: false, mailPending: true } } });
+    const kept = holder(startedOffline());
+    expect(await sendKept(kept)).toBe("sent");
+    expect(kept.get().closeResult).toMatchObject({ mailPending: true });
+    sent = server({ "/close": { status: 200, body: { notified: ["Mo Brennan"], mailedAt: "2026-12-02T09:04:00.000Z", mailFailed: false } } });
+    expect(await sendKept(kept)).toBe("sent");
+    expect(sent.map((s) => s.path)).toEqual(["/api/cases/c1/close"]);
+    expect(kept.get().closeResult).toMatchObject({ notified: ["Mo Brennan"], mailPending: undefined });
+    expect(await sendKept(kept)).toBe("sent");
+    expect(sent).toHaveLength(1);
+  });
+
   it("stops at a refused start and keeps the answers with the server's reason", async () => {
     const sent = server({ "/api/cases": { status: 409, body: { error: "Rig CF-07 has been retired. Tell your supervisor which rig you were working on." } } });
     const kept = holder(startedOffline());
