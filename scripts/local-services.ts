@@ -10,6 +10,8 @@ import { startFakeSmtp } from "./fakes/smtp";
 export interface LocalServices {
   env: Record<string, string>;
   ownDatabase: boolean;
+  /** The private MariaDB's root socket, when it is ours. */
+  dbSocket?: string;
   stop(): Promise<void>;
 }
 
@@ -31,6 +33,7 @@ export async function startLocalServices(opts: {
   const s3 = await startFakeS3({ port: opts.s3Port, dir: path.join(opts.dataDir, "s3"), bucket });
   return {
     ownDatabase: !!mariadb,
+    dbSocket: mariadb?.socketPath,
     env: {
       DATABASE_URL: opts.databaseUrl ?? mariadb!.url,
       SMTP_URL: smtp.url,

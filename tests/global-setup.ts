@@ -33,6 +33,7 @@ export async function setup(project: TestProject) {
   fs.rmSync(path.join(dataDir, "outbox"), { recursive: true, force: true });
   services = await startLocalServices({ dataDir, database: "tankside_test", dbPort: base, smtpPort: base + 1, s3Port: base + 2, log: () => {} });
   project.provide("serviceEnv", services.env);
+  project.provide("dbSocket", services.dbSocket ?? "");
 }
 
 export async function teardown() {
@@ -42,5 +43,7 @@ export async function teardown() {
 declare module "vitest" {
   export interface ProvidedContext {
     serviceEnv: Record<string, string>;
+    /** The test database's root socket (the replica test copies the database through it). */
+    dbSocket: string;
   }
 }

@@ -1,6 +1,7 @@
 import { boardQuerySchema } from "~/lib/stats/board-query";
 import { boardFor } from "~/services/board.server";
 import { requirePermission } from "~/services/guards.server";
+import { keptJson } from "~/services/kept-json.server";
 import { readQuery } from "~/services/read-request.server";
 import type { Route } from "./+types/api.board";
 
@@ -9,5 +10,6 @@ export async function loader({ request, context }: Route.LoaderArgs) {
   const user = await requirePermission({ request, context }, "read-board");
   const q = readQuery(request, boardQuerySchema);
   const board = await boardFor(user, q);
-  return Response.json({ window: { from: q.fromDay, to: q.toDay, rig: q.rigCode ?? null, repeatDays: q.repeatDays }, ...board });
+  // The board is kept per company and window (report-cache), so its encoded answer is kept with it.
+  return keptJson(request, board, () => ({ window: { from: q.fromDay, to: q.toDay, rig: q.rigCode ?? null, repeatDays: q.repeatDays }, ...board }));
 }

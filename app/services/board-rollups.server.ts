@@ -104,6 +104,10 @@ export interface CaseKey {
 }
 
 /** The company's row lock, serialising rollup upkeep per company. Take it first: an insert's foreign-key check holds a shared lock on the same row. */
+/** Raises the company's reports version (migration 020): reports kept in memory are computed afresh. */
+export const raiseReportsVersion = (sequelize: Sequelize, companyId: number, transaction?: Transaction) =>
+  sequelize.query("UPDATE companies SET reports_version = reports_version + 1 WHERE id = :company", { replacements: { company: companyId }, transaction });
+
 const lockCompany = (sequelize: Sequelize, companyId: number, transaction: Transaction) =>
   sequelize.query("SELECT id FROM companies WHERE id = :company FOR UPDATE", { replacements: { company: companyId }, transaction });
 
@@ -173,6 +177,7 @@ export async function changeCase<T extends CaseKey>(sequelize: Sequelize, compan
     await lockCompany(sequelize, companyId, transaction);
     const changed = await change(transaction);
     await refreshForCase(sequelize, changed, transaction);
+    await raiseReportsVersion(sequelize, companyId, transaction);
     return changed;
   });
 }
@@ -189,6 +194,7 @@ export async function rebuildBoardRollups(sequelize: Sequelize, companyId?: numb
       await markAllChains(sequelize, { companyId: id, transaction });
       // Everything, including rows of days that no longer have cases.
       await refreshDays(sequelize, { companyId: id, transaction }, new Date(Date.UTC(1000, 0, 1)), new Date(Date.UTC(9999, 0, 1)));
+      await raiseReportsVersion(sequelize, id, transaction);
     });
   }
 }

@@ -2,7 +2,8 @@ import { QueryTypes } from "sequelize";
 import { buildBoard, type Board, type BoardAggregates } from "~/lib/stats/board";
 import { foldMix, foldRigWeeks } from "~/lib/stats/board-rows";
 import { DEFAULT_REPEAT_DAYS, type RepeatChain } from "~/lib/stats/repeats";
-import { sequelize } from "./db.server";
+import { reports } from "./db.server";
+import { keptReport } from "./report-cache.server";
 import type { SessionUser } from "./guards.server";
 
 export interface BoardWindow {
@@ -37,7 +38,7 @@ const inPeriods =
  */
 export async function boardAggregates(companyId: number, w: BoardWindow): Promise<BoardAggregates> {
   const repeatDays = w.repeatDays ?? DEFAULT_REPEAT_DAYS;
-  const rigRows = await sequelize.query<{ id: number; code: string; has_hour_meter: number }>(
+  const rigRows = await reports().query<{ id: number; code: string; has_hour_meter: number }>(
     "SELECT id, code, has_hour_meter FROM rigs WHERE company_id = :company AND (:rig IS NULL OR code = :rig) ORDER BY code",
     { replacements: { company: companyId, rig: w.rigCode ?? null }, type: QueryTypes.SELECT },
   );
@@ -52,7 +53,7 @@ export async function boardAggregates(companyId: number, w: BoardWindow): Promis
   };
   // Only when a rig is chosen: an "IS NULL OR" test would keep the optimizer off the key.
   const rigFilter = w.rigCode ? "AND b.rig_id = :rigId" : "";
-  const q = <T extends object>(sql: string) => sequelize.query<T>(sql, { replacements: params, type: QueryTypes.SELECT });
+  const q = <T extends object>(sql: string) => reports().query<T>(sql, { replacements: params, type: QueryTypes.SELECT });
 
   const [rigWeeks, mix, chains, handoffs] = await Promise.all([
     // Rigs and the weekly trend from one grouped read of the rig-day rollups.
@@ -121,7 +122,7 @@ export async function boardAggregates(companyId: number, w: BoardWindow): Promis
 }
 
 export async function boardFor(user: SessionUser, w: BoardWindow): Promise<Board> {
-  return buildBoard(await boardAggregates(user.companyId, w));
+  return keptReport(user.companyId, "board", w, async () => buildBoard(await boardAggregates(user.companyId, w)));
 }
 
 type ChainRow = Omit<RepeatChain, "rigCode"> & { rigId: number };
@@ -151,7 +152,7 @@ const chainRow = (c: Record<string, unknown>): ChainRow => ({
  * the latest three cases are among the newest three periods' own latest three.
  */
 async function storedChains(params: Params, rigFilter: string): Promise<ChainRow[]> {
-  const chains = await sequelize.query<Record<string, unknown>>(
+  const chains = await reports().query<Record<string, unknown>>(
     `SELECT b.rig_id, b.cause_code, SUM(b.cases) AS n, MIN(b.first_at) AS first_at, MAX(b.last_at) AS last_at,
        SUBSTRING_INDEX(GROUP_CONCAT(b.latest ORDER BY b.period DESC SEPARATOR ',' LIMIT 3), ',', 3) AS latest
      FROM board_chains b WHERE b.company_id = :company AND ${inPeriods} ${rigFilter}
@@ -167,7 +168,7 @@ async function storedChains(params: Params, rigFilter: string): Promise<ChainRow
  * before it; only chains of two or more come back.
  */
 async function liveChains(params: Params, rigFilter: string): Promise<ChainRow[]> {
-  const rows = await sequelize.query<Record<string, unknown>>(
+  const rows = await reports().query<Record<string, unknown>>(
     `SELECT rig_id, cause_code, COUNT(*) AS n, MIN(opened_at) AS first_at, MAX(opened_at) AS last_at,
        GROUP_CONCAT(id, '@', DATE_FORMAT(opened_at, '%Y-%m-%dT%H:%i:%s.%fZ') ORDER BY opened_at DESC, id DESC SEPARATOR ',' LIMIT 3) AS latest
      FROM (

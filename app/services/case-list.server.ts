@@ -5,7 +5,8 @@ import { PAGE_SIZE, type CaseFilters } from "~/lib/cases/filters";
 import { startOfDayIn } from "~/lib/format";
 
 const nextDay = (day: string) => new Date(Date.parse(`${day}T00:00:00Z`) + 86_400_000).toISOString().slice(0, 10);
-import { Rig, sequelize, User } from "./db.server";
+import { reports, Rig, User } from "./db.server";
+import { keptReport } from "./report-cache.server";
 import type { SessionUser } from "./guards.server";
 
 const ORDER: Record<CaseFilters["sort"], string> = {
@@ -61,26 +62,36 @@ const toRow = (r: Record<string, unknown>): CaseRow => ({
 });
 
 /** One page of the company's cases, filtered and sorted on the server. */
-export async function listCases(user: SessionUser, f: CaseFilters, { limit = PAGE_SIZE, all = false } = {}) {
+export async function listCases(user: SessionUser, f: CaseFilters, { limit = PAGE_SIZE, all = false } = {}): Promise<{ rows: CaseRow[]; total: number }> {
+  // The CSV (all rows) is read fresh; a page of the table is kept while nothing it shows has changed.
+  if (all) return readCases(user, f, limit, all);
+  return keptReport(user.companyId, "cases", { f, limit, timeZone: user.timeZone }, () => readCases(user, f, limit, all));
+}
+
+async function readCases(user: SessionUser, f: CaseFilters, limit: number, all: boolean) {
   const { sql, replacements } = where(user, f);
   const order = `${ORDER[f.sort]} ${f.dir === "asc" ? "ASC" : "DESC"}, c.opened_at DESC, c.id`;
   const page = all ? "LIMIT 50000" : `LIMIT ${limit} OFFSET ${(f.page - 1) * limit}`;
   const [rows, count] = await Promise.all([
-    sequelize.query<Record<string, unknown>>(
+    reports().query<Record<string, unknown>>(
       `SELECT c.id, r.code, g.title, c.cause_code, c.outcome, u.name, c.opened_at, TIMESTAMPDIFF(SECOND, c.opened_at, c.closed_at) AS duration ${sql} ORDER BY ${order} ${page}`,
       { replacements, type: QueryTypes.SELECT },
     ),
-    all ? Promise.resolve([{ n: 0 }]) : sequelize.query<{ n: number }>(`SELECT COUNT(*) AS n ${sql}`, { replacements, type: QueryTypes.SELECT }),
+    all ? Promise.resolve([{ n: 0 }]) : reports().query<{ n: number }>(`SELECT COUNT(*) AS n ${sql}`, { replacements, type: QueryTypes.SELECT }),
   ]);
   return { rows: rows.map(toRow), total: Number(count[0].n) };
 }
 
 /** What the filter menus offer: the company's rigs, people and the guides they can use. */
 export async function caseFilterOptions(user: SessionUser) {
+  return keptReport(user.companyId, "case-filters", null, () => readFilterOptions(user));
+}
+
+async function readFilterOptions(user: SessionUser) {
   const [rigs, people, guides] = await Promise.all([
     Rig.findAll({ where: ownedBy(user), attributes: ["code"], order: [["code", "ASC"]] }),
     User.findAll({ where: ownedBy(user), attributes: ["id", "name"], order: [["name", "ASC"]] }),
-    sequelize.query<{ slug: string; title: string }>(`SELECT DISTINCT g.slug, g.title FROM guides g WHERE ${usableGuideSql("g")} ORDER BY g.title`, {
+    reports().query<{ slug: string; title: string }>(`SELECT DISTINCT g.slug, g.title FROM guides g WHERE ${usableGuideSql("g")} ORDER BY g.title`, {
       replacements: { company: user.companyId },
       type: QueryTypes.SELECT,
     }),

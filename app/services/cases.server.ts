@@ -9,6 +9,7 @@ import { findCaseWithGuide } from "./case-detail.server";
 import { Case, CaseEvent, changeCase, GuideRecord, GuideVersion, Rig, sequelize, User } from "./db.server";
 import { fail, notFound, type SessionUser } from "./guards.server";
 import { usableGuides } from "./guides.server";
+import { reportsChanged } from "./report-cache.server";
 import { mailHandoffOnce, NO_MAIL } from "./handoff.server";
 
 /**
@@ -269,5 +270,7 @@ export async function lastRigCodeFor(user: SessionUser): Promise<string | null> 
 export async function resolveHandoff(user: SessionUser, caseId: string, note: string | null) {
   const { found } = await findCaseWithGuide(user, caseId);
   if (found.outcome !== "handoff") fail(409, "Only a handed-off case can be marked dealt with.");
-  if (!found.handoffResolvedAt) await found.update({ handoffResolvedAt: new Date(), handoffResolvedBy: user.id, handoffResolvedNote: note });
+  if (found.handoffResolvedAt) return;
+  await found.update({ handoffResolvedAt: new Date(), handoffResolvedBy: user.id, handoffResolvedNote: note });
+  await reportsChanged(user.companyId);
 }

@@ -1,6 +1,7 @@
 import { DEFAULT_LOAD_RULES, loadRulesOf, type LoadRules } from "~/lib/field-math/load-rules";
 import type { CompanySettings } from "~/lib/people/company-schema";
 import { Company, User } from "./db.server";
+import { reportsChanged } from "./report-cache.server";
 import type { SessionUser } from "./guards.server";
 
 export async function companySettings(user: SessionUser) {
@@ -10,6 +11,7 @@ export async function companySettings(user: SessionUser) {
 
 export async function saveCompanySettings(user: SessionUser, settings: CompanySettings) {
   await Company.update({ timeZone: settings.timeZone }, { where: { id: user.companyId } });
+  await reportsChanged(user.companyId);
 }
 
 export async function saveLoadRules(user: SessionUser, rules: LoadRules) {

@@ -1,6 +1,6 @@
 import { ConnectionError, ConnectionAcquireTimeoutError, type Sequelize } from "sequelize";
 import { data } from "react-router";
-import { db } from "../../db/index";
+import { db, reportsDb } from "../../db/index";
 
 export * from "../../db/models";
 export { changeCase, rebuildBoardRollups } from "./board-rollups.server";
@@ -32,3 +32,12 @@ function guarded(sequelize: Sequelize): Sequelize {
 }
 
 export const sequelize = guarded(db());
+
+let reportsInstance: Sequelize | undefined;
+/** Reports read here: the read replicas when DATABASE_REPLICA_URLS names any (they may lag by the replicas' delay), else the same instance. */
+export function reports(): Sequelize {
+  const instance = reportsDb();
+  if (instance === db()) return sequelize;
+  if (reportsInstance !== instance) reportsInstance = guarded(instance);
+  return reportsInstance;
+}

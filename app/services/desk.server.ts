@@ -9,6 +9,7 @@ import { expectedMinutes, ratioOrder } from "~/lib/stats/check-order";
 import { stepFlow, type FlowCase } from "~/lib/stats/step-flow";
 import { GuideRecord, GuideVersion, guideScope, sequelize, User } from "./db.server";
 import { fail, notFound, type SessionUser } from "./guards.server";
+import { reportsChanged } from "./report-cache.server";
 import { causeList } from "./guides.server";
 
 const MAX_DEFINITION_CHARS = 200_000;
@@ -218,6 +219,7 @@ export async function reviewVersion(user: SessionUser, guideId: number, number: 
     await GuideVersion.update({ status: "retired" }, { where: { guideId: guide.id, status: "published" }, transaction });
     await version.update({ status: "published", reviewerId: user.id, reviewComment: comment, publishedAt: new Date() }, { transaction });
     await guide.update({ publishedVersion: version.number, title: version.definition.title }, { transaction });
+    await reportsChanged(user.companyId, transaction);
   });
 }
 

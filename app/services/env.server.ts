@@ -4,6 +4,10 @@ const schema = z
   .object({
     NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
     DATABASE_URL: z.string().regex(/^(mariadb|mysql):\/\//, "must be a mariadb:// URL"),
+    DATABASE_REPLICA_URLS: z
+      .string()
+      .regex(/^\s*(mariadb|mysql):\/\/[^,]+(,\s*(mariadb|mysql):\/\/[^,]+)*\s*$/, "must be mariadb:// URLs separated by commas")
+      .optional(),
     SESSION_SECRET: z.string().min(16, "must be at least 16 characters").optional(),
     APP_URL: z.string().url().default("http://127.0.0.1:3000"),
     SMTP_URL: z

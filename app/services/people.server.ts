@@ -8,6 +8,7 @@ import { env } from "./env.server";
 import { fail, notFound, type SessionUser } from "./guards.server";
 import { deliver } from "./mail.server";
 import { endSessions } from "./session.server";
+import { reportsChanged } from "./report-cache.server";
 import { hashToken, newToken } from "./tokens.server";
 
 export const INVITE_DAYS = 7;
@@ -83,11 +84,13 @@ export async function actOnPerson(user: SessionUser, action: PersonAction): Prom
   if (person.id === user.id) fail(409, "You cannot change your own role or sign-in. Ask another admin.");
   if (action.intent === "role") {
     await person.update({ role: action.role });
+    await reportsChanged(user.companyId);
     return `${person.name} is now ${action.role}.`;
   }
   const removed = action.intent === "remove-access";
   // Turning it back on does not revive old sessions: the person signs in afresh.
   await person.update({ accessRemovedAt: removed ? new Date() : null });
+  await reportsChanged(user.companyId);
   if (removed) await endSessions(person.id);
   return removed ? `${person.name} can no longer sign in; their cases stay as they are.` : `${person.name} can sign in again with their old password.`;
 }
@@ -129,6 +132,7 @@ export async function acceptInvite(token: string, password: string): Promise<{ o
         { transaction },
       );
       await invite.update({ acceptedAt: new Date() }, { transaction });
+      await reportsChanged(invite.companyId, transaction);
       return { ok: true as const, userId: person.id };
     });
   } catch (error) {

@@ -4,6 +4,7 @@ import type { RigInput } from "~/lib/rigs/schema";
 import { RIG_SPEC_FIELDS, rigSpecsOf, type RigSpecs } from "~/lib/rigs/specs";
 import { Rig } from "./db.server";
 import type { SessionUser } from "./guards.server";
+import { reportsChanged } from "./report-cache.server";
 import { notFound } from "./guards.server";
 
 const LIST_COLUMNS = ["id", "code", "name", "mount", "tankGal", "engineHours", "retired"] as const;
@@ -43,6 +44,7 @@ export type RigSaveResult = { ok: true; code: string } | { ok: false; fieldError
 async function saving(work: () => Promise<Rig>): Promise<RigSaveResult> {
   try {
     const rig = await work();
+    await reportsChanged(rig.companyId);
     return { ok: true, code: rig.code };
   } catch (error) {
     if (error instanceof UniqueConstraintError) {
@@ -64,4 +66,5 @@ export async function updateRig(user: SessionUser, code: string, input: RigInput
 export async function setRigRetired(user: SessionUser, code: string, retired: boolean) {
   const rig = await rigRecord(user, code);
   await rig.update({ retired });
+  await reportsChanged(user.companyId);
 }

@@ -18,6 +18,7 @@ import * as m016 from "./016-rig-pump-and-agitator";
 import * as m017 from "./017-photo-phone-id";
 import * as m018 from "./018-load-rules-and-pace";
 import * as m019 from "./019-service-rules";
+import * as m020 from "./020-reports-version";
 
 export interface Migration {
   name: string;
@@ -46,4 +47,5 @@ export const migrations: Migration[] = [
   { name: "017-photo-phone-id", ...m017 },
   { name: "018-load-rules-and-pace", ...m018 },
   { name: "019-service-rules", ...m019 },
+  { name: "020-reports-version", ...m020 },
 ];

@@ -19,11 +19,18 @@ export function PhoneReadiness({ personId }: { personId: number }) {
       setAllSent(false);
     } else if (wasWaiting && kept.refused.length === 0) setAllSent(true);
   }, [kept, wasWaiting]);
-  if (!read) return null;
+  // The line keeps its place while the phone is read (the server cannot know), so nothing below it jumps.
+  const line = "flex min-h-[4.5rem] items-center rounded-md border-2 px-3 py-2 font-bold";
+  if (!read)
+    return (
+      <div className="mb-4" data-testid="phone-readiness">
+        <p className={`${line} border-ink bg-paper text-ink`}>Looking at what this phone keeps for no signal…</p>
+      </div>
+    );
   const ready = status && status.pagesAt && status.pagesFailed === 0;
   return (
     <div className="mb-4 space-y-2" data-testid="phone-readiness">
-      <p className={`rounded-md border-2 px-3 py-2 font-bold ${ready ? "border-go bg-paper text-go" : "border-ink bg-caution text-ink"}`}>
+      <p className={`${line} ${ready ? "border-go bg-paper text-go" : "border-ink bg-caution text-ink"}`}>
         {ready
           ? `Ready for no signal · updated ${times.time(status.madeAt)}`
           : status
