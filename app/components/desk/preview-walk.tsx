@@ -2,13 +2,14 @@ import { useMemo, useState } from "react";
 import { GuideTextProvider } from "~/components/ui/guide-text";
 import { Markdown, markdownRenderer } from "~/components/ui/markdown";
 import { StepCard } from "~/components/walk/step-card";
-import { compileGuide } from "~/lib/guides/compile";
+import { compileGuide, machineSteps } from "~/lib/guides/compile";
 import { stepsToEnd } from "~/lib/guides/graph";
 import type { Guide } from "~/lib/guides/schema";
 
 /** Walks a draft exactly as the crew's screen shows it, in a phone-sized frame; nothing is saved. */
 export function PreviewWalk({ guide }: { guide: Guide }) {
-  const machine = useMemo(() => compileGuide(guide), [guide]);
+  // The desk walks the compiled machine itself, so a trainer tries exactly what XState makes of the draft.
+  const steps = useMemo(() => machineSteps(compileGuide(guide)), [guide]);
   const left = useMemo(() => stepsToEnd(guide), [guide]);
   const [path, setPath] = useState<string[]>([guide.initial]);
   const here = path[path.length - 1];
@@ -29,7 +30,8 @@ export function PreviewWalk({ guide }: { guide: Guide }) {
         ) : (
           <StepCard
             key={`${here}-${path.length}`}
-            machine={machine}
+            guide={guide}
+            steps={steps}
             stepId={here}
             note=""
             onNoteChange={() => {}}

@@ -34,8 +34,8 @@ export function PhoneReadiness({ personId }: { personId: number }) {
         {ready
           ? `Ready for no signal · updated ${times.time(status.madeAt)}`
           : status
-            ? `Partly ready for no signal · rigs and guides updated ${times.time(status.madeAt)}; some pages are not kept yet.`
-            : "Not ready for no signal yet: keep Tankside open for a moment while there is signal."}
+            ? "Partly ready for no signal: rigs and guides kept, some pages not yet."
+            : "Not ready for no signal yet: keep Tankside open a moment."}
       </p>
       {kept && kept.waiting > 0 ? (
         <p role="status" className="rounded-md border-2 border-ink bg-caution px-3 py-2 font-bold">

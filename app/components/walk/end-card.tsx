@@ -72,7 +72,9 @@ export function EndCard({
       ) : null}
       {finished ? (
         <>
-          <p className="mt-4 text-lg font-bold">{record.closeResult ? "Case closed and saved." : "Finished. The case closes when this phone has signal."}</p>
+          <p className="mt-4 text-lg font-bold">
+            {record.closeResult ? "Case closed and saved." : online ? "Finished. Saving the case…" : "Finished. The case closes when this phone has signal."}
+          </p>
           <p className="mt-4">
             <Link to="/" className="inline-flex min-h-14 items-center rounded-lg border-2 border-ink bg-paper px-4 text-lg font-bold no-underline">
               Start a new fix

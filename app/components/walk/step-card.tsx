@@ -1,8 +1,7 @@
-import { useMemo, useState } from "react";
-import { transition } from "xstate";
+import { useState } from "react";
 import { GuideText } from "~/components/ui/guide-text";
-import type { GuideMachine } from "~/lib/guides/compile";
-import type { StepMeta } from "~/lib/guides/schema";
+import type { Guide } from "~/lib/guides/schema";
+import type { Stepper } from "~/lib/walk/next-step";
 import { AnswerButtons } from "./answer-buttons";
 import { SafetyCaution } from "./safety-caution";
 import { CHECKLIST_LABELS, checklistOf } from "~/lib/guides/safety";
@@ -10,12 +9,13 @@ import { fillRigWords } from "~/lib/guides/rig-words";
 import type { AgitatorDirection } from "~/lib/rigs/schema";
 
 /**
- * One step of the guide's machine. Answering asks the machine (a pure transition, no actor)
- * where the answer leads and reports it; nothing here touches the network. The card stays
+ * One step of the guide. Answering asks the stepper (the guide's own table on the phone, the
+ * machine on the desk) where the answer leads and reports it; nothing here touches the network. The card stays
  * mounted from step to step: only what changed is redrawn.
  */
 export function StepCard({
-  machine,
+  guide,
+  steps,
   stepId,
   rig,
   note,
@@ -24,7 +24,8 @@ export function StepCard({
   children,
   headingLevel = 1,
 }: {
-  machine: GuideMachine;
+  guide: Guide;
+  steps: Stepper;
   stepId: string;
   /** The case's rig, for the words a step takes from it (none in the desk's preview). */
   rig?: { agitatorMixes: AgitatorDirection } | null;
@@ -36,7 +37,6 @@ export function StepCard({
   headingLevel?: 1 | 2;
 }) {
   const Heading = headingLevel === 1 ? "h1" : "h2";
-  const snapshot = useMemo(() => machine.resolveState({ value: stepId }), [machine, stepId]);
   // Help and the note box open per step: a new step starts with both as a fresh card would.
   const [open, setOpen] = useState({ step: stepId, help: false, note: note !== "" });
   if (open.step !== stepId) setOpen({ step: stepId, help: false, note: note !== "" });
@@ -44,12 +44,11 @@ export function StepCard({
   const showNote = open.step === stepId ? open.note : note !== "";
   const setShowHelp = (help: boolean) => setOpen((o) => ({ ...o, help }));
   const setShowNote = (shown: boolean) => setOpen((o) => ({ ...o, note: shown }));
-  const meta = snapshot.getMeta()[`${machine.id}.${stepId}`] as StepMeta;
+  const meta = guide.states[stepId].meta;
   const fill = (text: string) => fillRigWords(text, rig);
 
   const answer = (type: string) => {
-    const [next] = transition(machine, snapshot, { type });
-    const to = String(next.value);
+    const to = steps.next(stepId, type);
     if (to !== stepId) onAdvance(type, to);
   };
 

@@ -1,8 +1,8 @@
 import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from "react";
 import type { AgitatorDirection } from "~/lib/rigs/schema";
 import { Link } from "react-router";
-import { compileGuide } from "~/lib/guides/compile";
 import type { Guide } from "~/lib/guides/schema";
+import { guideSteps } from "~/lib/walk/next-step";
 import { replayFrom, replayWalk } from "~/lib/walk/replay";
 import { outcomeLabel, type Outcome } from "~/lib/vocabulary";
 import { appendEvent, loadRecord, mergeServerEvents, saveRecord, type QueuedEvent, type WalkRecord } from "~/lib/walk/queue";
@@ -45,7 +45,7 @@ export function WalkScreen({
   fromPhone,
   renderFieldMath,
 }: WalkScreenProps) {
-  const machine = useMemo(() => compileGuide(guide), [guide]);
+  const steps = useMemo(() => guideSteps(guide), [guide]);
   // A page the server drew starts from the server's answers (the phone's are read after hydration);
   // one rebuilt on the phone opens straight at the phone's step.
   const [record, setRecord] = useState<WalkRecord>(() =>
@@ -97,10 +97,10 @@ export function WalkScreen({
       before.events.length <= events.length &&
       before.events.every((e, i) => events[i].id === e.id) &&
       events.slice(before.events.length).every((e) => e.seq > lastSeq);
-    const next = goesOn ? replayFrom(machine, before.path, events.slice(before.events.length)) : replayWalk(machine, events);
+    const next = goesOn ? replayFrom(steps, before.path, events.slice(before.events.length)) : replayWalk(steps, events);
     replayed.current = { events, path: next };
     return next;
-  }, [machine, record.events]);
+  }, [steps, record.events]);
   const here = path[path.length - 1];
   const meta = guide.states[here].meta;
   const atEnd = meta.kind === "fixed" || meta.kind === "handoff";
@@ -176,7 +176,8 @@ export function WalkScreen({
         />
       ) : (
         <StepCard
-          machine={machine}
+          guide={guide}
+          steps={steps}
           stepId={here}
           rig={rig}
           note={note}

@@ -1,4 +1,5 @@
-import { createMachine } from "xstate";
+import { createMachine, transition } from "xstate";
+import type { Stepper } from "../walk/next-step";
 import { isFinalKind } from "./kinds";
 import type { Guide } from "./schema";
 
@@ -17,3 +18,11 @@ export function compileGuide(guide: Guide) {
 }
 
 export type GuideMachine = ReturnType<typeof compileGuide>;
+
+/** The machine as a stepper: where XState's `transition` takes each answer (the server's and the desk's replay). */
+export function machineSteps(machine: GuideMachine): Stepper {
+  return {
+    initial: String(machine.config.initial),
+    next: (here, answer) => String(transition(machine, machine.resolveState({ value: here }), { type: answer })[0].value),
+  };
+}

@@ -1,4 +1,4 @@
-import type { GuideMachine } from "../guides/compile";
+import { machineSteps, type GuideMachine } from "../guides/compile";
 import { replayWalk } from "../walk/replay";
 
 export interface FlowCase {
@@ -40,7 +40,7 @@ export function stepFlow(machine: GuideMachine, stepIds: string[], cases: FlowCa
       f.times.push(Math.max(0, (Date.parse(e.at) - since) / 1000));
       since = Date.parse(e.at);
     }
-    const path = replayWalk(machine, events);
+    const path = replayWalk(machineSteps(machine), events);
     const last = path[path.length - 1];
     const f = flow.get(last);
     if (!f) return;

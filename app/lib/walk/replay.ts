@@ -1,7 +1,6 @@
-import { transition } from "xstate";
-import type { GuideMachine } from "../guides/compile";
 import { ANSWERS_BY_KIND } from "../vocabulary";
 import type { Guide } from "../guides/schema";
+import type { Stepper } from "./next-step";
 
 export interface WalkAnswer {
   seq: number;
@@ -23,18 +22,19 @@ export function answerFits(guide: Guide, stepId: string, answer: string): string
 
 /**
  * The steps a walk-through has visited, by replaying its answers in `seq` order on the
- * guide's machine; BACK undoes the answer before it. The last step is where the crew is.
+ * guide's machine (or the phone's lookup of it); BACK undoes the answer before it. The last
+ * step is where the crew is.
  */
-export function replayWalk(machine: GuideMachine, answers: WalkAnswer[]): string[] {
+export function replayWalk(steps: Stepper, answers: WalkAnswer[]): string[] {
   return replayFrom(
-    machine,
-    [String(machine.config.initial)],
+    steps,
+    [steps.initial],
     [...answers].sort((x, y) => x.seq - y.seq),
   );
 }
 
 /** Goes on from a path already replayed with answers that come after it (in order): an answer costs one step, not the whole walk. */
-export function replayFrom(machine: GuideMachine, from: string[], answers: WalkAnswer[]): string[] {
+export function replayFrom(steps: Stepper, from: string[], answers: WalkAnswer[]): string[] {
   const path = [...from];
   for (const a of answers) {
     if (a.answer === "BACK") {
@@ -43,8 +43,7 @@ export function replayFrom(machine: GuideMachine, from: string[], answers: WalkA
     }
     const here = path[path.length - 1];
     if (a.stepId !== here) continue; // an answer for another step (e.g. sent twice) moves nothing
-    const [next] = transition(machine, machine.resolveState({ value: here }), { type: a.answer });
-    const to = String(next.value);
+    const to = steps.next(here, a.answer);
     if (to !== here) path.push(to);
   }
   return path;

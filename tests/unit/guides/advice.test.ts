@@ -109,6 +109,14 @@ describe("corrected advice, by guide and step", () => {
     expect(step("leaks", "handoff-seal").meta.cause).toBe("leak-pump-shaft-seal");
   });
 
+  it("leaks › service-lube: an end never says the lubricator was serviced when the crew could not do it", () => {
+    const afterCant = next("leaks", "service-lube", "CANT")!;
+    expect(text("leaks", afterCant)).toMatch(/could not be serviced/);
+    // The seal hand-off is reached with or without servicing, so it claims neither.
+    expect(text("leaks", "handoff-seal")).not.toMatch(/is serviced|was serviced/);
+    expect(step("leaks", afterCant).meta.cause).toBe("leak-pump-shaft-seal");
+  });
+
   it("leaks: the cover O-ring is the pump's, and suction-piping work starts with the suction valve closed", () => {
     expect(step("leaks", "fixed-cover").meta.component).toBe("pump");
     expect(step("leaks", "stop-suction").meta.checklist).toContain("suction-closed");

@@ -1,11 +1,11 @@
 import { describe, expect, it } from "vitest";
-import { compileGuide } from "~/lib/guides/compile";
+import { compileGuide, machineSteps } from "~/lib/guides/compile";
 import { answerFits, replayWalk } from "~/lib/walk/replay";
 import { tinyGuide } from "../../helpers/guides";
 
 // tiny.json: look (check) —YES→ stop (safety) —ACK→ fix (task) —DONE→ done (fixed); NO / CANT → gone (handoff).
 const guide = tinyGuide();
-const machine = compileGuide(guide);
+const machine = machineSteps(compileGuide(guide));
 const a = (seq: number, stepId: string, answer: string) => ({ seq, stepId, answer });
 
 describe("does an answer fit its step", () => {
