@@ -5,24 +5,13 @@
  * in Debian's Chromium (CHROME_PATH, default /usr/bin/chromium). RUNS=3 takes the median of three.
  */
 import * as chromeLauncher from "chrome-launcher";
+import { demoCookie } from "./demo-sign-in";
 import lighthouse from "lighthouse";
 
 const base = process.env.BENCH_URL ?? "http://127.0.0.1:3000";
 const runs = Number(process.env.RUNS ?? 3);
 
-async function signIn(email: string): Promise<string> {
-  const res = await fetch(`${base}/login`, {
-    method: "POST",
-    redirect: "manual",
-    headers: { "Content-Type": "application/x-www-form-urlencoded", Origin: base },
-    body: new URLSearchParams({ email, password: "field-demo-2026", redirectTo: "" }),
-  });
-  const cookie = res.headers.get("set-cookie")?.split(";")[0];
-  if (res.status !== 302 || !cookie) throw new Error(`Sign-in failed (${res.status}): is the demo running at ${base}?`);
-  return cookie;
-}
-
-const cookie = await signIn("dana@cedarflats.example");
+const cookie = await demoCookie(base, "dana@cedarflats.example");
 const opened = await fetch(`${base}/api/cases`, {
   method: "POST",
   headers: { "Content-Type": "application/json", Cookie: cookie, Origin: base },

@@ -12,6 +12,7 @@
 import fs from "node:fs";
 import path from "node:path";
 import { gzipSync } from "node:zlib";
+import { demoCookie } from "./demo-sign-in";
 import { chromium, type BrowserContext, type Page } from "playwright-core";
 
 const root = path.resolve(import.meta.dirname, "..");
@@ -124,14 +125,9 @@ async function answerTimes() {
 }
 
 async function cookieOf(email: string) {
-  const res = await fetch(`${base}/login`, {
-    method: "POST",
-    redirect: "manual",
-    headers: { "Content-Type": "application/x-www-form-urlencoded", Origin: base },
-    body: new URLSearchParams({ email, password: "field-demo-2026", redirectTo: "" }),
-  });
-  const [name, value] = res.headers.get("set-cookie")!.split(";")[0].split("=");
-  return { name, value, url: base };
+  const cookie = await demoCookie(base, email);
+  const at = cookie.indexOf("=");
+  return { name: cookie.slice(0, at), value: cookie.slice(at + 1), url: base };
 }
 
 /**

@@ -8,6 +8,7 @@
  * 500 batches a second is 2,000 phones each sending every 4 s. Each batch is 1–3 new answers.
  */
 import { randomUUID } from "node:crypto";
+import { demoCookie } from "./demo-sign-in";
 import { performance } from "node:perf_hooks";
 
 const base = process.env.BENCH_URL ?? "http://127.0.0.1:3000";
@@ -15,19 +16,7 @@ const rate = Number(process.env.RATE ?? 500);
 const seconds = Number(process.env.SECONDS ?? 10);
 const caseCount = Number(process.env.CASES ?? 200);
 
-async function signIn(): Promise<string> {
-  const res = await fetch(`${base}/login`, {
-    method: "POST",
-    redirect: "manual",
-    headers: { "Content-Type": "application/x-www-form-urlencoded", Origin: base },
-    body: new URLSearchParams({ email: "dana@cedarflats.example", password: "field-demo-2026", redirectTo: "" }),
-  });
-  const cookie = res.headers.get("set-cookie")?.split(";")[0];
-  if (res.status !== 302 || !cookie) throw new Error(`Sign-in failed (${res.status}): is the demo running at ${base}?`);
-  return cookie;
-}
-
-const cookie = await signIn();
+const cookie = await demoCookie(base, "dana@cedarflats.example");
 const headers = { "Content-Type": "application/json", Cookie: cookie, Origin: base };
 
 // Cases on the demo's rigs, walked on the foaming guide: every batch answers its first check.

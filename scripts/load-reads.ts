@@ -7,24 +7,13 @@
  *
  *   CONNECTIONS=50 SECONDS=10 npm run load:reads
  */
+import { demoCookie } from "./demo-sign-in";
 import { performance } from "node:perf_hooks";
 
 const base = process.env.BENCH_URL ?? "http://127.0.0.1:3000";
 const connections = Number(process.env.CONNECTIONS ?? 50);
 const seconds = Number(process.env.SECONDS ?? 10);
 const PATHS = ["/api/board", "/cases.data"];
-
-async function signIn(): Promise<string> {
-  const res = await fetch(`${base}/login`, {
-    method: "POST",
-    redirect: "manual",
-    headers: { "Content-Type": "application/x-www-form-urlencoded", Origin: base },
-    body: new URLSearchParams({ email: "mo@cedarflats.example", password: "field-demo-2026", redirectTo: "" }),
-  });
-  const cookie = res.headers.get("set-cookie")?.split(";")[0];
-  if (res.status !== 302 || !cookie) throw new Error(`Sign-in failed (${res.status}): is the demo running at ${base}?`);
-  return cookie;
-}
 
 const percentile = (sorted: number[], p: number) => sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))] ?? NaN;
 
@@ -58,5 +47,5 @@ async function load(path: string, cookie: string) {
   );
 }
 
-const cookie = await signIn();
+const cookie = await demoCookie(base, "mo@cedarflats.example");
 for (const path of PATHS) await load(path, cookie);

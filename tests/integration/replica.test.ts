@@ -1,11 +1,11 @@
 import { execFileSync } from "node:child_process";
-import { randomUUID } from "node:crypto";
 import fs from "node:fs";
 import path from "node:path";
 import mariadb from "mariadb";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { startLocalMariadb, type LocalMariadb } from "../../db/local-mariadb";
 import { freePort } from "../../scripts/free-port";
+import { LOW_WATER_WALK, walkThroughApi } from "../helpers/cases";
 import { resetDatabase } from "../helpers/db";
 import { requestAs, run } from "../helpers/requests";
 
@@ -73,9 +73,6 @@ describe("reports from a read replica", () => {
     const { loader: boardApi } = await import("~/routes/api.board");
     const { loader: casesPage } = await import("~/routes/cases");
     const { loader: casePage } = await import("~/routes/cases.$id");
-    const { action: startCase } = await import("~/routes/api.cases");
-    const { action: closeCase } = await import("~/routes/api.cases.$id.close");
-    const { action: sendEvents } = await import("~/routes/api.cases.$id.events");
     const { RouterContextProvider } = await import("react-router");
     const args = (request: Request, params: Record<string, string> = {}) => ({ request, params, context: new RouterContextProvider() }) as never;
     const MO = "mo@cedarflats.example";
@@ -88,29 +85,7 @@ describe("reports from a read replica", () => {
 
     // The replica stops applying: anything read from it now is as it was.
     await sql(replica.socketPath, "STOP SLAVE");
-    const id = randomUUID();
-    const post = (email: string, p: string, body: unknown) =>
-      requestAs(email, p, { method: "POST", body: JSON.stringify(body), headers: { "Content-Type": "application/json" } });
-    expect((await run(async () => startCase(args(await post(DANA, "/api/cases", { id, rigCode: "CF-07", guideSlug: "lost-prime" }))))).status).toBe(201);
-    const at = new Date().toISOString();
-    await run(async () =>
-      sendEvents(
-        args(
-          await post(DANA, `/api/cases/${id}/events`, {
-            events: [
-              { id: randomUUID(), seq: 1, stepId: "water-level", answer: "NO", at },
-              { id: randomUUID(), seq: 2, stepId: "add-water", answer: "DONE", at },
-              { id: randomUUID(), seq: 3, stepId: "holds-after-water", answer: "YES", at },
-            ],
-          }),
-          { id },
-        ),
-      ),
-    );
-    const closed = await run(async () =>
-      closeCase(args(await post(DANA, `/api/cases/${id}/close`, { outcome: "fixed", finalStep: "fixed-low-water" }), { id })),
-    );
-    expect(closed.status).toBe(200);
+    const id = await walkThroughApi(DANA, LOW_WATER_WALK);
 
     // What was just written reads from the primary…
     const page = await run(async () => casePage(args(await requestAs(MO, `/cases/${id}`), { id })));

@@ -1,15 +1,12 @@
 import { RouterContextProvider } from "react-router";
-import { randomUUID } from "node:crypto";
 import { gunzipSync } from "node:zlib";
 import { beforeAll, describe, expect, it, vi } from "vitest";
 import { Company, User } from "../../db/index";
 import { loader as boardApi } from "~/routes/api.board";
-import { action as startAction } from "~/routes/api.cases";
-import { action as closeAction } from "~/routes/api.cases.$id.close";
-import { action as eventsAction } from "~/routes/api.cases.$id.events";
 import { reports } from "~/services/db.server";
 import { resolveHandoff } from "~/services/cases.server";
 import type { SessionUser } from "~/services/guards.server";
+import { LOW_WATER_WALK, walkThroughApi } from "../helpers/cases";
 import { resetDatabase } from "../helpers/db";
 import { requestAs } from "../helpers/requests";
 
@@ -18,8 +15,6 @@ import { requestAs } from "../helpers/requests";
 const MO = "mo@cedarflats.example";
 const DANA = "dana@cedarflats.example";
 const args = (request: Request, params: Record<string, string> = {}) => ({ request, params, context: new RouterContextProvider() }) as never;
-const post = (email: string, path: string, body: unknown) =>
-  requestAs(email, path, { method: "POST", body: JSON.stringify(body), headers: { "Content-Type": "application/json" } });
 
 async function board(encoding?: string) {
   const res = (await boardApi(args(await requestAs(MO, "/api/board", { headers: encoding ? { "Accept-Encoding": encoding } : {} })))) as Response;
@@ -54,42 +49,22 @@ describe("reports kept in memory", () => {
 
   it("counts a case closed since the last read", async () => {
     const before = (await board()).data.fleet.cases;
-    const id = randomUUID();
-    await startAction(args(await post(DANA, "/api/cases", { id, rigCode: "CF-07", guideSlug: "lost-prime" })));
-    const at = new Date().toISOString();
-    await eventsAction(
-      args(
-        await post(DANA, `/api/cases/${id}/events`, {
-          events: [
-            { id: randomUUID(), seq: 1, stepId: "water-level", answer: "NO", at },
-            { id: randomUUID(), seq: 2, stepId: "add-water", answer: "DONE", at },
-            { id: randomUUID(), seq: 3, stepId: "holds-after-water", answer: "YES", at },
-          ],
-        }),
-        { id },
-      ),
-    );
-    await closeAction(args(await post(DANA, `/api/cases/${id}/close`, { outcome: "fixed", finalStep: "fixed-low-water" }), { id }));
+    await walkThroughApi(DANA, LOW_WATER_WALK);
     expect((await board()).data.fleet.cases).toBe(before + 1);
   });
 
   it("drops a hand-off marked dealt with since the last read", async () => {
-    const id = randomUUID();
-    await startAction(args(await post(DANA, "/api/cases", { id, rigCode: "CF-07", guideSlug: "leaks" })));
-    const at = new Date().toISOString();
-    await eventsAction(
-      args(
-        await post(DANA, `/api/cases/${id}/events`, {
-          events: [
-            { id: randomUUID(), seq: 1, stepId: "at-coupling", answer: "YES", at },
-            { id: randomUUID(), seq: 2, stepId: "stop-coupling", answer: "ACK", at },
-            { id: randomUUID(), seq: 3, stepId: "fix-coupling", answer: "CANT", at },
-          ],
-        }),
-        { id },
-      ),
-    );
-    await closeAction(args(await post(DANA, `/api/cases/${id}/close`, { outcome: "handoff", finalStep: "handoff-leak" }), { id }));
+    const id = await walkThroughApi(DANA, {
+      rigCode: "CF-07",
+      guideSlug: "leaks",
+      answers: [
+        ["at-coupling", "YES"],
+        ["stop-coupling", "ACK"],
+        ["fix-coupling", "CANT"],
+      ],
+      outcome: "handoff",
+      finalStep: "handoff-leak",
+    });
     const open = async () => (await board()).data.openHandoffs.map((h) => h.caseId);
     expect(await open()).toContain(id);
     const person = (await User.findOne({ where: { email: MO } }))!;
