@@ -198,7 +198,8 @@ export function WalkScreen({
         </StepCard>
       )}
       <SyncBadge online={sync.online} waiting={sync.waiting} startWaiting={sync.startWaiting} rejected={record.rejected} signedOut={sync.signedOut} />
-      {offlineReady ? <p className="text-base">This walk-through is kept on this phone: it opens again even with no signal.</p> : null}
+      {/* Its place is kept until the phone has answered, so the buttons below do not jump. */}
+      <p className="min-h-12 text-base">{offlineReady ? "This walk-through is kept on this phone: it opens again even with no signal." : null}</p>
       {path.length > 1 && !record.close && !closedElsewhere ? (
         <button
           type="button"
