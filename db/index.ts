@@ -20,7 +20,7 @@ export function db(): Sequelize {
 let reports: Sequelize | undefined;
 
 /** Comma-separated `mariadb://` URLs of read replicas (DATABASE_REPLICA_URLS), none when unset. */
-export const replicaUrls = () =>
+const replicaUrls = () =>
   (process.env.DATABASE_REPLICA_URLS ?? "")
     .split(",")
     .map((u) => u.trim())

@@ -103,11 +103,11 @@ export interface CaseKey {
   openedAt: Date;
 }
 
-/** The company's row lock, serialising rollup upkeep per company. Take it first: an insert's foreign-key check holds a shared lock on the same row. */
 /** Raises the company's reports version (migration 020): reports kept in memory are computed afresh. */
 export const raiseReportsVersion = (sequelize: Sequelize, companyId: number, transaction?: Transaction) =>
   sequelize.query("UPDATE companies SET reports_version = reports_version + 1 WHERE id = :company", { replacements: { company: companyId }, transaction });
 
+/** The company's row lock, serialising rollup upkeep per company. Take it first: an insert's foreign-key check holds a shared lock on the same row. */
 const lockCompany = (sequelize: Sequelize, companyId: number, transaction: Transaction) =>
   sequelize.query("SELECT id FROM companies WHERE id = :company FOR UPDATE", { replacements: { company: companyId }, transaction });
 

@@ -29,8 +29,9 @@ export async function keptReport<T>(companyId: number, name: string, query: unkn
   const hit = kept.get(key);
   if (hit && now - hit.at < MAX_AGE_MS) return hit.value as Promise<T>;
   const value = compute();
+  kept.delete(key); // an expired copy goes to the back of the line with its replacement
   kept.set(key, { at: now, value });
-  value.catch(() => kept.delete(key));
+  value.catch(() => kept.get(key)?.value === value && kept.delete(key));
   // Oldest first out (a Map keeps insertion order).
   while (kept.size > MAX_ENTRIES) kept.delete(kept.keys().next().value!);
   return value;

@@ -10,8 +10,8 @@ import type { AgitatorDirection } from "~/lib/rigs/schema";
 
 /**
  * One step of the guide. Answering asks the stepper (the guide's own table on the phone, the
- * machine on the desk) where the answer leads and reports it; nothing here touches the network. The card stays
- * mounted from step to step: only what changed is redrawn.
+ * machine on the desk) where the answer leads and reports it; nothing here touches the network.
+ * The card stays mounted from step to step: only what changed is redrawn.
  */
 export function StepCard({
   guide,
