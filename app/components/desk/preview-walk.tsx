@@ -26,6 +26,7 @@ export function PreviewWalk({ guide }: { guide: Guide }) {
           <section className={`rounded-lg border-4 bg-paper p-4 ${meta.kind === "fixed" ? "border-go" : "border-stop"}`}>
             <h2 className="text-2xl font-bold">{meta.kind === "fixed" ? "Fixed" : "Handed off"}</h2>
             <Markdown className="mt-2 text-xl">{meta.prompt}</Markdown>
+            {meta.help ? <Markdown className="mt-3 text-lg">{meta.help}</Markdown> : null}
           </section>
         ) : (
           <StepCard

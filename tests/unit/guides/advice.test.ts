@@ -115,6 +115,11 @@ describe("corrected advice, by guide and step", () => {
     // The seal hand-off is reached with or without servicing, so it claims neither.
     expect(text("leaks", "handoff-seal")).not.toMatch(/is serviced|was serviced/);
     expect(step("leaks", afterCant).meta.cause).toBe("leak-pump-shaft-seal");
+    // A lubricator left unserviced means the pump must not run: no flushing from the controls.
+    expect(text("leaks", afterCant)).toMatch(/do not run the pump/);
+    expect(text("leaks", afterCant)).not.toMatch(/flush the tank and pump/);
+    // The fixed end is reached with the right grease already in (no servicing), so it does not claim any.
+    expect(text("leaks", "fixed-pump-shaft")).not.toMatch(/lubricator serviced/);
   });
 
   it("leaks: the cover O-ring is the pump's, and suction-piping work starts with the suction valve closed", () => {
