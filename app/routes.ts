@@ -28,6 +28,7 @@ export default [
     route("rigs/:code", "routes/rigs.$code.tsx"),
     route("rigs/:code/edit", "routes/rigs.$code.edit.tsx"),
     route("rigs/:code/fix", "routes/rigs.$code.fix.tsx"),
+    route("rigs/:code/cards", "routes/rigs.$code.cards.tsx"),
     route("rigs/:code/service", "routes/rigs.$code.service.tsx"),
     route("board", "routes/board.tsx"),
     route("cases", "routes/cases.tsx"),

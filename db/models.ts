@@ -3,7 +3,8 @@ import { AGITATOR_DIRECTIONS, type AgitatorDirection } from "../app/lib/rigs/sch
 
 import type { Guide } from "../app/lib/guides/schema";
 import { ROLES, type Role } from "../app/lib/people/roles";
-import { ANSWERS, OUTCOMES, VERSION_STATUSES, type Answer, type Outcome, type VersionStatus } from "../app/lib/vocabulary";
+import { ANSWERS, CASE_KINDS, OUTCOMES, VERSION_STATUSES, type Answer, type CaseKind, type Outcome, type VersionStatus } from "../app/lib/vocabulary";
+import type { ServiceTask } from "../app/lib/guides/kinds";
 
 export { ROLES, type Role };
 
@@ -160,6 +161,12 @@ export class Case extends Model<InferAttributes<Case>, InferCreationAttributes<C
   /** When the hand-off mail left and to whom (names): set once, so the mail goes once. */
   declare handoffMailedAt: CreationOptional<Date | null>;
   declare handoffMailedTo: CreationOptional<string | null>;
+  /** A fix (a guide walked for a fault) or a rig card (a routine walked); only fixes count as faults. */
+  declare kind: CreationOptional<CaseKind>;
+  /** The card a fix was opened from (an item answered "no" that opens a guide). */
+  declare fromCaseId: CreationOptional<string | null>;
+  /** On a closed card: items on its path answered "can't do it" (0: complete). */
+  declare cardGaps: CreationOptional<number | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -211,6 +218,8 @@ export class ServiceRule extends Model<InferAttributes<ServiceRule>, InferCreati
   declare name: string;
   declare everyHours: number | null;
   declare everyDays: number | null;
+  /** The card task that records this service when done on a card (null: recorded by hand only). */
+  declare task: CreationOptional<ServiceTask | null>;
   declare retired: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -226,6 +235,8 @@ export class ServiceRecord extends Model<InferAttributes<ServiceRecord>, InferCr
   declare engineHours: number | null;
   declare doneBy: number | null;
   declare note: string | null;
+  /** The card it was recorded on, if any. */
+  declare caseId: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
 }
 
@@ -361,6 +372,9 @@ export function initModels(sequelize: Sequelize) {
       handoffResolvedNote: DataTypes.STRING(1000),
       handoffMailedAt: DataTypes.DATE(3),
       handoffMailedTo: DataTypes.STRING(1000),
+      kind: { type: DataTypes.ENUM(...CASE_KINDS), defaultValue: "fix" },
+      fromCaseId: DataTypes.CHAR(36),
+      cardGaps: DataTypes.TINYINT.UNSIGNED,
       ...timestamps,
     },
     { sequelize, tableName: "cases" },
@@ -401,6 +415,7 @@ export function initModels(sequelize: Sequelize) {
       name: DataTypes.STRING(80),
       everyHours: decimal(6, 1, "everyHours"),
       everyDays: DataTypes.INTEGER.UNSIGNED,
+      task: DataTypes.STRING(40),
       retired: { type: DataTypes.BOOLEAN, defaultValue: false },
       ...timestamps,
     },
@@ -416,6 +431,7 @@ export function initModels(sequelize: Sequelize) {
       engineHours: decimal(8, 1, "engineHours"),
       doneBy: DataTypes.INTEGER.UNSIGNED,
       note: DataTypes.STRING(500),
+      caseId: DataTypes.CHAR(36),
       createdAt: DataTypes.DATE,
     },
     { sequelize, tableName: "service_records", updatedAt: false },

@@ -1,10 +1,10 @@
-/** `npm run guides:check [files…]`: checks guide files (default: all of content/guides). Exit 1 on any problem. */
+/** `npm run guides:check [files…]`: checks guide and rig card files (default: all of content/guides and content/cards). Exit 1 on any problem. */
 import path from "node:path";
-import { checkGuideFiles, contentDir, guideFilesIn, loadCauses } from "../app/lib/guides/files.server";
+import { checkGuideFiles, libraryFiles, loadCauses } from "../app/lib/guides/files.server";
 import { describeProblem } from "../app/lib/guides/validate";
 
 const args = process.argv.slice(2);
-const files = args.length ? args.map((f) => path.resolve(f)) : guideFilesIn(path.join(contentDir(), "guides"));
+const files = args.length ? args.map((f) => path.resolve(f)) : libraryFiles();
 const results = checkGuideFiles(files, loadCauses());
 let bad = 0;
 for (const r of results) {

@@ -3,12 +3,16 @@
  * fault board tells the same story on every machine: CF-03 is old and fails far more often
  * (and keeps losing prime through the same suction clamp), CF-11 is new and rarely fails,
  * BM-01 runs hot on foam in the spring. Engine hours climb through the spraying season.
+ * Rig cards (demo-cards.ts) go with it: a day without a complete pre-start brings more faults,
+ * and a day the lubricator was not charged can end with a dry pump-shaft seal leaking.
  */
 import { randomUUID } from "node:crypto";
 import type { CreationAttributes } from "sequelize";
 import { simplePaths, type GuidePath } from "../app/lib/guides/graph";
 import type { Guide } from "../app/lib/guides/schema";
-import { Case, CaseEvent, Company, db, GuideRecord, GuideVersion, Rig, User } from "../db/index";
+import { Case, CaseEvent, Company, db, GuideRecord, GuideVersion, Rig, ServiceRecord, ServiceRule, User } from "../db/index";
+import { guideKind } from "../app/lib/guides/kinds";
+import { CARE_HABITS, saveCard, type DemoCardSink } from "./demo-cards";
 import { rebuildBoardRollups } from "../app/services/board-rollups.server";
 import { seededRandom } from "./random";
 
@@ -88,14 +92,17 @@ export async function seedDemoHistory(now = new Date(), log: (line: string) => v
   const random = seededRandom(SEED);
   const records = await GuideRecord.findAll({ where: { companyId: null }, attributes: ["id", "slug", "publishedVersion"] });
   const versions = await GuideVersion.findAll({ where: { status: "published" }, attributes: ["id", "guideId", "definition"] });
+  const published = records.map((r) => ({ slug: r.slug, version: versions.find((x) => x.guideId === r.id)! }));
   const guides = new Map(
-    records.map((r) => {
-      const v = versions.find((x) => x.guideId === r.id)!;
-      const paths = simplePaths(v.definition);
-      return [r.slug, { versionId: v.id, definition: v.definition, paths }] as const;
-    }),
+    published
+      .filter((g) => guideKind(g.version.definition) === "guide")
+      .map(({ slug, version: v }) => [slug, { versionId: v.id, definition: v.definition, paths: simplePaths(v.definition) }] as const),
+  );
+  const cardsBy = new Map(
+    published.filter((g) => guideKind(g.version.definition) === "card").map(({ slug, version: v }) => [slug, { versionId: v.id, definition: v.definition }] as const),
   );
   const slugs = [...guides.keys()];
+  const sink: DemoCardSink = { cases: [], events: [], services: [] };
   const end = Date.UTC(now.getUTCFullYear(), now.getUTCMonth(), now.getUTCDate());
   const start = end - 365 * DAY;
 
@@ -111,13 +118,36 @@ export async function seedDemoHistory(now = new Date(), log: (line: string) => v
       for (let t = start; t < end; t += DAY) if (isWorkDay(new Date(t))) workDays.push(t);
       // Hours run backwards from today's meter, so the last case matches the rig page.
       let hours = Math.max(0, rig.engineHours - workDays.length * profile.hoursPerDay);
+      const habits = CARE_HABITS[rig.code];
+      const rules = (await ServiceRule.findAll({ where: { rigId: rig.id }, attributes: ["id", "task"] })).map((r) => ({ id: r.id, task: r.task ?? null }));
+      const meter = (h: number) => (rig.hasHourMeter ? Math.round(h * 10) / 10 : null);
       for (const day of workDays) {
+        const before = hours;
         hours += profile.hoursPerDay * (0.7 + 0.6 * random.next());
-        const n = poisson(profile.perDay * (0.5 + random.next()), random.next);
-        for (let k = 0; k < n; k++) {
-          const slug = random.next() < 0.7 ? random.weighted(profile.favourites) : random.pick(slugs);
+        const crew = random.weighted(openers);
+        const at = { companyId: company.id, rigId: rig.id, openedBy: crew, rules };
+        if (new Date(day).getUTCDay() === 1 && random.next() < habits.weekly)
+          saveCard(sink, random, cardsBy.get("weekly-service")!, { ...at, start: day + 12.5 * 3_600_000, hours: meter(before) });
+        let complete = false;
+        let lubed = false;
+        if (random.next() < habits.preStart) {
+          const skipGrease = random.next() < habits.greaseSkip;
+          const walked = saveCard(sink, random, cardsBy.get("pre-start")!, { ...at, start: day + (13 + random.next() * 0.5) * 3_600_000, hours: meter(before) }, (id) =>
+            id === "grease" && skipGrease ? "CANT" : undefined,
+          );
+          complete = !skipGrease;
+          lubed = walked.answers.some((a) => a.stepId === "lubricator" && a.answer === "DONE");
+        }
+        // A day with no complete pre-start brings more faults; an uncharged lubricator, a dry shaft seal (invented rates).
+        const n = poisson(profile.perDay * (0.5 + random.next()) * (complete ? 0.8 : 1.5), random.next);
+        const picks: (string | [string, string])[] = Array.from({ length: n }, () => (random.next() < 0.7 ? random.weighted(profile.favourites) : random.pick(slugs)));
+        if (!lubed && random.next() < 0.3) picks.push(["leaks", random.next() < 0.75 ? "fixed-pump-shaft" : "handoff-lube"]);
+        for (const pick of picks) {
+          const [slug, forced] = typeof pick === "string" ? [pick, null] : pick;
           const guide = guides.get(slug)!;
-          const path = choosePath(guide.paths, guide.definition, random, profile.repeatEnd?.[0] === slug ? profile.repeatEnd : undefined);
+          const path = forced
+            ? choosePath(guide.paths, guide.definition, random, [slug, forced, 1])
+            : choosePath(guide.paths, guide.definition, random, profile.repeatEnd?.[0] === slug ? profile.repeatEnd : undefined);
           const endKind = guide.definition.states[path.steps[path.steps.length - 1]].meta.kind;
           const abandoned = random.next() < 0.04;
           const id = randomUUID();
@@ -151,16 +181,29 @@ export async function seedDemoHistory(now = new Date(), log: (line: string) => v
             handoffResolvedAt: endKind === "handoff" && !abandoned && end - day > 7 * DAY ? new Date(closedAt.getTime() + 86_400_000) : null,
           });
         }
+        if (random.next() < habits.shutDown) {
+          const cold = [2, 3, 9, 10].includes(new Date(day).getUTCMonth()) && random.next() < 0.4;
+          saveCard(sink, random, cardsBy.get("shut-down-clean-out")!, { ...at, start: day + (23 + random.next() * 0.5) * 3_600_000, hours: meter(hours) }, (id) =>
+            id === "frost" ? (cold ? "YES" : "NO") : undefined,
+          );
+        }
       }
     }
   }
+  const allCases = [...cases, ...sink.cases];
+  const allEvents = [...events, ...sink.events];
   await sequelize.transaction(async (transaction) => {
-    for (let i = 0; i < cases.length; i += 1000) await Case.bulkCreate(cases.slice(i, i + 1000), { transaction });
-    for (let i = 0; i < events.length; i += 2000) await CaseEvent.bulkCreate(events.slice(i, i + 2000), { transaction });
+    for (let i = 0; i < allCases.length; i += 1000) await Case.bulkCreate(allCases.slice(i, i + 1000), { transaction });
+    for (let i = 0; i < allEvents.length; i += 2000) await CaseEvent.bulkCreate(allEvents.slice(i, i + 2000), { transaction });
+    // In time order: the service page reads a rule's latest record.
+    const services = [...sink.services].sort((a, b) => +a.doneAt - +b.doneAt);
+    for (let i = 0; i < services.length; i += 2000) await ServiceRecord.bulkCreate(services.slice(i, i + 2000), { transaction });
   });
+  // The demo's service rules were kept all year, not set up today.
+  await sequelize.query("UPDATE service_rules SET created_at = LEAST(created_at, :start)", { replacements: { start: new Date(start - 30 * DAY) } });
   // Bulk inserts skip the per-case upkeep of the board's rollups.
   await rebuildBoardRollups(sequelize);
-  log(`Seeded demo history: ${cases.length} cases, ${events.length} answers over a year.`);
+  log(`Seeded demo history: ${cases.length} cases, ${sink.cases.length} rig cards, ${sink.services.length} services recorded by cards, ${events.length + sink.events.length} answers over a year.`);
   return cases.length;
 }
 

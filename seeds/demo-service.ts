@@ -6,26 +6,28 @@
  */
 import { Rig, ServiceRecord, ServiceRule, User } from "../db/index";
 import type { Transaction } from "sequelize";
+import type { ServiceTask } from "../app/lib/guides/kinds";
 
-/** The demo's rules: name, every engine hours, every days (null: not counted that way). */
-export const DEMO_SERVICE_RULES: [string, number | null, number | null][] = [
-  ["Lubricator refill (pump shaft seal)", null, 1],
-  ["Grease points", 50, 7],
-  ["Pump seal inspection", 250, 180],
-  ["Hydraulic oil and filter", 500, 365],
+/** The demo's rules: name, every engine hours, every days (null: not counted that way), the card task that records it. */
+export const DEMO_SERVICE_RULES: [string, number | null, number | null, ServiceTask | null][] = [
+  ["Lubricator refill (pump shaft seal)", null, 1, "lubricator"],
+  ["Grease points", 50, 7, "grease"],
+  ["Pump seal inspection", 250, 180, null],
+  ["Hydraulic oil and filter", 500, 365, null],
 ];
 
 export async function seedServiceRules(companyId: number, transaction: Transaction) {
   const rigs = await Rig.findAll({ where: { companyId }, attributes: ["id", "hasHourMeter"], transaction });
   await ServiceRule.bulkCreate(
     rigs.flatMap((rig) =>
-      DEMO_SERVICE_RULES.map(([name, everyHours, everyDays]) => ({
+      DEMO_SERVICE_RULES.map(([name, everyHours, everyDays, task]) => ({
         companyId,
         rigId: rig.id,
         name,
         // A rig with no hour meter keeps the calendar alone.
         everyHours: rig.hasHourMeter ? everyHours : null,
         everyDays: everyDays ?? 30,
+        task,
       })),
     ),
     { transaction },
@@ -45,9 +47,10 @@ const DEFAULT_DONE: Record<string, [number, number]> = {
   "Hydraulic oil and filter": [150, 310],
 };
 
+/** The last time each rule was done, for the rules the history's cards do not record (they record lubricator and grease). */
 export async function seedServiceHistory(now: Date): Promise<number> {
-  if ((await ServiceRecord.count()) > 0) return 0;
-  const rules = await ServiceRule.findAll();
+  const recorded = new Set((await ServiceRecord.findAll({ attributes: ["ruleId"], group: ["rule_id"] })).map((r) => r.ruleId));
+  const rules = (await ServiceRule.findAll()).filter((r) => !recorded.has(r.id));
   const rigs = new Map((await Rig.findAll({ attributes: ["id", "code", "hasHourMeter", "engineHours", "companyId"] })).map((r) => [r.id, r]));
   const crews = await User.findAll({ where: { role: "crew" }, attributes: ["id", "companyId"] });
   const rows = rules.map((rule) => {

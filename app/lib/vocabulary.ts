@@ -44,6 +44,20 @@ export type CloseOutcome = (typeof CLOSE_OUTCOMES)[number];
 export const OUTCOME_LABELS: Record<Outcome, string> = { open: "Open", fixed: "Fixed", handoff: "Handed off", abandoned: "Abandoned" };
 export const outcomeLabel = (outcome: string) => OUTCOME_LABELS[outcome as Outcome] ?? outcome;
 
+/** A case is a fix (a guide walked for a fault) or a rig card (a routine walked); only fixes are faults. */
+export const CASE_KINDS = ["fix", "card"] as const;
+export type CaseKind = (typeof CASE_KINDS)[number];
+/** A card's ends read as the routine's state: its "fixed" end is the card complete, its hand-off the rig not ready. */
+export const CARD_OUTCOME_LABELS: Record<Outcome, string> = { open: "Under way", fixed: "Complete", handoff: "Rig not ready", abandoned: "Stopped part-way" };
+/** A closed card with every item done; one with items answered "can't do it" is complete with gaps. */
+export function cardStateLabel(outcome: Outcome, gaps: number | null): string {
+  if (outcome === "fixed" && gaps) return `Complete with ${gaps} item${gaps === 1 ? "" : "s"} not done`;
+  return CARD_OUTCOME_LABELS[outcome];
+}
+/** The outcome's words for either kind of case. */
+export const caseOutcomeLabel = (kind: CaseKind, outcome: Outcome, gaps: number | null = null) =>
+  kind === "card" ? cardStateLabel(outcome, gaps) : outcomeLabel(outcome);
+
 export const VERSION_STATUSES = ["draft", "in_review", "published", "retired"] as const;
 export type VersionStatus = (typeof VERSION_STATUSES)[number];
 export const STATUS_LABELS: Record<VersionStatus, string> = { draft: "Draft", in_review: "In review", published: "Published", retired: "Retired" };

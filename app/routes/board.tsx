@@ -6,6 +6,8 @@ import { boardQuerySchema, type BoardQuery } from "~/lib/stats/board-query";
 import { fmt } from "~/lib/field-math/units";
 import { shortLabel } from "~/lib/format";
 import { boardFor } from "~/services/board.server";
+import { careFor } from "~/services/care.server";
+import { CareSection } from "~/components/board/care-section";
 import { sendDigest } from "~/services/digest.server";
 import { refusal, requirePermission } from "~/services/guards.server";
 import { readQuery } from "~/services/read-request.server";
@@ -29,7 +31,7 @@ export async function loader({ request, context }: Route.LoaderArgs) {
     if (!formError) throw thrown;
     q = boardQuerySchema.parse({});
   }
-  const [board, rigs, service] = await Promise.all([boardFor(user, q), listRigs(user, { includeRetired: true }), serviceToDo(user)]);
+  const [board, rigs, service, care] = await Promise.all([boardFor(user, q), listRigs(user, { includeRetired: true }), serviceToDo(user), careFor(user, q)]);
   return {
     board,
     formError,
@@ -38,6 +40,7 @@ export async function loader({ request, context }: Route.LoaderArgs) {
     causeNames: Object.fromEntries(causeList().map((c) => [c.code, c.name])),
     canSendDigest: can(user, "send-digest"),
     service,
+    care,
   };
 }
 
@@ -211,6 +214,8 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
           definitions). Range: exact Poisson (Garwood).
         </p>
       </section>
+
+      <CareSection care={loaderData.care} />
 
       <section aria-labelledby="pareto-h" className="mt-6">
         <h2 id="pareto-h" className="text-2xl font-bold">

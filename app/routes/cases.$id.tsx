@@ -6,7 +6,7 @@ import { ConfirmAction } from "~/components/ui/confirm-action";
 import { Markdown } from "~/components/ui/markdown";
 import { PageTitle } from "~/components/ui/page-title";
 import { formatDuration } from "~/lib/format";
-import { answerLabel, causeBasis, outcomeLabel } from "~/lib/vocabulary";
+import { answerLabel, caseOutcomeLabel, causeBasis, outcomeLabel } from "~/lib/vocabulary";
 import { caseDetail } from "~/services/case-detail.server";
 import { resolveHandoff } from "~/services/cases.server";
 import { fail, requirePermission, requireUser } from "~/services/guards.server";
@@ -77,7 +77,7 @@ export default function CasePage({ loaderData: c }: Route.ComponentProps) {
     ["Opened", `${times.dateTime(c.openedAt)}`],
     ["Closed", c.closedAt ? `${times.dateTime(c.closedAt)}` : "—"],
     ["Time taken", duration],
-    ["Outcome", outcomeLabel(c.outcome)],
+    ["Outcome", caseOutcomeLabel(c.kind, c.outcome, c.cardGaps)],
     [
       "Cause",
       c.cause ? `${c.cause.name} (${c.cause.component}) · ${causeBasis(c.outcome, c.cause.code) === "suspected" ? "suspected at hand-off" : "found"}` : "—",
@@ -96,11 +96,34 @@ export default function CasePage({ loaderData: c }: Route.ComponentProps) {
         "no hands-on step reached"
       ),
     ],
-    ["Engine hours", c.engineHours !== null ? `${c.engineHours} h` : "—"],
+    [c.kind === "card" ? "Engine hours at the start" : "Engine hours", c.engineHours !== null ? `${c.engineHours} h` : "—"],
+    ...(c.fromCard
+      ? ([["Opened from", <Link key="from" to={`/cases/${c.fromCard.caseId}`}>{`the ${c.fromCard.title} card`}</Link>]] as [string, React.ReactNode][])
+      : []),
+    ...(c.kind === "card"
+      ? ([
+          [
+            "Guides opened from it",
+            c.fixesOpened.length ? (
+              <ul>
+                {c.fixesOpened.map((f) => (
+                  <li key={f.caseId}>
+                    <Link to={`/cases/${f.caseId}`}>{f.title}</Link> ({outcomeLabel(f.outcome).toLowerCase()})
+                  </li>
+                ))}
+              </ul>
+            ) : (
+              "none"
+            ),
+          ],
+        ] as [string, React.ReactNode][])
+      : []),
   ];
   return (
     <>
-      <PageTitle lead={`${c.rig.code} · ${c.guide.title}`}>Case {outcomeLabel(c.outcome).toLowerCase()}</PageTitle>
+      <PageTitle lead={`${c.rig.code} · ${c.guide.title}`}>
+        {c.kind === "card" ? `Card: ${caseOutcomeLabel(c.kind, c.outcome, c.cardGaps).toLowerCase()}` : `Case ${outcomeLabel(c.outcome).toLowerCase()}`}
+      </PageTitle>
       {c.outcome === "open" ? (
         <Link to={`/cases/${c.id}/walk`} className="mb-4 flex min-h-14 items-center justify-center rounded-md bg-go text-lg font-bold text-white no-underline">
           Continue the walk-through

@@ -12,6 +12,7 @@ import { caseDetail } from "~/services/case-detail.server";
 import { guideTexts } from "~/services/guide-text.server";
 import { requireUser } from "~/services/guards.server";
 import { causeNames } from "~/services/guides.server";
+import { todaysFacts } from "~/services/cards.server";
 import type { Route } from "./+types/cases.$id.walk";
 
 // One step in twenty has a calculator: its code loads only on such a step (kept on the phone all the same).
@@ -37,6 +38,9 @@ export async function loader({ request, params, context }: Route.LoaderArgs): Pr
     stepsToEnd: stepsToEnd(detail.guide.definition),
     causeNames: namesFor(detail.guide.definition, causeNames()),
     events: detail.events.map((e) => ({ id: e.id, seq: e.seq, stepId: e.stepId, answer: e.answer as Answer, at: e.at, ...(e.note ? { note: e.note } : {}) })),
+    kind: detail.kind,
+    fromCard: detail.fromCard,
+    dayFacts: detail.outcome === "open" ? await todaysFacts(user, detail.rigId, detail.guide.definition) : {},
   };
 }
 
@@ -85,6 +89,9 @@ export default function Walk({ loaderData }: Route.ComponentProps) {
         closedAs={d.closedAs}
         offlineReady={offlineReady}
         fromPhone={d.fromPhone}
+        kind={d.kind ?? "fix"}
+        fromCard={d.fromCard ?? null}
+        serverDayFacts={d.dayFacts ?? {}}
         renderFieldMath={(widget) => (
           <Suspense fallback={<p className="text-lg">Opening the calculator…</p>}>
             <FieldMathWidget widget={widget} rig={d.rig} />

@@ -61,7 +61,7 @@ export default function Home({ loaderData }: Route.ComponentProps) {
   const more = navFor(role).filter((item) => !forEveryone(item) && !hidden.includes(item.to));
   return (
     <>
-      <PageTitle lead="Pick the rig that is acting up.">Hi {firstName}. Which rig?</PageTitle>
+      <PageTitle lead="Pick the rig that is acting up, or start its day with a card.">Hi {firstName}. Which rig?</PageTitle>
       <PhoneReadiness personId={personId} />
       {rigs.length === 0 ? (
         <p className="rounded-md bg-paper p-4">Your company has no active rigs yet. An admin can add them under Rigs.</p>
@@ -80,6 +80,12 @@ export default function Home({ loaderData }: Route.ComponentProps) {
                 <span>
                   {rig.name} · {rig.tankGal.toLocaleString("en-US")} gal {rig.mount}
                 </span>
+              </Link>
+              <Link
+                to={`/rigs/${rig.code}/cards`}
+                className="mt-1 flex min-h-14 items-center rounded-lg border-2 border-ink bg-field px-4 text-lg font-bold text-ink no-underline"
+              >
+                Pre-start and other cards for {rig.code}
               </Link>
             </li>
           ))}

@@ -6,10 +6,11 @@ import { serverOrPhone } from "~/components/offline/server-or-phone";
 import { useGuideSearch } from "~/components/walk/use-guide-search";
 import { loadKit, openWalksOnPhone, startOnPhone } from "~/lib/walk/kept";
 import { isNoSignal } from "~/lib/walk/no-signal";
+import { guideKind } from "~/lib/guides/kinds";
 import type { loader as shellLoader } from "./shell";
 import { openWalksOn, startCase } from "~/services/cases.server";
 import { fail, requireUser } from "~/services/guards.server";
-import { usableGuides } from "~/services/guides.server";
+import { faultGuides } from "~/services/guides.server";
 import { findRig } from "~/services/rigs.server";
 import { readForm } from "~/services/read-request.server";
 import type { Route } from "./+types/rigs.$code.fix";
@@ -17,7 +18,7 @@ import type { Route } from "./+types/rigs.$code.fix";
 export async function loader({ request, params, context }: Route.LoaderArgs) {
   const user = await requireUser({ request, context });
   const rig = await findRig(user, params.code);
-  const [guides, openWalks] = await Promise.all([usableGuides(user), openWalksOn(user, rig.id)]);
+  const [guides, openWalks] = await Promise.all([faultGuides(user), openWalksOn(user, rig.id)]);
   return {
     rig: { code: rig.code, name: rig.name, retired: rig.retired },
     openWalks: openWalks.map((w) => ({ ...w, onPhoneOnly: false })),
@@ -39,7 +40,7 @@ export async function clientLoader({ params, serverLoader }: Route.ClientLoaderA
     return {
       rig: { code: rig.code, name: rig.name, retired: false },
       openWalks: [],
-      tiles: kit.guides.map((g) => ({ slug: g.slug, title: g.title, hint: g.symptoms[0] })),
+      tiles: kit.guides.filter((g) => guideKind(g.definition) === "guide").map((g) => ({ slug: g.slug, title: g.title, hint: g.symptoms[0] })),
       caseId: crypto.randomUUID(),
     };
   });
@@ -48,20 +49,23 @@ export async function clientLoader({ params, serverLoader }: Route.ClientLoaderA
   return { ...page, openWalks: [...onPhone, ...page.openWalks] };
 }
 
+const optionalId = z
+  .string()
+  .uuid()
+  .optional()
+  .or(z.literal("").transform(() => undefined));
 const startForm = z.object({
   guideSlug: z.string().min(1).max(80),
-  caseId: z
-    .string()
-    .uuid()
-    .optional()
-    .or(z.literal("").transform(() => undefined)),
+  caseId: optionalId,
+  /** A card item that opens this guide: the fix links back to the card. */
+  fromCaseId: optionalId,
 });
 
 export async function action({ request, params, context }: Route.ActionArgs) {
   const user = await requireUser({ request, context });
   const parsed = startForm.safeParse(Object.fromEntries(await readForm(request)));
   if (!parsed.success) fail(400, "Pick a guide to start.");
-  const { id } = await startCase(user, { id: parsed.data.caseId, rigCode: params.code, guideSlug: parsed.data.guideSlug });
+  const { id } = await startCase(user, { id: parsed.data.caseId, rigCode: params.code, guideSlug: parsed.data.guideSlug, fromCaseId: parsed.data.fromCaseId });
   return redirect(`/cases/${id}/walk`);
 }
 
@@ -75,7 +79,14 @@ export async function clientAction({ request, params, serverAction }: Route.Clie
     const kit = loadKit(window.localStorage);
     if (!kit) return { problem: "No signal, and this phone has not kept the guides yet. Open Tankside once where there is signal." };
     const caseId = String(form.get("caseId") ?? "") || crypto.randomUUID();
-    const started = startOnPhone(window.localStorage, kit, { caseId, rigCode: params.code, guideSlug: String(form.get("guideSlug") ?? ""), now: new Date() });
+    const fromCaseId = String(form.get("fromCaseId") ?? "");
+    const started = startOnPhone(window.localStorage, kit, {
+      caseId,
+      rigCode: params.code,
+      guideSlug: String(form.get("guideSlug") ?? ""),
+      now: new Date(),
+      fromCard: fromCaseId ? { caseId: fromCaseId, title: String(form.get("fromTitle") ?? "the card") } : undefined,
+    });
     if (!started.ok) return { problem: started.problem };
     return redirect(`/cases/${started.caseId}/walk`);
   }

@@ -8,6 +8,7 @@ import { parseForm } from "~/lib/forms/parse";
 import { can } from "~/lib/permissions";
 import { dueText, intervalWords, readingProblem, SERVICE_STATUS_LABELS, type ServiceStatus } from "~/lib/rigs/service";
 import { serviceDoneSchema, serviceRuleSchema } from "~/lib/rigs/service-forms";
+import { SERVICE_TASK_KEYS, SERVICE_TASKS } from "~/lib/guides/kinds";
 import { fail, requireCan, requireUser } from "~/services/guards.server";
 import { readForm } from "~/services/read-request.server";
 import { findRig } from "~/services/rigs.server";
@@ -251,6 +252,18 @@ function RuleFields({ intent, line, errors }: { intent: "add-rule" | "edit-rule"
         line?.everyDays != null ? String(line.everyDays) : "",
         "Blank if it goes by engine hours only. With both, whichever comes first.",
       )}
+      <label className="block font-bold">
+        Also recorded by a rig card
+        <span className="block text-sm font-normal">When a card item for this task is done, the service is recorded with the card's hours.</span>
+        <select name="task" defaultValue={line?.task ?? ""} className={input}>
+          <option value="">No: recorded by hand only</option>
+          {SERVICE_TASK_KEYS.map((t) => (
+            <option key={t} value={t}>
+              {SERVICE_TASKS[t]}
+            </option>
+          ))}
+        </select>
+      </label>
       <button name="intent" value={intent} className="min-h-14 w-full rounded-lg border-2 border-ink bg-paper text-lg font-bold">
         {intent === "add-rule" ? "Add this service" : "Save the change"}
       </button>

@@ -1,8 +1,9 @@
 import { Form, Link } from "react-router";
 import { PageTitle } from "~/components/ui/page-title";
 import { fmt, ftToM, galToL, inToMm } from "~/lib/field-math/units";
-import { outcomeLabel } from "~/lib/vocabulary";
+import { cardStateLabel, outcomeLabel } from "~/lib/vocabulary";
 import { recentRigCases } from "~/services/cases.server";
+import { cardsOnRig, type CardDone } from "~/services/cards.server";
 import { fail, requirePermission, requireUser } from "~/services/guards.server";
 import { ConfirmAction } from "~/components/ui/confirm-action";
 import { findRig, setRigRetired } from "~/services/rigs.server";
@@ -21,8 +22,19 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
   const user = await requireUser({ request, context });
   const found = await findRig(user, params.code);
   const rig: RigView = { ...walkRigOf(found), mount: found.mount, pumpKind: found.pumpKind, retired: found.retired, notes: found.notes };
-  const [cases, service] = await Promise.all([recentRigCases(user, found.id), serviceLines(user, { rigId: found.id })]);
-  return { rig, canEdit: can(user, "edit-rigs"), cases, service: serviceCounts(service) as ReturnType<typeof serviceCounts> | null, fromPhone: false };
+  const [cases, cards, service] = await Promise.all([
+    recentRigCases(user, found.id),
+    cardsOnRig(user, found.id, { limit: 8 }),
+    serviceLines(user, { rigId: found.id }),
+  ]);
+  return {
+    rig,
+    canEdit: can(user, "edit-rigs"),
+    cases,
+    cards,
+    service: serviceCounts(service) as ReturnType<typeof serviceCounts> | null,
+    fromPhone: false,
+  };
 }
 
 type RigView = KitRig & { retired: boolean; notes: string | null };
@@ -33,7 +45,7 @@ export async function clientLoader({ params, serverLoader }: Route.ClientLoaderA
     const kept = kit.rigs.find((r) => r.code === params.code.toUpperCase());
     if (!kept) return null;
     const rig: RigView = { ...kept, retired: false, notes: null };
-    return { rig, canEdit: false, cases: [], service: null, fromPhone: true };
+    return { rig, canEdit: false, cases: [], cards: [] as CardDone[], service: null, fromPhone: true };
   });
 }
 
@@ -49,7 +61,7 @@ export async function action({ request, params, context }: Route.ActionArgs) {
 
 export default function RigPage({ loaderData }: Route.ComponentProps) {
   const times = useTimes();
-  const { rig, canEdit, cases, service, fromPhone } = loaderData;
+  const { rig, canEdit, cases, cards, service, fromPhone } = loaderData;
   // A page the phone kept earlier, opened with no signal, says so: its hours and cases may be old.
   const stale = !useOnline() && !fromPhone;
   const specs: [string, string][] = [
@@ -77,6 +89,9 @@ export default function RigPage({ loaderData }: Route.ComponentProps) {
         <div className="mb-4 grid gap-3 sm:grid-cols-2">
           <Link to="fix" className="flex min-h-16 items-center justify-center rounded-lg bg-go text-xl font-bold text-white no-underline">
             Start a fix on {rig.code}
+          </Link>
+          <Link to="cards" className="flex min-h-16 items-center justify-center rounded-lg border-4 border-go bg-paper text-xl font-bold text-ink no-underline">
+            Rig cards: pre-start and the day
           </Link>
           <Link
             to="label"
@@ -172,6 +187,30 @@ export default function RigPage({ loaderData }: Route.ComponentProps) {
           <p className="mt-1">No cases yet.</p>
         )}
       </section>
+      {fromPhone ? null : (
+        <section aria-labelledby="cards-h" className="mt-5">
+          <h2 id="cards-h" className="text-xl font-bold">
+            Recent cards
+          </h2>
+          {cards.length ? (
+            <ul className="mt-2 space-y-2">
+              {cards.map((c) => (
+                <li key={c.id} className="rounded-md border-2 border-rule bg-paper p-3">
+                  <Link to={`/cases/${c.id}`} className="font-bold">
+                    {c.title}
+                  </Link>
+                  <p>
+                    {cardStateLabel(c.outcome, c.gaps)} · {times.dateTime(c.openedAt)} · {c.by ?? "—"}
+                    {c.engineHours !== null ? ` · ${c.engineHours.toLocaleString("en-US")} h` : ""}
+                  </p>
+                </li>
+              ))}
+            </ul>
+          ) : (
+            <p className="mt-1">No cards yet.</p>
+          )}
+        </section>
+      )}
       {canEdit ? (
         <div className="mt-4 flex flex-wrap gap-3">
           <Link to="edit" className="flex min-h-14 items-center rounded-md bg-go px-5 font-bold text-white no-underline">

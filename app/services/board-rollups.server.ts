@@ -30,7 +30,7 @@ async function markAllChains(sequelize: Sequelize, s: Scope) {
       SELECT id, rig_id, cause_code, opened_at, SUM(starts) OVER (PARTITION BY rig_id, cause_code ORDER BY opened_at, id) AS chain FROM (
         SELECT id, rig_id, cause_code, opened_at,
           CASE WHEN LAG(opened_at) OVER (PARTITION BY rig_id, cause_code ORDER BY opened_at, id) >= opened_at - INTERVAL :days DAY THEN 0 ELSE 1 END AS starts
-        FROM cases WHERE company_id = :company AND cause_code IS NOT NULL
+        FROM cases WHERE company_id = :company AND kind = 'fix' AND cause_code IS NOT NULL
       ) marked
     ) numbered`;
   await sequelize.query(`UPDATE cases c JOIN (${chained}) d ON d.id = c.id SET c.repeat_chain_at = d.chain_at WHERE NOT (c.repeat_chain_at <=> d.chain_at)`, {
@@ -45,7 +45,8 @@ async function refreshDays(sequelize: Sequelize, s: Scope, from: Date, to: Date)
   const run = (sql: string, range: { from: Date; to: Date }) =>
     sequelize.query(sql, { replacements: { company: s.companyId, from: range.from, to: range.to }, transaction: s.transaction });
   const days = { from, to };
-  const caseDays = "c.company_id = :company AND c.opened_at >= :from AND c.opened_at < :to";
+  // Rig cards are routine, not faults: no board figure counts them.
+  const caseDays = "c.company_id = :company AND c.kind = 'fix' AND c.opened_at >= :from AND c.opened_at < :to";
 
   await run("DELETE FROM board_rig_days WHERE company_id = :company AND day >= :from AND day < :to", days);
   await run(
@@ -101,6 +102,8 @@ export interface CaseKey {
   rigId: number;
   causeCode: string | null;
   openedAt: Date;
+  /** A card changes no rollup (only the reports version); absent means a fix. */
+  kind?: "fix" | "card";
 }
 
 /** Raises the company's reports version (migration 020): reports kept in memory are computed afresh. */
@@ -176,7 +179,7 @@ export async function changeCase<T extends CaseKey>(sequelize: Sequelize, compan
   return sequelize.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED }, async (transaction) => {
     await lockCompany(sequelize, companyId, transaction);
     const changed = await change(transaction);
-    await refreshForCase(sequelize, changed, transaction);
+    if (changed.kind !== "card") await refreshForCase(sequelize, changed, transaction);
     await raiseReportsVersion(sequelize, companyId, transaction);
     return changed;
   });

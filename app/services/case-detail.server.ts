@@ -1,7 +1,7 @@
 import type { Guide } from "~/lib/guides/schema";
 import { ownedBy } from "./tenancy.server";
 import { walkRigOf, type WalkRig } from "~/lib/rigs/specs";
-import type { Outcome } from "~/lib/vocabulary";
+import type { CaseKind, Outcome } from "~/lib/vocabulary";
 import { Case, CaseEvent, CasePhoto, GuideRecord, GuideVersion, Rig, User } from "./db.server";
 import { notFound, type SessionUser } from "./guards.server";
 
@@ -52,17 +52,45 @@ export interface CaseDetail {
   openedBy: string | null;
   events: { id: string; seq: number; stepId: string; answer: string; at: string; note: string | null }[];
   photos: { id: number; stepId: string | null; contentType: string; takenAt: string }[];
+  kind: CaseKind;
+  rigId: number;
+  /** On a closed card: items answered "can't do it". */
+  cardGaps: number | null;
+  /** The card this fix was opened from. */
+  fromCard: { caseId: string; title: string } | null;
+  /** The fixes opened from this card's items. */
+  fixesOpened: { caseId: string; title: string; outcome: Outcome }[];
+}
+
+type WithTitle = Case & { guideVersion: GuideVersion & { guide: GuideRecord } };
+const titled = [{ model: GuideVersion, as: "guideVersion", attributes: ["id"], include: [{ model: GuideRecord, as: "guide", attributes: ["title"] }] }];
+
+/** The card a fix came from and the fixes a card opened, both within the company. */
+async function cardLinks(user: SessionUser, found: Case) {
+  const [from, opened] = await Promise.all([
+    found.fromCaseId ? (Case.findOne({ where: ownedBy(user, { id: found.fromCaseId }), attributes: ["id"], include: titled }) as Promise<WithTitle | null>) : null,
+    found.kind === "card"
+      ? (Case.findAll({ where: ownedBy(user, { fromCaseId: found.id }), attributes: ["id", "outcome"], include: titled, order: [["openedAt", "ASC"]] }) as Promise<
+          WithTitle[]
+        >)
+      : [],
+  ]);
+  return {
+    fromCard: from ? { caseId: from.id, title: from.guideVersion.guide.title } : null,
+    fixesOpened: opened.map((c) => ({ caseId: c.id, title: c.guideVersion.guide.title, outcome: c.outcome })),
+  };
 }
 
 export async function caseDetail(user: SessionUser, caseId: string): Promise<CaseDetail> {
   const { found, guide, version } = await findCaseWithGuide(user, caseId);
-  const [rig, record, opener, resolver, events, photos] = await Promise.all([
+  const [rig, record, opener, resolver, events, photos, links] = await Promise.all([
     Rig.findByPk(found.rigId),
     GuideRecord.findByPk(version.guideId, { attributes: ["slug", "title"] }),
     found.openedBy ? User.findByPk(found.openedBy, { attributes: ["name"] }) : null,
     found.handoffResolvedBy ? User.findByPk(found.handoffResolvedBy, { attributes: ["name"] }) : null,
     CaseEvent.findAll({ where: { caseId }, order: [["seq", "ASC"]] }),
     CasePhoto.findAll({ where: { caseId }, attributes: ["id", "stepId", "contentType", "createdAt"], order: [["id", "ASC"]] }),
+    cardLinks(user, found),
   ]);
   return {
     id: found.id,
@@ -82,5 +110,9 @@ export async function caseDetail(user: SessionUser, caseId: string): Promise<Cas
     openedBy: opener?.name ?? null,
     events: events.map((e) => ({ id: e.id, seq: e.seq, stepId: e.stepId, answer: e.answer, at: e.at.toISOString(), note: e.note })),
     photos: photos.map((p) => ({ id: p.id, stepId: p.stepId, contentType: p.contentType, takenAt: p.createdAt.toISOString() })),
+    kind: found.kind,
+    rigId: found.rigId,
+    cardGaps: found.cardGaps,
+    ...links,
   };
 }

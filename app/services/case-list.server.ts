@@ -44,7 +44,7 @@ function where(user: SessionUser, f: CaseFilters) {
   };
   const sql = `FROM cases c JOIN rigs r ON r.id = c.rig_id JOIN guide_versions v ON v.id = c.guide_version_id JOIN guides g ON g.id = v.guide_id
     LEFT JOIN users u ON u.id = c.opened_by
-    WHERE c.company_id = :company AND (:rig IS NULL OR r.code = :rig) AND (:guide IS NULL OR g.slug = :guide)
+    WHERE c.company_id = :company AND c.kind = 'fix' AND (:rig IS NULL OR r.code = :rig) AND (:guide IS NULL OR g.slug = :guide)
       AND (:cause IS NULL OR c.cause_code = :cause) AND (:outcome IS NULL OR c.outcome = :outcome) AND (:person IS NULL OR c.opened_by = :person)
       AND (:from IS NULL OR c.opened_at >= :from) AND (:to IS NULL OR c.opened_at < :to)`;
   return { sql, replacements };

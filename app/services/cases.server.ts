@@ -1,12 +1,13 @@
 import { randomUUID } from "node:crypto";
 import { ownedBy, usableBy } from "./tenancy.server";
 import { Op, UniqueConstraintError, type Transaction } from "sequelize";
-import { LATE_START_DAYS, type CaseEventInput, type CloseCaseInput } from "~/lib/cases/schema";
+import { LATE_START_DAYS, type CaseEventInput, type CloseCaseInput, type StartCaseInput } from "~/lib/cases/schema";
 import { answerFits } from "~/lib/walk/replay";
-import { isFinalKind } from "~/lib/guides/schema";
-import { outcomeLabel } from "~/lib/vocabulary";
+import { guideKind, isFinalKind, type Guide } from "~/lib/guides/schema";
+import { outcomeLabel, type CaseKind } from "~/lib/vocabulary";
 import { findCaseWithGuide } from "./case-detail.server";
-import { Case, CaseEvent, changeCase, GuideRecord, GuideVersion, Rig, sequelize, User } from "./db.server";
+import { Case, CaseEvent, changeCase, GuideRecord, GuideVersion, Rig, sequelize, ServiceRecord, ServiceRule, User } from "./db.server";
+import { affirms, cardGaps, heldAnswers, type HeldAnswer } from "~/lib/walk/held-answers";
 import { fail, notFound, type SessionUser } from "./guards.server";
 import { usableGuides } from "./guides.server";
 import { reportsChanged } from "./report-cache.server";
@@ -15,20 +16,22 @@ import { mailHandoffOnce, NO_MAIL } from "./handoff.server";
 /**
  * The version a case follows: the one the phone walked, if it sent one (a start made with no signal; it may
  * have been retired since, and still counts, since the crew followed it), else the newest published one.
+ * Its kind says whether the case is a fix or a rig card.
  */
-async function versionToFollow(user: SessionUser, guideSlug: string, guideVersionId: number | undefined): Promise<number> {
+async function versionToFollow(user: SessionUser, guideSlug: string, guideVersionId: number | undefined): Promise<{ id: number; kind: CaseKind }> {
+  const caseKind = (definition: Guide): CaseKind => (guideKind(definition) === "card" ? "card" : "fix");
   if (guideVersionId === undefined) {
     const guide = (await usableGuides(user)).find((g) => g.slug === guideSlug);
     if (!guide) notFound(`Guide ${guideSlug}`);
-    return guide.versionId;
+    return { id: guide.versionId, kind: caseKind(guide.definition) };
   }
   const version = await GuideVersion.findOne({
     where: { id: guideVersionId, status: { [Op.in]: ["published", "retired"] } },
     include: [{ model: GuideRecord, as: "guide", where: usableBy(user, { slug: guideSlug }), attributes: ["id"] }],
-    attributes: ["id"],
+    attributes: ["id", "definition"],
   });
   if (!version) notFound(`Version ${guideVersionId} of guide ${guideSlug}`);
-  return version.id;
+  return { id: version.id, kind: caseKind(version.definition) };
 }
 
 /** A phone's opening time: up to LATE_START_DAYS old (a start kept with no signal), never ahead of the server by more than a few minutes. */
@@ -48,8 +51,8 @@ function openingTime(openedAt: string | undefined, now = new Date()): Date {
  * Starts a case on one of the company's active rigs. Resending the same id is harmless. A start made on a
  * phone with no signal arrives later with its own opening time and the version it walked.
  */
-export async function startCase(user: SessionUser, input: { id?: string; rigCode: string; guideSlug: string; openedAt?: string; guideVersionId?: number }) {
-  const rig = await Rig.findOne({ where: ownedBy(user, { code: input.rigCode.toUpperCase() }), attributes: ["id", "code", "retired"] });
+export async function startCase(user: SessionUser, input: StartCaseInput) {
+  const rig = await Rig.findOne({ where: ownedBy(user, { code: input.rigCode.toUpperCase() }), attributes: ["id", "code", "retired", "hasHourMeter"] });
   if (!rig) notFound(`Rig ${input.rigCode}`);
   const id = input.id ?? randomUUID();
   const existing = await Case.findByPk(id, { attributes: ["id", "companyId", "rigId", "guideVersionId"] });
@@ -59,8 +62,19 @@ export async function startCase(user: SessionUser, input: { id?: string; rigCode
     return { id, created: false };
   }
   if (rig.retired) fail(409, `Rig ${rig.code} has been retired, so no new fix can be saved on it. Tell your supervisor which rig you were working on.`);
-  const guideVersionId = await versionToFollow(user, input.guideSlug, input.guideVersionId);
+  const version = await versionToFollow(user, input.guideSlug, input.guideVersionId);
   const openedAt = openingTime(input.openedAt);
+  // A card keeps the hour meter current every day: its reading is taken as it starts.
+  const engineHours = version.kind === "card" && rig.hasHourMeter ? (input.engineHours ?? null) : null;
+  if (version.kind === "card" && rig.hasHourMeter && engineHours === null)
+    fail(422, `Give the hour meter reading: rig ${rig.code} has one, and a card records it as it starts.`, { engineHours: "required for a card on this rig" });
+  const fromCaseId = input.fromCaseId ?? null;
+  if (fromCaseId) {
+    // A card still on the phone (no signal) may arrive after the fix it opened: an unknown id is kept;
+    // one that is another company's, another rig's or not a card is refused.
+    const from = await Case.findByPk(fromCaseId, { attributes: ["companyId", "rigId", "kind"] });
+    if (from && (from.companyId !== user.companyId || from.rigId !== rig.id || from.kind !== "card")) notFound(`Card ${fromCaseId} on rig ${rig.code}`);
+  }
   try {
     await changeCase(sequelize, user.companyId, async (transaction) => {
       const created = await Case.create(
@@ -68,11 +82,13 @@ export async function startCase(user: SessionUser, input: { id?: string; rigCode
           id,
           companyId: user.companyId,
           rigId: rig.id,
-          guideVersionId,
+          guideVersionId: version.id,
+          kind: version.kind,
+          fromCaseId,
           openedBy: user.id,
           openedAt,
           closedAt: null,
-          engineHours: null,
+          engineHours,
           finalStep: null,
           causeCode: null,
           safetyAckAt: null,
@@ -80,7 +96,9 @@ export async function startCase(user: SessionUser, input: { id?: string; rigCode
         },
         { transaction },
       );
-      return { id, companyId: user.companyId, rigId: rig.id, causeCode: null, openedAt: created.openedAt };
+      if (engineHours !== null)
+        await Rig.update({ engineHours }, { where: { id: rig.id, engineHours: { [Op.lt]: engineHours } }, transaction });
+      return { id, companyId: user.companyId, rigId: rig.id, kind: version.kind, causeCode: null, openedAt: created.openedAt };
     });
   } catch (error) {
     // The same start sent twice at once (two tabs, or a resend racing the first): the first one stands.
@@ -189,6 +207,8 @@ export async function closeCase(user: SessionUser, caseId: string, input: CloseC
     causeCode = step.meta.cause ?? null;
   }
   const closedAt = input.at ? new Date(input.at) : new Date();
+  const card = found.kind === "card";
+  const held = card ? heldAnswers(await storedAnswers(caseId)) : [];
   await changeCase(sequelize, found.companyId, async (transaction) => {
     await found.update(
       {
@@ -196,24 +216,67 @@ export async function closeCase(user: SessionUser, caseId: string, input: CloseC
         finalStep: input.finalStep ?? null,
         causeCode,
         closedAt,
-        engineHours: input.engineHours ?? null,
+        // A card's reading was taken as it started; a later one given at its end wins.
+        engineHours: input.engineHours ?? (card ? found.engineHours : null),
         note: input.note?.trim() || null,
+        cardGaps: card ? cardGaps(held) : null,
       },
       { transaction },
     );
+    if (card) await recordCardServices(found, guide, held, transaction);
     if (input.engineHours !== undefined) {
       await Rig.update({ engineHours: input.engineHours }, { where: { id: found.rigId, engineHours: { [Op.lt]: input.engineHours } }, transaction });
     }
-    return { id: found.id, companyId: found.companyId, rigId: found.rigId, causeCode, openedAt: found.openedAt };
+    return { id: found.id, companyId: found.companyId, rigId: found.rigId, kind: found.kind, causeCode, openedAt: found.openedAt };
   });
   // The case is closed either way; a mail server that is down must not lose the crew's answers.
   return { outcome: input.outcome, alreadyClosed: false, ...(input.outcome === "handoff" ? await mailHandoffOnce(user, caseId) : NO_MAIL) };
 }
 
-/** A rig's latest cases, newest first, for its page. */
+const storedAnswers = async (caseId: string) =>
+  (await CaseEvent.findAll({ where: { caseId }, attributes: ["stepId", "answer", "at"], order: [["seq", "ASC"]] })).map((e) => ({
+    stepId: e.stepId,
+    answer: e.answer,
+    at: e.at.toISOString(),
+  }));
+
+/**
+ * A card item that records a service (grease points, lubricator…), answered done or yes, is a
+ * service done on every active rule of the rig for that task, at the answer's time with the card's
+ * reading. Called once, as the card closes.
+ */
+async function recordCardServices(found: Case, guide: Guide, held: HeldAnswer[], transaction: Transaction) {
+  const done = held.flatMap((e) => {
+    const task = guide.states[e.stepId]?.meta.service;
+    return task && affirms(e.answer) ? [{ task, at: new Date(e.at) }] : [];
+  });
+  if (!done.length) return;
+  const rules = await ServiceRule.findAll({
+    where: { companyId: found.companyId, rigId: found.rigId, retired: false, task: [...new Set(done.map((d) => d.task))] },
+    attributes: ["id", "task"],
+    transaction,
+  });
+  const rows = done.flatMap((d) =>
+    rules
+      .filter((r) => r.task === d.task)
+      .map((r) => ({
+        companyId: found.companyId,
+        rigId: found.rigId,
+        ruleId: r.id,
+        doneAt: d.at,
+        engineHours: found.engineHours,
+        doneBy: found.openedBy,
+        note: null,
+        caseId: found.id,
+      })),
+  );
+  if (rows.length) await ServiceRecord.bulkCreate(rows, { transaction });
+}
+
+/** A rig's latest fixes, newest first, for its page (its cards are listed apart). */
 export async function recentRigCases(user: SessionUser, rigId: number, limit = 10) {
   const rows = await Case.findAll({
-    where: ownedBy(user, { rigId }),
+    where: ownedBy(user, { rigId, kind: "fix" }),
     attributes: ["id", "outcome", "openedAt", "closedAt", "causeCode"],
     include: [
       { model: GuideVersion, as: "guideVersion", attributes: ["number"], include: [{ model: GuideRecord, as: "guide", attributes: ["title"] }] },

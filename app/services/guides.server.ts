@@ -2,7 +2,7 @@ import { Op } from "sequelize";
 import { replacedBuiltIns, usableBy } from "./tenancy.server";
 import { loadCauses } from "~/lib/guides/files.server";
 import type { Cause } from "~/lib/guides/causes";
-import type { Guide } from "~/lib/guides/schema";
+import { guideKind, type Guide, type GuideKind } from "~/lib/guides/schema";
 import { createGuideSearch, searchDocFor, type SearchHit } from "~/lib/guides/search";
 import { GuideRecord, GuideVersion } from "./db.server";
 import type { SessionUser } from "./guards.server";
@@ -20,10 +20,17 @@ export interface UsableGuide {
   versionId: number;
   version: number;
   definition: Guide;
+  /** A fault guide or a rig card (the definition says; guides leave it out). */
+  kind: GuideKind;
 }
 
+/** The published fault guides (no rig cards), for the fix page. */
+export const faultGuides = async (user: SessionUser) => (await usableGuides(user)).filter((g) => g.kind === "guide");
+/** The published rig cards, for the cards page. */
+export const rigCards = async (user: SessionUser) => (await usableGuides(user)).filter((g) => g.kind === "card");
+
 /**
- * The published guides a company's crews get: its own, plus every built-in guide it has
+ * The published guides and cards a company's crews get: its own, plus every built-in guide it has
  * not replaced with its own copy.
  */
 export async function usableGuides(user: SessionUser): Promise<UsableGuide[]> {
@@ -44,7 +51,8 @@ export async function usableGuides(user: SessionUser): Promise<UsableGuide[]> {
     .filter((r) => byGuide.has(r.id))
     .map((r) => {
       const v = byGuide.get(r.id)!;
-      return { guideId: r.id, slug: r.slug, title: r.title, versionId: v.id, version: v.number, definition: definitions.get(v.id)! };
+      const definition = definitions.get(v.id)!;
+      return { guideId: r.id, slug: r.slug, title: r.title, versionId: v.id, version: v.number, definition, kind: guideKind(definition) };
     })
     .sort((a, b) => a.title.localeCompare(b.title));
 }
@@ -81,5 +89,6 @@ export async function searchGuides(user: SessionUser, query: string): Promise<Se
 
 function buildIndex(guides: UsableGuide[]) {
   const names = causeNames();
-  return createGuideSearch(guides.map((g) => searchDocFor(g, names)));
+  // Symptom search finds fault guides; rig cards are chosen from their own list.
+  return createGuideSearch(guides.filter((g) => g.kind === "guide").map((g) => searchDocFor(g, names)));
 }

@@ -1,6 +1,7 @@
-import { Op } from "sequelize";
+import { Op, QueryTypes } from "sequelize";
 import { NEEDS_DOING, SERVICE_STATUSES, serviceDue, type ServiceDue } from "~/lib/rigs/service";
 import type { ServiceRuleInput } from "~/lib/rigs/service-forms";
+import type { ServiceTask } from "~/lib/guides/kinds";
 import { Rig, sequelize, ServiceRecord, ServiceRule, User } from "./db.server";
 import { notFound, type SessionUser } from "./guards.server";
 import { ownedBy } from "./tenancy.server";
@@ -12,6 +13,7 @@ export interface ServiceLine {
   name: string;
   everyHours: number | null;
   everyDays: number | null;
+  task: ServiceTask | null;
   due: ServiceDue;
   last: { doneAt: string; engineHours: number | null; by: string | null; note: string | null } | null;
 }
@@ -28,14 +30,16 @@ export async function serviceLines(user: SessionUser, opts: { rigId?: number; no
   if (!rigs.length) return [];
   const rules = await ServiceRule.findAll({ where: ownedBy(user, { rigId: rigs.map((r) => r.id), retired: false }), order: [["name", "ASC"]] });
   if (!rules.length) return [];
-  // The newest record of each rule shown: one grouped query over those rules alone.
-  const newest = await ServiceRecord.findAll({
-    where: { companyId: user.companyId, ruleId: rules.map((r) => r.id) },
-    attributes: [[sequelize.fn("MAX", sequelize.col("id")), "id"]],
-    group: ["rule_id"],
-    raw: true,
-  });
-  const latest = newest.length ? await ServiceRecord.findAll({ where: { id: newest.map((r) => r.id) } }) : [];
+  // The latest record of each rule by when it was done (a card sent late from a phone with no signal
+  // arrives after newer ones): one grouped query over those rules alone, then those rows.
+  const newest = await sequelize.query<{ id: number }>(
+    `SELECT MAX(r.id) AS id FROM service_records r
+     JOIN (SELECT rule_id, MAX(done_at) AS at FROM service_records WHERE company_id = :company AND rule_id IN (:rules) GROUP BY rule_id) x
+       ON x.rule_id = r.rule_id AND x.at = r.done_at
+     GROUP BY r.rule_id`,
+    { replacements: { company: user.companyId, rules: rules.map((r) => r.id) }, type: QueryTypes.SELECT },
+  );
+  const latest = newest.length ? await ServiceRecord.findAll({ where: { id: newest.map((r) => Number(r.id)) } }) : [];
   const byRule = new Map(latest.map((r) => [r.ruleId, r]));
   const names = new Map(
     (await User.findAll({ where: { id: [...new Set(latest.map((r) => r.doneBy).filter((v): v is number => v !== null))] }, attributes: ["id", "name"] })).map(
@@ -54,6 +58,7 @@ export async function serviceLines(user: SessionUser, opts: { rigId?: number; no
       name: rule.name,
       everyHours: rule.everyHours,
       everyDays: rule.everyDays,
+      task: rule.task ?? null,
       due: serviceDue(rule, last, rig, now, user.timeZone),
       last: last
         ? { doneAt: last.doneAt.toISOString(), engineHours: last.engineHours, by: last.doneBy ? (names.get(last.doneBy) ?? null) : null, note: last.note }
@@ -83,11 +88,11 @@ export async function sameNameOnRig(user: SessionUser, rigId: number, name: stri
 }
 
 export async function addServiceRule(user: SessionUser, rigId: number, input: ServiceRuleInput) {
-  return ServiceRule.create({ companyId: user.companyId, rigId, name: input.name, everyHours: input.everyHours, everyDays: input.everyDays });
+  return ServiceRule.create({ companyId: user.companyId, rigId, name: input.name, everyHours: input.everyHours, everyDays: input.everyDays, task: input.task });
 }
 
 export async function updateServiceRule(user: SessionUser, rigId: number, ruleId: number, input: ServiceRuleInput) {
-  await (await ruleOf(user, rigId, ruleId)).update({ name: input.name, everyHours: input.everyHours, everyDays: input.everyDays });
+  await (await ruleOf(user, rigId, ruleId)).update({ name: input.name, everyHours: input.everyHours, everyDays: input.everyDays, task: input.task });
 }
 
 export async function retireServiceRule(user: SessionUser, rigId: number, ruleId: number) {

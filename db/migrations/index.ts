@@ -19,6 +19,7 @@ import * as m017 from "./017-photo-phone-id";
 import * as m018 from "./018-load-rules-and-pace";
 import * as m019 from "./019-service-rules";
 import * as m020 from "./020-reports-version";
+import * as m021 from "./021-rig-cards";
 
 export interface Migration {
   name: string;
@@ -48,4 +49,5 @@ export const migrations: Migration[] = [
   { name: "018-load-rules-and-pace", ...m018 },
   { name: "019-service-rules", ...m019 },
   { name: "020-reports-version", ...m020 },
+  { name: "021-rig-cards", ...m021 },
 ];

@@ -15,7 +15,7 @@ beforeAll(async () => {
 
 const perRig = () =>
   db().query<{ code: string; n: number; hours: number }>(
-    "SELECT r.code, COUNT(*) AS n, MAX(c.engine_hours) - MIN(c.engine_hours) AS hours FROM cases c JOIN rigs r ON r.id = c.rig_id GROUP BY r.code ORDER BY r.code",
+    "SELECT r.code, COUNT(*) AS n, MAX(c.engine_hours) - MIN(c.engine_hours) AS hours FROM cases c JOIN rigs r ON r.id = c.rig_id WHERE c.kind = 'fix' GROUP BY r.code ORDER BY r.code",
     { type: QueryTypes.SELECT },
   );
 
@@ -65,6 +65,32 @@ describe("demo history", () => {
     expect(first.medianSeconds).toBeGreaterThan(0);
     expect(learned.advisor.suggestedMinutes).toBeLessThanOrEqual(learned.advisor.currentMinutes + 1e-9);
     expect(learned.advisor.foundCases).toBeGreaterThan(0);
+  });
+
+  it("holds a year of rig cards with a pattern to find: CF-03 skips the pre-start and leaks at the pump shaft", async () => {
+    const rows = await db().query<{ code: string; prestarts: number; complete: number; days: number; shaft: number; fixes: number }>(
+      `SELECT r.code,
+          (SELECT COUNT(*) FROM cases c JOIN guide_versions v ON v.id = c.guide_version_id JOIN guides g ON g.id = v.guide_id
+            WHERE c.rig_id = r.id AND c.kind = 'card' AND g.slug = 'pre-start') AS prestarts,
+          (SELECT COUNT(*) FROM cases c JOIN guide_versions v ON v.id = c.guide_version_id JOIN guides g ON g.id = v.guide_id
+            WHERE c.rig_id = r.id AND c.kind = 'card' AND g.slug = 'pre-start' AND c.outcome = 'fixed' AND c.card_gaps = 0) AS complete,
+          (SELECT COUNT(DISTINCT DATE(c.opened_at)) FROM cases c WHERE c.rig_id = r.id AND c.kind = 'card') AS days,
+          (SELECT COUNT(*) FROM cases c WHERE c.rig_id = r.id AND c.kind = 'fix' AND c.cause_code = 'leak-pump-shaft-seal') AS shaft,
+          (SELECT COUNT(*) FROM cases c WHERE c.rig_id = r.id AND c.kind = 'fix') AS fixes
+        FROM rigs r ORDER BY r.code`,
+      { type: QueryTypes.SELECT },
+    );
+    const by = Object.fromEntries(rows.map((r) => [r.code, { ...r, prestarts: Number(r.prestarts), complete: Number(r.complete), shaft: Number(r.shaft) }]));
+    for (const r of rows) expect(Number(r.prestarts), r.code).toBeGreaterThan(100);
+    expect(by["CF-03"].complete / Number(by["CF-03"].days)).toBeLessThan(0.6);
+    expect(by["CF-11"].complete / Number(by["CF-11"].days)).toBeGreaterThan(0.85);
+    expect(by["CF-03"].shaft).toBeGreaterThan(3 * by["CF-11"].shaft);
+    // Cards record the lubricator and grease services with the card's hours.
+    const [svc] = await db().query<{ n: number; hours: number }>(
+      "SELECT COUNT(*) AS n, SUM(engine_hours IS NOT NULL) AS hours FROM service_records WHERE case_id IS NOT NULL",
+      { type: QueryTypes.SELECT },
+    );
+    expect(Number(svc.n)).toBeGreaterThan(1000);
   });
 
   it("is the same every time from its fixed seed", async () => {

@@ -14,7 +14,7 @@ const SHADE: Record<StepAnswer, string> = {
 };
 
 /** The answers for a step's kind, big and at the bottom of the screen where a thumb reaches. */
-export function AnswerButtons({ kind, onAnswer }: { kind: StepKind; onAnswer: (answer: StepAnswer) => void }) {
+export function AnswerButtons({ kind, onAnswer, suggested }: { kind: StepKind; onAnswer: (answer: StepAnswer) => void; suggested?: StepAnswer }) {
   const answers: readonly StepAnswer[] = ANSWERS_BY_KIND[kind];
   return (
     <div className={`grid gap-3 ${answers.length === 2 ? "grid-cols-2" : "grid-cols-1"}`}>
@@ -23,12 +23,20 @@ export function AnswerButtons({ kind, onAnswer }: { kind: StepKind; onAnswer: (a
           key={a}
           type="button"
           onClick={() => onAnswer(a)}
-          className={`flex min-h-16 items-center justify-center gap-2 rounded-lg border-4 px-3 text-xl font-bold ${SHADE[a]}`}
+          aria-describedby={suggested === a ? "todays-answer-mark" : undefined}
+          className={`flex min-h-16 items-center justify-center gap-2 rounded-lg border-4 px-3 text-xl font-bold ${SHADE[a]} ${
+            suggested === a ? "outline-4 outline-offset-4 outline-ink" : ""
+          }`}
         >
           <span aria-hidden="true" className="text-2xl leading-none">
             {ANSWER_MARKS[a]}
           </span>
           {ANSWER_LABELS[a]}
+          {suggested === a ? (
+            <span id="todays-answer-mark" className="text-base font-normal">
+              (today&apos;s card)
+            </span>
+          ) : null}
         </button>
       ))}
     </div>

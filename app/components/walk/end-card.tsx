@@ -5,6 +5,7 @@ import { GuideText } from "~/components/ui/guide-text";
 import type { StepMeta } from "~/lib/guides/schema";
 import type { QueuedClose, WalkRecord } from "~/lib/walk/queue";
 import { useTimes } from "../use-time-zone";
+import { CARD_OUTCOME_LABELS, type CaseKind } from "~/lib/vocabulary";
 
 /** What the crew is told about the hand-off mail: what will happen until the server says what did. */
 function handoffNews(record: WalkRecord, finished: boolean, online: boolean, time: (iso: string) => string): string {
@@ -19,6 +20,8 @@ function handoffNews(record: WalkRecord, finished: boolean, online: boolean, tim
 
 /** The end of a walk-through: what was found (or who is told), engine hours, and Finish. */
 export function EndCard({
+  kind = "fix",
+  fromCard = null,
   meta,
   causeName,
   record,
@@ -26,6 +29,8 @@ export function EndCard({
   online,
   onFinish,
 }: {
+  kind?: CaseKind;
+  fromCard?: { caseId: string; title: string } | null;
   meta: StepMeta;
   causeName?: string;
   record: WalkRecord;
@@ -40,10 +45,13 @@ export function EndCard({
   const { time } = useTimes();
   const fixed = meta.kind === "fixed";
   const finished = !!record.close;
+  const card = kind === "card";
+  // A card took the hour meter as it started; a fix takes it at its end.
+  const asksHours = hourMeter.has && !card;
 
   const finish = () => {
     let engineHours: number | undefined;
-    if (hourMeter.has && hours.trim() !== "") {
+    if (asksHours && hours.trim() !== "") {
       engineHours = Number(hours);
       if (!Number.isFinite(engineHours) || engineHours < 0 || engineHours > 100_000) return setError("Engine hours must be a number from 0 to 100,000.");
       if (engineHours < hourMeter.current) return setError(`The meter read ${hourMeter.current} h before; enter the reading now (the same or more).`);
@@ -55,7 +63,7 @@ export function EndCard({
   return (
     <section aria-labelledby="end-title" className={`rounded-lg border-4 p-4 ${fixed ? "border-go bg-paper" : "border-stop bg-paper"}`}>
       <h1 id="end-title" tabIndex={-1} data-step-heading className={`text-2xl font-bold ${fixed ? "text-go" : "text-stop"}`}>
-        {fixed ? "Fixed" : "Handed off"}
+        {card ? CARD_OUTCOME_LABELS[fixed ? "fixed" : "handoff"] : fixed ? "Fixed" : "Handed off"}
       </h1>
       <GuideText text={meta.prompt} className="mt-2 text-xl" />
       {fixed && causeName ? (
@@ -73,17 +81,29 @@ export function EndCard({
       {finished ? (
         <>
           <p className="mt-4 text-lg font-bold">
-            {record.closeResult ? "Case closed and saved." : online ? "Finished. Saving the case…" : "Finished. The case closes when this phone has signal."}
+            {record.closeResult
+              ? `${card ? "Card" : "Case"} closed and saved.`
+              : online
+                ? `Finished. Saving the ${card ? "card" : "case"}…`
+                : `Finished. The ${card ? "card" : "case"} is saved when this phone has signal.`}
           </p>
-          <p className="mt-4">
+          <p className="mt-4 flex flex-wrap gap-2">
+            {fromCard ? (
+              <Link
+                to={`/cases/${fromCard.caseId}/walk`}
+                className="inline-flex min-h-14 items-center rounded-lg bg-go px-4 text-lg font-bold text-white no-underline"
+              >
+                Back to the {fromCard.title} card
+              </Link>
+            ) : null}
             <Link to="/" className="inline-flex min-h-14 items-center rounded-lg border-2 border-ink bg-paper px-4 text-lg font-bold no-underline">
-              Start a new fix
+              {card ? "Back to the rigs" : "Start a new fix"}
             </Link>
           </p>
         </>
       ) : (
         <div className="mt-4 space-y-3">
-          {hourMeter.has ? (
+          {asksHours ? (
             <label className="block font-bold">
               Engine hours now (hour meter; last reading {hourMeter.current.toLocaleString("en-US")} h)
               <input

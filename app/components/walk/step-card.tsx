@@ -7,6 +7,9 @@ import { SafetyCaution } from "./safety-caution";
 import { CHECKLIST_LABELS, checklistOf } from "~/lib/guides/safety";
 import { fillRigWords } from "~/lib/guides/rig-words";
 import type { AgitatorDirection } from "~/lib/rigs/schema";
+import { suggestedAnswer, type DayFact } from "~/lib/walk/day-facts";
+import { useTimes } from "~/components/use-time-zone";
+import { answerLabel } from "~/lib/vocabulary";
 
 /**
  * One step of the guide. Answering asks the stepper (the guide's own table on the phone, the
@@ -21,9 +24,12 @@ export function StepCard({
   note,
   onNoteChange,
   onAdvance,
+  dayFact,
   children,
   headingLevel = 1,
 }: {
+  /** What today's card said about the fact this check asks (its answer is offered, never taken silently). */
+  dayFact?: DayFact;
   guide: Guide;
   steps: Stepper;
   stepId: string;
@@ -88,7 +94,8 @@ export function StepCard({
       </div>
       {/* Answers stay under the thumb; the shut-down stop is read to the end before it is acknowledged. */}
       <div className={safety ? "pb-2" : "sticky bottom-0 z-10 -mx-3 border-t-2 border-ink bg-field px-3 pt-2 pb-3"}>
-        <AnswerButtons kind={meta.kind} onAnswer={answer} />
+        {dayFact ? <TodaysAnswer fact={dayFact} /> : null}
+        <AnswerButtons kind={meta.kind} onAnswer={answer} suggested={suggestedAnswer(dayFact)} />
       </div>
       {children}
       <div>
@@ -110,5 +117,19 @@ export function StepCard({
         )}
       </div>
     </section>
+  );
+}
+
+/** Today's card answer for this check, with its time: the matching button is marked, the crew taps to confirm. */
+function TodaysAnswer({ fact }: { fact: DayFact }) {
+  const { time } = useTimes();
+  return (
+    <p data-testid="todays-answer" className="mb-2 rounded-md border-2 border-ink bg-paper px-3 py-2 text-lg">
+      <strong>
+        Today&apos;s {fact.card} at {time(fact.at)}
+        {fact.by ? ` (${fact.by})` : ""}: {answerLabel(suggestedAnswer(fact)!)}.
+      </strong>{" "}
+      Still so? Tap to confirm, or answer what you see now.
+    </p>
   );
 }

@@ -1,5 +1,6 @@
 import { useEffect, useState } from "react";
 import type { SearchHit } from "~/lib/guides/search";
+import { guideKind } from "~/lib/guides/kinds";
 import { loadKit } from "~/lib/walk/kept";
 
 type Search = (query: string) => SearchHit[];
@@ -12,7 +13,7 @@ async function searchOnPhone(query: string, personId: number): Promise<SearchHit
   if (phoneSearch?.madeAt !== kit.madeAt) {
     // Loaded on the first search only: most fixes start from a tile.
     const { createGuideSearch, searchDocFor } = await import("~/lib/guides/search");
-    phoneSearch = { madeAt: kit.madeAt, search: createGuideSearch(kit.guides.map((g) => searchDocFor(g, kit.causeNames))) };
+    phoneSearch = { madeAt: kit.madeAt, search: createGuideSearch(kit.guides.filter((g) => guideKind(g.definition) === "guide").map((g) => searchDocFor(g, kit.causeNames))) };
   }
   return phoneSearch.search(query);
 }

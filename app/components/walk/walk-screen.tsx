@@ -1,13 +1,17 @@
 import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from "react";
 import type { AgitatorDirection } from "~/lib/rigs/schema";
-import { Link } from "react-router";
+import { Form, Link, useRouteLoaderData } from "react-router";
+import type { loader as shellLoader } from "~/routes/shell";
+import { useTimes } from "~/components/use-time-zone";
+import { isoInZone, startOfDayIn } from "~/lib/format";
+import { mergeDayFacts, type DayFacts } from "~/lib/walk/day-facts";
 import type { Guide } from "~/lib/guides/schema";
 import { guideSteps } from "~/lib/walk/next-step";
 import { replayFrom, replayWalk } from "~/lib/walk/replay";
-import { outcomeLabel, type Outcome } from "~/lib/vocabulary";
+import { outcomeLabel, type CaseKind, type Outcome } from "~/lib/vocabulary";
 import { appendEvent, loadRecord, mergeServerEvents, saveRecord, type QueuedEvent, type WalkRecord } from "~/lib/walk/queue";
 import { MAX_PHOTO_BYTES } from "~/lib/cases/limits";
-import { lastHoursOnPhone, noteHoursOnPhone, PHOTO_WAIT_CAP_BYTES, waitingPhotoBytes } from "~/lib/walk/kept";
+import { dayFactsOnPhone, lastHoursOnPhone, noteHoursOnPhone, PHOTO_WAIT_CAP_BYTES, waitingPhotoBytes } from "~/lib/walk/kept";
 import { keepPhotoBytes } from "~/components/offline/photo-store";
 import { EndCard } from "./end-card";
 import { PhotoPicker } from "./photo-picker";
@@ -28,6 +32,12 @@ export interface WalkScreenProps {
   offlineReady?: boolean;
   /** The data was rebuilt on the phone (not drawn by the server): the phone's answers can be read at once. */
   fromPhone?: boolean;
+  /** A fix or a rig card: a card's ends say complete or not ready, and it asks no hours at the end. */
+  kind?: CaseKind;
+  /** The card this fix was opened from: its end offers the way back. */
+  fromCard?: { caseId: string; title: string } | null;
+  /** Today's card answers for the facts this guide asks again, as the server has them. */
+  serverDayFacts?: DayFacts;
   renderFieldMath?: (widget: string) => React.ReactNode;
 }
 
@@ -43,6 +53,9 @@ export function WalkScreen({
   closedAs,
   offlineReady,
   fromPhone,
+  kind = "fix",
+  fromCard = null,
+  serverDayFacts,
   renderFieldMath,
 }: WalkScreenProps) {
   const steps = useMemo(() => guideSteps(guide), [guide]);
@@ -70,6 +83,17 @@ export function WalkScreen({
   // The newest hour-meter reading this phone knows (a fix finished here with no signal counts).
   const [phoneHours, setPhoneHours] = useState<number | null>(null);
   useEffect(() => setPhoneHours(lastHoursOnPhone(window.localStorage, rig.code)), [rig.code]);
+
+  // Today's facts: the server's, and cards this phone walked today that it may not have sent yet.
+  const shell = useRouteLoaderData<typeof shellLoader>("routes/shell");
+  const { zone } = useTimes();
+  const [facts, setFacts] = useState<DayFacts>(serverDayFacts ?? {});
+  const asksFacts = useMemo(() => kind === "fix" && Object.values(guide.states).some((st) => st.meta.dayCheck), [guide, kind]);
+  useEffect(() => {
+    if (!asksFacts) return;
+    const since = startOfDayIn(isoInZone(new Date(), zone).slice(0, 10), zone).toISOString();
+    setFacts(mergeDayFacts(serverDayFacts ?? {}, dayFactsOnPhone(window.localStorage, rig.code, since, shell?.user.name ?? null)));
+  }, [asksFacts, serverDayFacts, rig.code, zone, shell?.user.name]);
 
   // After hydration: what this phone kept (possibly more than the server has) wins.
   useEffect(() => {
@@ -163,6 +187,8 @@ export function WalkScreen({
         <ClosedCard outcome={stoppedHere ? "abandoned" : closedAs!} synced={stoppedHere ? !!record.closeResult : true} />
       ) : atEnd ? (
         <EndCard
+          kind={kind}
+          fromCard={fromCard}
           meta={meta}
           causeName={meta.cause ? causeNames[meta.cause] : undefined}
           record={record}
@@ -182,12 +208,14 @@ export function WalkScreen({
           rig={rig}
           note={note}
           onNoteChange={setNote}
+          dayFact={kind === "fix" && meta.dayCheck ? facts[meta.dayCheck] : undefined}
           onAdvance={(answer) => {
             record_(answer as QueuedEvent["answer"], here);
             setNote("");
           }}
         >
           {meta.fieldMath && renderFieldMath ? renderFieldMath(meta.fieldMath) : null}
+          {kind === "card" && meta.opensGuide ? <OpenGuide rigCode={rig.code} guideSlug={meta.opensGuide} cardId={caseId} cardTitle={guideTitle} /> : null}
           <PhotoPicker
             caseId={caseId}
             photos={(record.photos ?? []).filter((p) => p.stepId === here)}
@@ -245,6 +273,26 @@ export function WalkScreen({
         )
       ) : null}
     </div>
+  );
+}
+
+/**
+ * A card item that opens a guide: the fix starts on the same rig, linked to this card, with or
+ * without signal (the fix page's own start). Done on the card, afterwards, carries on.
+ */
+function OpenGuide({ rigCode, guideSlug, cardId, cardTitle }: { rigCode: string; guideSlug: string; cardId: string; cardTitle: string }) {
+  const [fixId] = useState(() => crypto.randomUUID());
+  return (
+    <Form method="post" action={`/rigs/${rigCode}/fix`}>
+      <input type="hidden" name="guideSlug" value={guideSlug} />
+      <input type="hidden" name="caseId" value={fixId} />
+      <input type="hidden" name="fromCaseId" value={cardId} />
+      <input type="hidden" name="fromTitle" value={cardTitle} />
+      <button type="submit" className="min-h-16 w-full rounded-lg border-4 border-ink bg-caution px-3 text-xl font-bold text-ink">
+        Open the guide now
+      </button>
+      <p className="mt-1 text-base">This card stays open: come back to it from the guide&apos;s end, or from the rig&apos;s cards.</p>
+    </Form>
   );
 }
 

@@ -17,6 +17,10 @@ export const startCaseSchema = z.strictObject({
   openedAt: isoTime.optional(),
   /** The guide version the phone walked (it may have been replaced or retired since). */
   guideVersionId: z.number({ error: "guideVersionId must be a number" }).int().positive("guideVersionId must be a version's id").optional(),
+  /** A rig card's hour-meter reading at its start (required for a card on a rig with a meter). */
+  engineHours: z.number({ error: "engineHours must be a number" }).min(0, "engine hours cannot be negative").max(100_000, "engine hours over 100,000 are not plausible").optional(),
+  /** The card this fix was opened from (a card item that opens a guide). */
+  fromCaseId: uuid.optional(),
 });
 
 export const caseEventSchema = z.strictObject({
@@ -40,5 +44,19 @@ export const closeCaseSchema = z.strictObject({
   at: isoTime.optional(),
 });
 
+export type StartCaseInput = z.infer<typeof startCaseSchema>;
 export type CaseEventInput = z.infer<typeof caseEventSchema>;
 export type CloseCaseInput = z.infer<typeof closeCaseSchema>;
+
+/** The cards page: which card, the phone-made case id, and the hour meter as the card starts. */
+export const cardStartFormSchema = z.object({
+  cardSlug: z.string({ error: "Pick a card." }).trim().min(1, "Pick a card.").max(80),
+  caseId: uuid.optional(),
+  engineHours: z
+    .number({ error: "Give the hour meter reading as a number, like 2,315.5." })
+    .min(0, "Engine hours cannot be negative.")
+    .max(100_000, "Over 100,000 engine hours is not plausible.")
+    .nullable()
+    .optional()
+    .transform((v) => v ?? null),
+});

@@ -24,3 +24,37 @@ export const COMPONENTS = [
 ] as const;
 
 export const isFinalKind = (kind: StepKind) => FINAL_KINDS.includes(kind);
+
+/** A guide answers a fault; a rig card walks a routine part of the day (pre-start, flush, loading, shut-down…). */
+export const GUIDE_KINDS = ["guide", "card"] as const;
+export type GuideKind = (typeof GUIDE_KINDS)[number];
+export const guideKind = (guide: { kind?: GuideKind }): GuideKind => guide.kind ?? "guide";
+
+/**
+ * Facts a rig card establishes for the day, which a guide step may ask about again ("was the
+ * lubricator charged today?"): the walk then shows the card's answer and its time, pre-selected.
+ */
+export const DAY_CHECKS = {
+  "drain-plug-in": "drain plug in",
+  "suction-open": "suction valve open",
+  "grease-done": "grease points done",
+  "lubricator-charged": "lubricator charged",
+  "hoses-clear": "hoses and tips clear",
+  "valves-free": "valves move freely",
+  "tank-flushed": "tank, pump and hose flushed",
+  "fiber-after-half": "fiber loaded only once the tank was half full",
+} as const;
+export type DayCheck = keyof typeof DAY_CHECKS;
+export const DAY_CHECK_KEYS = Object.keys(DAY_CHECKS) as [DayCheck, ...DayCheck[]];
+
+/** Routine service a card item can record on the rig's service rules that name the same task. */
+export const SERVICE_TASKS = {
+  lubricator: "Lubricator refill (pump shaft seal)",
+  grease: "Grease points",
+  "pump-seal": "Pump seal inspection",
+  "hydraulic-oil": "Hydraulic oil and filter",
+  "engine-oil": "Engine oil and filter",
+  "freeze-protection": "Drain-down and freeze protection",
+} as const;
+export type ServiceTask = keyof typeof SERVICE_TASKS;
+export const SERVICE_TASK_KEYS = Object.keys(SERVICE_TASKS) as [ServiceTask, ...ServiceTask[]];

@@ -2,10 +2,10 @@ import { z } from "zod";
 import { STEP_ANSWERS } from "../vocabulary";
 import { CHECKLIST_ITEMS, HAZARDS } from "./safety";
 
-import { COMPONENTS, FIELD_MATH_WIDGETS, STEP_KINDS } from "./kinds";
+import { COMPONENTS, DAY_CHECK_KEYS, FIELD_MATH_WIDGETS, GUIDE_KINDS, SERVICE_TASK_KEYS, STEP_KINDS } from "./kinds";
 
 // The plain lists live in kinds.ts, which the phone's walk-through can load without zod.
-export { COMPONENTS, FIELD_MATH_WIDGETS, FINAL_KINDS, isFinalKind, STEP_KINDS, type StepKind } from "./kinds";
+export { COMPONENTS, FIELD_MATH_WIDGETS, FINAL_KINDS, guideKind, isFinalKind, STEP_KINDS, type GuideKind, type StepKind } from "./kinds";
 
 const slug = z.string().regex(/^[a-z][a-z0-9]*(-[a-z0-9]+)*$/, "use lower-case words joined by dashes");
 
@@ -26,6 +26,12 @@ export const stepMetaSchema = z.strictObject({
   fieldMath: z.enum(FIELD_MATH_WIDGETS).optional(),
   cause: z.string().optional(),
   component: z.enum(COMPONENTS).optional(),
+  /** A fact of the day: on a card, this item establishes it; on a guide's check, the walk shows today's card answer. */
+  dayCheck: z.enum(DAY_CHECK_KEYS).optional(),
+  /** On a card: done (or yes) records this routine service on the rig's rules for the same task. */
+  service: z.enum(SERVICE_TASK_KEYS).optional(),
+  /** On a card's task: the guide this item opens on the spot (a valve that does not move freely opens valve trouble). */
+  opensGuide: slug.optional(),
 });
 
 export const stepSchema = z.strictObject({
@@ -36,6 +42,8 @@ export const stepSchema = z.strictObject({
 
 /** The one definition of a guide file in content/guides (an XState machine config + our meta). */
 export const guideSchema = z.strictObject({
+  /** "card" for a rig card (content/cards); a guide leaves it out. */
+  kind: z.enum(GUIDE_KINDS).optional(),
   id: slug,
   title: z.string().trim().min(1).max(120),
   summary: z.string().trim().min(1, "write one sentence on what this guide is for").max(600, "keep the summary under 600 characters"),
@@ -55,6 +63,7 @@ export type StepMeta = z.infer<typeof stepMetaSchema>;
  */
 const text = z.string().max(4000);
 export const draftShapeSchema = z.object({
+  kind: z.enum(GUIDE_KINDS).optional(),
   id: z.string().max(80),
   title: z.string().max(120),
   summary: z.string().max(600),

@@ -34,7 +34,14 @@ function lineColumn(text: string, offset: number): string {
  * Checks a guide file (its text or the parsed value) against the format and every
  * structural rule, and returns all problems at once. Never throws.
  */
-export function validateGuide(input: unknown, options: { causes: Cause[]; name?: string }): ValidationResult {
+export interface ValidateOptions {
+  causes: Cause[];
+  name?: string;
+  /** The guides a card may open (when known: the library being checked, or the company's usable guides). */
+  guideIds?: readonly string[];
+}
+
+export function validateGuide(input: unknown, options: ValidateOptions): ValidationResult {
   try {
     return validate(input, options);
   } catch (error) {
@@ -42,7 +49,7 @@ export function validateGuide(input: unknown, options: { causes: Cause[]; name?:
   }
 }
 
-function validate(input: unknown, { causes, name }: { causes: Cause[]; name?: string }): ValidationResult {
+function validate(input: unknown, { causes, name, guideIds }: ValidateOptions): ValidationResult {
   const problems: GuideProblem[] = [];
   const warnings: GuideProblem[] = [];
   let raw: unknown = input;
@@ -86,6 +93,12 @@ function validate(input: unknown, { causes, name }: { causes: Cause[]; name?: st
   }
 
   checkStructure(raw, causes, add, (message, step) => warnings.push({ guide: guideName, step, message }));
+  if (guideIds && isObject(raw.states)) {
+    for (const [id, s] of Object.entries(raw.states)) {
+      const target = isObject(s) && isObject(s.meta) ? s.meta.opensGuide : undefined;
+      if (typeof target === "string" && !guideIds.includes(target)) add(`opens guide "${target}", which is not a guide in the library`, id);
+    }
+  }
   return { guide: problems.length === 0 && parsed.success ? parsed.data : null, problems, warnings };
 }
 
@@ -100,6 +113,7 @@ function checkStructure(raw: Loose, causes: Cause[], add: (message: string, step
   }
   const initial = typeof raw.initial === "string" ? raw.initial : "";
   const guide = { initial, states: steps } as Guide;
+  const card = raw.kind === "card";
   const causeCodes = new Set(causes.map((c) => c.code));
 
   if (initial && !(initial in raw.states)) add(`initial step "${initial}" is not one of the steps`);
@@ -145,7 +159,11 @@ function checkStructure(raw: Loose, causes: Cause[], add: (message: string, step
         id,
       );
     if (sendsInsideTank(text)) add("sends someone inside the tank: reach the part from outside (hatch, drain, pole) or send the job to the shop", id);
-    if (kind === "fixed") {
+    checkCardFields(step.meta, card, add, id);
+    if (card) {
+      // A card's ends say whether the routine is complete; faults and their causes belong to guides.
+      if (step.meta.cause) add("a rig card's steps carry no cause: a fault found on a card opens a guide (opensGuide)", id);
+    } else if (kind === "fixed") {
       if (!step.meta.cause) add("a fixed step needs a cause code", id);
       else if (!causeCodes.has(step.meta.cause)) add(`cause "${step.meta.cause}" is not in the cause list`, id);
       if (!step.meta.component) add("a fixed step needs a component", id);
@@ -157,7 +175,7 @@ function checkStructure(raw: Loose, causes: Cause[], add: (message: string, step
     }
   }
 
-  if (!Object.values(steps).some((s) => s.meta.kind === "fixed")) add("the guide has no fixed end");
+  if (!Object.values(steps).some((s) => s.meta.kind === "fixed")) add(card ? "the card has no complete (fixed) end" : "the guide has no fixed end");
   if (!(initial in steps)) return;
 
   const fromStart = reachable(guide, initial);
@@ -169,6 +187,15 @@ function checkStructure(raw: Loose, causes: Cause[], add: (message: string, step
   // On every path to a hands-on step, a stop since the last restart that covers what the step exposes.
   for (const f of unguardedSteps(guide)) add(f.message, f.step);
   for (const f of restartsWithoutReturnToService(guide)) warn(f.message, f.step);
+}
+
+/** Day facts, services and guides to open: which step of which kind may carry them. */
+function checkCardFields(meta: Guide["states"][string]["meta"], card: boolean, add: (message: string, step?: string) => void, id: string) {
+  const answering = meta.kind === "check" || meta.kind === "task";
+  if (meta.service && (!card || !answering)) add("only a rig card's check or task records a service", id);
+  if (meta.opensGuide && (!card || meta.kind !== "task")) add("only a rig card's task opens a guide (its Done means sorted, carry on)", id);
+  if (meta.dayCheck && (card ? !answering : meta.kind !== "check"))
+    add(card ? "a card's day fact sits on a check or a task" : "a guide asks about today's card only on a check step", id);
 }
 
 const FIELD_WORDS: Record<string, string> = {

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { SERVICE_TASK_KEYS } from "../guides/kinds";
 
 /** A company's rule for one rig: every so many engine hours, days, or whichever comes first. */
 export const serviceRuleSchema = z
@@ -16,6 +17,12 @@ export const serviceRuleSchema = z
       .int("Give whole days.")
       .min(1, "At least 1 day between services.")
       .max(730, "Over two years between services is not plausible.")
+      .nullable()
+      .optional()
+      .transform((v) => v ?? null),
+    /** The card task that also records it (blank: by hand only). */
+    task: z
+      .enum(SERVICE_TASK_KEYS, { error: "Pick a card task from the list, or none." })
       .nullable()
       .optional()
       .transform((v) => v ?? null),

@@ -4,7 +4,9 @@ import type { GuideTexts } from "../guides/text-tree";
 import { stepsToEnd } from "../guides/graph";
 import type { WalkRig } from "../rigs/specs";
 import type { Role } from "../people/roles";
-import type { Outcome } from "../vocabulary";
+import type { CaseKind, Outcome } from "../vocabulary";
+import { guideKind } from "../guides/kinds";
+import { dayFacts, type DayFacts } from "./day-facts";
 import { closePending, loadRecord, saveRecord, type KeyValueStore, type QueuedEvent, type WalkRecord } from "./queue";
 
 /**
@@ -58,10 +60,16 @@ export interface WalkData {
   onPhoneOnly?: boolean;
   /** Rebuilt from what the phone keeps (the answers are the phone's own). */
   fromPhone?: boolean;
+  /** A fix or a rig card (older kept walks lack it: fixes). */
+  kind?: CaseKind;
+  /** The card this fix was opened from, to go back to at its end. */
+  fromCard?: { caseId: string; title: string } | null;
+  /** What today's cards on the rig say about the facts this guide asks again (the server's; the phone adds its own). */
+  dayFacts?: DayFacts;
 }
 
 /** What a walk needs besides its answers, kept once per case (a guide version can be replaced on the server meanwhile). */
-export type KeptView = Omit<WalkData, "closedAs" | "events" | "stepsToEnd" | "onPhoneOnly" | "fromPhone">;
+export type KeptView = Omit<WalkData, "closedAs" | "events" | "stepsToEnd" | "onPhoneOnly" | "fromPhone" | "dayFacts">;
 
 const KIT_KEY = "tankside:kit";
 const viewKey = (caseId: string) => `tankside:walk-view:${caseId}`;
@@ -122,7 +130,11 @@ export type PhoneStart = { ok: true; caseId: string } | { ok: false; problem: st
  * the newest published version of the guide it holds. The start is sent before any answer
  * when there is signal again.
  */
-export function startOnPhone(store: KeyValueStore, kit: OfflineKit, input: { caseId: string; rigCode: string; guideSlug: string; now: Date }): PhoneStart {
+export function startOnPhone(
+  store: KeyValueStore,
+  kit: OfflineKit,
+  input: { caseId: string; rigCode: string; guideSlug: string; now: Date; engineHours?: number; fromCard?: { caseId: string; title: string } },
+): PhoneStart {
   const rig = kit.rigs.find((r) => r.code === input.rigCode.toUpperCase());
   if (!rig) return { ok: false, problem: `Rig ${input.rigCode} is not on this phone's list. With signal, open the app once to refresh it.` };
   const guide = kit.guides.find((g) => g.slug === input.guideSlug);
@@ -132,14 +144,30 @@ export function startOnPhone(store: KeyValueStore, kit: OfflineKit, input: { cas
   if (existing.start) return { ok: true, caseId: input.caseId };
   const openedAt = input.now.toISOString();
   const { mount: _mount, pumpKind: _pumpKind, ...walkRig } = rig;
+  const kind = guideKind(guide.definition) === "card" ? "card" : "fix";
+  if (kind === "card" && rig.hasHourMeter && input.engineHours === undefined) return { ok: false, problem: "Give the hour meter reading: a card records it as it starts." };
   saveView(store, {
     caseId: input.caseId,
     openedAt,
     guide: { slug: guide.slug, title: guide.title, versionId: guide.versionId, definition: guide.definition, texts: guide.texts },
-    rig: walkRig,
+    rig: kind === "card" && input.engineHours !== undefined ? { ...walkRig, engineHours: Math.max(walkRig.engineHours, input.engineHours) } : walkRig,
     causeNames: namesFor(guide.definition, kit.causeNames),
+    kind,
+    fromCard: input.fromCard ?? null,
   });
-  saveRecord(store, { ...existing, start: { rigCode: rig.code, guideSlug: guide.slug, guideVersionId: guide.versionId, openedAt } });
+  const engineHours = kind === "card" && rig.hasHourMeter ? input.engineHours : undefined;
+  saveRecord(store, {
+    ...existing,
+    start: {
+      rigCode: rig.code,
+      guideSlug: guide.slug,
+      guideVersionId: guide.versionId,
+      openedAt,
+      ...(engineHours !== undefined ? { engineHours } : {}),
+      ...(input.fromCard ? { fromCaseId: input.fromCard.caseId } : {}),
+    },
+  });
+  if (engineHours !== undefined) noteHoursOnPhone(store, rig.code, engineHours);
   return { ok: true, caseId: input.caseId };
 }
 
@@ -164,7 +192,28 @@ export function walkOnPhone(store: KeyValueStore, caseId: string): WalkData | nu
 
 /** Keeps what the walk needs so it can open again with no signal (called whenever the server sends it). */
 export function keepWalk(store: KeyValueStore, data: WalkData): void {
-  saveView(store, { caseId: data.caseId, openedAt: data.openedAt, guide: data.guide, rig: data.rig, causeNames: data.causeNames });
+  saveView(store, {
+    caseId: data.caseId,
+    openedAt: data.openedAt,
+    guide: data.guide,
+    rig: data.rig,
+    causeNames: data.causeNames,
+    kind: data.kind,
+    fromCard: data.fromCard ?? null,
+  });
+}
+
+/**
+ * What the cards this phone keeps for a rig, opened since `since` (the start of the company's
+ * day), say about the day's facts: a pre-start done with no signal counts at once.
+ */
+export function dayFactsOnPhone(store: KeyValueStore & { length: number; key(index: number): string | null }, rigCode: string, since: string, by: string | null): DayFacts {
+  const cards = keptCaseIds(store).flatMap((id) => {
+    const view = loadView(store, id);
+    if (!view || view.rig.code !== rigCode || view.kind !== "card" || view.openedAt < since) return [];
+    return [{ title: view.guide.title, definition: view.guide.definition, by, events: loadRecord(store, id).events }];
+  });
+  return dayFacts(cards);
 }
 
 /** The names of the causes a guide can end with. */

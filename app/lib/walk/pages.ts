@@ -9,8 +9,8 @@ export const PAGES_CACHE = "tankside-pages-v1";
  */
 export const ON_PHONE_CASE = "on-phone";
 
-/** Pages kept on the phone: home, a rig and its "start a fix", a walk-through, field math. */
-export const KEPT_PAGE = /^\/(?:|rigs\/(?!new$)[^/]+(?:\/fix)?|cases\/[^/]+\/walk|field-math(?:\/[^/]+)?)$/;
+/** Pages kept on the phone: home, a rig, its "start a fix" and its cards, a walk-through, field math. */
+export const KEPT_PAGE = /^\/(?:|rigs\/(?!new$)[^/]+(?:\/fix|\/cards)?|cases\/[^/]+\/walk|field-math(?:\/[^/]+)?)$/;
 
 export const isWalkPage = (pathname: string) => /^\/cases\/[^/]+\/walk$/.test(pathname);
 
@@ -20,7 +20,7 @@ export function pagesToKeep(rigCodes: string[]): string[] {
     "/",
     "/field-math",
     ...FIELD_MATH_SCREENS.map((s) => `/field-math/${s.id}`),
-    ...rigCodes.flatMap((code) => [`/rigs/${code}`, `/rigs/${code}/fix`]),
+    ...rigCodes.flatMap((code) => [`/rigs/${code}`, `/rigs/${code}/fix`, `/rigs/${code}/cards`]),
     `/cases/${ON_PHONE_CASE}/walk`,
   ];
 }

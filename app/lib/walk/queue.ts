@@ -28,6 +28,10 @@ export interface QueuedStart {
   guideSlug: string;
   guideVersionId: number;
   openedAt: string;
+  /** A rig card's hour-meter reading as it started. */
+  engineHours?: number;
+  /** The card this fix was opened from. */
+  fromCaseId?: string;
 }
 
 /** A photo waiting on the phone (its bytes are kept apart, under its id). */

@@ -64,7 +64,9 @@ function breaksARule(g: Guide): string | null {
         .join() !== needed
     )
       return `${id}: events`;
-    if (s.meta.kind === "fixed" && !causes.some((c) => c.code === s.meta.cause)) return `${id}: cause`;
+    // A card's complete end carries no cause; a guide's fixed end must name one from the list.
+    if (s.meta.kind === "fixed" && g.kind !== "card" && !causes.some((c) => c.code === s.meta.cause)) return `${id}: cause`;
+    if (g.kind === "card" && s.meta.cause) return `${id}: cause on a card`;
   }
   if (!Object.values(g.states).some((s) => s.meta.kind === "fixed")) return "no fixed";
   const reached = getShortestPaths(machineFrom(g.initial), { events }).map((p) => p.state.value as string);
@@ -80,7 +82,8 @@ function breaksARule(g: Guide): string | null {
   for (const item of CHECKLIST_ITEMS) {
     for (const start of starts) {
       const walked = getShortestPaths(
-        machineFrom(start, (id) => id !== start && g.states[id].meta.kind === "safety" && checklistOf(g.states[id].meta).includes(item)),
+        // A walk from a restart passes the restart itself; one from the first step stops there if it is a stop (a card opens with one).
+        machineFrom(start, (id) => (id !== start || start === g.initial) && g.states[id].meta.kind === "safety" && checklistOf(g.states[id].meta).includes(item)),
         { events },
       );
       for (const p of walked) {

@@ -9,7 +9,8 @@ import { ANSWERS_BY_KIND as EVENTS_BY_KIND, STEP_ANSWERS as ANSWERS } from "~/li
 import type { Guide } from "~/lib/guides/schema";
 import { causes, root } from "../../helpers/guides";
 
-const library = loadLibrary(root);
+// The fault guides; the rig cards have their own tests (cards.test.ts).
+const library = loadLibrary(root).filter((g) => g.kind !== "card");
 const REQUIRED = [
   "lost-prime",
   "short-throw",

@@ -1,0 +1,245 @@
+import { isoInZone } from "../format";
+import { serviceDue } from "../rigs/service";
+import { poissonInterval } from "./chi-square";
+
+/**
+ * What skipped care costs, for the board: the fault rate per 100 engine hours on days with a
+ * complete pre-start against days without one (missing or incomplete), faults that happened with a
+ * service overdue, and cards completed per rig and week. Association, not proof: a rig whose crew
+ * skips the pre-start may also be the oldest, or on the hardest job.
+ */
+
+export interface CareRig {
+  id: number;
+  code: string;
+  hasHourMeter: boolean;
+}
+/** An hour-meter reading: a card's start, a fix's close, a service done. */
+export interface Reading {
+  rigId: number;
+  at: string;
+  hours: number;
+}
+/** A card walked: which, when, and whether it closed complete (its complete end, no item left undone). */
+export interface CardRow {
+  rigId: number;
+  slug: string;
+  at: string;
+  complete: boolean;
+}
+/** A fault: a fix closed fixed or handed off (the board's failures). */
+export interface FaultRow {
+  rigId: number;
+  at: string;
+  /** Hours read at its close, if any. */
+  hours: number | null;
+}
+export interface RuleRow {
+  id: number;
+  rigId: number;
+  name: string;
+  everyHours: number | null;
+  everyDays: number | null;
+  /** When the rule was set up: no service is overdue before its rule existed. */
+  since: string;
+}
+export interface DoneRow {
+  ruleId: number;
+  at: string;
+  hours: number | null;
+}
+
+export interface RateGroup {
+  days: number;
+  hours: number;
+  faults: number;
+  ratePer100h: number | null;
+  interval: { lower: number; upper: number } | null;
+}
+
+export interface CareFigures {
+  /** Rig-days with a complete pre-start, and the others (missing or incomplete). */
+  withPreStart: RateGroup;
+  withoutPreStart: RateGroup;
+  /** Worked rig-days that had no hour reading to measure (left out of both rates). */
+  unmeasuredDays: number;
+  /** Faults with at least one service overdue as they happened, and by service name. */
+  faults: number;
+  faultsWithOverdue: number;
+  overdueByService: { name: string; faults: number }[];
+  /** Complete cards per rig and week (Monday), and every card started. */
+  weeks: string[];
+  cardWeeks: { rigCode: string; cells: { week: string; complete: number; started: number }[] }[];
+}
+
+const PRE_START = "pre-start";
+/** A day's running above this is a misread meter, not a day: such a gap is left unmeasured. */
+const MAX_DAY_HOURS = 24;
+
+const dayIn = (at: string, zone: string) => isoInZone(at, zone).slice(0, 10);
+/** The Monday of a day's week, as YYYY-MM-DD. */
+export function weekOf(day: string): string {
+  const t = Date.parse(`${day}T00:00:00Z`);
+  const weekday = (new Date(t).getUTCDay() + 6) % 7;
+  return new Date(t - weekday * 86_400_000).toISOString().slice(0, 10);
+}
+
+function rateGroup(days: number, hours: number, faults: number, confidence: number): RateGroup {
+  if (hours <= 0) return { days, hours, faults, ratePer100h: null, interval: null };
+  const ci = poissonInterval(faults, confidence);
+  return { days, hours, faults, ratePer100h: (faults / hours) * 100, interval: { lower: (ci.lower / hours) * 100, upper: (ci.upper / hours) * 100 } };
+}
+
+/**
+ * Engine hours run per rig and day: the day's last reading less the last reading of an earlier
+ * day. With a card read at each start and the shut-down card at each day's end this is the day's
+ * running; a day whose end was not read passes its hours on to the next day read.
+ */
+export function hoursByDay(readings: readonly Reading[], zone: string): Map<string, number> {
+  const byRig = new Map<number, Reading[]>();
+  for (const r of readings) {
+    const list = byRig.get(r.rigId);
+    if (list) list.push(r);
+    else byRig.set(r.rigId, [r]);
+  }
+  const out = new Map<string, number>();
+  for (const [rigId, list] of byRig) {
+    const lastOfDay = new Map<string, number>();
+    for (const r of [...list].sort((a, b) => a.at.localeCompare(b.at))) lastOfDay.set(dayIn(r.at, zone), r.hours);
+    let before: number | null = null;
+    for (const [day, hours] of [...lastOfDay].sort(([a], [b]) => a.localeCompare(b))) {
+      const run = before === null ? null : hours - before;
+      if (run !== null && run >= 0 && run <= MAX_DAY_HOURS) out.set(`${rigId}:${day}`, run);
+      before = hours;
+    }
+  }
+  return out;
+}
+
+/**
+ * The services overdue on a rig at a time (hours read then), from its rules and what was done
+ * before. `done` is each rule's records, oldest first.
+ */
+export function overdueAt(
+  rules: readonly RuleRow[],
+  done: ReadonlyMap<number, readonly DoneRow[]>,
+  at: string,
+  hours: number | null,
+  hasHourMeter: boolean,
+  zone: string,
+): string[] {
+  return rules.flatMap((rule) => {
+    if (rule.since > at) return [];
+    const list = done.get(rule.id) ?? [];
+    let last: DoneRow | undefined;
+    for (const d of list) {
+      if (d.at > at) break;
+      last = d;
+    }
+    // Never done since the rule was set: counted from the day it was set (by the calendar only).
+    const from = last ? { doneAt: last.at, engineHours: last.hours } : { doneAt: rule.since, engineHours: null };
+    const rig = { hasHourMeter: hasHourMeter && hours !== null && from.engineHours !== null, engineHours: hours ?? 0 };
+    return serviceDue(rule, from, rig, new Date(at), zone).status === "overdue" ? [rule.name] : [];
+  });
+}
+
+export function careFigures(
+  input: {
+    rigs: readonly CareRig[];
+    readings: readonly Reading[];
+    cards: readonly CardRow[];
+    faults: readonly FaultRow[];
+    rules: readonly RuleRow[];
+    done: readonly DoneRow[];
+    zone: string;
+    /** The window's days (company calendar, from inclusive, to exclusive): readings before it only measure its first day. */
+    fromDay: string;
+    toDay: string;
+    /** The weeks to show cards for end with this day's week. */
+    today: string;
+    weeksShown?: number;
+  },
+  confidence = 0.95,
+): CareFigures {
+  const { zone } = input;
+  const inWindow = (at: string) => {
+    const day = dayIn(at, zone);
+    return day >= input.fromDay && day < input.toDay;
+  };
+  const cardsIn = input.cards.filter((c) => inWindow(c.at));
+  const faultsIn = input.faults.filter((f) => inWindow(f.at));
+  const metered = new Set(input.rigs.filter((r) => r.hasHourMeter).map((r) => r.id));
+  const hours = hoursByDay(
+    input.readings.filter((r) => metered.has(r.rigId)),
+    zone,
+  );
+  const complete = new Set(cardsIn.filter((c) => c.slug === PRE_START && c.complete).map((c) => `${c.rigId}:${dayIn(c.at, zone)}`));
+  const faultsOn = new Map<string, number>();
+  for (const f of faultsIn) if (metered.has(f.rigId)) faultsOn.set(`${f.rigId}:${dayIn(f.at, zone)}`, (faultsOn.get(`${f.rigId}:${dayIn(f.at, zone)}`) ?? 0) + 1);
+
+  // A worked rig-day: one with a card or a fault. Measured when its hours are known.
+  const worked = new Set<string>([...faultsOn.keys(), ...cardsIn.filter((c) => metered.has(c.rigId)).map((c) => `${c.rigId}:${dayIn(c.at, zone)}`)]);
+  for (const key of hours.keys()) {
+    const day = key.slice(key.indexOf(":") + 1);
+    if (day >= input.fromDay && day < input.toDay) worked.add(key);
+  }
+  const sums = { with: { days: 0, hours: 0, faults: 0 }, without: { days: 0, hours: 0, faults: 0 } };
+  let unmeasured = 0;
+  for (const key of worked) {
+    const run = hours.get(key);
+    if (run === undefined) {
+      unmeasured++;
+      continue;
+    }
+    const g = complete.has(key) ? sums.with : sums.without;
+    g.days++;
+    g.hours += run;
+    g.faults += faultsOn.get(key) ?? 0;
+  }
+
+  const rigOf = new Map(input.rigs.map((r) => [r.id, r]));
+  const doneByRule = new Map<number, DoneRow[]>();
+  for (const d of [...input.done].sort((a, b) => a.at.localeCompare(b.at))) {
+    const list = doneByRule.get(d.ruleId);
+    if (list) list.push(d);
+    else doneByRule.set(d.ruleId, [d]);
+  }
+  const byService = new Map<string, number>();
+  let withOverdue = 0;
+  for (const f of faultsIn) {
+    const rig = rigOf.get(f.rigId);
+    if (!rig) continue;
+    const names = overdueAt(
+      input.rules.filter((r) => r.rigId === f.rigId),
+      doneByRule,
+      f.at,
+      f.hours,
+      rig.hasHourMeter,
+      zone,
+    );
+    if (names.length) withOverdue++;
+    for (const n of names) byService.set(n, (byService.get(n) ?? 0) + 1);
+  }
+
+  const shown = input.weeksShown ?? 8;
+  const lastWeek = Date.parse(`${weekOf(input.today)}T00:00:00Z`);
+  const weeks = Array.from({ length: shown }, (_, i) => new Date(lastWeek - (shown - 1 - i) * 7 * 86_400_000).toISOString().slice(0, 10));
+  const cardWeeks = input.rigs.map((rig) => ({
+    rigCode: rig.code,
+    cells: weeks.map((week) => {
+      const mine = input.cards.filter((c) => c.rigId === rig.id && weekOf(dayIn(c.at, zone)) === week);
+      return { week, complete: mine.filter((c) => c.complete).length, started: mine.length };
+    }),
+  }));
+
+  return {
+    withPreStart: rateGroup(sums.with.days, sums.with.hours, sums.with.faults, confidence),
+    withoutPreStart: rateGroup(sums.without.days, sums.without.hours, sums.without.faults, confidence),
+    unmeasuredDays: unmeasured,
+    faults: faultsIn.length,
+    faultsWithOverdue: withOverdue,
+    overdueByService: [...byService].map(([name, faults]) => ({ name, faults })).sort((a, b) => b.faults - a.faults || a.name.localeCompare(b.name)),
+    weeks,
+    cardWeeks,
+  };
+}

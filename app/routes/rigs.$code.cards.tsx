@@ -1,0 +1,215 @@
+import { useEffect, useState } from "react";
+import { data, Form, Link, redirect, useNavigation } from "react-router";
+import { serverOrPhone } from "~/components/offline/server-or-phone";
+import { useTimes } from "~/components/use-time-zone";
+import { cardStartFormSchema } from "~/lib/cases/schema";
+import { parseForm } from "~/lib/forms/parse";
+import { guideKind } from "~/lib/guides/kinds";
+import { readingProblem } from "~/lib/rigs/service";
+import { lastHoursOnPhone, loadKit, openWalksOnPhone, startOnPhone } from "~/lib/walk/kept";
+import { isNoSignal } from "~/lib/walk/no-signal";
+import { cardStateLabel } from "~/lib/vocabulary";
+import { cardsOnRig, startOfToday, type CardDone } from "~/services/cards.server";
+import { openWalksOn, startCase } from "~/services/cases.server";
+import { requireUser } from "~/services/guards.server";
+import { rigCards } from "~/services/guides.server";
+import { readForm } from "~/services/read-request.server";
+import { findRig } from "~/services/rigs.server";
+import type { Route } from "./+types/rigs.$code.cards";
+
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const user = await requireUser({ request, context });
+  const rig = await findRig(user, params.code);
+  const [cards, today, openWalks] = await Promise.all([
+    rigCards(user),
+    cardsOnRig(user, rig.id, { since: startOfToday(user) }),
+    openWalksOn(user, rig.id),
+  ]);
+  return {
+    rig: { code: rig.code, name: rig.name, retired: rig.retired, hasHourMeter: rig.hasHourMeter, engineHours: rig.engineHours },
+    cards: cards.map((c) => ({ slug: c.slug, title: c.title, summary: c.definition.summary })),
+    today,
+    openWalks: openWalks.map((w) => ({ ...w, onPhoneOnly: false })),
+    // Made with the page, so a double tap on a slow signal starts one card.
+    caseId: crypto.randomUUID(),
+  };
+}
+
+/** With no signal the cards come from what the phone keeps; what was done today waits for signal. */
+export async function clientLoader({ params, serverLoader }: Route.ClientLoaderArgs) {
+  const code = params.code.toUpperCase();
+  const page = await serverOrPhone(serverLoader, (kit) => {
+    const rig = kit.rigs.find((r) => r.code === code);
+    if (!rig) return null;
+    return {
+      rig: { code: rig.code, name: rig.name, retired: false, hasHourMeter: rig.hasHourMeter, engineHours: rig.engineHours },
+      cards: kit.guides.filter((g) => guideKind(g.definition) === "card").map((g) => ({ slug: g.slug, title: g.title, summary: g.summary })),
+      today: [] as CardDone[],
+      openWalks: [],
+      caseId: crypto.randomUUID(),
+    };
+  });
+  // The newest reading this phone knows (a card or fix finished here with no signal counts).
+  const engineHours = Math.max(page.rig.engineHours, lastHoursOnPhone(window.localStorage, code) ?? 0);
+  const onServer = new Set(page.openWalks.map((w) => w.id));
+  const onPhone = openWalksOnPhone(window.localStorage, code).filter((w) => !onServer.has(w.id));
+  return { ...page, rig: { ...page.rig, engineHours }, openWalks: [...onPhone, ...page.openWalks] };
+}
+
+export async function action({ request, params, context }: Route.ActionArgs) {
+  const user = await requireUser({ request, context });
+  const rig = await findRig(user, params.code);
+  const submission = parseForm(await readForm(request), cardStartFormSchema);
+  if (submission.status !== "success") return data({ result: submission.reply(), problem: null }, { status: 400 });
+  const problem = readingProblem(submission.value.engineHours, rig);
+  if (problem) return data({ result: submission.reply({ fieldErrors: { engineHours: [problem] } }), problem: null }, { status: 400 });
+  const { id } = await startCase(user, {
+    id: submission.value.caseId,
+    rigCode: rig.code,
+    guideSlug: submission.value.cardSlug,
+    engineHours: submission.value.engineHours ?? undefined,
+  });
+  return redirect(`/cases/${id}/walk`);
+}
+
+/** With no signal the phone starts the card itself, with the reading, and sends it later. */
+export async function clientAction({ request, params, serverAction }: Route.ClientActionArgs) {
+  const form = await request.clone().formData();
+  try {
+    return await serverAction();
+  } catch (error) {
+    if (!isNoSignal(error)) throw error;
+    const kit = loadKit(window.localStorage);
+    if (!kit) return { result: null, problem: "No signal, and this phone has not kept the cards yet. Open Tankside once where there is signal." };
+    const submission = parseForm(form, cardStartFormSchema);
+    if (submission.status !== "success") return { result: submission.reply(), problem: null };
+    const code = params.code.toUpperCase();
+    const kept = kit.rigs.find((r) => r.code === code);
+    const last = Math.max(kept?.engineHours ?? 0, lastHoursOnPhone(window.localStorage, code) ?? 0);
+    const problem = kept ? readingProblem(submission.value.engineHours, { hasHourMeter: kept.hasHourMeter, engineHours: last }) : null;
+    if (problem) return { result: submission.reply({ fieldErrors: { engineHours: [problem] } }), problem: null };
+    const started = startOnPhone(window.localStorage, kit, {
+      caseId: submission.value.caseId ?? crypto.randomUUID(),
+      rigCode: code,
+      guideSlug: submission.value.cardSlug,
+      now: new Date(),
+      engineHours: submission.value.engineHours ?? undefined,
+    });
+    if (!started.ok) return { result: null, problem: started.problem };
+    return redirect(`/cases/${started.caseId}/walk`);
+  }
+}
+
+export default function RigCards({ loaderData, actionData }: Route.ComponentProps) {
+  const { rig, cards, today, openWalks } = loaderData;
+  const times = useTimes();
+  const [caseId, setCaseId] = useState(loaderData.caseId);
+  useEffect(() => setCaseId(crypto.randomUUID()), [loaderData]);
+  const navigation = useNavigation();
+  const opening = navigation.state !== "idle" ? (navigation.formData?.get("cardSlug")?.toString() ?? "") : null;
+  const hoursError = actionData?.result?.error?.engineHours?.[0];
+  const problem = actionData?.problem ?? actionData?.result?.error?.cardSlug?.[0] ?? null;
+
+  return (
+    <>
+      <h1 className="text-3xl font-bold">Rig cards · {rig.code}</h1>
+      <p className="mt-1 text-lg">{rig.name}. The routine parts of the day, one item at a time.</p>
+      {problem ? (
+        <p role="alert" className="mt-3 rounded-md border-2 border-stop bg-paper px-3 py-2 text-lg font-bold text-stop">
+          {problem}
+        </p>
+      ) : null}
+      {openWalks.length ? (
+        <section aria-labelledby="open-h" className="mt-4 rounded-lg border-4 border-go bg-paper p-3">
+          <h2 id="open-h" className="text-lg font-bold">
+            Carry on where you left off
+          </h2>
+          <ul className="mt-2 space-y-2">
+            {openWalks.map((w) => (
+              <li key={w.id}>
+                <Link to={`/cases/${w.id}/walk`} className="flex min-h-14 flex-col justify-center rounded-lg bg-go px-4 py-2 text-white no-underline">
+                  <span className="text-xl font-bold">{w.guideTitle}</span>
+                  <span>
+                    started {times.dateTime(w.openedAt)}
+                    {w.onPhoneOnly ? " · on this phone only, not sent yet" : ""}
+                  </span>
+                </Link>
+              </li>
+            ))}
+          </ul>
+        </section>
+      ) : null}
+      {rig.retired ? (
+        <p className="mt-3 font-bold text-stop">This rig is retired; cards cannot be started on it.</p>
+      ) : (
+        <Form method="post" className="mt-4 space-y-4">
+          <input type="hidden" name="caseId" value={caseId} />
+          {rig.hasHourMeter ? (
+            <label className="block text-lg font-bold">
+              Hour meter now
+              <span className="block text-base font-normal">Last reading {rig.engineHours.toLocaleString("en-US")} h. Each card records it as it starts.</span>
+              <input
+                name="engineHours"
+                inputMode="decimal"
+                autoComplete="off"
+                required
+                aria-invalid={hoursError ? true : undefined}
+                aria-describedby={hoursError ? "hours-error" : undefined}
+                className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink bg-paper px-3 text-xl"
+              />
+              {hoursError ? (
+                <span id="hours-error" role="alert" className="mt-1 block font-bold text-stop">
+                  {hoursError}
+                </span>
+              ) : null}
+            </label>
+          ) : (
+            <p className="text-lg">This rig has no hour meter: cards go by the calendar.</p>
+          )}
+          <ul className="grid gap-2 sm:grid-cols-2">
+            {cards.map((c) => {
+              const mine = opening === c.slug;
+              return (
+                <li key={c.slug}>
+                  <button
+                    type="submit"
+                    name="cardSlug"
+                    value={c.slug}
+                    disabled={opening !== null}
+                    aria-busy={mine}
+                    className={`flex min-h-16 w-full flex-col items-start justify-center rounded-lg border-2 px-4 py-2 text-left ${
+                      mine ? "border-4 border-go bg-caution text-ink" : "border-ink bg-paper"
+                    }`}
+                  >
+                    <span className="text-xl font-bold">{mine ? `Opening ${c.title}…` : c.title}</span>
+                    <span className="text-base">{c.summary}</span>
+                  </button>
+                </li>
+              );
+            })}
+          </ul>
+        </Form>
+      )}
+      <section aria-labelledby="today-h" className="mt-6 rounded-lg border-2 border-ink bg-paper p-4">
+        <h2 id="today-h" className="text-xl font-bold">
+          Done on {rig.code} today
+        </h2>
+        {today.length ? (
+          <ul className="mt-2 space-y-1 text-lg">
+            {today.map((c) => (
+              <li key={c.id}>
+                <strong>{c.title}</strong>: {cardStateLabel(c.outcome, c.gaps)} · {times.time(c.openedAt)}
+                {c.by ? ` · ${c.by}` : ""}
+                {c.engineHours !== null ? ` · ${c.engineHours.toLocaleString("en-US")} h` : ""}
+              </li>
+            ))}
+          </ul>
+        ) : (
+          <p className="mt-2 text-lg">No card saved on {rig.code} today yet (cards kept on this phone without signal show once sent).</p>
+        )}
+      </section>
+    </>
+  );
+}
+
+export const meta: Route.MetaFunction = ({ data }) => [{ title: `Cards ${data?.rig.code ?? ""} · Tankside` }];
