@@ -38,7 +38,7 @@ export interface DemoCard {
 export function walkCard(card: Guide, choose: (stepId: string) => Answer): { steps: string[]; answers: Answer[] } {
   const steps = [card.initial];
   const answers: Answer[] = [];
-  for (let id = card.initial; !card.states[id].type; ) {
+  for (let id = card.initial; !card.states[id].type;) {
     const answer = choose(id);
     const next = card.states[id].on?.[answer as "YES"];
     if (!next) throw new Error(`${card.id}: ${id} takes no ${answer}`);
@@ -98,7 +98,16 @@ export function saveCard(
     const task = def.states[e.stepId].meta.service;
     if (!task || !affirms(e.answer)) continue;
     for (const rule of at.rules.filter((r) => r.task === task))
-      sink.services.push({ companyId: at.companyId, rigId: at.rigId, ruleId: rule.id, doneAt: e.at, engineHours: at.hours, doneBy: at.openedBy, note: null, caseId: id });
+      sink.services.push({
+        companyId: at.companyId,
+        rigId: at.rigId,
+        ruleId: rule.id,
+        doneAt: e.at,
+        engineHours: at.hours,
+        doneBy: at.openedBy,
+        note: null,
+        caseId: id,
+      });
   }
   return { answers: held.map((e) => ({ stepId: e.stepId, answer: e.answer })) };
 }

@@ -99,7 +99,9 @@ export async function seedDemoHistory(now = new Date(), log: (line: string) => v
       .map(({ slug, version: v }) => [slug, { versionId: v.id, definition: v.definition, paths: simplePaths(v.definition) }] as const),
   );
   const cardsBy = new Map(
-    published.filter((g) => guideKind(g.version.definition) === "card").map(({ slug, version: v }) => [slug, { versionId: v.id, definition: v.definition }] as const),
+    published
+      .filter((g) => guideKind(g.version.definition) === "card")
+      .map(({ slug, version: v }) => [slug, { versionId: v.id, definition: v.definition }] as const),
   );
   const slugs = [...guides.keys()];
   const sink: DemoCardSink = { cases: [], events: [], services: [] };
@@ -132,15 +134,21 @@ export async function seedDemoHistory(now = new Date(), log: (line: string) => v
         let lubed = false;
         if (random.next() < habits.preStart) {
           const skipGrease = random.next() < habits.greaseSkip;
-          const walked = saveCard(sink, random, cardsBy.get("pre-start")!, { ...at, start: day + (13 + random.next() * 0.5) * 3_600_000, hours: meter(before) }, (id) =>
-            id === "grease" && skipGrease ? "CANT" : undefined,
+          const walked = saveCard(
+            sink,
+            random,
+            cardsBy.get("pre-start")!,
+            { ...at, start: day + (13 + random.next() * 0.5) * 3_600_000, hours: meter(before) },
+            (id) => (id === "grease" && skipGrease ? "CANT" : undefined),
           );
           complete = !skipGrease;
           lubed = walked.answers.some((a) => a.stepId === "lubricator" && a.answer === "DONE");
         }
         // A day with no complete pre-start brings more faults; an uncharged lubricator, a dry shaft seal (invented rates).
         const n = poisson(profile.perDay * (0.5 + random.next()) * (complete ? 0.8 : 1.5), random.next);
-        const picks: (string | [string, string])[] = Array.from({ length: n }, () => (random.next() < 0.7 ? random.weighted(profile.favourites) : random.pick(slugs)));
+        const picks: (string | [string, string])[] = Array.from({ length: n }, () =>
+          random.next() < 0.7 ? random.weighted(profile.favourites) : random.pick(slugs),
+        );
         if (!lubed && random.next() < 0.3) picks.push(["leaks", random.next() < 0.75 ? "fixed-pump-shaft" : "handoff-lube"]);
         for (const pick of picks) {
           const [slug, forced] = typeof pick === "string" ? [pick, null] : pick;
@@ -183,8 +191,12 @@ export async function seedDemoHistory(now = new Date(), log: (line: string) => v
         }
         if (random.next() < habits.shutDown) {
           const cold = [2, 3, 9, 10].includes(new Date(day).getUTCMonth()) && random.next() < 0.4;
-          saveCard(sink, random, cardsBy.get("shut-down-clean-out")!, { ...at, start: day + (23 + random.next() * 0.5) * 3_600_000, hours: meter(hours) }, (id) =>
-            id === "frost" ? (cold ? "YES" : "NO") : undefined,
+          saveCard(
+            sink,
+            random,
+            cardsBy.get("shut-down-clean-out")!,
+            { ...at, start: day + (23 + random.next() * 0.5) * 3_600_000, hours: meter(hours) },
+            (id) => (id === "frost" ? (cold ? "YES" : "NO") : undefined),
           );
         }
       }
@@ -203,7 +215,9 @@ export async function seedDemoHistory(now = new Date(), log: (line: string) => v
   await sequelize.query("UPDATE service_rules SET created_at = LEAST(created_at, :start)", { replacements: { start: new Date(start - 30 * DAY) } });
   // Bulk inserts skip the per-case upkeep of the board's rollups.
   await rebuildBoardRollups(sequelize);
-  log(`Seeded demo history: ${cases.length} cases, ${sink.cases.length} rig cards, ${sink.services.length} services recorded by cards, ${events.length + sink.events.length} answers over a year.`);
+  log(
+    `Seeded demo history: ${cases.length} cases, ${sink.cases.length} rig cards, ${sink.services.length} services recorded by cards, ${events.length + sink.events.length} answers over a year.`,
+  );
   return cases.length;
 }
 

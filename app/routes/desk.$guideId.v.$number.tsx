@@ -10,7 +10,7 @@ import { ProblemsPanel } from "~/components/desk/problems-panel";
 import { TreeDrawing } from "~/components/desk/tree-drawing";
 import { PageTitle } from "~/components/ui/page-title";
 import { ErrorList } from "~/components/ui/error-list";
-import { definitionChecks, submitDraft, versionFor } from "~/services/desk.server";
+import { definitionChecks, openableGuides, submitDraft, versionFor } from "~/services/desk.server";
 import { deskParams } from "~/services/desk-params.server";
 import { answerRefusal, refusedForm, requirePermission, unlessRefused } from "~/services/guards.server";
 import { readForm } from "~/services/read-request.server";
@@ -25,7 +25,8 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
     ...v,
     editable: v.version.status === "draft" && !v.guide.builtIn,
     causes: causeList(),
-    ...definitionChecks(v.version.definition),
+    guides: await openableGuides(user),
+    ...(await definitionChecks(user, v.version.definition)),
   };
 }
 
@@ -62,6 +63,7 @@ export default function EditVersion({ loaderData, actionData }: Route.ComponentP
           <GuideEditor
             initial={version.definition as unknown as Draft}
             causes={causes}
+            guides={loaderData.guides}
             saveUrl={`/api/desk/${guide.id}/v/${version.number}`}
             footer={({ dirty, edits }) => <SendForReview dirty={dirty} edits={edits} result={actionData} />}
           />

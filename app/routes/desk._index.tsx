@@ -27,7 +27,7 @@ export async function action({ request, context }: Route.ActionArgs) {
     if (intent === "new") {
       const submission = parseForm(form, newGuideSchema);
       if (submission.status !== "success") return refused(400, submission.error?.title?.[0] ?? "Give the new guide a title of 3 to 120 characters.");
-      const { guideId, number } = await createGuide(user, submission.value.title);
+      const { guideId, number } = await createGuide(user, submission.value.title, submission.value.kind);
       return redirect(`/desk/${guideId}/v/${number}`);
     }
     if (intent === "import") {
@@ -48,12 +48,14 @@ export async function action({ request, context }: Route.ActionArgs) {
 
 export default function Desk({ loaderData, actionData }: Route.ComponentProps) {
   const own = loaderData.guides.filter((g) => !g.builtIn);
-  const builtIn = loaderData.guides.filter((g) => g.builtIn);
+  const builtIn = loaderData.guides.filter((g) => g.builtIn && g.kind === "guide");
+  const builtInCards = loaderData.guides.filter((g) => g.builtIn && g.kind === "card");
   const row = (g: (typeof loaderData.guides)[number]) => (
     <li key={g.id} className="rounded-md border-2 border-rule bg-paper p-3">
       <Link to={`/desk/${g.id}`} className="text-lg font-bold">
         {g.title}
       </Link>
+      {g.kind === "card" ? <span className="ml-2 rounded bg-ink px-2 py-0.5 text-sm font-bold text-white">Rig card</span> : null}
       <p className="text-sm">
         {g.publishedVersion ? `Crews use version ${g.publishedVersion}` : "Not published yet"}
         {g.replacedByCompanyCopy ? " · replaced by your company's copy" : ""}
@@ -81,6 +83,9 @@ export default function Desk({ loaderData, actionData }: Route.ComponentProps) {
       {own.length ? <ul className="mt-2 space-y-2">{own.map(row)}</ul> : <p>None yet. Edit a built-in guide to make your own copy, or write a new one.</p>}
       <h2 className="mt-6 text-xl font-bold">Built-in library</h2>
       <ul className="mt-2 space-y-2">{builtIn.map(row)}</ul>
+      <h2 className="mt-6 text-xl font-bold">Built-in rig cards</h2>
+      <p>The routine parts of the day (pre-start, flush, loading, shut-down, service, storage), checked by the same safety rules as guides.</p>
+      <ul className="mt-2 space-y-2">{builtInCards.map(row)}</ul>
     </>
   );
 }
@@ -90,9 +95,18 @@ function NewGuideForm() {
   return (
     <Form method="post" {...getFormProps(form)} className="rounded-lg border-2 border-ink bg-paper p-3">
       <input type="hidden" name="intent" value="new" />
-      <FormField field={fields.title} label="Write a new guide">
+      <FormField field={fields.title} label="Write a new guide or rig card">
         <input {...getInputProps(fields.title, { type: "text" })} placeholder="e.g. Hopper gate sticks" className={inputClass} />
       </FormField>
+      <fieldset className="mt-2">
+        <legend className="font-bold">It is</legend>
+        <label className="flex min-h-12 items-center gap-2">
+          <input type="radio" name="kind" value="guide" defaultChecked className="h-6 w-6" /> a guide for a fault
+        </label>
+        <label className="flex min-h-12 items-center gap-2">
+          <input type="radio" name="kind" value="card" className="h-6 w-6" /> a rig card for a routine part of the day
+        </label>
+      </fieldset>
       <button className="mt-2 min-h-12 w-full rounded-md bg-go font-bold text-white">Start a draft</button>
     </Form>
   );

@@ -4,7 +4,7 @@ import { serverOrPhone } from "~/components/offline/server-or-phone";
 import { useTimes } from "~/components/use-time-zone";
 import { cardStartFormSchema } from "~/lib/cases/schema";
 import { parseForm } from "~/lib/forms/parse";
-import { guideKind } from "~/lib/guides/kinds";
+import { guideKind, inDayOrder } from "~/lib/guides/kinds";
 import { readingProblem } from "~/lib/rigs/service";
 import { lastHoursOnPhone, loadKit, openWalksOnPhone, startOnPhone } from "~/lib/walk/kept";
 import { isNoSignal } from "~/lib/walk/no-signal";
@@ -20,14 +20,10 @@ import type { Route } from "./+types/rigs.$code.cards";
 export async function loader({ request, params, context }: Route.LoaderArgs) {
   const user = await requireUser({ request, context });
   const rig = await findRig(user, params.code);
-  const [cards, today, openWalks] = await Promise.all([
-    rigCards(user),
-    cardsOnRig(user, rig.id, { since: startOfToday(user) }),
-    openWalksOn(user, rig.id),
-  ]);
+  const [cards, today, openWalks] = await Promise.all([rigCards(user), cardsOnRig(user, rig.id, { since: startOfToday(user) }), openWalksOn(user, rig.id)]);
   return {
     rig: { code: rig.code, name: rig.name, retired: rig.retired, hasHourMeter: rig.hasHourMeter, engineHours: rig.engineHours },
-    cards: cards.map((c) => ({ slug: c.slug, title: c.title, summary: c.definition.summary })),
+    cards: inDayOrder(cards.map((c) => ({ slug: c.slug, title: c.title, summary: c.definition.summary }))),
     today,
     openWalks: openWalks.map((w) => ({ ...w, onPhoneOnly: false })),
     // Made with the page, so a double tap on a slow signal starts one card.
@@ -43,7 +39,7 @@ export async function clientLoader({ params, serverLoader }: Route.ClientLoaderA
     if (!rig) return null;
     return {
       rig: { code: rig.code, name: rig.name, retired: false, hasHourMeter: rig.hasHourMeter, engineHours: rig.engineHours },
-      cards: kit.guides.filter((g) => guideKind(g.definition) === "card").map((g) => ({ slug: g.slug, title: g.title, summary: g.summary })),
+      cards: inDayOrder(kit.guides.filter((g) => guideKind(g.definition) === "card").map((g) => ({ slug: g.slug, title: g.title, summary: g.summary }))),
       today: [] as CardDone[],
       openWalks: [],
       caseId: crypto.randomUUID(),

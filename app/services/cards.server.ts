@@ -21,7 +21,12 @@ export interface CardDone {
 
 type WithVersion = Case & { guideVersion: GuideVersion & { guide: GuideRecord }; opener: User | null };
 const withVersion = [
-  { model: GuideVersion, as: "guideVersion", attributes: ["id", "number", "definition"], include: [{ model: GuideRecord, as: "guide", attributes: ["title"] }] },
+  {
+    model: GuideVersion,
+    as: "guideVersion",
+    attributes: ["id", "number", "definition"],
+    include: [{ model: GuideRecord, as: "guide", attributes: ["title"] }],
+  },
   { model: User, as: "opener", attributes: ["name"] },
 ];
 
@@ -61,7 +66,11 @@ export async function todaysFacts(user: SessionUser, rigId: number, guide: Guide
     include: withVersion,
   })) as WithVersion[];
   if (!cards.length) return {};
-  const events = await CaseEvent.findAll({ where: { caseId: cards.map((c) => c.id) }, attributes: ["caseId", "stepId", "answer", "at"], order: [["seq", "ASC"]] });
+  const events = await CaseEvent.findAll({
+    where: { caseId: cards.map((c) => c.id) },
+    attributes: ["caseId", "stepId", "answer", "at"],
+    order: [["seq", "ASC"]],
+  });
   const facts = dayFacts(
     cards.map((c) => ({
       title: c.guideVersion.guide.title,

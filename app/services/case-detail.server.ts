@@ -68,11 +68,16 @@ const titled = [{ model: GuideVersion, as: "guideVersion", attributes: ["id"], i
 /** The card a fix came from and the fixes a card opened, both within the company. */
 async function cardLinks(user: SessionUser, found: Case) {
   const [from, opened] = await Promise.all([
-    found.fromCaseId ? (Case.findOne({ where: ownedBy(user, { id: found.fromCaseId }), attributes: ["id"], include: titled }) as Promise<WithTitle | null>) : null,
+    found.fromCaseId
+      ? (Case.findOne({ where: ownedBy(user, { id: found.fromCaseId }), attributes: ["id"], include: titled }) as Promise<WithTitle | null>)
+      : null,
     found.kind === "card"
-      ? (Case.findAll({ where: ownedBy(user, { fromCaseId: found.id }), attributes: ["id", "outcome"], include: titled, order: [["openedAt", "ASC"]] }) as Promise<
-          WithTitle[]
-        >)
+      ? (Case.findAll({
+          where: ownedBy(user, { fromCaseId: found.id }),
+          attributes: ["id", "outcome"],
+          include: titled,
+          order: [["openedAt", "ASC"]],
+        }) as Promise<WithTitle[]>)
       : [],
   ]);
   return {

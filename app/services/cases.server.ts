@@ -96,8 +96,7 @@ export async function startCase(user: SessionUser, input: StartCaseInput) {
         },
         { transaction },
       );
-      if (engineHours !== null)
-        await Rig.update({ engineHours }, { where: { id: rig.id, engineHours: { [Op.lt]: engineHours } }, transaction });
+      if (engineHours !== null) await Rig.update({ engineHours }, { where: { id: rig.id, engineHours: { [Op.lt]: engineHours } }, transaction });
       return { id, companyId: user.companyId, rigId: rig.id, kind: version.kind, causeCode: null, openedAt: created.openedAt };
     });
   } catch (error) {

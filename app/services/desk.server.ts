@@ -3,22 +3,26 @@ import { replacedBuiltIns, usableBy } from "./tenancy.server";
 import { Op, QueryTypes } from "sequelize";
 import { compileGuide } from "~/lib/guides/compile";
 import { mainLine } from "~/lib/guides/main-line";
-import { draftShapeSchema, wellFormedText, type Guide } from "~/lib/guides/schema";
+import { draftShapeSchema, wellFormedText, type Guide, type GuideKind } from "~/lib/guides/schema";
 import { validateGuide, plainProblem } from "~/lib/guides/validate";
 import { expectedMinutes, ratioOrder } from "~/lib/stats/check-order";
 import { stepFlow, type FlowCase } from "~/lib/stats/step-flow";
 import { GuideRecord, GuideVersion, guideScope, sequelize, User } from "./db.server";
 import { fail, notFound, type SessionUser } from "./guards.server";
 import { reportsChanged } from "./report-cache.server";
-import { causeList } from "./guides.server";
+import { causeList, faultGuides } from "./guides.server";
 
 const MAX_DEFINITION_CHARS = 200_000;
 const hash = (definition: unknown) => createHash("sha256").update(JSON.stringify(definition)).digest("hex");
-export const checkDefinition = (definition: unknown) => validateGuide(definition, { causes: causeList() }).problems;
+/** The guides a company's card may open: its crews' published fault guides. */
+export const openableGuides = async (user: SessionUser) => (await faultGuides(user)).map((g) => ({ slug: g.slug, title: g.title }));
+
+export const checkDefinition = async (user: SessionUser, definition: unknown) =>
+  validateGuide(definition, { causes: causeList(), guideIds: (await openableGuides(user)).map((g) => g.slug) }).problems;
 
 /** Problems and what a reviewer should look at (a restart with nothing put back first), from one run of the checker. */
-export function definitionChecks(definition: unknown) {
-  const { problems, warnings } = validateGuide(definition, { causes: causeList() });
+export async function definitionChecks(user: SessionUser, definition: unknown) {
+  const { problems, warnings } = validateGuide(definition, { causes: causeList(), guideIds: (await openableGuides(user)).map((g) => g.slug) });
   return { problems, warnings };
 }
 
@@ -61,12 +65,20 @@ export async function deskList(user: SessionUser) {
   const guides = await GuideRecord.findAll({
     where: usableBy(user),
     attributes: ["id", "companyId", "slug", "title", "publishedVersion", "basedOnGuideId"],
-    include: [{ model: GuideVersion, as: "versions", attributes: ["number", "status", "updatedAt"] }],
+    include: [
+      {
+        model: GuideVersion,
+        as: "versions",
+        // The kind from each version's definition (every version of one guide has the same kind).
+        attributes: ["number", "status", "updatedAt", [sequelize.literal("JSON_VALUE(`versions`.`definition`, '$.kind')"), "kind"]],
+      },
+    ],
     order: [["title", "ASC"]],
   });
   const replaced = replacedBuiltIns(guides);
   return guides.map((g) => ({
     id: g.id,
+    kind: ((g as GuideRecord & { versions: GuideVersion[] }).versions ?? []).some((v) => v.get("kind") === "card") ? ("card" as const) : ("guide" as const),
     slug: g.slug,
     title: g.title,
     builtIn: g.companyId === null,
@@ -124,7 +136,7 @@ export async function openDraft(user: SessionUser, guideId: number): Promise<{ g
 }
 
 /** A new company guide from a small, valid starting point. */
-export async function createGuide(user: SessionUser, title: string): Promise<{ guideId: number; number: number }> {
+export async function createGuide(user: SessionUser, title: string, kind: GuideKind = "guide"): Promise<{ guideId: number; number: number }> {
   const base =
     title
       .toLowerCase()
@@ -146,19 +158,37 @@ export async function createGuide(user: SessionUser, title: string): Promise<{ g
     n++
   )
     slug = `${base}-${n}`;
-  const definition: Guide = {
-    id: slug,
-    title,
-    // Left empty on purpose: the checker asks for it, so no placeholder sentence reaches a crew.
-    summary: "",
-    symptoms: [title.toLowerCase()],
-    initial: "first-check",
-    states: {
-      "first-check": { on: { YES: "fixed-end", NO: "handoff-end" }, meta: { kind: "check", prompt: "Is the first likely cause the problem?", minutes: 1 } },
-      "fixed-end": { type: "final", meta: { kind: "fixed", prompt: "Fixed.", cause: causeList()[0].code, component: causeList()[0].component } },
-      "handoff-end": { type: "final", meta: { kind: "handoff", prompt: "This needs more than the crew can do on site: hand it to the supervisor." } },
-    },
-  };
+  const definition: Guide =
+    kind === "card"
+      ? {
+          kind: "card",
+          id: slug,
+          title,
+          summary: "",
+          symptoms: [title.toLowerCase()],
+          initial: "first-item",
+          states: {
+            "first-item": { on: { DONE: "complete", CANT: "not-ready" }, meta: { kind: "task", prompt: "The first item of the routine.", minutes: 1 } },
+            complete: { type: "final", meta: { kind: "fixed", prompt: "Card complete." } },
+            "not-ready": { type: "final", meta: { kind: "handoff", prompt: "The rig is not ready: tell your supervisor (write what is wrong in the note)." } },
+          },
+        }
+      : {
+          id: slug,
+          title,
+          // Left empty on purpose: the checker asks for it, so no placeholder sentence reaches a crew.
+          summary: "",
+          symptoms: [title.toLowerCase()],
+          initial: "first-check",
+          states: {
+            "first-check": {
+              on: { YES: "fixed-end", NO: "handoff-end" },
+              meta: { kind: "check", prompt: "Is the first likely cause the problem?", minutes: 1 },
+            },
+            "fixed-end": { type: "final", meta: { kind: "fixed", prompt: "Fixed.", cause: causeList()[0].code, component: causeList()[0].component } },
+            "handoff-end": { type: "final", meta: { kind: "handoff", prompt: "This needs more than the crew can do on site: hand it to the supervisor." } },
+          },
+        };
   const guide = await GuideRecord.create({ companyId: user.companyId, scope, slug, title, publishedVersion: null, basedOnGuideId: null });
   await GuideVersion.create({
     guideId: guide.id,
@@ -189,14 +219,14 @@ export async function saveDraft(user: SessionUser, guideId: number, number: numb
   }
   const sourceHash = hash(definition);
   if (sourceHash !== version.sourceHash) await version.update({ definition: definition as Guide, sourceHash });
-  return { problems: checkDefinition(definition) };
+  return { problems: await checkDefinition(user, definition) };
 }
 
 /** Draft → in review, with a change note; refused while the validator finds problems. */
 export async function submitDraft(user: SessionUser, guideId: number, number: number, changeNote: string) {
   const { guide, version } = await deskVersion(user, guideId, number);
   if (guide.companyId !== user.companyId || version.status !== "draft") fail(409, "Only a draft can be sent for review.");
-  const problems = checkDefinition(version.definition);
+  const problems = await checkDefinition(user, version.definition);
   if (problems.length) {
     const listed = Object.fromEntries(problems.map((p, i) => [String(i + 1), `${p.step ? `Step “${p.step}”: ` : ""}${plainProblem(p.message)}`]));
     fail(422, `Fix ${problems.length} problem${problems.length === 1 ? "" : "s"} before sending this for review.`, listed);
@@ -213,7 +243,7 @@ export async function reviewVersion(user: SessionUser, guideId: number, number: 
     await version.update({ status: "draft", reviewComment: comment, reviewerId: user.id });
     return;
   }
-  const problems = checkDefinition(version.definition);
+  const problems = await checkDefinition(user, version.definition);
   if (problems.length) fail(422, "This version has problems and cannot be published.");
   await sequelize.transaction(async (transaction) => {
     await GuideVersion.update({ status: "retired" }, { where: { guideId: guide.id, status: "published" }, transaction });
@@ -225,7 +255,11 @@ export async function reviewVersion(user: SessionUser, guideId: number, number: 
 
 /** Imports a guide file as a new draft; a bad file lists every problem and changes nothing. */
 export async function importGuide(user: SessionUser, text: string): Promise<{ guideId: number; number: number }> {
-  const { guide: parsed, problems } = validateGuide(text, { causes: causeList(), name: "imported file" });
+  const { guide: parsed, problems } = validateGuide(text, {
+    causes: causeList(),
+    name: "imported file",
+    guideIds: (await openableGuides(user)).map((g) => g.slug),
+  });
   if (!parsed)
     fail(
       400,

@@ -23,7 +23,19 @@ export const caseRow = (c: Pick<CreationAttributes<Case>, Required> & Partial<Cr
  */
 export async function walkThroughApi(
   email: string,
-  walk: { rigCode: string; guideSlug: string; answers: [string, string][]; outcome: "fixed" | "handoff"; finalStep: string },
+  walk: {
+    rigCode: string;
+    guideSlug: string;
+    answers: [string, string][];
+    outcome: "fixed" | "handoff";
+    finalStep: string;
+    /** A card's hour-meter reading as it starts. */
+    engineHours?: number;
+    /** The card a fix was opened from. */
+    fromCaseId?: string;
+    /** When it was walked (now by default). */
+    at?: Date;
+  },
 ): Promise<string> {
   const [{ RouterContextProvider }, { action: start }, { action: events }, { action: close }, { requestAs }] = await Promise.all([
     import("react-router"),
@@ -36,11 +48,25 @@ export async function walkThroughApi(
   const post = (path: string, body: unknown) =>
     requestAs(email, path, { method: "POST", body: JSON.stringify(body), headers: { "Content-Type": "application/json" } });
   const id = randomUUID();
-  const at = new Date().toISOString();
-  await start(args(await post("/api/cases", { id, rigCode: walk.rigCode, guideSlug: walk.guideSlug })));
+  const at = (walk.at ?? new Date()).toISOString();
+  const started = (await start(
+    args(
+      await post("/api/cases", {
+        id,
+        rigCode: walk.rigCode,
+        guideSlug: walk.guideSlug,
+        ...(walk.at ? { openedAt: at } : {}),
+        ...(walk.engineHours !== undefined ? { engineHours: walk.engineHours } : {}),
+        ...(walk.fromCaseId ? { fromCaseId: walk.fromCaseId } : {}),
+      }),
+    ),
+  )) as Response;
+  if (started.status >= 300) throw new Error(`The start was refused (${started.status})`);
   const answers = walk.answers.map(([stepId, answer], i) => ({ id: randomUUID(), seq: i + 1, stepId, answer, at }));
   await events(args(await post(`/api/cases/${id}/events`, { events: answers }), { id }));
-  const closed = (await close(args(await post(`/api/cases/${id}/close`, { outcome: walk.outcome, finalStep: walk.finalStep }), { id }))) as Response;
+  const closed = (await close(
+    args(await post(`/api/cases/${id}/close`, { outcome: walk.outcome, finalStep: walk.finalStep, ...(walk.at ? { at } : {}) }), { id }),
+  )) as Response;
   if (closed.status !== 200) throw new Error(`The close was refused (${closed.status})`);
   return id;
 }
@@ -57,3 +83,24 @@ export const LOW_WATER_WALK = {
   outcome: "fixed" as const,
   finalStep: "fixed-low-water",
 };
+
+/** The pre-start on CF-07 with every item fine (the usual morning), and with the grease points left undone. */
+export const PRE_START_ANSWERS: [string, string][] = [
+  ["stop", "ACK"],
+  ["drain-plug", "YES"],
+  ["suction-valve", "YES"],
+  ["grease", "DONE"],
+  ["lubricator", "DONE"],
+  ["hoses", "YES"],
+  ["valves", "YES"],
+  ["positions", "DONE"],
+];
+export const preStartWalk = (engineHours: number, opts: { skipGrease?: boolean; at?: Date } = {}) => ({
+  rigCode: "CF-07",
+  guideSlug: "pre-start",
+  answers: PRE_START_ANSWERS.map(([s, a]): [string, string] => [s, s === "grease" && opts.skipGrease ? "CANT" : a]),
+  outcome: "fixed" as const,
+  finalStep: "complete",
+  engineHours,
+  at: opts.at,
+});

@@ -61,6 +61,8 @@ const EXPECTED: Record<string, Row> = {
   "POST /rigs/:code/edit": r(302, 403, 403, 403, 400),
   "GET /rigs/:code/fix": r(302, 200, 200, 200, 200, 404),
   "POST /rigs/:code/fix": r(302, 400, 400, 400, 400),
+  "GET /rigs/:code/cards": r(302, 200, 200, 200, 200, 404),
+  "POST /rigs/:code/cards": r(302, 400, 400, 400, 400),
   "GET /rigs/:code/service": r(302, 200, 200, 200, 200, 404),
   "POST /rigs/:code/service": r(302, 400, 400, 400, 400),
   "GET /board": r(302, 403, 403, 200, 200),

@@ -57,18 +57,18 @@ export function CareSection({ care }: { care: CareFigures }) {
         </table>
       </div>
       <p className="mt-1 text-sm">
-        A rig-day is a day a rig had a card or a fault. Its engine hours are its last hour-meter reading that day less the last reading of an earlier
-        day (cards read the meter as they start){care.unmeasuredDays ? `; ${care.unmeasuredDays} rig-days had no reading to measure and are left out` : ""}.
-        Range: exact Poisson (Garwood), as for the rigs above. This is an association, not proof: the rigs and days that skip the pre-start may also be the
-        oldest rigs or the hardest jobs.
+        A rig-day is a day a rig had a card or a fault. Its engine hours are its last hour-meter reading that day less the last reading of an earlier day (cards
+        read the meter as they start){care.unmeasuredDays ? `; ${care.unmeasuredDays} rig-days had no reading to measure and are left out` : ""}. Range: exact
+        Poisson (Garwood), as for the rigs above. This is an association, not proof: the rigs and days that skip the pre-start may also be the oldest rigs or
+        the hardest jobs.
       </p>
 
       <h3 className="mt-4 text-xl font-bold">Faults with a service overdue</h3>
       <p className="text-lg">
         {care.faults ? (
           <>
-            <strong>{care.faultsWithOverdue}</strong> of {care.faults} faults ({fmt((care.faultsWithOverdue / care.faults) * 100)} %) happened with at
-            least one service overdue on that rig.
+            <strong>{care.faultsWithOverdue}</strong> of {care.faults} faults ({fmt((care.faultsWithOverdue / care.faults) * 100)} %) happened with at least one
+            service overdue on that rig.
           </>
         ) : (
           "No faults in this window."

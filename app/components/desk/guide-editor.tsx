@@ -7,6 +7,7 @@ import { StepForm, type LooseStep } from "./step-form";
 import { TreeDrawing } from "./tree-drawing";
 
 export interface Draft {
+  kind?: "guide" | "card";
   id: string;
   title: string;
   summary: string;
@@ -27,11 +28,14 @@ function uniqueId(states: Record<string, unknown>, base: string) {
 export function GuideEditor({
   initial,
   causes,
+  guides,
   saveUrl,
   footer,
 }: {
   initial: Draft;
   causes: Cause[];
+  /** The fault guides a card item may open. */
+  guides: { slug: string; title: string }[];
   saveUrl: string;
   /** What goes under the editor (sending for review), told whether there are unsaved changes and how many edits so far. */
   footer?: (state: { dirty: boolean; edits: number }) => React.ReactNode;
@@ -45,7 +49,7 @@ export function GuideEditor({
     if (id && window.innerWidth < 768) requestAnimationFrame(() => document.getElementById("selected-step")?.scrollIntoView({ block: "start" }));
   };
   const [saved, setSaved] = useState<"saved" | "unsaved" | "saving" | "failed">("saved");
-  const { problems, warnings } = useMemo(() => validateGuide(draft, { causes }), [draft, causes]);
+  const { problems, warnings } = useMemo(() => validateGuide(draft, { causes, guideIds: guides.map((g) => g.slug) }), [draft, causes, guides]);
   useWarnBeforeLeaving(saved !== "saved");
   const ids = Object.keys(draft.states);
 
@@ -191,6 +195,8 @@ export function GuideEditor({
                 step={draft.states[selected]}
                 stepIds={ids}
                 causes={causes}
+                card={draft.kind === "card"}
+                guides={guides}
                 onChange={(s) => setStep(selected, s)}
                 onRename={(to) => rename(selected, to)}
                 onCreateTarget={(answer) => {

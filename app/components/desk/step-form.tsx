@@ -1,5 +1,6 @@
 import { Markdown } from "~/components/ui/markdown";
 import { FIELD_MATH_WIDGETS, STEP_KINDS, type StepKind } from "~/lib/guides/schema";
+import { DAY_CHECK_KEYS, DAY_CHECKS, SERVICE_TASK_KEYS, SERVICE_TASKS, type DayCheck, type ServiceTask } from "~/lib/guides/kinds";
 import { ANSWERS_BY_KIND } from "~/lib/vocabulary";
 import { CHECKLIST_ITEMS, CHECKLIST_LABELS, HAZARD_NEEDS, HAZARDS, STANDARD_STOP, type ChecklistItem, type Hazard } from "~/lib/guides/safety";
 
@@ -19,6 +20,9 @@ export interface LooseStep {
     fieldMath?: string;
     cause?: string;
     component?: string;
+    dayCheck?: DayCheck;
+    service?: ServiceTask;
+    opensGuide?: string;
   };
 }
 
@@ -31,6 +35,8 @@ export function StepForm({
   step,
   stepIds,
   causes,
+  card = false,
+  guides = [],
   onChange,
   onRename,
   onCreateTarget,
@@ -39,6 +45,9 @@ export function StepForm({
   step: LooseStep;
   stepIds: string[];
   causes: { code: string; name: string; component: string }[];
+  /** A rig card's step: no cause; it may record a service, open a guide, establish a fact of the day. */
+  card?: boolean;
+  guides?: { slug: string; title: string }[];
   onChange: (step: LooseStep) => void;
   onRename: (to: string) => void;
   onCreateTarget: (answer: string) => void;
@@ -178,7 +187,46 @@ export function StepForm({
           ))}
         </select>
       </label>
-      {meta.kind === "fixed" ? (
+      {card && (meta.kind === "check" || meta.kind === "task") ? (
+        <label className="block font-bold">
+          Done (or yes) records the service
+          <select value={meta.service ?? ""} onChange={(e) => set({ service: (e.target.value || undefined) as ServiceTask | undefined })} className={field}>
+            <option value="">None</option>
+            {SERVICE_TASK_KEYS.map((t) => (
+              <option key={t} value={t}>
+                {SERVICE_TASKS[t]}
+              </option>
+            ))}
+          </select>
+        </label>
+      ) : null}
+      {card && meta.kind === "task" ? (
+        <label className="block font-bold">
+          Opens a guide on the spot (its Done then means “sorted, carry on”)
+          <select value={meta.opensGuide ?? ""} onChange={(e) => set({ opensGuide: e.target.value || undefined })} className={field}>
+            <option value="">None</option>
+            {guides.map((g) => (
+              <option key={g.slug} value={g.slug}>
+                {g.title}
+              </option>
+            ))}
+          </select>
+        </label>
+      ) : null}
+      {(card && (meta.kind === "check" || meta.kind === "task")) || (!card && meta.kind === "check") ? (
+        <label className="block font-bold">
+          {card ? "Tells the guides today that (yes or done: so)" : "Shows today's card answer for"}
+          <select value={meta.dayCheck ?? ""} onChange={(e) => set({ dayCheck: (e.target.value || undefined) as DayCheck | undefined })} className={field}>
+            <option value="">None</option>
+            {DAY_CHECK_KEYS.map((k) => (
+              <option key={k} value={k}>
+                {DAY_CHECKS[k]}
+              </option>
+            ))}
+          </select>
+        </label>
+      ) : null}
+      {meta.kind === "fixed" && !card ? (
         <label className="block font-bold">
           Cause
           <select

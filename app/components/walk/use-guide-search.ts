@@ -13,7 +13,10 @@ async function searchOnPhone(query: string, personId: number): Promise<SearchHit
   if (phoneSearch?.madeAt !== kit.madeAt) {
     // Loaded on the first search only: most fixes start from a tile.
     const { createGuideSearch, searchDocFor } = await import("~/lib/guides/search");
-    phoneSearch = { madeAt: kit.madeAt, search: createGuideSearch(kit.guides.filter((g) => guideKind(g.definition) === "guide").map((g) => searchDocFor(g, kit.causeNames))) };
+    phoneSearch = {
+      madeAt: kit.madeAt,
+      search: createGuideSearch(kit.guides.filter((g) => guideKind(g.definition) === "guide").map((g) => searchDocFor(g, kit.causeNames))),
+    };
   }
   return phoneSearch.search(query);
 }

@@ -18,7 +18,11 @@ export const startCaseSchema = z.strictObject({
   /** The guide version the phone walked (it may have been replaced or retired since). */
   guideVersionId: z.number({ error: "guideVersionId must be a number" }).int().positive("guideVersionId must be a version's id").optional(),
   /** A rig card's hour-meter reading at its start (required for a card on a rig with a meter). */
-  engineHours: z.number({ error: "engineHours must be a number" }).min(0, "engine hours cannot be negative").max(100_000, "engine hours over 100,000 are not plausible").optional(),
+  engineHours: z
+    .number({ error: "engineHours must be a number" })
+    .min(0, "engine hours cannot be negative")
+    .max(100_000, "engine hours over 100,000 are not plausible")
+    .optional(),
   /** The card this fix was opened from (a card item that opens a guide). */
   fromCaseId: uuid.optional(),
 });

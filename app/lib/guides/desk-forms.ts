@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { GUIDE_KINDS } from "./kinds";
 
 /** The desk's own small forms; the same schemas check in the browser (conform) and on the server. */
 const versionNumber = z.coerce.number({ error: "number must be a version number" }).int().positive("number must be a version number");
@@ -10,6 +11,11 @@ const changeNote = z
 
 export const newGuideSchema = z.object({
   intent: z.literal("new"),
+  /** A fault guide or a rig card (blank: a guide). */
+  kind: z
+    .enum(GUIDE_KINDS, { error: "Choose a guide or a rig card." })
+    .optional()
+    .transform((k) => k ?? "guide"),
   title: z
     .string({ error: "Give the new guide a title of 3 to 120 characters." })
     .trim()

@@ -53,7 +53,10 @@ export function checkGuideFiles(files: string[], causes: Cause[]): GuideFile[] {
     if (guide && guide.id !== name) problems.push({ guide: guide.id, message: `file name ${path.basename(file)} should be ${guide.id}.json` });
     const inCards = path.basename(path.dirname(file)) === "cards";
     if (inCards !== (kindIn(text) === "card"))
-      problems.push({ guide: guide?.id ?? name, message: inCards ? 'a file in content/cards is a rig card: give it "kind": "card"' : 'a rig card ("kind": "card") belongs in content/cards' });
+      problems.push({
+        guide: guide?.id ?? name,
+        message: inCards ? 'a file in content/cards is a rig card: give it "kind": "card"' : 'a rig card ("kind": "card") belongs in content/cards',
+      });
     return { file, text, guide: problems.length ? null : guide, problems, warnings };
   });
   const seen = new Map<string, string>();

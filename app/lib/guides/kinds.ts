@@ -30,6 +30,13 @@ export const GUIDE_KINDS = ["guide", "card"] as const;
 export type GuideKind = (typeof GUIDE_KINDS)[number];
 export const guideKind = (guide: { kind?: GuideKind }): GuideKind => guide.kind ?? "guide";
 
+/** The shipped cards in the order of the day; a company's own cards follow, by title. */
+const DAY_ORDER = ["pre-start", "flush-and-purge", "loading", "shut-down-clean-out", "weekly-service", "end-of-season"];
+export function inDayOrder<T extends { slug: string; title: string }>(cards: readonly T[]): T[] {
+  const rank = (slug: string) => (DAY_ORDER.includes(slug) ? DAY_ORDER.indexOf(slug) : DAY_ORDER.length);
+  return [...cards].sort((a, b) => rank(a.slug) - rank(b.slug) || a.title.localeCompare(b.title));
+}
+
 /**
  * Facts a rig card establishes for the day, which a guide step may ask about again ("was the
  * lubricator charged today?"): the walk then shows the card's answer and its time, pre-selected.

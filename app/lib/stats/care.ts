@@ -175,14 +175,11 @@ export function careFigures(
   );
   const complete = new Set(cardsIn.filter((c) => c.slug === PRE_START && c.complete).map((c) => `${c.rigId}:${dayIn(c.at, zone)}`));
   const faultsOn = new Map<string, number>();
-  for (const f of faultsIn) if (metered.has(f.rigId)) faultsOn.set(`${f.rigId}:${dayIn(f.at, zone)}`, (faultsOn.get(`${f.rigId}:${dayIn(f.at, zone)}`) ?? 0) + 1);
+  for (const f of faultsIn)
+    if (metered.has(f.rigId)) faultsOn.set(`${f.rigId}:${dayIn(f.at, zone)}`, (faultsOn.get(`${f.rigId}:${dayIn(f.at, zone)}`) ?? 0) + 1);
 
   // A worked rig-day: one with a card or a fault. Measured when its hours are known.
   const worked = new Set<string>([...faultsOn.keys(), ...cardsIn.filter((c) => metered.has(c.rigId)).map((c) => `${c.rigId}:${dayIn(c.at, zone)}`)]);
-  for (const key of hours.keys()) {
-    const day = key.slice(key.indexOf(":") + 1);
-    if (day >= input.fromDay && day < input.toDay) worked.add(key);
-  }
   const sums = { with: { days: 0, hours: 0, faults: 0 }, without: { days: 0, hours: 0, faults: 0 } };
   let unmeasured = 0;
   for (const key of worked) {

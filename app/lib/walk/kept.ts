@@ -145,7 +145,8 @@ export function startOnPhone(
   const openedAt = input.now.toISOString();
   const { mount: _mount, pumpKind: _pumpKind, ...walkRig } = rig;
   const kind = guideKind(guide.definition) === "card" ? "card" : "fix";
-  if (kind === "card" && rig.hasHourMeter && input.engineHours === undefined) return { ok: false, problem: "Give the hour meter reading: a card records it as it starts." };
+  if (kind === "card" && rig.hasHourMeter && input.engineHours === undefined)
+    return { ok: false, problem: "Give the hour meter reading: a card records it as it starts." };
   saveView(store, {
     caseId: input.caseId,
     openedAt,
@@ -207,7 +208,12 @@ export function keepWalk(store: KeyValueStore, data: WalkData): void {
  * What the cards this phone keeps for a rig, opened since `since` (the start of the company's
  * day), say about the day's facts: a pre-start done with no signal counts at once.
  */
-export function dayFactsOnPhone(store: KeyValueStore & { length: number; key(index: number): string | null }, rigCode: string, since: string, by: string | null): DayFacts {
+export function dayFactsOnPhone(
+  store: KeyValueStore & { length: number; key(index: number): string | null },
+  rigCode: string,
+  since: string,
+  by: string | null,
+): DayFacts {
   const cards = keptCaseIds(store).flatMap((id) => {
     const view = loadView(store, id);
     if (!view || view.rig.code !== rigCode || view.kind !== "card" || view.openedAt < since) return [];

@@ -72,7 +72,9 @@ describe("the shipped rig cards", () => {
   it("pre-start checks the domain's list, in order, behind one stop, in a couple of minutes of taps", () => {
     const pre = cards.find((c) => c.id === "pre-start")!;
     // The straight path (every item fine) is the usual morning: count its taps.
-    const straight = simplePaths(pre, 10_000).find((p) => p.answers.every((a) => a === "YES" || a === "DONE" || a === "ACK") && pre.states[p.steps.at(-1)!].meta.kind === "fixed")!;
+    const straight = simplePaths(pre, 10_000).find(
+      (p) => p.answers.every((a) => a === "YES" || a === "DONE" || a === "ACK") && pre.states[p.steps.at(-1)!].meta.kind === "fixed",
+    )!;
     const facts = straight.steps.flatMap((s) => (pre.states[s].meta.dayCheck ? [pre.states[s].meta.dayCheck as DayCheck] : []));
     expect(facts).toEqual(["drain-plug-in", "suction-open", "grease-done", "lubricator-charged", "hoses-clear", "valves-free"]);
     expect(straight.answers.length).toBeLessThanOrEqual(10);
@@ -83,7 +85,9 @@ describe("the shipped rig cards", () => {
 
   it("opens the right guide from a card item, and records services by known tasks", () => {
     const opens = cards.flatMap((c) => Object.entries(c.states).flatMap(([id, s]) => (s.meta.opensGuide ? [`${c.id}.${id}→${s.meta.opensGuide}`] : [])));
-    expect(opens).toEqual(expect.arrayContaining(["pre-start.valve-guide→valve-trouble", "flush-and-purge.prime-guide→lost-prime", "weekly-service.leaks-guide→leaks"]));
+    expect(opens).toEqual(
+      expect.arrayContaining(["pre-start.valve-guide→valve-trouble", "flush-and-purge.prime-guide→lost-prime", "weekly-service.leaks-guide→leaks"]),
+    );
     for (const c of cards) for (const s of Object.values(c.states)) if (s.meta.service) expect(SERVICE_TASKS[s.meta.service]).toBeTruthy();
   });
 
@@ -94,7 +98,9 @@ describe("the shipped rig cards", () => {
   });
 
   it("guides ask again what the pre-start answered: lubricator, suction valve, valves", () => {
-    const asks = all.filter((g) => g.kind !== "card").flatMap((g) => Object.entries(g.states).flatMap(([id, s]) => (s.meta.dayCheck ? [`${g.id}.${id}:${s.meta.dayCheck}`] : [])));
+    const asks = all
+      .filter((g) => g.kind !== "card")
+      .flatMap((g) => Object.entries(g.states).flatMap(([id, s]) => (s.meta.dayCheck ? [`${g.id}.${id}:${s.meta.dayCheck}`] : [])));
     expect(asks.sort()).toEqual(["leaks.lube-today:lubricator-charged", "lost-prime.suction-valve:suction-open", "valve-trouble.handle-moves:valves-free"]);
   });
 

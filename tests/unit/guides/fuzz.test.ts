@@ -83,7 +83,10 @@ function breaksARule(g: Guide): string | null {
     for (const start of starts) {
       const walked = getShortestPaths(
         // A walk from a restart passes the restart itself; one from the first step stops there if it is a stop (a card opens with one).
-        machineFrom(start, (id) => (id !== start || start === g.initial) && g.states[id].meta.kind === "safety" && checklistOf(g.states[id].meta).includes(item)),
+        machineFrom(
+          start,
+          (id) => (id !== start || start === g.initial) && g.states[id].meta.kind === "safety" && checklistOf(g.states[id].meta).includes(item),
+        ),
         { events },
       );
       for (const p of walked) {

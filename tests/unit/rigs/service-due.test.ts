@@ -67,7 +67,9 @@ describe("service rules", () => {
     expect(r.success).toBe(false);
     expect(r.error!.issues[0].message).toBe("Give the engine hours, the days, or both.");
     expect(serviceRuleSchema.parse({ name: "Lubricator", everyDays: 1 })).toEqual({ name: "Lubricator", everyHours: null, everyDays: 1, task: null });
-    expect(serviceRuleSchema.safeParse({ name: "Lubricator", everyDays: 1, task: "oil-change" }).error?.issues[0].message).toBe("Pick a card task from the list, or none.");
+    expect(serviceRuleSchema.safeParse({ name: "Lubricator", everyDays: 1, task: "oil-change" }).error?.issues[0].message).toBe(
+      "Pick a card task from the list, or none.",
+    );
   });
 });
 

@@ -1,5 +1,7 @@
 import { describe, expect, it } from "vitest";
+import { readFileSync } from "node:fs";
 import {
+  dayFactsOnPhone,
   lastHoursOnPhone,
   noteHoursOnPhone,
   lastRigOnPhone,
@@ -13,7 +15,7 @@ import {
   type OfflineKit,
 } from "~/lib/walk/kept";
 import { appendEvent, loadRecord, saveRecord } from "~/lib/walk/queue";
-import { tinyGuide } from "../../helpers/guides";
+import { fixture, tinyGuide } from "../../helpers/guides";
 
 /** localStorage's shape, in memory. */
 const phone = () => {
@@ -159,5 +161,53 @@ describe("hour-meter readings entered with no signal", () => {
     expect(lastHoursOnPhone(store, "CF-07")).toBe(815.5);
     expect(lastHoursOnPhone(store, "CF-11")).toBe(812);
     expect(lastHoursOnPhone(store, "BM-02")).toBeNull();
+  });
+});
+
+describe("a rig card on the phone with no signal", () => {
+  const tinyCard = () => JSON.parse(readFileSync(fixture("guides", "tiny-card.json"), "utf8"));
+  const cardKit = (): OfflineKit => ({
+    ...kit(),
+    guides: [
+      ...kit().guides,
+      { slug: "tiny-card", title: "Tiny card", summary: "s", symptoms: ["morning"], versionId: 77, version: 1, definition: tinyCard(), texts: {} },
+    ],
+  });
+
+  it("needs the hour meter on a metered rig, keeps it with the start, and offers it as the last reading", () => {
+    const store = phone();
+    saveKit(store, cardKit());
+    const refused = startOnPhone(store, cardKit(), { caseId: "card-1", rigCode: "CF-07", guideSlug: "tiny-card", now: NOW });
+    expect(refused).toEqual({ ok: false, problem: expect.stringMatching(/hour meter reading/) });
+    expect(startOnPhone(store, cardKit(), { caseId: "card-1", rigCode: "CF-07", guideSlug: "tiny-card", now: NOW, engineHours: 815.5 })).toEqual({
+      ok: true,
+      caseId: "card-1",
+    });
+    expect(loadRecord(store, "card-1").start).toMatchObject({ guideSlug: "tiny-card", engineHours: 815.5 });
+    expect(walkOnPhone(store, "card-1")!.kind).toBe("card");
+    expect(lastHoursOnPhone(store, "CF-07")).toBe(815.5);
+  });
+
+  it("links a fix started from a card item, and the card's answers stand as today's facts", () => {
+    const store = phone();
+    saveKit(store, cardKit());
+    startOnPhone(store, cardKit(), { caseId: "card-1", rigCode: "CF-07", guideSlug: "tiny-card", now: NOW, engineHours: 815.5 });
+    let record = loadRecord(store, "card-1");
+    record = appendEvent(record, { id: "e1", stepId: "stop", answer: "ACK", at: "2026-12-02T09:31:00.000Z" });
+    record = appendEvent(record, { id: "e2", stepId: "grease", answer: "DONE", at: "2026-12-02T09:33:00.000Z" });
+    record = appendEvent(record, { id: "e3", stepId: "valves", answer: "NO", at: "2026-12-02T09:34:00.000Z" });
+    saveRecord(store, record);
+    startOnPhone(store, cardKit(), { caseId: "fix-1", rigCode: "CF-07", guideSlug: "tiny", now: NOW, fromCard: { caseId: "card-1", title: "Tiny card" } });
+    expect(loadRecord(store, "fix-1").start).toMatchObject({ fromCaseId: "card-1" });
+    expect(loadRecord(store, "fix-1").start).not.toHaveProperty("engineHours");
+    expect(walkOnPhone(store, "fix-1")!.fromCard).toEqual({ caseId: "card-1", title: "Tiny card" });
+    const facts = dayFactsOnPhone(store, "CF-07", "2026-12-02T07:00:00.000Z", "Dana Ortiz");
+    expect(facts).toEqual({
+      "grease-done": { value: true, at: "2026-12-02T09:33:00.000Z", by: "Dana Ortiz", card: "Tiny card" },
+      "valves-free": { value: false, at: "2026-12-02T09:34:00.000Z", by: "Dana Ortiz", card: "Tiny card" },
+    });
+    // A card from before the day's start says nothing today; another rig's says nothing here.
+    expect(dayFactsOnPhone(store, "CF-07", "2026-12-02T10:00:00.000Z", null)).toEqual({});
+    expect(dayFactsOnPhone(store, "CF-11", "2026-12-02T07:00:00.000Z", null)).toEqual({});
   });
 });
