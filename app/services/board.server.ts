@@ -177,7 +177,7 @@ async function liveChains(params: Params, rigFilter: string): Promise<ChainRow[]
          SELECT c.id, c.rig_id, c.cause_code, c.opened_at,
            CASE WHEN LAG(c.opened_at) OVER (PARTITION BY c.rig_id, c.cause_code ORDER BY c.opened_at, c.id) >= c.opened_at - INTERVAL :days DAY THEN 0 ELSE 1 END AS new_chain
          FROM cases c
-         WHERE c.company_id = :company AND c.opened_at >= :start AND c.opened_at < :end AND c.cause_code IS NOT NULL ${rigFilter}
+         WHERE c.company_id = :company AND c.kind = 'fix' AND c.opened_at >= :start AND c.opened_at < :end AND c.cause_code IS NOT NULL ${rigFilter}
        ) marked
      ) chained
      GROUP BY rig_id, cause_code, chain HAVING COUNT(*) > 1`,

@@ -1,6 +1,6 @@
 import type { Page } from "playwright-core";
 import { describe, expect, it, onTestFinished } from "vitest";
-import { Case } from "../../db/index";
+import { Case, Rig } from "../../db/index";
 import { loadLibrary } from "~/lib/guides/files.server";
 import type { Guide } from "~/lib/guides/schema";
 import { ANSWER_LABELS, type StepAnswer } from "~/lib/vocabulary";
@@ -37,7 +37,10 @@ const length = (guide: Guide, id: string) => {
 };
 
 async function startWalk(p: Page, guideSlug: string, rigCode = "CF-07"): Promise<string> {
-  const id = await startCaseFromPage(p, rigCode, guideSlug);
+  // A rig card reads the hour meter as it starts: the rig's own reading will do.
+  const card = library.find((g) => g.id === guideSlug)?.kind === "card";
+  const hours = card ? (await Rig.findOne({ where: { code: rigCode } }))!.engineHours : undefined;
+  const id = await startCaseFromPage(p, rigCode, guideSlug, hours);
   await p.goto(`${harness.app.url}/cases/${id}/walk`);
   return id;
 }
@@ -56,8 +59,9 @@ describe("every shut-down stop opens in view (360×640)", () => {
     Object.entries(guide.states)
       .filter(([, s]) => s.meta.kind === "safety")
       .map(([id]) => {
-        // Reached from its longest step before it: the one that leaves the page scrolled furthest.
-        const before = Object.entries(guide.states)
+        // Reached from its longest step before it: the one that leaves the page scrolled furthest
+        // (none for a card that opens with its stop: it is the first step on the page).
+        const before: readonly [string, StepAnswer] | undefined = Object.entries(guide.states)
           .filter(([, s]) => Object.values(s.on ?? {}).includes(id))
           .map(([from, s]) => [from, Object.entries(s.on!).find(([, to]) => to === id)![0] as StepAnswer] as const)
           .sort((a, b) => length(guide, b[0]) - length(guide, a[0]))[0];
@@ -72,9 +76,9 @@ describe("every shut-down stop opens in view (360×640)", () => {
   it.each(stops.map((s) => [`${s.guide.id} › ${s.stop}`, s] as const))("%s", async (_name, { guide, before }) => {
     const p = await crewPage();
     await startWalk(p, guide.id);
-    for (const [step, a] of [...pathTo(guide, before[0]), before] as [string, StepAnswer][]) {
+    for (const [step, a] of (before ? [...pathTo(guide, before[0]), before] : []) as [string, StepAnswer][]) {
       await p.locator("#step-prompt").waitFor();
-      if (step === before[0]) {
+      if (step === before?.[0]) {
         // Open the help and scroll to the bottom of the long step, as a crew member reading it would.
         const more = p.getByRole("button", { name: "More about this" });
         if (await more.count()) await more.click();
@@ -91,7 +95,8 @@ describe("every shut-down stop opens in view (360×640)", () => {
     expect(box.headingTop).toBeGreaterThanOrEqual(0);
     expect(box.promptFirstLine).toBeLessThanOrEqual(box.height);
     expect(box.promptTop).toBeGreaterThanOrEqual(0);
-    expect(box.focused).toBe("step-prompt");
+    // Reached by an answer, the stop also takes the focus; a walk that opens on its stop leaves focus where the page load puts it.
+    if (before) expect(box.focused).toBe("step-prompt");
     await p.close();
   });
 });

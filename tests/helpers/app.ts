@@ -145,13 +145,14 @@ export function appAndBrowserForFile(viewport = PHONE) {
   return harness;
 }
 
-/** Starts a case from the signed-in page through the API, as the fix page does; returns its id. */
-export async function startCaseFromPage(page: Page, rigCode: string, guideSlug: string): Promise<string> {
+/** Starts a case from the signed-in page through the API, as the fix page does (a card with its hour reading); returns its id. */
+export async function startCaseFromPage(page: Page, rigCode: string, guideSlug: string, engineHours?: number): Promise<string> {
   return page.evaluate(
-    async ([rigCode, guideSlug]) => {
-      const res = await fetch("/api/cases", { method: "POST", headers: { "Content-Type": "application/json" }, body: JSON.stringify({ rigCode, guideSlug }) });
+    async ([rigCode, guideSlug, engineHours]) => {
+      const body = JSON.stringify({ rigCode, guideSlug, ...(engineHours === null ? {} : { engineHours }) });
+      const res = await fetch("/api/cases", { method: "POST", headers: { "Content-Type": "application/json" }, body });
       return ((await res.json()) as { id: string }).id;
     },
-    [rigCode, guideSlug],
+    [rigCode, guideSlug, engineHours ?? null] as const,
   );
 }
