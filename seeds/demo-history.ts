@@ -200,6 +200,8 @@ export async function seedDemoHistory(now = new Date(), log: (line: string) => v
           );
         }
       }
+      // The meter as the last card or fix read it: the rig page, service and cards agree.
+      if (rig.hasHourMeter) await rig.update({ engineHours: Math.round(hours * 10) / 10 });
     }
   }
   const allCases = [...cases, ...sink.cases];

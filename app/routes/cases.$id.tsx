@@ -72,16 +72,22 @@ export default function CasePage({ loaderData: c }: Route.ComponentProps) {
         {c.rig.code} · {c.rig.name}
       </Link>,
     ],
-    ["Guide", `${c.guide.title} (version ${c.guide.version})`],
+    [c.kind === "card" ? "Card" : "Guide", `${c.guide.title} (version ${c.guide.version})`],
     ["Started by", c.openedBy ?? "—"],
     ["Opened", `${times.dateTime(c.openedAt)}`],
     ["Closed", c.closedAt ? `${times.dateTime(c.closedAt)}` : "—"],
     ["Time taken", duration],
     ["Outcome", caseOutcomeLabel(c.kind, c.outcome, c.cardGaps)],
-    [
-      "Cause",
-      c.cause ? `${c.cause.name} (${c.cause.component}) · ${causeBasis(c.outcome, c.cause.code) === "suspected" ? "suspected at hand-off" : "found"}` : "—",
-    ],
+    ...(c.kind === "card"
+      ? []
+      : ([
+          [
+            "Cause",
+            c.cause
+              ? `${c.cause.name} (${c.cause.component}) · ${causeBasis(c.outcome, c.cause.code) === "suspected" ? "suspected at hand-off" : "found"}`
+              : "—",
+          ],
+        ] as [string, React.ReactNode][])),
     [
       "Shut-downs acknowledged",
       stops.length ? (
@@ -96,7 +102,7 @@ export default function CasePage({ loaderData: c }: Route.ComponentProps) {
         "no hands-on step reached"
       ),
     ],
-    [c.kind === "card" ? "Engine hours at the start" : "Engine hours", c.engineHours !== null ? `${c.engineHours} h` : "—"],
+    [c.kind === "card" ? "Engine hours at the start" : "Engine hours", c.engineHours !== null ? `${c.engineHours.toLocaleString("en-US")} h` : "—"],
     ...(c.fromCard
       ? ([["Opened from", <Link key="from" to={`/cases/${c.fromCard.caseId}`}>{`the ${c.fromCard.title} card`}</Link>]] as [string, React.ReactNode][])
       : []),
@@ -176,12 +182,18 @@ export default function CasePage({ loaderData: c }: Route.ComponentProps) {
         {c.events.map((e, i) => {
           const gap = i === 0 ? Date.parse(e.at) - Date.parse(c.openedAt) : Date.parse(e.at) - Date.parse(c.events[i - 1].at);
           return (
-            <li key={e.id} className={`rounded-md border-2 p-3 ${e.kind === "safety" ? "border-ink bg-caution" : "border-rule bg-paper"}`}>
+            <li
+              key={e.id}
+              className={`rounded-md p-3 ${e.kind === "safety" ? "border-2 border-ink bg-caution" : e.answer === "CANT" ? "border-4 border-stop bg-paper" : "border-2 border-rule bg-paper"}`}
+            >
               <p className="text-sm">
                 {e.seq}. {times.time(e.at)} · +{formatDuration(gap)}
               </p>
               <Markdown className="font-bold">{e.prompt}</Markdown>
-              <p>→ {answerLabel(e.answer)}</p>
+              <p className={e.answer === "CANT" ? "font-bold text-stop" : ""}>
+                → {answerLabel(e.answer)}
+                {e.answer === "CANT" && c.kind === "card" ? " (not done)" : ""}
+              </p>
               {e.note ? <p className="mt-1 italic">Note: {e.note}</p> : null}
             </li>
           );

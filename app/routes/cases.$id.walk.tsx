@@ -7,7 +7,7 @@ import { stepsToEnd } from "~/lib/guides/graph";
 import { keepWalk, namesFor, walkOnPhone, type WalkData } from "~/lib/walk/kept";
 import { isNoSignal } from "~/lib/walk/no-signal";
 import { ON_PHONE_CASE } from "~/lib/walk/pages";
-import type { Answer } from "~/lib/vocabulary";
+import { outcomeLabel, type Answer } from "~/lib/vocabulary";
 import { caseDetail } from "~/services/case-detail.server";
 import { guideTexts } from "~/services/guide-text.server";
 import { requireUser } from "~/services/guards.server";
@@ -40,6 +40,7 @@ export async function loader({ request, params, context }: Route.LoaderArgs): Pr
     events: detail.events.map((e) => ({ id: e.id, seq: e.seq, stepId: e.stepId, answer: e.answer as Answer, at: e.at, ...(e.note ? { note: e.note } : {}) })),
     kind: detail.kind,
     fromCard: detail.fromCard,
+    fixesOpened: detail.fixesOpened.map((f) => ({ caseId: f.caseId, title: f.title, outcome: outcomeLabel(f.outcome).toLowerCase() })),
     dayFacts: detail.outcome === "open" ? await todaysFacts(user, detail.rigId, detail.guide.definition) : {},
   };
 }
@@ -92,6 +93,7 @@ export default function Walk({ loaderData }: Route.ComponentProps) {
         kind={d.kind ?? "fix"}
         fromCard={d.fromCard ?? null}
         serverDayFacts={d.dayFacts ?? {}}
+        serverFixesOpened={d.fixesOpened}
         renderFieldMath={(widget) => (
           <Suspense fallback={<p className="text-lg">Opening the calculator…</p>}>
             <FieldMathWidget widget={widget} rig={d.rig} />

@@ -1,7 +1,7 @@
 import { caseFiltersSchema } from "~/lib/cases/filters";
 import { toCsv } from "~/lib/csv";
 import { isoInZone } from "~/lib/format";
-import { causeBasis, outcomeLabel } from "~/lib/vocabulary";
+import { caseOutcomeLabel, causeBasis } from "~/lib/vocabulary";
 import { listCases } from "~/services/case-list.server";
 import { requirePermission } from "~/services/guards.server";
 import { readQuery } from "~/services/read-request.server";
@@ -21,7 +21,7 @@ export async function loader({ request, context }: Route.LoaderArgs) {
       r.causeCode ?? "",
       r.causeCode ? (names.get(r.causeCode) ?? "") : "",
       causeBasis(r.outcome, r.causeCode) ?? "",
-      outcomeLabel(r.outcome),
+      caseOutcomeLabel(r.kind, r.outcome, r.cardGaps),
       r.person ?? "",
       isoInZone(r.openedAt, user.timeZone),
       r.durationSeconds ?? "",

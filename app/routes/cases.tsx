@@ -2,7 +2,7 @@ import { Form, Link } from "react-router";
 import { PageTitle } from "~/components/ui/page-title";
 import { caseFiltersSchema, filtersToSearch, PAGE_SIZE, type CaseFilters } from "~/lib/cases/filters";
 import { formatDuration } from "~/lib/format";
-import { OUTCOME_LABELS, outcomeLabel } from "~/lib/vocabulary";
+import { caseOutcomeLabel, OUTCOME_LABELS } from "~/lib/vocabulary";
 import { caseFilterOptions, listCases } from "~/services/case-list.server";
 import { requirePermission } from "~/services/guards.server";
 import { readQuery } from "~/services/read-request.server";
@@ -32,11 +32,21 @@ export default function Cases({ loaderData }: Route.ComponentProps) {
   const { rows, total, filters, options, causes } = loaderData;
   const pages = Math.max(1, Math.ceil(total / PAGE_SIZE));
   const causeName = new Map(causes.map((c) => [c.code, c.name]));
+  const cards = filters.kind === "card";
   const select = "mt-1 block min-h-12 w-full rounded-md border-2 border-ink bg-paper px-2";
   return (
     <>
-      <PageTitle lead={`${total.toLocaleString("en-US")} case${total === 1 ? "" : "s"} match.`}>Cases</PageTitle>
+      <PageTitle lead={`${total.toLocaleString("en-US")} ${cards ? "card" : "case"}${total === 1 ? "" : "s"} match.`}>
+        {cards ? "Rig cards" : "Cases"}
+      </PageTitle>
       <Form method="get" className="grid grid-cols-2 gap-3 rounded-lg border-2 border-ink bg-paper p-3 sm:grid-cols-4">
+        <label className="font-bold">
+          Show
+          <select name="kind" defaultValue={filters.kind} className={select}>
+            <option value="fix">Fixes (faults)</option>
+            <option value="card">Rig cards</option>
+          </select>
+        </label>
         <FilterSelect label="Rig" name="rig" value={filters.rig} options={options.rigs.map((r) => [r, r])} />
         <FilterSelect label="Guide" name="guide" value={filters.guide} options={options.guides.map((g) => [g.slug, g.title])} />
         <FilterSelect label="Cause" name="cause" value={filters.cause} options={causes.map((c) => [c.code, c.name])} />
@@ -87,7 +97,7 @@ export default function Cases({ loaderData }: Route.ComponentProps) {
                   <Link to={`/cases/${r.id}`}>{r.guideTitle}</Link>
                 </td>
                 <td className="p-2">{r.causeCode ? (causeName.get(r.causeCode) ?? r.causeCode) : "—"}</td>
-                <td className="p-2">{outcomeLabel(r.outcome)}</td>
+                <td className="p-2">{caseOutcomeLabel(r.kind, r.outcome, r.cardGaps)}</td>
                 <td className="p-2">{r.person ?? "—"}</td>
                 <td className="p-2">{times.dateTime(r.openedAt)}</td>
                 <td className="p-2">{r.durationSeconds === null ? "open" : formatDuration(r.durationSeconds * 1000)}</td>

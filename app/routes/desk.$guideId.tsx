@@ -60,7 +60,13 @@ export default function DeskGuide({ loaderData, actionData }: Route.ComponentPro
   const draft = guide.builtIn ? undefined : versions.find((v) => v.status === "draft");
   return (
     <>
-      <PageTitle lead={guide.builtIn ? "Built-in guide: editing makes your company's own copy; the built-in stays as it is." : "Your company's guide."}>
+      <PageTitle
+        lead={
+          guide.builtIn
+            ? `Built-in ${guide.kind === "card" ? "rig card" : "guide"}: editing makes your company's own copy; the built-in stays as it is.`
+            : `Your company's ${guide.kind === "card" ? "rig card" : "guide"}.`
+        }
+      >
         {guide.title}
       </PageTitle>
       {actionData && "error" in actionData ? (
@@ -162,8 +168,9 @@ export default function DeskGuide({ loaderData, actionData }: Route.ComponentPro
               </tbody>
             </table>
           </div>
-          <h2 className="mt-6 text-xl font-bold">Check-order advisor</h2>
-          {learning.advisor.foundCases < ADVISOR_MIN_CASES ? (
+          {/* A card has no causes to find: its items go in the routine's own order. */}
+          {guide.kind === "card" ? null : <h2 className="mt-6 text-xl font-bold">Check-order advisor</h2>}
+          {guide.kind === "card" ? null : learning.advisor.foundCases < ADVISOR_MIN_CASES ? (
             <p>
               The advisor needs at least {ADVISOR_MIN_CASES} past cases on this version whose cause was found before it suggests an order; it has{" "}
               {learning.advisor.foundCases}. With fewer, one or two unusual cases would decide the order rather than the pattern of faults.

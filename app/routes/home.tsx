@@ -83,7 +83,7 @@ export default function Home({ loaderData }: Route.ComponentProps) {
               </Link>
               <Link
                 to={`/rigs/${rig.code}/cards`}
-                className="mt-1 flex min-h-14 items-center rounded-lg border-2 border-ink bg-field px-4 text-lg font-bold text-ink no-underline"
+                className="mt-2 flex min-h-14 items-center rounded-lg border-2 border-ink bg-field px-4 text-lg font-bold text-ink no-underline"
               >
                 Pre-start and other cards for {rig.code}
               </Link>

@@ -26,6 +26,7 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
     cards: inDayOrder(cards.map((c) => ({ slug: c.slug, title: c.title, summary: c.definition.summary }))),
     today,
     openWalks: openWalks.map((w) => ({ ...w, onPhoneOnly: false })),
+    fromPhone: false,
     // Made with the page, so a double tap on a slow signal starts one card.
     caseId: crypto.randomUUID(),
   };
@@ -42,6 +43,7 @@ export async function clientLoader({ params, serverLoader }: Route.ClientLoaderA
       cards: inDayOrder(kit.guides.filter((g) => guideKind(g.definition) === "card").map((g) => ({ slug: g.slug, title: g.title, summary: g.summary }))),
       today: [] as CardDone[],
       openWalks: [],
+      fromPhone: true,
       caseId: crypto.randomUUID(),
     };
   });
@@ -97,7 +99,10 @@ export async function clientAction({ request, params, serverAction }: Route.Clie
 }
 
 export default function RigCards({ loaderData, actionData }: Route.ComponentProps) {
-  const { rig, cards, today, openWalks } = loaderData;
+  const { rig, cards, today, openWalks, fromPhone } = loaderData;
+  // The latest of each card today, said on its button: a second pre-start is a choice, not an accident.
+  const lastToday = new Map<string, CardDone>();
+  for (const c of [...today].reverse()) lastToday.set(c.title, c);
   const times = useTimes();
   const [caseId, setCaseId] = useState(loaderData.caseId);
   useEffect(() => setCaseId(crypto.randomUUID()), [loaderData]);
@@ -178,6 +183,13 @@ export default function RigCards({ loaderData, actionData }: Route.ComponentProp
                     }`}
                   >
                     <span className="text-xl font-bold">{mine ? `Opening ${c.title}…` : c.title}</span>
+                    {lastToday.has(c.title) ? (
+                      <span className="text-base font-bold">
+                        Today: {cardStateLabel(lastToday.get(c.title)!.outcome, lastToday.get(c.title)!.gaps).toLowerCase()} at{" "}
+                        {times.time(lastToday.get(c.title)!.openedAt)}
+                        {lastToday.get(c.title)!.by ? ` by ${lastToday.get(c.title)!.by}` : ""}
+                      </span>
+                    ) : null}
                     <span className="text-base">{c.summary}</span>
                   </button>
                 </li>
@@ -188,9 +200,11 @@ export default function RigCards({ loaderData, actionData }: Route.ComponentProp
       )}
       <section aria-labelledby="today-h" className="mt-6 rounded-lg border-2 border-ink bg-paper p-4">
         <h2 id="today-h" className="text-xl font-bold">
-          Done on {rig.code} today
+          Cards on {rig.code} today
         </h2>
-        {today.length ? (
+        {fromPhone ? (
+          <p className="mt-2 text-lg">No signal: the cards saved today show when there is signal.</p>
+        ) : today.length ? (
           <ul className="mt-2 space-y-1 text-lg">
             {today.map((c) => (
               <li key={c.id}>
@@ -201,7 +215,7 @@ export default function RigCards({ loaderData, actionData }: Route.ComponentProp
             ))}
           </ul>
         ) : (
-          <p className="mt-2 text-lg">No card saved on {rig.code} today yet (cards kept on this phone without signal show once sent).</p>
+          <p className="mt-2 text-lg">No card saved on {rig.code} today yet (cards kept on a phone without signal show once sent).</p>
         )}
       </section>
     </>

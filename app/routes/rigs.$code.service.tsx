@@ -8,7 +8,8 @@ import { parseForm } from "~/lib/forms/parse";
 import { can } from "~/lib/permissions";
 import { dueText, intervalWords, readingProblem, SERVICE_STATUS_LABELS, type ServiceStatus } from "~/lib/rigs/service";
 import { serviceDoneSchema, serviceRuleSchema } from "~/lib/rigs/service-forms";
-import { SERVICE_TASK_KEYS, SERVICE_TASKS } from "~/lib/guides/kinds";
+import { SERVICE_TASK_KEYS, SERVICE_TASKS, type ServiceTask } from "~/lib/guides/kinds";
+import { rigCards } from "~/services/guides.server";
 import { fail, requireCan, requireUser } from "~/services/guards.server";
 import { readForm } from "~/services/read-request.server";
 import { findRig } from "~/services/rigs.server";
@@ -19,6 +20,7 @@ import {
   retireServiceRule,
   sameNameOnRig,
   serviceLines,
+  taskTakenOnRig,
   updateServiceRule,
   type ServiceLine,
 } from "~/services/service.server";
@@ -33,6 +35,10 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
     lines: await serviceLines(user, { rigId: rig.id }),
     canRecord: can(user, "record-service"),
     canEditRules: can(user, "edit-service-rules"),
+    // The tasks the company's published cards record: only those can record a service.
+    cardTasks: [
+      ...new Set((await rigCards(user)).flatMap((c) => Object.values(c.definition.states).flatMap((st) => (st.meta.service ? [st.meta.service] : [])))),
+    ],
   };
 }
 
@@ -71,6 +77,11 @@ export async function action({ request, params, context }: Route.ActionArgs) {
       if (await sameNameOnRig(user, rig.id, submission.value.name, id ?? undefined)) {
         const taken = `${rig.code} already keeps “${submission.value.name}”. Change that one instead.`;
         return data({ ruleId: id ?? "new", result: submission.reply({ fieldErrors: { name: [taken] } }), message: null }, { status: 400 });
+      }
+      const taken = await taskTakenOnRig(user, rig.id, submission.value.task, id ?? undefined);
+      if (taken) {
+        const message = `${rig.code}'s “${taken}” is already recorded by that card task. Choose another task, or none.`;
+        return data({ ruleId: id ?? "new", result: submission.reply({ fieldErrors: { task: [message] } }), message: null }, { status: 400 });
       }
       if (id === null) await addServiceRule(user, rig.id, submission.value);
       else await updateServiceRule(user, rig.id, id, submission.value);
@@ -117,6 +128,7 @@ export default function RigService({ loaderData, actionData }: Route.ComponentPr
         {lines.map((line) => (
           <ServiceCard
             key={line.ruleId}
+            cardTasks={loaderData.cardTasks}
             line={line}
             rig={rig}
             canRecord={canRecord && !rig.retired}
@@ -137,6 +149,7 @@ export default function RigService({ loaderData, actionData }: Route.ComponentPr
           <RuleFields
             key={actionData?.ruleId === "new" && actionData.message ? actionData.message : "add"}
             intent="add-rule"
+            cardTasks={loaderData.cardTasks}
             errors={actionData?.ruleId === "new" ? actionData.result?.error : undefined}
           />
         </section>
@@ -149,6 +162,7 @@ type Errors = Record<string, string[] | null> | null | undefined;
 const errorOf = (errors: Errors, field: string) => errors?.[field]?.join(" ") ?? null;
 
 function ServiceCard({
+  cardTasks,
   line,
   rig,
   canRecord,
@@ -157,6 +171,7 @@ function ServiceCard({
   errors,
   when,
 }: {
+  cardTasks: ServiceTask[];
   line: ServiceLine;
   rig: { hasHourMeter: boolean; engineHours: number };
   canRecord: boolean;
@@ -174,6 +189,7 @@ function ServiceCard({
       </p>
       <p className="text-ink">
         {intervalWords(line)} · {dueText(line.due)}
+        {line.task ? ` · also recorded by the rig cards' “${SERVICE_TASKS[line.task]}” item` : ""}
       </p>
       <p className="text-sm text-ink">
         {line.last
@@ -209,7 +225,7 @@ function ServiceCard({
       {canEditRules ? (
         <details className="mt-2 text-ink">
           <summary className="min-h-12 cursor-pointer py-3 font-bold">Change or stop this service</summary>
-          <RuleFields intent="edit-rule" line={line} errors={errors} />
+          <RuleFields intent="edit-rule" line={line} errors={errors} cardTasks={cardTasks} />
           <div className="mt-2">
             <ConfirmAction
               label="Stop keeping this service"
@@ -225,7 +241,7 @@ function ServiceCard({
   );
 }
 
-function RuleFields({ intent, line, errors }: { intent: "add-rule" | "edit-rule"; line?: ServiceLine; errors: Errors }) {
+function RuleFields({ intent, line, errors, cardTasks }: { intent: "add-rule" | "edit-rule"; line?: ServiceLine; errors: Errors; cardTasks: ServiceTask[] }) {
   const input = "mt-1 block min-h-14 w-full rounded-md border-2 border-ink bg-paper px-3 text-lg";
   const field = (name: string, label: string, value: string, hint?: string) => (
     <label className="block font-bold">
@@ -255,14 +271,15 @@ function RuleFields({ intent, line, errors }: { intent: "add-rule" | "edit-rule"
       <label className="block font-bold">
         Also recorded by a rig card
         <span className="block text-sm font-normal">When a card item for this task is done, the service is recorded with the card's hours.</span>
-        <select name="task" defaultValue={line?.task ?? ""} className={input}>
+        <select name="task" defaultValue={line?.task ?? ""} className={input} aria-invalid={errorOf(errors, "task") ? true : undefined}>
           <option value="">No: recorded by hand only</option>
-          {SERVICE_TASK_KEYS.map((t) => (
+          {SERVICE_TASK_KEYS.filter((t) => cardTasks.includes(t) || line?.task === t).map((t) => (
             <option key={t} value={t}>
               {SERVICE_TASKS[t]}
             </option>
           ))}
         </select>
+        {errorOf(errors, "task") ? <span className="block font-bold text-stop">{errorOf(errors, "task")}</span> : null}
       </label>
       <button name="intent" value={intent} className="min-h-14 w-full rounded-lg border-2 border-ink bg-paper text-lg font-bold">
         {intent === "add-rule" ? "Add this service" : "Save the change"}

@@ -30,6 +30,7 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
   return {
     rig,
     canEdit: can(user, "edit-rigs"),
+    canReadCases: can(user, "read-cases"),
     cases,
     cards,
     service: serviceCounts(service) as ReturnType<typeof serviceCounts> | null,
@@ -45,7 +46,7 @@ export async function clientLoader({ params, serverLoader }: Route.ClientLoaderA
     const kept = kit.rigs.find((r) => r.code === params.code.toUpperCase());
     if (!kept) return null;
     const rig: RigView = { ...kept, retired: false, notes: null };
-    return { rig, canEdit: false, cases: [], cards: [] as CardDone[], service: null, fromPhone: true };
+    return { rig, canEdit: false, canReadCases: false, cases: [], cards: [] as CardDone[], service: null, fromPhone: true };
   });
 }
 
@@ -195,20 +196,26 @@ export default function RigPage({ loaderData }: Route.ComponentProps) {
           {cards.length ? (
             <ul className="mt-2 space-y-2">
               {cards.map((c) => (
-                <li key={c.id} className="rounded-md border-2 border-rule bg-paper p-3">
-                  <Link to={`/cases/${c.id}`} className="font-bold">
-                    {c.title}
+                <li key={c.id}>
+                  {/* The whole box is the link: a small title is hard to hit with a glove. */}
+                  <Link to={`/cases/${c.id}`} className="block rounded-md border-2 border-rule bg-paper p-3 text-ink no-underline">
+                    <span className="font-bold underline">{c.title}</span>
+                    <span className="block">
+                      {cardStateLabel(c.outcome, c.gaps)} · {times.dateTime(c.openedAt)} · {c.by ?? "—"}
+                      {c.engineHours !== null ? ` · ${c.engineHours.toLocaleString("en-US")} h` : ""}
+                    </span>
                   </Link>
-                  <p>
-                    {cardStateLabel(c.outcome, c.gaps)} · {times.dateTime(c.openedAt)} · {c.by ?? "—"}
-                    {c.engineHours !== null ? ` · ${c.engineHours.toLocaleString("en-US")} h` : ""}
-                  </p>
                 </li>
               ))}
             </ul>
           ) : (
             <p className="mt-1">No cards yet.</p>
           )}
+          {loaderData.canReadCases ? (
+            <Link to={`/cases?kind=card&rig=${rig.code}`} className="mt-2 flex min-h-12 items-center font-bold">
+              Every card on {rig.code}
+            </Link>
+          ) : null}
         </section>
       )}
       {canEdit ? (

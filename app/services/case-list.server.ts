@@ -1,4 +1,4 @@
-import type { Outcome } from "~/lib/vocabulary";
+import type { CaseKind, Outcome } from "~/lib/vocabulary";
 import { QueryTypes } from "sequelize";
 import { ownedBy, usableGuideSql } from "./tenancy.server";
 import { PAGE_SIZE, type CaseFilters } from "~/lib/cases/filters";
@@ -25,6 +25,9 @@ export interface CaseRow {
   guideTitle: string;
   causeCode: string | null;
   outcome: Outcome;
+  kind: CaseKind;
+  /** On a card: items not done. */
+  cardGaps: number | null;
   person: string | null;
   openedAt: string;
   durationSeconds: number | null;
@@ -33,6 +36,7 @@ export interface CaseRow {
 function where(user: SessionUser, f: CaseFilters) {
   const replacements = {
     company: user.companyId,
+    kind: f.kind,
     rig: f.rig ?? null,
     guide: f.guide ?? null,
     cause: f.cause ?? null,
@@ -44,7 +48,7 @@ function where(user: SessionUser, f: CaseFilters) {
   };
   const sql = `FROM cases c JOIN rigs r ON r.id = c.rig_id JOIN guide_versions v ON v.id = c.guide_version_id JOIN guides g ON g.id = v.guide_id
     LEFT JOIN users u ON u.id = c.opened_by
-    WHERE c.company_id = :company AND c.kind = 'fix' AND (:rig IS NULL OR r.code = :rig) AND (:guide IS NULL OR g.slug = :guide)
+    WHERE c.company_id = :company AND c.kind = :kind AND (:rig IS NULL OR r.code = :rig) AND (:guide IS NULL OR g.slug = :guide)
       AND (:cause IS NULL OR c.cause_code = :cause) AND (:outcome IS NULL OR c.outcome = :outcome) AND (:person IS NULL OR c.opened_by = :person)
       AND (:from IS NULL OR c.opened_at >= :from) AND (:to IS NULL OR c.opened_at < :to)`;
   return { sql, replacements };
@@ -56,6 +60,8 @@ const toRow = (r: Record<string, unknown>): CaseRow => ({
   guideTitle: String(r.title),
   causeCode: (r.cause_code as string) ?? null,
   outcome: String(r.outcome) as Outcome,
+  kind: String(r.kind) as CaseKind,
+  cardGaps: r.card_gaps === null || r.card_gaps === undefined ? null : Number(r.card_gaps),
   person: (r.name as string) ?? null,
   openedAt: new Date(r.opened_at as string).toISOString(),
   durationSeconds: r.duration === null ? null : Number(r.duration),
@@ -74,7 +80,7 @@ async function readCases(user: SessionUser, f: CaseFilters, limit: number, all: 
   const page = all ? "LIMIT 50000" : `LIMIT ${limit} OFFSET ${(f.page - 1) * limit}`;
   const [rows, count] = await Promise.all([
     reports().query<Record<string, unknown>>(
-      `SELECT c.id, r.code, g.title, c.cause_code, c.outcome, u.name, c.opened_at, TIMESTAMPDIFF(SECOND, c.opened_at, c.closed_at) AS duration ${sql} ORDER BY ${order} ${page}`,
+      `SELECT c.id, r.code, g.title, c.cause_code, c.outcome, c.kind, c.card_gaps, u.name, c.opened_at, TIMESTAMPDIFF(SECOND, c.opened_at, c.closed_at) AS duration ${sql} ORDER BY ${order} ${page}`,
       { replacements, type: QueryTypes.SELECT },
     ),
     all ? Promise.resolve([{ n: 0 }]) : reports().query<{ n: number }>(`SELECT COUNT(*) AS n ${sql}`, { replacements, type: QueryTypes.SELECT }),

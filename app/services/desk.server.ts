@@ -38,11 +38,12 @@ export async function deskGuideVersions(user: SessionUser, guideId: number) {
   const guide = await deskGuide(user, guideId);
   const versions = await GuideVersion.findAll({
     where: { guideId: guide.id },
-    attributes: ["number", "status", "changeNote", "reviewComment", "updatedAt"],
+    attributes: ["number", "status", "changeNote", "reviewComment", "updatedAt", [sequelize.literal("JSON_VALUE(`definition`, '$.kind')"), "kind"]],
     order: [["number", "DESC"]],
   });
+  const kind: GuideKind = versions.some((v) => v.get("kind") === "card") ? "card" : "guide";
   return {
-    guide: { id: guide.id, title: guide.title, slug: guide.slug, builtIn: guide.companyId === null, publishedVersion: guide.publishedVersion },
+    guide: { id: guide.id, title: guide.title, slug: guide.slug, builtIn: guide.companyId === null, publishedVersion: guide.publishedVersion, kind },
     versions: versions.map((v) => ({
       number: v.number,
       status: v.status,

@@ -87,6 +87,16 @@ export async function sameNameOnRig(user: SessionUser, rigId: number, name: stri
   return rules.some((r) => r.id !== except && r.name.trim().toLowerCase() === name.trim().toLowerCase());
 }
 
+/** The rig's other service already recorded by this card task, if any: one task records one service on a rig. */
+export async function taskTakenOnRig(user: SessionUser, rigId: number, task: string | null, except?: number): Promise<string | null> {
+  if (!task) return null;
+  const other = await ServiceRule.findOne({
+    where: ownedBy(user, { rigId, retired: false, task, ...(except ? { id: { [Op.ne]: except } } : {}) }),
+    attributes: ["name"],
+  });
+  return other?.name ?? null;
+}
+
 export async function addServiceRule(user: SessionUser, rigId: number, input: ServiceRuleInput) {
   return ServiceRule.create({ companyId: user.companyId, rigId, name: input.name, everyHours: input.everyHours, everyDays: input.everyDays, task: input.task });
 }

@@ -137,8 +137,9 @@ describe("rig cards (360×640)", () => {
     await care.waitFor();
     expect(await care.innerText()).toMatch(/With a complete pre-start[\s\S]*Missing or incomplete pre-start/);
     expect(await p.getByText("This is an association, not proof", { exact: false }).count()).toBe(1);
-    const weeks = p.getByRole("region", { name: "Cards per rig and week" });
-    expect(await weeks.innerText()).toMatch(/CF-07[\s\S]*1/);
+    const weeks = p.getByRole("region", { name: "Pre-starts per rig and week" });
+    expect(await weeks.innerText()).toMatch(/CF-07\s+1 of 1/);
+    expect(await p.getByRole("region", { name: "Fault rate by service overdue" }).count()).toBe(1);
     // The board's own form, submitted in the browser with the rig left on "All rigs".
     await p
       .getByRole("button", { name: /Show|Apply|Update/ })

@@ -81,19 +81,25 @@ describe("what skipped care costs", () => {
     );
     // Grease every 50 h, last at 60 h: 104 h leaves 6 (not yet), 111, 123 and 125 h are over. The lubricator
     // (every day) was done each pre-start morning; on the 3rd it was due, not yet overdue.
+    // Pump seal and hydraulic oil were never recorded: not counted as overdue.
     expect(care.faults).toBe(4);
     expect(care.faultsWithOverdue).toBe(3);
     expect(care.overdueByService).toEqual([{ name: "Grease points", faults: 3 }]);
+    // The rig-days by the day's last reading: the 2nd ends at 108 h (48 h since grease: not yet over);
+    // the 3rd (115 h), 4th (121 h) and 5th (128 h) end with grease overdue.
+    expect(care.withOverdue).toMatchObject({ days: 3, hours: 20, faults: 3 });
+    expect(care.withoutOverdue).toMatchObject({ days: 1, hours: 8, faults: 1 });
   });
 
-  it("counts cards per rig and week, complete and started", async () => {
+  it("counts per rig and week the days worked, those with a complete pre-start, and the other cards", async () => {
     const care = await careFor(
       mo,
       { from: new Date("2026-06-02T00:00:00Z"), to: new Date("2026-06-07T00:00:00Z"), rigCode: "CF-07" },
       new Date("2026-12-01T00:00:00Z"),
     );
     const week = care.cardWeeks.find((r) => r.rigCode === "CF-07")!.cells.find((c) => c.week === "2026-06-01")!;
-    expect(week).toEqual({ week: "2026-06-01", complete: 7, started: 8 });
-    expect(care.weeks.at(-1)).toBe("2026-06-01");
+    // Worked the 1st (a shut-down card) to the 5th; complete pre-starts the 2nd and 5th; five shut-down cards.
+    expect(week).toEqual({ week: "2026-06-01", workedDays: 5, preStartDays: 2, otherCards: 5 });
+    expect(care.weeks[0]).toBe("2026-06-01");
   });
 });

@@ -117,7 +117,7 @@ export function GuideEditor({
       </div>
       <ProblemsPanel problems={problems} warnings={warnings} onSelect={setSelected} />
       <fieldset className="space-y-3 rounded-lg border-2 border-ink bg-paper p-3">
-        <legend className="px-1 font-bold">Guide</legend>
+        <legend className="px-1 font-bold">{draft.kind === "card" ? "Rig card" : "Guide"}</legend>
         <label className="block font-bold">
           Title
           <input value={draft.title} onChange={(e) => change({ ...draft, title: e.target.value })} className={field} />
@@ -127,7 +127,7 @@ export function GuideEditor({
           <textarea value={draft.summary} onChange={(e) => change({ ...draft, summary: e.target.value })} rows={2} className={`${field} py-2`} />
         </label>
         <label className="block font-bold">
-          Symptom phrases (one per line, as a crew member would say them)
+          {draft.kind === "card" ? "Words a crew member would use for it (one per line)" : "Symptom phrases (one per line, as a crew member would say them)"}
           <textarea
             value={draft.symptoms.join("\n")}
             onChange={(e) => change({ ...draft, symptoms: e.target.value.split("\n") })}

@@ -38,6 +38,13 @@ export function PreviewWalk({ guide }: { guide: Guide }) {
             onNoteChange={() => {}}
             onAdvance={(_answer, to) => setPath([...path, to])}
             headingLevel={2}
+            beforeAnswers={
+              meta.opensGuide ? (
+                <p className="mb-3 rounded-lg border-4 border-ink bg-caution p-3 text-lg font-bold">
+                  Crews see an “Open the guide now” button here, for the guide “{meta.opensGuide}”.
+                </p>
+              ) : null
+            }
           />
         )}
         <div className="mt-3 grid grid-cols-2 gap-2">

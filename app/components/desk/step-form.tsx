@@ -80,7 +80,7 @@ export function StepForm({
         <select value={meta.kind} onChange={(e) => setKind(e.target.value as StepKind)} className={field}>
           {STEP_KINDS.map((k) => (
             <option key={k} value={k}>
-              {k}
+              {card && k === "fixed" ? "complete (end)" : card && k === "handoff" ? "rig not ready (end)" : k}
             </option>
           ))}
         </select>

@@ -40,13 +40,13 @@ export function PhoneReadiness({ personId }: { personId: number }) {
       {kept && kept.waiting > 0 ? (
         <p role="status" className="rounded-md border-2 border-ink bg-caution px-3 py-2 font-bold">
           {kept.signedOut
-            ? `${kept.waiting} fix${kept.waiting === 1 ? "" : "es"} kept on this phone: your sign-in ended before they were sent. Sign in again and they will be sent.`
-            : `${kept.waiting} fix${kept.waiting === 1 ? "" : "es"} kept on this phone, to be sent when there is signal.`}
+            ? `${kept.waiting} walk-through${kept.waiting === 1 ? "" : "s"} (fixes or cards) kept on this phone: your sign-in ended before ${kept.waiting === 1 ? "it was" : "they were"} sent. Sign in again and ${kept.waiting === 1 ? "it" : "they"} will be sent.`
+            : `${kept.waiting} walk-through${kept.waiting === 1 ? "" : "s"} (fixes or cards) kept on this phone, to be sent when there is signal.`}
         </p>
       ) : null}
       {allSent ? (
         <p role="status" className="rounded-md border-2 border-go bg-paper px-3 py-2 font-bold text-go">
-          All fixes kept on this phone are now saved to Tankside.
+          All fixes and cards kept on this phone are now saved to Tankside.
         </p>
       ) : null}
       {kept?.refused.map((r) => (

@@ -14,7 +14,18 @@ const SHADE: Record<StepAnswer, string> = {
 };
 
 /** The answers for a step's kind, big and at the bottom of the screen where a thumb reaches. */
-export function AnswerButtons({ kind, onAnswer, suggested }: { kind: StepKind; onAnswer: (answer: StepAnswer) => void; suggested?: StepAnswer }) {
+export function AnswerButtons({
+  kind,
+  onAnswer,
+  suggested,
+  disabled = false,
+}: {
+  kind: StepKind;
+  onAnswer: (answer: StepAnswer) => void;
+  suggested?: StepAnswer;
+  /** For a moment after a step opens: no look change (that would flicker), the tap just does nothing. */
+  disabled?: boolean;
+}) {
   const answers: readonly StepAnswer[] = ANSWERS_BY_KIND[kind];
   return (
     <div className={`grid gap-3 ${answers.length === 2 ? "grid-cols-2" : "grid-cols-1"}`}>
@@ -23,6 +34,7 @@ export function AnswerButtons({ kind, onAnswer, suggested }: { kind: StepKind; o
           key={a}
           type="button"
           onClick={() => onAnswer(a)}
+          disabled={disabled}
           aria-describedby={suggested === a ? "todays-answer-mark" : undefined}
           className={`flex min-h-16 items-center justify-center gap-2 rounded-lg border-4 px-3 text-xl font-bold ${SHADE[a]} ${
             suggested === a ? "outline-4 outline-offset-4 outline-ink" : ""

@@ -115,7 +115,7 @@ export function EndCard({
             </label>
           ) : null}
           <label className="block font-bold">
-            Note for the case (optional)
+            Note for the {card ? "card" : "case"} (optional)
             <textarea
               value={note}
               onChange={(e) => setNote(e.target.value)}

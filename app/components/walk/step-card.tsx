@@ -1,4 +1,7 @@
-import { useState } from "react";
+import { useEffect, useState } from "react";
+
+/** How long a new step's answers wait before taking a tap (ms). */
+const ARM_MS = 350;
 import { GuideText } from "~/components/ui/guide-text";
 import type { Guide } from "~/lib/guides/schema";
 import type { Stepper } from "~/lib/walk/next-step";
@@ -25,9 +28,12 @@ export function StepCard({
   onNoteChange,
   onAdvance,
   dayFact,
+  beforeAnswers,
   children,
   headingLevel = 1,
 }: {
+  /** What a step offers before its answers (a card item's "open the guide"), so it is seen first. */
+  beforeAnswers?: React.ReactNode;
   /** What today's card said about the fact this check asks (its answer is offered, never taken silently). */
   dayFact?: DayFact;
   guide: Guide;
@@ -52,6 +58,13 @@ export function StepCard({
   const setShowNote = (shown: boolean) => setOpen((o) => ({ ...o, note: shown }));
   const meta = guide.states[stepId].meta;
   const fill = (text: string) => fillRigWords(text, rig);
+  // A new step's buttons take taps only after a moment: a glove's double tap must not answer a
+  // question that was never on screen (the next step's button appears where the thumb just was).
+  const [armed, setArmed] = useState<string | null>(null);
+  useEffect(() => {
+    const t = window.setTimeout(() => setArmed(stepId), ARM_MS);
+    return () => window.clearTimeout(t);
+  }, [stepId]);
 
   const answer = (type: string) => {
     const to = steps.next(stepId, type);
@@ -95,7 +108,8 @@ export function StepCard({
       {/* Answers stay under the thumb; the shut-down stop is read to the end before it is acknowledged. */}
       <div className={safety ? "pb-2" : "sticky bottom-0 z-10 -mx-3 border-t-2 border-ink bg-field px-3 pt-2 pb-3"}>
         {dayFact ? <TodaysAnswer fact={dayFact} /> : null}
-        <AnswerButtons kind={meta.kind} onAnswer={answer} suggested={suggestedAnswer(dayFact)} />
+        {beforeAnswers}
+        <AnswerButtons kind={meta.kind} onAnswer={answer} suggested={suggestedAnswer(dayFact)} disabled={armed !== stepId} />
       </div>
       {children}
       <div>

@@ -5,7 +5,10 @@ export function SyncBadge({
   startWaiting = false,
   rejected,
   signedOut,
+  noun = "fix",
 }: {
+  /** What is being kept: "fix" or "card". */
+  noun?: "fix" | "card";
   online: boolean;
   /** Answers, photos and the close still only on this phone. */
   waiting: { answers: number; photos: number; close: boolean };
@@ -19,7 +22,7 @@ export function SyncBadge({
   const what = [
     waiting.answers ? `${waiting.answers} answer${waiting.answers === 1 ? "" : "s"}` : "",
     waiting.photos ? `${waiting.photos} photo${waiting.photos === 1 ? "" : "s"}` : "",
-    waiting.close ? "the end of the fix" : "",
+    waiting.close ? `the end of the ${noun}` : "",
   ].filter(Boolean);
   const count = what.length;
   const listed = what.length > 1 ? `${what.slice(0, -1).join(", ")} and ${what[what.length - 1]}` : (what[0] ?? "");
@@ -30,7 +33,7 @@ export function SyncBadge({
     text = "All answers saved to Tankside.";
     tone = "border-go bg-paper text-go";
   } else if (count === 0) {
-    text = online ? "Sending the fix to Tankside…" : "This fix is kept on this phone — no signal; it will be sent when there is.";
+    text = online ? `Sending the ${noun} to Tankside…` : `This ${noun} is kept on this phone — no signal; it will be sent when there is.`;
     tone = "border-ink bg-caution text-ink";
   } else if (signedOut) {
     text = `Kept on this phone: ${listed}. Your sign-in has ended: sign in again on this phone and they will be sent.`;

@@ -11,7 +11,7 @@ import { replayFrom, replayWalk } from "~/lib/walk/replay";
 import { outcomeLabel, type CaseKind, type Outcome } from "~/lib/vocabulary";
 import { appendEvent, loadRecord, mergeServerEvents, saveRecord, type QueuedEvent, type WalkRecord } from "~/lib/walk/queue";
 import { MAX_PHOTO_BYTES } from "~/lib/cases/limits";
-import { dayFactsOnPhone, lastHoursOnPhone, noteHoursOnPhone, PHOTO_WAIT_CAP_BYTES, waitingPhotoBytes } from "~/lib/walk/kept";
+import { dayFactsOnPhone, fixesFromCardOnPhone, lastHoursOnPhone, noteHoursOnPhone, PHOTO_WAIT_CAP_BYTES, waitingPhotoBytes } from "~/lib/walk/kept";
 import { keepPhotoBytes } from "~/components/offline/photo-store";
 import { EndCard } from "./end-card";
 import { PhotoPicker } from "./photo-picker";
@@ -38,6 +38,8 @@ export interface WalkScreenProps {
   fromCard?: { caseId: string; title: string } | null;
   /** Today's card answers for the facts this guide asks again, as the server has them. */
   serverDayFacts?: DayFacts;
+  /** On a card: the fixes its items opened, as the server has them (the phone adds its own). */
+  serverFixesOpened?: { caseId: string; title: string; outcome: string }[];
   renderFieldMath?: (widget: string) => React.ReactNode;
 }
 
@@ -56,6 +58,7 @@ export function WalkScreen({
   kind = "fix",
   fromCard = null,
   serverDayFacts,
+  serverFixesOpened,
   renderFieldMath,
 }: WalkScreenProps) {
   const steps = useMemo(() => guideSteps(guide), [guide]);
@@ -94,6 +97,15 @@ export function WalkScreen({
     const since = startOfDayIn(isoInZone(new Date(), zone).slice(0, 10), zone).toISOString();
     setFacts(mergeDayFacts(serverDayFacts ?? {}, dayFactsOnPhone(window.localStorage, rig.code, since, shell?.user.name ?? null)));
   }, [asksFacts, serverDayFacts, rig.code, zone, shell?.user.name]);
+
+  // A card's fixes: the server's, and any this phone started from it and has not sent.
+  const [fixesOpened, setFixesOpened] = useState(serverFixesOpened ?? []);
+  useEffect(() => {
+    if (kind !== "card") return;
+    const known = new Set((serverFixesOpened ?? []).map((f) => f.caseId));
+    const onPhone = fixesFromCardOnPhone(window.localStorage, caseId).filter((f) => !known.has(f.caseId));
+    setFixesOpened([...(serverFixesOpened ?? []), ...onPhone]);
+  }, [kind, caseId, serverFixesOpened]);
 
   // After hydration: what this phone kept (possibly more than the server has) wins.
   useEffect(() => {
@@ -209,13 +221,17 @@ export function WalkScreen({
           note={note}
           onNoteChange={setNote}
           dayFact={kind === "fix" && meta.dayCheck ? facts[meta.dayCheck] : undefined}
+          beforeAnswers={
+            kind === "card" && meta.opensGuide ? (
+              <OpenGuide rigCode={rig.code} guideSlug={meta.opensGuide} cardId={caseId} cardTitle={guideTitle} opened={fixesOpened} />
+            ) : null
+          }
           onAdvance={(answer) => {
             record_(answer as QueuedEvent["answer"], here);
             setNote("");
           }}
         >
           {meta.fieldMath && renderFieldMath ? renderFieldMath(meta.fieldMath) : null}
-          {kind === "card" && meta.opensGuide ? <OpenGuide rigCode={rig.code} guideSlug={meta.opensGuide} cardId={caseId} cardTitle={guideTitle} /> : null}
           <PhotoPicker
             caseId={caseId}
             photos={(record.photos ?? []).filter((p) => p.stepId === here)}
@@ -225,7 +241,14 @@ export function WalkScreen({
           />
         </StepCard>
       )}
-      <SyncBadge online={sync.online} waiting={sync.waiting} startWaiting={sync.startWaiting} rejected={record.rejected} signedOut={sync.signedOut} />
+      <SyncBadge
+        noun={kind === "card" ? "card" : "fix"}
+        online={sync.online}
+        waiting={sync.waiting}
+        startWaiting={sync.startWaiting}
+        rejected={record.rejected}
+        signedOut={sync.signedOut}
+      />
       {/* Its place is kept until the phone has answered, so the buttons below do not jump. */}
       <p className="min-h-12 text-base">{offlineReady ? "This walk-through is kept on this phone: it opens again even with no signal." : null}</p>
       {path.length > 1 && !record.close && !closedElsewhere ? (
@@ -280,16 +303,37 @@ export function WalkScreen({
  * A card item that opens a guide: the fix starts on the same rig, linked to this card, with or
  * without signal (the fix page's own start). Done on the card, afterwards, carries on.
  */
-function OpenGuide({ rigCode, guideSlug, cardId, cardTitle }: { rigCode: string; guideSlug: string; cardId: string; cardTitle: string }) {
+function OpenGuide({
+  rigCode,
+  guideSlug,
+  cardId,
+  cardTitle,
+  opened,
+}: {
+  rigCode: string;
+  guideSlug: string;
+  cardId: string;
+  cardTitle: string;
+  opened: { caseId: string; title: string; outcome: string }[];
+}) {
   const [fixId] = useState(() => crypto.randomUUID());
   return (
-    <Form method="post" action={`/rigs/${rigCode}/fix`}>
+    <Form method="post" action={`/rigs/${rigCode}/fix`} className="mb-3">
       <input type="hidden" name="guideSlug" value={guideSlug} />
       <input type="hidden" name="caseId" value={fixId} />
       <input type="hidden" name="fromCaseId" value={cardId} />
       <input type="hidden" name="fromTitle" value={cardTitle} />
+      {opened.length ? (
+        <ul aria-label="Opened from this card" className="mb-2 rounded-md border-2 border-ink bg-paper px-3 py-2 text-lg">
+          {opened.map((f) => (
+            <li key={f.caseId}>
+              <Link to={`/cases/${f.caseId}/walk`}>{f.title}</Link>: {f.outcome}
+            </li>
+          ))}
+        </ul>
+      ) : null}
       <button type="submit" className="min-h-16 w-full rounded-lg border-4 border-ink bg-caution px-3 text-xl font-bold text-ink">
-        Open the guide now
+        {opened.length ? "Open the guide again" : "Open the guide now"}
       </button>
       <p className="mt-1 text-base">This card stays open: come back to it from the guide&apos;s end, or from the rig&apos;s cards.</p>
     </Form>

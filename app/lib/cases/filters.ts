@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { OUTCOMES } from "../vocabulary";
+import { CASE_KINDS, OUTCOMES } from "../vocabulary";
 
 const day = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, "use a date like 2026-06-01");
 
@@ -7,6 +7,8 @@ export const CASE_SORTS = ["opened", "duration", "rig", "guide", "cause", "outco
 
 /** The cases table's query string (blank values already dropped: "All" means no filter): filters, sort and page. Unknown values are named, not ignored. */
 export const caseFiltersSchema = z.object({
+  /** Fixes (the faults) unless rig cards are asked for: the two are never mixed in one list. */
+  kind: z.enum(CASE_KINDS, { error: `kind must be one of ${CASE_KINDS.join(", ")}` }).default("fix"),
   rig: z.string().trim().toUpperCase().max(16).optional(),
   guide: z.string().trim().max(80).optional(),
   cause: z.string().trim().max(60).optional(),

@@ -46,7 +46,7 @@ export const guideSchema = z.strictObject({
   kind: z.enum(GUIDE_KINDS).optional(),
   id: slug,
   title: z.string().trim().min(1).max(120),
-  summary: z.string().trim().min(1, "write one sentence on what this guide is for").max(600, "keep the summary under 600 characters"),
+  summary: z.string().trim().min(1, "write one sentence on what it is for").max(600, "keep the summary under 600 characters"),
   symptoms: z.array(z.string().trim().min(2).max(120)).min(1, "list at least one symptom phrase"),
   initial: z.string().min(1),
   states: z.record(slug, stepSchema).refine((s) => Object.keys(s).length > 0, "a guide needs at least one step"),

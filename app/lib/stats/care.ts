@@ -63,18 +63,23 @@ export interface CareFigures {
   withoutPreStart: RateGroup;
   /** Worked rig-days that had no hour reading to measure (left out of both rates). */
   unmeasuredDays: number;
+  /** Measured rig-days with a service overdue at the day's last reading, and with every service up to date. */
+  withOverdue: RateGroup;
+  withoutOverdue: RateGroup;
   /** Faults with at least one service overdue as they happened, and by service name. */
   faults: number;
   faultsWithOverdue: number;
   overdueByService: { name: string; faults: number }[];
-  /** Complete cards per rig and week (Monday), and every card started. */
+  /** Per rig and week (Monday), newest first: worked days, those with a complete pre-start, other cards completed. */
   weeks: string[];
-  cardWeeks: { rigCode: string; cells: { week: string; complete: number; started: number }[] }[];
+  cardWeeks: { rigCode: string; cells: { week: string; workedDays: number; preStartDays: number; otherCards: number }[] }[];
 }
 
 const PRE_START = "pre-start";
 /** A day's running above this is a misread meter, not a day: such a gap is left unmeasured. */
 const MAX_DAY_HOURS = 24;
+/** A reading further back than this (a long weekend and some) cannot say what one day ran. */
+const MAX_GAP_DAYS = 4;
 
 const dayIn = (at: string, zone: string) => isoInZone(at, zone).slice(0, 10);
 /** The Monday of a day's week, as YYYY-MM-DD. */
@@ -93,7 +98,8 @@ function rateGroup(days: number, hours: number, faults: number, confidence: numb
 /**
  * Engine hours run per rig and day: the day's last reading less the last reading of an earlier
  * day. With a card read at each start and the shut-down card at each day's end this is the day's
- * running; a day whose end was not read passes its hours on to the next day read.
+ * running; a day whose end was not read passes its hours on to the next day read, if that is
+ * within a few days (else the day is left unmeasured: the hours could belong to any day between).
  */
 export function hoursByDay(readings: readonly Reading[], zone: string): Map<string, number> {
   const byRig = new Map<number, Reading[]>();
@@ -106,11 +112,12 @@ export function hoursByDay(readings: readonly Reading[], zone: string): Map<stri
   for (const [rigId, list] of byRig) {
     const lastOfDay = new Map<string, number>();
     for (const r of [...list].sort((a, b) => a.at.localeCompare(b.at))) lastOfDay.set(dayIn(r.at, zone), r.hours);
-    let before: number | null = null;
+    let before: { day: string; hours: number } | null = null;
     for (const [day, hours] of [...lastOfDay].sort(([a], [b]) => a.localeCompare(b))) {
-      const run = before === null ? null : hours - before;
-      if (run !== null && run >= 0 && run <= MAX_DAY_HOURS) out.set(`${rigId}:${day}`, run);
-      before = hours;
+      const run = before === null ? null : hours - before.hours;
+      const gap = before === null ? Infinity : (Date.parse(`${day}T00:00:00Z`) - Date.parse(`${before.day}T00:00:00Z`)) / 86_400_000;
+      if (run !== null && run >= 0 && run <= MAX_DAY_HOURS && gap <= MAX_GAP_DAYS) out.set(`${rigId}:${day}`, run);
+      before = { day, hours };
     }
   }
   return out;
@@ -136,8 +143,9 @@ export function overdueAt(
       if (d.at > at) break;
       last = d;
     }
-    // Never done since the rule was set: counted from the day it was set (by the calendar only).
-    const from = last ? { doneAt: last.at, engineHours: last.hours } : { doneAt: rule.since, engineHours: null };
+    // Never recorded: not known to be overdue (it may have been done before Tankside kept it).
+    if (!last) return [];
+    const from = { doneAt: last.at, engineHours: last.hours };
     const rig = { hasHourMeter: hasHourMeter && hours !== null && from.engineHours !== null, engineHours: hours ?? 0 };
     return serviceDue(rule, from, rig, new Date(at), zone).status === "overdue" ? [rule.name] : [];
   });
@@ -181,6 +189,7 @@ export function careFigures(
   // A worked rig-day: one with a card or a fault. Measured when its hours are known.
   const worked = new Set<string>([...faultsOn.keys(), ...cardsIn.filter((c) => metered.has(c.rigId)).map((c) => `${c.rigId}:${dayIn(c.at, zone)}`)]);
   const sums = { with: { days: 0, hours: 0, faults: 0 }, without: { days: 0, hours: 0, faults: 0 } };
+  const measured: { key: string; run: number; faults: number }[] = [];
   let unmeasured = 0;
   for (const key of worked) {
     const run = hours.get(key);
@@ -189,11 +198,12 @@ export function careFigures(
       continue;
     }
     const g = complete.has(key) ? sums.with : sums.without;
+    const faults = faultsOn.get(key) ?? 0;
     g.days++;
     g.hours += run;
-    g.faults += faultsOn.get(key) ?? 0;
+    g.faults += faults;
+    measured.push({ key, run, faults });
   }
-
   const rigOf = new Map(input.rigs.map((r) => [r.id, r]));
   const doneByRule = new Map<number, DoneRow[]>();
   for (const d of [...input.done].sort((a, b) => a.at.localeCompare(b.at))) {
@@ -218,14 +228,45 @@ export function careFigures(
     for (const n of names) byService.set(n, (byService.get(n) ?? 0) + 1);
   }
 
+  // The same rig-days split by whether a service was overdue at the day's last reading.
+  const lastReading = new Map<string, Reading>();
+  for (const r of input.readings) {
+    const key = `${r.rigId}:${dayIn(r.at, zone)}`;
+    if (!lastReading.has(key) || lastReading.get(key)!.at < r.at) lastReading.set(key, r);
+  }
+  const overdueSums = { with: { days: 0, hours: 0, faults: 0 }, without: { days: 0, hours: 0, faults: 0 } };
+  for (const m of measured) {
+    const rigId = Number(m.key.slice(0, m.key.indexOf(":")));
+    const r = lastReading.get(m.key)!;
+    const names = overdueAt(
+      input.rules.filter((x) => x.rigId === rigId),
+      doneByRule,
+      r.at,
+      r.hours,
+      true,
+      zone,
+    );
+    const g = names.length ? overdueSums.with : overdueSums.without;
+    g.days++;
+    g.hours += m.run;
+    g.faults += m.faults;
+  }
+
   const shown = input.weeksShown ?? 8;
   const lastWeek = Date.parse(`${weekOf(input.today)}T00:00:00Z`);
-  const weeks = Array.from({ length: shown }, (_, i) => new Date(lastWeek - (shown - 1 - i) * 7 * 86_400_000).toISOString().slice(0, 10));
+  const weeks = Array.from({ length: shown }, (_, i) => new Date(lastWeek - i * 7 * 86_400_000).toISOString().slice(0, 10));
+  const allFaultDays = new Set(input.faults.map((f) => `${f.rigId}:${dayIn(f.at, zone)}`));
   const cardWeeks = input.rigs.map((rig) => ({
     rigCode: rig.code,
     cells: weeks.map((week) => {
-      const mine = input.cards.filter((c) => c.rigId === rig.id && weekOf(dayIn(c.at, zone)) === week);
-      return { week, complete: mine.filter((c) => c.complete).length, started: mine.length };
+      const cards = input.cards.filter((c) => c.rigId === rig.id && weekOf(dayIn(c.at, zone)) === week);
+      const days = new Set(cards.map((c) => dayIn(c.at, zone)));
+      for (const key of allFaultDays) {
+        const [id, day] = [Number(key.slice(0, key.indexOf(":"))), key.slice(key.indexOf(":") + 1)];
+        if (id === rig.id && weekOf(day) === week) days.add(day);
+      }
+      const preStartDays = new Set(cards.filter((c) => c.slug === PRE_START && c.complete).map((c) => dayIn(c.at, zone))).size;
+      return { week, workedDays: days.size, preStartDays, otherCards: cards.filter((c) => c.slug !== PRE_START && c.complete).length };
     }),
   }));
 
@@ -233,6 +274,8 @@ export function careFigures(
     withPreStart: rateGroup(sums.with.days, sums.with.hours, sums.with.faults, confidence),
     withoutPreStart: rateGroup(sums.without.days, sums.without.hours, sums.without.faults, confidence),
     unmeasuredDays: unmeasured,
+    withOverdue: rateGroup(overdueSums.with.days, overdueSums.with.hours, overdueSums.with.faults, confidence),
+    withoutOverdue: rateGroup(overdueSums.without.days, overdueSums.without.hours, overdueSums.without.faults, confidence),
     faults: faultsIn.length,
     faultsWithOverdue: withOverdue,
     overdueByService: [...byService].map(([name, faults]) => ({ name, faults })).sort((a, b) => b.faults - a.faults || a.name.localeCompare(b.name)),

@@ -4,7 +4,7 @@ import type { GuideTexts } from "../guides/text-tree";
 import { stepsToEnd } from "../guides/graph";
 import type { WalkRig } from "../rigs/specs";
 import type { Role } from "../people/roles";
-import type { CaseKind, Outcome } from "../vocabulary";
+import { OUTCOME_LABELS, type CaseKind, type Outcome } from "../vocabulary";
 import { guideKind } from "../guides/kinds";
 import { dayFacts, type DayFacts } from "./day-facts";
 import { closePending, loadRecord, saveRecord, type KeyValueStore, type QueuedEvent, type WalkRecord } from "./queue";
@@ -66,10 +66,12 @@ export interface WalkData {
   fromCard?: { caseId: string; title: string } | null;
   /** What today's cards on the rig say about the facts this guide asks again (the server's; the phone adds its own). */
   dayFacts?: DayFacts;
+  /** On a card: the fixes its items opened, as the server has them. */
+  fixesOpened?: { caseId: string; title: string; outcome: string }[];
 }
 
 /** What a walk needs besides its answers, kept once per case (a guide version can be replaced on the server meanwhile). */
-export type KeptView = Omit<WalkData, "closedAs" | "events" | "stepsToEnd" | "onPhoneOnly" | "fromPhone" | "dayFacts">;
+export type KeptView = Omit<WalkData, "closedAs" | "events" | "stepsToEnd" | "onPhoneOnly" | "fromPhone" | "dayFacts" | "fixesOpened">;
 
 const KIT_KEY = "tankside:kit";
 const viewKey = (caseId: string) => `tankside:walk-view:${caseId}`;
@@ -284,4 +286,17 @@ export function noteHoursOnPhone(store: KeyValueStore, rigCode: string, hours: n
   const rig = kit?.rigs.find((r) => r.code === rigCode);
   if (!kit || !rig || rig.engineHours >= hours) return;
   saveKit(store, { ...kit, rigs: kit.rigs.map((r) => (r.code === rigCode ? { ...r, engineHours: hours } : r)) });
+}
+
+/** Fixes this phone started from a card's items, with where each stands on the phone. */
+export function fixesFromCardOnPhone(
+  store: KeyValueStore & { length: number; key(index: number): string | null },
+  cardId: string,
+): { caseId: string; title: string; outcome: string }[] {
+  return keptCaseIds(store).flatMap((id) => {
+    const view = loadView(store, id);
+    if (view?.fromCard?.caseId !== cardId) return [];
+    const close = loadRecord(store, id).close;
+    return [{ caseId: id, title: view.guide.title, outcome: close ? OUTCOME_LABELS[close.outcome].toLowerCase() : "open" }];
+  });
 }

@@ -14,11 +14,13 @@ describe("engine hours per rig and day", () => {
         { rigId: 1, at: "2026-06-04T23:00:00Z", hours: 121 },
         { rigId: 1, at: "2026-06-05T23:00:00Z", hours: 150 }, // 29 h in a day: a misread
         { rigId: 1, at: "2026-06-06T23:00:00Z", hours: 149 }, // backwards
+        { rigId: 1, at: "2026-06-08T23:00:00Z", hours: 157 }, // two days on (Sunday off): measured
+        { rigId: 1, at: "2026-06-20T23:00:00Z", hours: 163 }, // twelve days on: which day ran is unknown
         { rigId: 2, at: "2026-06-02T23:00:00Z", hours: 5 },
       ],
       Z,
     );
-    expect(Object.fromEntries(hours)).toEqual({ "1:2026-06-02": 8, "1:2026-06-04": 13 });
+    expect(Object.fromEntries(hours)).toEqual({ "1:2026-06-02": 8, "1:2026-06-04": 13, "1:2026-06-08": 8 });
   });
 
   it("names days in the company's zone: 01:00 UTC on the 3rd is the evening of the 2nd in Denver", () => {
@@ -54,6 +56,10 @@ describe("services overdue at a fault", () => {
     expect(over("2026-06-04T05:00:00Z", 102)).toEqual([]);
   });
 
+  it("does not count a service never recorded as overdue (it may have been done before it was kept)", () => {
+    expect(overdueAt([{ ...grease, id: 9 }], done, "2026-06-20T19:00:00Z", 500, true, Z)).toEqual([]);
+  });
+
   it("ignores a rule that did not exist yet, and reads only what was done before the fault", () => {
     expect(overdueAt([{ ...lube, since: "2026-07-01T00:00:00Z" }], done, "2026-06-20T19:00:00Z", 150, true, Z)).toEqual([]);
     const later = new Map([[1, [...done.get(1)!, { ruleId: 1, at: "2026-06-10T15:00:00Z", hours: 140 }]]]);
@@ -83,6 +89,7 @@ describe("weeks and empty windows", () => {
     expect(care.withPreStart.ratePer100h).toBeNull();
     expect(care.withoutPreStart.ratePer100h).toBeNull();
     expect(care.faults).toBe(1);
-    expect(care.cardWeeks[0].cells.at(-1)).toEqual({ week: "2026-06-01", complete: 1, started: 1 });
+    expect(care.weeks[0]).toBe("2026-06-01"); // newest first
+    expect(care.cardWeeks[0].cells[0]).toEqual({ week: "2026-06-01", workedDays: 1, preStartDays: 1, otherCards: 0 });
   });
 });
