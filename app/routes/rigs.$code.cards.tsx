@@ -1,6 +1,7 @@
 import { useEffect, useState } from "react";
-import { data, Form, Link, redirect, useNavigation } from "react-router";
+import { data, Form, redirect, useNavigation } from "react-router";
 import { serverOrPhone } from "~/components/offline/server-or-phone";
+import { OpenWalks } from "~/components/walk/open-walks";
 import { useTimes } from "~/components/use-time-zone";
 import { cardStartFormSchema } from "~/lib/cases/schema";
 import { parseForm } from "~/lib/forms/parse";
@@ -120,26 +121,7 @@ export default function RigCards({ loaderData, actionData }: Route.ComponentProp
           {problem}
         </p>
       ) : null}
-      {openWalks.length ? (
-        <section aria-labelledby="open-h" className="mt-4 rounded-lg border-4 border-go bg-paper p-3">
-          <h2 id="open-h" className="text-lg font-bold">
-            Carry on where you left off
-          </h2>
-          <ul className="mt-2 space-y-2">
-            {openWalks.map((w) => (
-              <li key={w.id}>
-                <Link to={`/cases/${w.id}/walk`} className="flex min-h-14 flex-col justify-center rounded-lg bg-go px-4 py-2 text-white no-underline">
-                  <span className="text-xl font-bold">{w.guideTitle}</span>
-                  <span>
-                    started {times.dateTime(w.openedAt)}
-                    {w.onPhoneOnly ? " · on this phone only, not sent yet" : ""}
-                  </span>
-                </Link>
-              </li>
-            ))}
-          </ul>
-        </section>
-      ) : null}
+      <OpenWalks walks={openWalks} />
       {rig.retired ? (
         <p className="mt-3 font-bold text-stop">This rig is retired; cards cannot be started on it.</p>
       ) : (

@@ -1,8 +1,8 @@
 import { useEffect, useState } from "react";
-import { Form, Link, redirect, useNavigation, useRouteLoaderData } from "react-router";
-import { useTimes } from "~/components/use-time-zone";
+import { Form, redirect, useNavigation, useRouteLoaderData } from "react-router";
 import { z } from "zod";
 import { serverOrPhone } from "~/components/offline/server-or-phone";
+import { OpenWalks } from "~/components/walk/open-walks";
 import { useGuideSearch } from "~/components/walk/use-guide-search";
 import { loadKit, openWalksOnPhone, startOnPhone } from "~/lib/walk/kept";
 import { isNoSignal } from "~/lib/walk/no-signal";
@@ -100,7 +100,6 @@ interface Hit {
 
 export default function StartFix({ loaderData, actionData }: Route.ComponentProps) {
   const { rig, tiles, openWalks } = loaderData;
-  const times = useTimes();
   const personId = useRouteLoaderData<typeof shellLoader>("routes/shell")?.user.id ?? 0;
   const [query, setQuery] = useState("");
   const search = useGuideSearch(query, personId);
@@ -120,26 +119,7 @@ export default function StartFix({ loaderData, actionData }: Route.ComponentProp
           {actionData.problem}
         </p>
       ) : null}
-      {openWalks.length ? (
-        <section aria-labelledby="open-h" className="mt-4 rounded-lg border-4 border-go bg-paper p-3">
-          <h2 id="open-h" className="text-lg font-bold">
-            Carry on where you left off
-          </h2>
-          <ul className="mt-2 space-y-2">
-            {openWalks.map((w) => (
-              <li key={w.id}>
-                <Link to={`/cases/${w.id}/walk`} className="flex min-h-14 flex-col justify-center rounded-lg bg-go px-4 py-2 text-white no-underline">
-                  <span className="text-xl font-bold">{w.guideTitle}</span>
-                  <span>
-                    started {times.dateTime(w.openedAt)}
-                    {w.onPhoneOnly ? " · on this phone only, not sent yet" : ""}
-                  </span>
-                </Link>
-              </li>
-            ))}
-          </ul>
-        </section>
-      ) : null}
+      <OpenWalks walks={openWalks} />
       {rig.retired ? (
         <p className="mt-2 font-bold text-stop">This rig is retired; a fix cannot be started on it.</p>
       ) : (

@@ -42,7 +42,7 @@ describe("supervisor screens, as a supervisor submits them (360×640)", () => {
     const lead = () => p.locator("h1 + p").textContent();
     const plain = await lead();
     await p.getByRole("button", { name: "Filter" }).click();
-    await p.waitForURL(/\/cases\?rig=&/);
+    await p.waitForURL(/\/cases\?kind=fix&rig=&/);
     expect(await lead()).toBe(plain);
     const n = Number(plain!.match(/^([\d,]+) case/)![1].replace(/,/g, ""));
     expect(n).toBeGreaterThan(0);

@@ -73,7 +73,8 @@ describe("the load card at 360×640", () => {
     await p.getByTestId("load-count").filter({ hasText: "15 tank loads" }).waitFor();
     await p.emulateMedia({ media: "print" });
     await p.getByTestId("printed-loads").waitFor();
-    expect(await p.getByText(/Load card · Ridge Road cut slope · \d{4}-\d{2}-\d{2} · CF-07 Trailer Seven/).isVisible()).toBe(true);
+    // Waited for, not read at once: the heading takes the job typed above after the page has drawn it.
+    await p.getByText(/Load card · Ridge Road cut slope · \d{4}-\d{2}-\d{2} · CF-07 Trailer Seven/).waitFor({ timeout: 10_000 });
     const pdf = path.join(fs.mkdtempSync(path.join(os.tmpdir(), "load-card-")), "card.pdf");
     await p.pdf({ path: pdf, format: "Letter" });
     expect(execFileSync("pdfinfo", [pdf], { encoding: "utf8" })).toMatch(/^Pages:\s+1$/m);

@@ -1,7 +1,8 @@
-import type { Page, Route } from "playwright-core";
+import type { Page } from "playwright-core";
 import { describe, expect, it, onTestFinished } from "vitest";
 import { Case, CaseEvent, CasePhoto, GuideRecord, GuideVersion, Rig } from "../../db/index";
 import { appAndBrowserForFile, signIn } from "../helpers/app";
+import { phoneSignal } from "../helpers/signal";
 import { outbox } from "../helpers/outbox";
 
 // A crew member at a rig with no signal, from the first tap: the network is switched off before
@@ -14,33 +15,7 @@ const caseIdOf = (p: Page) => new URL(p.url()).pathname.split("/")[2];
 const waitSynced = (p: Page) => p.locator('[data-synced="yes"]').waitFor({ timeout: 20_000 });
 
 /** Signs in with signal and waits until the phone says it is ready for none. */
-async function readyPhone(email = "dana@cedarflats.example") {
-  await harness.browser.context.clearCookies();
-  const p = await harness.browser.context.newPage();
-  await signIn(p, harness.app.url, email);
-  await p.getByText(/^Ready for no signal · updated \d{1,2}:\d{2}/).waitFor({ timeout: 30_000 });
-  return p;
-}
-
-// Chromium's offline switch can lapse for a page reloaded from the service worker, so every
-// request the page itself makes is also cut as a phone with no signal would see it.
-const cut = (route: Route) => route.abort("internetdisconnected");
-
-async function signalOff(p: Page) {
-  await harness.browser.context.setOffline(true);
-  await harness.browser.context.route("**/*", cut);
-  onTestFinished(async () => {
-    await harness.browser.context.unroute("**/*", cut);
-    await harness.browser.context.setOffline(false);
-  });
-  await p.evaluate(() => window.dispatchEvent(new Event("offline")));
-}
-
-async function signalOn(p: Page) {
-  await harness.browser.context.unroute("**/*", cut);
-  await harness.browser.context.setOffline(false);
-  await p.evaluate(() => window.dispatchEvent(new Event("online")));
-}
+const { readyPhone, signalOff, signalOn } = phoneSignal(harness);
 
 /** A ready phone whose signal is cut before the first tap; from the home screen it starts `guide` on `rig` by its tile. */
 async function startedWithNoSignal(rig: string, guide: RegExp) {

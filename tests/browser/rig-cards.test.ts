@@ -1,7 +1,8 @@
-import type { Page, Route } from "playwright-core";
-import { describe, expect, it, onTestFinished } from "vitest";
+import type { Page } from "playwright-core";
+import { describe, expect, it } from "vitest";
 import { Case, CaseEvent, Rig, ServiceRecord } from "../../db/index";
 import { appAndBrowserForFile, signIn } from "../helpers/app";
+import { phoneSignal } from "../helpers/signal";
 
 // Rig cards at 360×640: a crew member's pre-start with no signal from the first tap (saved once when
 // signal returns), a "no" that opens a guide on the spot, and the supervisor's view of cards and care.
@@ -10,31 +11,8 @@ const harness = appAndBrowserForFile();
 const answer = (p: Page, name: string) => p.getByRole("button", { name: new RegExp(`^${name}`) }).click();
 const prompt = (p: Page) => p.locator("#step-prompt");
 const caseIdOf = (p: Page) => new URL(p.url()).pathname.split("/")[2];
-const cut = (route: Route) => route.abort("internetdisconnected");
 
-async function readyPhone(email = "dana@cedarflats.example") {
-  await harness.browser.context.clearCookies();
-  const p = await harness.browser.context.newPage();
-  await signIn(p, harness.app.url, email);
-  await p.getByText(/^Ready for no signal · updated \d{1,2}:\d{2}/).waitFor({ timeout: 30_000 });
-  return p;
-}
-
-async function signalOff(p: Page) {
-  await harness.browser.context.setOffline(true);
-  await harness.browser.context.route("**/*", cut);
-  onTestFinished(async () => {
-    await harness.browser.context.unroute("**/*", cut);
-    await harness.browser.context.setOffline(false);
-  });
-  await p.evaluate(() => window.dispatchEvent(new Event("offline")));
-}
-
-async function signalOn(p: Page) {
-  await harness.browser.context.unroute("**/*", cut);
-  await harness.browser.context.setOffline(false);
-  await p.evaluate(() => window.dispatchEvent(new Event("online")));
-}
+const { readyPhone, signalOff, signalOn } = phoneSignal(harness);
 
 /** Answers the pre-start's items as the usual morning, from its stop to its end; `valves` as given. */
 async function walkPreStart(p: Page, valves: "Yes" | "No" = "Yes") {
@@ -126,6 +104,22 @@ describe("rig cards (360×640)", () => {
       .getByRole("link", { name: /Pre-start/ })
       .first()
       .waitFor();
+  });
+
+  it("a glove's double tap answers one question, not the next one too", async () => {
+    const rig = (await Rig.findOne({ where: { code: "CF-03" } }))!;
+    const p = await readyPhone();
+    await p.goto(`${harness.app.url}/rigs/CF-03/cards`);
+    await p.getByLabel(/Hour meter now/).fill(String(rig.engineHours + 1));
+    await p.getByRole("button", { name: /^Pre-start/ }).click();
+    await p.waitForURL(/\/cases\/[^/]+\/walk$/);
+    await p.getByRole("button", { name: /Machine is shut down/ }).click();
+    await expect.poll(() => prompt(p).innerText()).toMatch(/drain plug/);
+    await p.getByRole("button", { name: /^Yes/ }).dblclick();
+    await expect.poll(() => prompt(p).innerText()).toMatch(/suction valve/);
+    await p.waitForTimeout(800);
+    expect(await prompt(p).innerText()).toMatch(/suction valve/);
+    expect(await p.getByLabel("Progress").innerText()).toMatch(/^Step 3/);
   });
 
   it("the supervisor sees what skipped care costs on the board and the cards on the rig page", async () => {

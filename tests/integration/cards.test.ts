@@ -9,7 +9,7 @@ import { loader as casesPage } from "~/routes/cases";
 import { caseDetail } from "~/services/case-detail.server";
 import { todaysFacts } from "~/services/cards.server";
 import type { SessionUser } from "~/services/guards.server";
-import { preStartWalk, walkThroughApi } from "../helpers/cases";
+import { PRE_START_ANSWERS, preStartWalk, walkThroughApi } from "../helpers/cases";
 import { resetDatabase } from "../helpers/db";
 import { args, requestAs, run } from "../helpers/requests";
 
@@ -55,6 +55,10 @@ describe("a rig card", () => {
     expect(await db().query("SELECT COUNT(*) AS n FROM board_rig_days", { type: QueryTypes.SELECT })).toEqual(boardRows);
     const table = await run(async () => casesPage(args(await requestAs("mo@cedarflats.example", "/cases"))));
     expect(table.data.rows.map((r: { id: string }) => r.id)).not.toContain(id);
+    // Asked for, the cards are a list of their own, with their own words.
+    const cards = await run(async () => casesPage(args(await requestAs("mo@cedarflats.example", "/cases?kind=card&rig=CF-07"))));
+    expect(cards.data.rows.map((r: { id: string }) => r.id)).toEqual([id]);
+    expect(cards.data.rows[0]).toMatchObject({ kind: "card", cardGaps: 0, guideTitle: "Pre-start" });
   });
 
   it("counts an item answered can't-do-it as a gap, and records no service for it", async () => {
@@ -76,17 +80,15 @@ describe("a card item that opens a guide", () => {
   it("starts the fix linked to the card; both case pages show the link", async () => {
     const cardId = await walkThroughApi(DANA, {
       ...preStartWalk(cf07.engineHours + 11),
-      answers: [
-        ["stop", "ACK"],
-        ["drain-plug", "YES"],
-        ["suction-valve", "YES"],
-        ["grease", "DONE"],
-        ["lubricator", "DONE"],
-        ["hoses", "YES"],
-        ["valves", "NO"],
-        ["valve-guide", "DONE"],
-        ["positions", "DONE"],
-      ],
+      // Valves that do not move: the valve guide, then carry on.
+      answers: PRE_START_ANSWERS.flatMap(([step, a]): [string, string][] =>
+        step === "valves"
+          ? [
+              ["valves", "NO"],
+              ["valve-guide", "DONE"],
+            ]
+          : [[step, a]],
+      ),
     });
     // Answering "no" to the valves item offers the valve guide; the fix it starts names the card.
     const linked = await startLinked(cardId);

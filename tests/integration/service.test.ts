@@ -80,6 +80,25 @@ describe("rig service", () => {
     expect(await line("Tank flush")).toMatchObject({ due: { status: "never" } });
   });
 
+  it("a card task records one service on a rig, and only tasks the company's cards record are offered", async () => {
+    const offered = (await page("mo@cedarflats.example")).data.cardTasks as string[];
+    // The shipped cards record grease points, the lubricator and freeze protection; nothing records an oil change.
+    expect(offered.sort()).toEqual(["freeze-protection", "grease", "lubricator"]);
+    const oil = (await line("Hydraulic oil and filter")).ruleId;
+    const taken = await post("mo@cedarflats.example", {
+      intent: "edit-rule",
+      ruleId: String(oil),
+      name: "Hydraulic oil and filter",
+      everyHours: "500",
+      task: "grease",
+    });
+    expect(taken.status).toBe(400);
+    expect(taken.data.result.error.task[0]).toMatch(/“Grease points” is already recorded by that card task/);
+    expect((await ServiceRule.findByPk(oil))!.task).toBeNull();
+    const unknown = await post("mo@cedarflats.example", { intent: "add-rule", name: "Oil", everyDays: "30", task: "oil-change" });
+    expect(unknown.data.result.error.task).toEqual(["Pick a card task from the list, or none."]);
+  });
+
   it("what needs doing shows on the crew's home and the supervisor's board, for their company only", async () => {
     const home = await run(async () => homeLoader(args(await requestAs("dana@cedarflats.example", "/"))));
     const toDo = home.data.service.map((l: { rigCode: string; name: string }) => `${l.rigCode} ${l.name}`);

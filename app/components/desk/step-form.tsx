@@ -188,43 +188,28 @@ export function StepForm({
         </select>
       </label>
       {card && (meta.kind === "check" || meta.kind === "task") ? (
-        <label className="block font-bold">
-          Done (or yes) records the service
-          <select value={meta.service ?? ""} onChange={(e) => set({ service: (e.target.value || undefined) as ServiceTask | undefined })} className={field}>
-            <option value="">None</option>
-            {SERVICE_TASK_KEYS.map((t) => (
-              <option key={t} value={t}>
-                {SERVICE_TASKS[t]}
-              </option>
-            ))}
-          </select>
-        </label>
+        <Choice
+          label="Done (or yes) records the service"
+          value={meta.service}
+          options={SERVICE_TASK_KEYS.map((t) => [t, SERVICE_TASKS[t]])}
+          onChange={(service) => set({ service })}
+        />
       ) : null}
       {card && meta.kind === "task" ? (
-        <label className="block font-bold">
-          Opens a guide on the spot (its Done then means “sorted, carry on”)
-          <select value={meta.opensGuide ?? ""} onChange={(e) => set({ opensGuide: e.target.value || undefined })} className={field}>
-            <option value="">None</option>
-            {guides.map((g) => (
-              <option key={g.slug} value={g.slug}>
-                {g.title}
-              </option>
-            ))}
-          </select>
-        </label>
+        <Choice
+          label="Opens a guide on the spot (its Done then means “sorted, carry on”)"
+          value={meta.opensGuide}
+          options={guides.map((g) => [g.slug, g.title])}
+          onChange={(opensGuide) => set({ opensGuide })}
+        />
       ) : null}
       {(card && (meta.kind === "check" || meta.kind === "task")) || (!card && meta.kind === "check") ? (
-        <label className="block font-bold">
-          {card ? "Tells the guides today that (yes or done: so)" : "Shows today's card answer for"}
-          <select value={meta.dayCheck ?? ""} onChange={(e) => set({ dayCheck: (e.target.value || undefined) as DayCheck | undefined })} className={field}>
-            <option value="">None</option>
-            {DAY_CHECK_KEYS.map((k) => (
-              <option key={k} value={k}>
-                {DAY_CHECKS[k]}
-              </option>
-            ))}
-          </select>
-        </label>
+        <Choice
+          label={card ? "Tells the guides today that (yes or done: so)" : "Shows today's card answer for"}
+          value={meta.dayCheck}
+          options={DAY_CHECK_KEYS.map((k) => [k, DAY_CHECKS[k]])}
+          onChange={(dayCheck) => set({ dayCheck })}
+        />
       ) : null}
       {meta.kind === "fixed" && !card ? (
         <label className="block font-bold">
@@ -265,5 +250,32 @@ export function StepForm({
         </label>
       ))}
     </div>
+  );
+}
+
+/** A choice that may be left at "None". */
+function Choice<T extends string>({
+  label,
+  value,
+  options,
+  onChange,
+}: {
+  label: string;
+  value?: T;
+  options: [T, string][];
+  onChange: (value: T | undefined) => void;
+}) {
+  return (
+    <label className="block font-bold">
+      {label}
+      <select value={value ?? ""} onChange={(e) => onChange((e.target.value || undefined) as T | undefined)} className={field}>
+        <option value="">None</option>
+        {options.map(([v, text]) => (
+          <option key={v} value={v}>
+            {text}
+          </option>
+        ))}
+      </select>
+    </label>
   );
 }

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { ANSWERS, CLOSE_OUTCOMES } from "../vocabulary";
+import { hourMeterReading } from "../rigs/service-forms";
 
 const uuid = z.string().uuid("must be a UUID");
 const isoTime = z.iso.datetime({ offset: true, message: "must be an ISO 8601 time, like 2026-06-01T14:05:00Z" });
@@ -56,11 +57,5 @@ export type CloseCaseInput = z.infer<typeof closeCaseSchema>;
 export const cardStartFormSchema = z.object({
   cardSlug: z.string({ error: "Pick a card." }).trim().min(1, "Pick a card.").max(80),
   caseId: uuid.optional(),
-  engineHours: z
-    .number({ error: "Give the hour meter reading as a number, like 2,315.5." })
-    .min(0, "Engine hours cannot be negative.")
-    .max(100_000, "Over 100,000 engine hours is not plausible.")
-    .nullable()
-    .optional()
-    .transform((v) => v ?? null),
+  engineHours: hourMeterReading,
 });

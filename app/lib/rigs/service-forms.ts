@@ -30,14 +30,17 @@ export const serviceRuleSchema = z
   .refine((r) => r.everyHours !== null || r.everyDays !== null, { path: ["everyHours"], message: "Give the engine hours, the days, or both." });
 export type ServiceRuleInput = z.infer<typeof serviceRuleSchema>;
 
+/** An hour-meter reading typed on a form (blank on a rig with no meter): a service done, a card started. */
+export const hourMeterReading = z
+  .number({ error: "Give the hour meter reading as a number, like 2,315.5." })
+  .min(0, "Engine hours cannot be negative.")
+  .max(100_000, "Over 100,000 engine hours is not plausible.")
+  .nullable()
+  .optional()
+  .transform((v) => v ?? null);
+
 /** Recording a service done: the engine hours read at the time (blank on a rig with no meter) and a note. */
 export const serviceDoneSchema = z.object({
-  engineHours: z
-    .number({ error: "Give the hour meter reading as a number, like 2,315.5." })
-    .min(0, "Engine hours cannot be negative.")
-    .max(100_000, "Over 100,000 engine hours is not plausible.")
-    .nullable()
-    .optional()
-    .transform((v) => v ?? null),
+  engineHours: hourMeterReading,
   note: z.string().trim().max(500, "Keep the note under 500 characters.").optional(),
 });
