@@ -75,6 +75,11 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
               <strong>{flagged.map((r) => r.rigCode).join(", ")}</strong> fail{flagged.length === 1 ? "s" : ""} more often than the rest of the fleet
               {flagged[0].ratePer100h !== null ? ` (${h(flagged[0].ratePer100h, 1)} vs ${h(flagged[0].fleetRatePer100h, 1)} per 100 engine hours)` : ""}.
             </p>
+          ) : window.rig && worst ? (
+            // One rig alone has no fleet to stand out from: say its rate, and where to compare it.
+            <p className="text-xl">
+              {worst.rigCode}: {h(worst.ratePer100h, 1)} faults per 100 engine hours. Choose “All rigs” to compare it with the fleet.
+            </p>
           ) : worst ? (
             <p className="text-xl">
               No rig stands out from the fleet. Highest rate: {worst.rigCode}, {h(worst.ratePer100h, 1)} per 100 h.

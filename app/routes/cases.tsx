@@ -2,7 +2,7 @@ import { Form, Link } from "react-router";
 import { PageTitle } from "~/components/ui/page-title";
 import { caseFiltersSchema, filtersToSearch, PAGE_SIZE, type CaseFilters } from "~/lib/cases/filters";
 import { formatDuration } from "~/lib/format";
-import { caseOutcomeLabel, OUTCOME_LABELS } from "~/lib/vocabulary";
+import { CARD_OUTCOME_LABELS, caseOutcomeLabel, OUTCOME_LABELS } from "~/lib/vocabulary";
 import { caseFilterOptions, listCases } from "~/services/case-list.server";
 import { requirePermission } from "~/services/guards.server";
 import { readQuery } from "~/services/read-request.server";
@@ -49,8 +49,8 @@ export default function Cases({ loaderData }: Route.ComponentProps) {
         </label>
         <FilterSelect label="Rig" name="rig" value={filters.rig} options={options.rigs.map((r) => [r, r])} />
         <FilterSelect label="Guide" name="guide" value={filters.guide} options={options.guides.map((g) => [g.slug, g.title])} />
-        <FilterSelect label="Cause" name="cause" value={filters.cause} options={causes.map((c) => [c.code, c.name])} />
-        <FilterSelect label="Outcome" name="outcome" value={filters.outcome} options={Object.entries(OUTCOME_LABELS)} />
+        {cards ? null : <FilterSelect label="Cause" name="cause" value={filters.cause} options={causes.map((c) => [c.code, c.name])} />}
+        <FilterSelect label="Outcome" name="outcome" value={filters.outcome} options={Object.entries(cards ? CARD_OUTCOME_LABELS : OUTCOME_LABELS)} />
         <FilterSelect label="Person" name="person" value={filters.person} options={options.people.map((p) => [String(p.id), p.name])} all="Anyone" />
         <label className="font-bold">
           From
@@ -68,7 +68,7 @@ export default function Cases({ loaderData }: Route.ComponentProps) {
       </Form>
       <p className="mt-3">
         <a href={`/cases/export?${filtersToSearch(filters, { page: undefined })}`} download className="font-bold">
-          Download these {total.toLocaleString("en-US")} cases as CSV
+          Download these {total.toLocaleString("en-US")} {cards ? "cards" : "cases"} as CSV
         </a>
       </p>
       <div className="mt-3 overflow-x-auto rounded-lg border-2 border-ink bg-paper" tabIndex={0} role="region" aria-label="Cases table">

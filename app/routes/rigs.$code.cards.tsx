@@ -1,5 +1,5 @@
 import { useEffect, useState } from "react";
-import { data, Form, redirect, useNavigation } from "react-router";
+import { data, Form, Link, redirect, useNavigation } from "react-router";
 import { serverOrPhone } from "~/components/offline/server-or-phone";
 import { OpenWalks } from "~/components/walk/open-walks";
 import { useTimes } from "~/components/use-time-zone";
@@ -7,7 +7,8 @@ import { cardStartFormSchema } from "~/lib/cases/schema";
 import { parseForm } from "~/lib/forms/parse";
 import { guideKind, inDayOrder } from "~/lib/guides/kinds";
 import { readingProblem } from "~/lib/rigs/service";
-import { lastHoursOnPhone, loadKit, openWalksOnPhone, startOnPhone } from "~/lib/walk/kept";
+import { cardsOnPhone, lastHoursOnPhone, loadKit, openWalksOnPhone, startOnPhone } from "~/lib/walk/kept";
+import { isoInZone, startOfDayIn } from "~/lib/format";
 import { isNoSignal } from "~/lib/walk/no-signal";
 import { cardStateLabel } from "~/lib/vocabulary";
 import { cardsOnRig, startOfToday, type CardDone } from "~/services/cards.server";
@@ -52,7 +53,14 @@ export async function clientLoader({ params, serverLoader }: Route.ClientLoaderA
   const engineHours = Math.max(page.rig.engineHours, lastHoursOnPhone(window.localStorage, code) ?? 0);
   const onServer = new Set(page.openWalks.map((w) => w.id));
   const onPhone = openWalksOnPhone(window.localStorage, code).filter((w) => !onServer.has(w.id));
-  return { ...page, rig: { ...page.rig, engineHours }, openWalks: [...onPhone, ...page.openWalks] };
+  // Cards walked on this phone today count at once, sent or not (the server's list may not have them yet).
+  const kit = loadKit(window.localStorage);
+  const zone = kit?.person.timeZone ?? "UTC";
+  const since = startOfDayIn(isoInZone(new Date(), zone).slice(0, 10), zone).toISOString();
+  const known = new Set(page.today.map((c) => c.id));
+  const mine = cardsOnPhone(window.localStorage, code, since, kit?.person.name ?? null).filter((c) => !known.has(c.id));
+  const today = [...mine, ...page.today].sort((a, b) => b.openedAt.localeCompare(a.openedAt));
+  return { ...page, today, rig: { ...page.rig, engineHours }, openWalks: [...onPhone, ...page.openWalks] };
 }
 
 export async function action({ request, params, context }: Route.ActionArgs) {
@@ -101,9 +109,12 @@ export async function clientAction({ request, params, serverAction }: Route.Clie
 
 export default function RigCards({ loaderData, actionData }: Route.ComponentProps) {
   const { rig, cards, today, openWalks, fromPhone } = loaderData;
-  // The latest of each card today, said on its button: a second pre-start is a choice, not an accident.
+  // Each card's state today, said on its button (a complete one first: a later stopped one does not hide it),
+  // and one under way is carried on rather than started twice.
   const lastToday = new Map<string, CardDone>();
-  for (const c of [...today].reverse()) lastToday.set(c.title, c);
+  for (const c of [...today].reverse())
+    if (c.outcome !== "open" && (c.outcome === "fixed" || lastToday.get(c.title)?.outcome !== "fixed")) lastToday.set(c.title, c);
+  const underWay = new Map(openWalks.map((w) => [w.guideTitle, w]));
   const times = useTimes();
   const [caseId, setCaseId] = useState(loaderData.caseId);
   useEffect(() => setCaseId(crypto.randomUUID()), [loaderData]);
@@ -152,28 +163,41 @@ export default function RigCards({ loaderData, actionData }: Route.ComponentProp
           <ul className="grid gap-2 sm:grid-cols-2">
             {cards.map((c) => {
               const mine = opening === c.slug;
+              const done = lastToday.get(c.title);
+              const open = underWay.get(c.title);
+              const note = done ? (
+                <span className="text-base font-bold">
+                  Today: {cardStateLabel(done.outcome, done.gaps).toLowerCase()} (started {times.time(done.openedAt)}
+                  {done.by ? ` by ${done.by}` : ""})
+                </span>
+              ) : null;
               return (
                 <li key={c.slug}>
-                  <button
-                    type="submit"
-                    name="cardSlug"
-                    value={c.slug}
-                    disabled={opening !== null}
-                    aria-busy={mine}
-                    className={`flex min-h-16 w-full flex-col items-start justify-center rounded-lg border-2 px-4 py-2 text-left ${
-                      mine ? "border-4 border-go bg-caution text-ink" : "border-ink bg-paper"
-                    }`}
-                  >
-                    <span className="text-xl font-bold">{mine ? `Opening ${c.title}…` : c.title}</span>
-                    {lastToday.has(c.title) ? (
-                      <span className="text-base font-bold">
-                        Today: {cardStateLabel(lastToday.get(c.title)!.outcome, lastToday.get(c.title)!.gaps).toLowerCase()} at{" "}
-                        {times.time(lastToday.get(c.title)!.openedAt)}
-                        {lastToday.get(c.title)!.by ? ` by ${lastToday.get(c.title)!.by}` : ""}
-                      </span>
-                    ) : null}
-                    <span className="text-base">{c.summary}</span>
-                  </button>
+                  {open ? (
+                    <Link
+                      to={`/cases/${open.id}/walk`}
+                      className="flex min-h-16 w-full flex-col items-start justify-center rounded-lg border-4 border-go bg-paper px-4 py-2 text-left text-ink no-underline"
+                    >
+                      <span className="text-xl font-bold">Carry on: {c.title}</span>
+                      <span className="text-base">Under way since {times.time(open.openedAt)}</span>
+                      {note}
+                    </Link>
+                  ) : (
+                    <button
+                      type="submit"
+                      name="cardSlug"
+                      value={c.slug}
+                      disabled={opening !== null}
+                      aria-busy={mine}
+                      className={`flex min-h-16 w-full flex-col items-start justify-center rounded-lg border-2 px-4 py-2 text-left ${
+                        mine ? "border-4 border-go bg-caution text-ink" : "border-ink bg-paper"
+                      }`}
+                    >
+                      <span className="text-xl font-bold">{mine ? `Opening ${c.title}…` : c.title}</span>
+                      {note}
+                      <span className="text-base">{c.summary}</span>
+                    </button>
+                  )}
                 </li>
               );
             })}
@@ -184,9 +208,8 @@ export default function RigCards({ loaderData, actionData }: Route.ComponentProp
         <h2 id="today-h" className="text-xl font-bold">
           Cards on {rig.code} today
         </h2>
-        {fromPhone ? (
-          <p className="mt-2 text-lg">No signal: the cards saved today show when there is signal.</p>
-        ) : today.length ? (
+        {fromPhone ? <p className="mt-2 text-lg">No signal: cards walked on this phone are listed; others saved today show when there is signal.</p> : null}
+        {today.length ? (
           <ul className="mt-2 space-y-1 text-lg">
             {today.map((c) => (
               <li key={c.id}>
@@ -196,7 +219,7 @@ export default function RigCards({ loaderData, actionData }: Route.ComponentProp
               </li>
             ))}
           </ul>
-        ) : (
+        ) : fromPhone ? null : (
           <p className="mt-2 text-lg">No card saved on {rig.code} today yet (cards kept on a phone without signal show once sent).</p>
         )}
       </section>

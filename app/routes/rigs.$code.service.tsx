@@ -206,7 +206,8 @@ function ServiceCard({
               <input
                 name="engineHours"
                 inputMode="decimal"
-                defaultValue={String(rig.engineHours)}
+                // Left empty: the last reading offered as the answer would be saved unread with one tap.
+                placeholder={`last ${fmt(rig.engineHours, 1)}`}
                 aria-invalid={hoursError ? true : undefined}
                 className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink bg-paper px-3 text-lg"
               />

@@ -98,12 +98,18 @@ describe("rig cards (360×640)", () => {
     expect(await p.getByRole("button", { name: /^No/ }).innerText()).toMatch(/today's card/);
     // It is never taken silently: the step waits for a tap.
     expect(await prompt(p).innerText()).toMatch(/valve handle move/);
-    // The card is still open, to carry on from the rig's cards.
+    // The card is still open: the rig's cards carry it on (no second pre-start), and it carries on the open guide.
     await p.goto(`${harness.app.url}/rigs/CF-11/cards`);
+    expect(await p.getByRole("button", { name: /^Pre-start/ }).count()).toBe(0);
+    await p.getByRole("link", { name: /^Carry on: Pre-start/ }).click();
+    await p.waitForURL(new RegExp(`/cases/${cardId}/walk$`));
     await p
-      .getByRole("link", { name: /Pre-start/ })
-      .first()
+      .getByRole("list", { name: "Opened from this card" })
+      .getByText(/Valve stuck or plugged: open/)
       .waitFor();
+    expect(await p.getByRole("button", { name: "Open the guide again" }).count()).toBe(0);
+    await p.getByRole("link", { name: "Carry on with the guide" }).click();
+    await p.waitForURL(new RegExp(`/cases/${fixId}/walk$`));
   });
 
   it("a glove's double tap answers one question, not the next one too", async () => {
@@ -132,7 +138,7 @@ describe("rig cards (360×640)", () => {
     expect(await care.innerText()).toMatch(/With a complete pre-start[\s\S]*Missing or incomplete pre-start/);
     expect(await p.getByText("This is an association, not proof", { exact: false }).count()).toBe(1);
     const weeks = p.getByRole("region", { name: "Pre-starts per rig and week" });
-    expect(await weeks.innerText()).toMatch(/CF-07\s+1 of 1/);
+    expect(await weeks.innerText()).toMatch(/CF-07\s+1 of 1 days/);
     expect(await p.getByRole("region", { name: "Fault rate by service overdue" }).count()).toBe(1);
     // The board's own form, submitted in the browser with the rig left on "All rigs".
     await p

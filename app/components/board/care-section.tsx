@@ -122,7 +122,7 @@ export function CareSection({ care }: { care: CareFigures }) {
                 </th>
                 {r.cells.map((c) => (
                   <td key={c.week} className={`p-2 ${c.preStartDays < c.workedDays ? "font-bold" : ""}`}>
-                    {c.workedDays ? `${c.preStartDays} of ${c.workedDays}` : "—"}
+                    {c.workedDays ? `${c.preStartDays} of ${c.workedDays} days` : "—"}
                     {c.otherCards ? <span className="block text-sm font-normal">+{c.otherCards} other cards</span> : null}
                   </td>
                 ))}

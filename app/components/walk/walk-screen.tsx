@@ -8,7 +8,7 @@ import { mergeDayFacts, type DayFacts } from "~/lib/walk/day-facts";
 import type { Guide } from "~/lib/guides/schema";
 import { guideSteps } from "~/lib/walk/next-step";
 import { replayFrom, replayWalk } from "~/lib/walk/replay";
-import { outcomeLabel, type CaseKind, type Outcome } from "~/lib/vocabulary";
+import { CARD_OUTCOME_LABELS, outcomeLabel, type CaseKind, type Outcome } from "~/lib/vocabulary";
 import { appendEvent, loadRecord, mergeServerEvents, saveRecord, type QueuedEvent, type WalkRecord } from "~/lib/walk/queue";
 import { MAX_PHOTO_BYTES } from "~/lib/cases/limits";
 import { dayFactsOnPhone, fixesFromCardOnPhone, lastHoursOnPhone, noteHoursOnPhone, PHOTO_WAIT_CAP_BYTES, waitingPhotoBytes } from "~/lib/walk/kept";
@@ -196,7 +196,7 @@ export function WalkScreen({
         )}
       </header>
       {closedElsewhere || stoppedHere ? (
-        <ClosedCard outcome={stoppedHere ? "abandoned" : closedAs!} synced={stoppedHere ? !!record.closeResult : true} />
+        <ClosedCard outcome={stoppedHere ? "abandoned" : closedAs!} synced={stoppedHere ? !!record.closeResult : true} kind={kind} />
       ) : atEnd ? (
         <EndCard
           kind={kind}
@@ -317,6 +317,7 @@ function OpenGuide({
   opened: { caseId: string; title: string; outcome: string }[];
 }) {
   const [fixId] = useState(() => crypto.randomUUID());
+  const still = opened.find((f) => f.outcome === "open");
   return (
     <Form method="post" action={`/rigs/${rigCode}/fix`} className="mb-3">
       <input type="hidden" name="guideSlug" value={guideSlug} />
@@ -332,31 +333,45 @@ function OpenGuide({
           ))}
         </ul>
       ) : null}
-      <button type="submit" className="min-h-16 w-full rounded-lg border-4 border-ink bg-caution px-3 text-xl font-bold text-ink">
-        {opened.length ? "Open the guide again" : "Open the guide now"}
-      </button>
+      {still ? (
+        // One guide at a time from a card: an open one is carried on, not started twice.
+        <Link
+          to={`/cases/${still.caseId}/walk`}
+          className="flex min-h-16 w-full items-center justify-center rounded-lg border-4 border-ink bg-caution px-3 text-xl font-bold text-ink no-underline"
+        >
+          Carry on with the guide
+        </Link>
+      ) : (
+        <button type="submit" className="min-h-16 w-full rounded-lg border-4 border-ink bg-caution px-3 text-xl font-bold text-ink">
+          {opened.length ? "Open the guide again" : "Open the guide now"}
+        </button>
+      )}
       <p className="mt-1 text-base">This card stays open: come back to it from the guide&apos;s end, or from the rig&apos;s cards.</p>
     </Form>
   );
 }
 
 /** A closed case (stopped here, or finished elsewhere): shown as it ended, with nothing to answer. */
-function ClosedCard({ outcome, synced }: { outcome: Outcome; synced: boolean }) {
+function ClosedCard({ outcome, synced, kind }: { outcome: Outcome; synced: boolean; kind: CaseKind }) {
+  const noun = kind === "card" ? "card" : "case";
+  const label = kind === "card" ? CARD_OUTCOME_LABELS[outcome] : outcomeLabel(outcome);
   return (
     <section aria-labelledby="closed-title" className="rounded-lg border-4 border-ink bg-paper p-4">
       <h1 id="closed-title" tabIndex={-1} data-step-heading className="text-2xl font-bold">
-        {outcome === "abandoned" ? "Stopped without finishing" : `This case is closed (${outcomeLabel(outcome).toLowerCase()})`}
+        {outcome === "abandoned" ? "Stopped without finishing" : `This ${noun} is closed (${label.toLowerCase()})`}
       </h1>
       <p className="mt-2 text-lg">
         {outcome === "abandoned"
           ? synced
-            ? "The case is saved as abandoned and takes no more answers."
-            : "It will be saved as abandoned when this phone has signal. It takes no more answers."
-          : "It takes no more answers. If the rig still acts up, start a new fix."}
+            ? `The ${noun} is saved as stopped and takes no more answers.`
+            : `It will be saved as stopped when this phone has signal. It takes no more answers.`
+          : kind === "card"
+            ? "It takes no more answers. Start the card again from the rig's cards if it has to be done again."
+            : "It takes no more answers. If the rig still acts up, start a new fix."}
       </p>
       <p className="mt-4">
         <Link to="/" className="inline-flex min-h-14 items-center rounded-lg border-2 border-ink bg-paper px-4 text-lg font-bold no-underline">
-          Start a new fix
+          {kind === "card" ? "Back to the rigs" : "Start a new fix"}
         </Link>
       </p>
     </section>

@@ -7,6 +7,7 @@ import type { Role } from "../people/roles";
 import { OUTCOME_LABELS, type CaseKind, type Outcome } from "../vocabulary";
 import { guideKind } from "../guides/kinds";
 import { dayFacts, type DayFacts } from "./day-facts";
+import { cardGaps } from "./held-answers";
 import { closePending, loadRecord, saveRecord, type KeyValueStore, type QueuedEvent, type WalkRecord } from "./queue";
 
 /**
@@ -299,4 +300,23 @@ export function fixesFromCardOnPhone(
     const close = loadRecord(store, id).close;
     return [{ caseId: id, title: view.guide.title, outcome: close ? OUTCOME_LABELS[close.outcome].toLowerCase() : "open" }];
   });
+}
+
+/** Cards this phone walked on a rig since `since` (the company's day start), as the cards page lists them. */
+export function cardsOnPhone(
+  store: KeyValueStore & { length: number; key(index: number): string | null },
+  rigCode: string,
+  since: string,
+  by: string | null,
+): { id: string; title: string; outcome: Outcome; gaps: number | null; openedAt: string; engineHours: number | null; by: string | null }[] {
+  return keptCaseIds(store)
+    .flatMap((id) => {
+      const view = loadView(store, id);
+      if (!view || view.kind !== "card" || view.rig.code !== rigCode || view.openedAt < since) return [];
+      const record = loadRecord(store, id);
+      const outcome: Outcome = record.close?.outcome ?? "open";
+      const gaps = record.close ? cardGaps(record.events) : null;
+      return [{ id, title: view.guide.title, outcome, gaps, openedAt: view.openedAt, engineHours: record.start?.engineHours ?? null, by }];
+    })
+    .sort((a, b) => b.openedAt.localeCompare(a.openedAt));
 }

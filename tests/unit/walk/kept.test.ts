@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { readFileSync } from "node:fs";
 import {
+  cardsOnPhone,
   dayFactsOnPhone,
   lastHoursOnPhone,
   noteHoursOnPhone,
@@ -206,6 +207,10 @@ describe("a rig card on the phone with no signal", () => {
       "grease-done": { value: true, at: "2026-12-02T09:33:00.000Z", by: "Dana Ortiz", card: "Tiny card" },
       "valves-free": { value: false, at: "2026-12-02T09:34:00.000Z", by: "Dana Ortiz", card: "Tiny card" },
     });
+    // The cards page lists the phone's own card at once, under way.
+    expect(cardsOnPhone(store, "CF-07", "2026-12-02T07:00:00.000Z", "Dana Ortiz")).toEqual([
+      { id: "card-1", title: "Tiny card", outcome: "open", gaps: null, openedAt: NOW.toISOString(), engineHours: 815.5, by: "Dana Ortiz" },
+    ]);
     // A card from before the day's start says nothing today; another rig's says nothing here.
     expect(dayFactsOnPhone(store, "CF-07", "2026-12-02T10:00:00.000Z", null)).toEqual({});
     expect(dayFactsOnPhone(store, "CF-11", "2026-12-02T07:00:00.000Z", null)).toEqual({});
