@@ -1,6 +1,6 @@
 import type { Page } from "playwright-core";
 import { describe, expect, it } from "vitest";
-import { GuideRecord } from "../../db/index";
+import { GuideRecord, Rig } from "../../db/index";
 import { appAndBrowserForFile, signIn, startCaseFromPage } from "../helpers/app";
 import { axeFindings } from "../helpers/axe";
 
@@ -35,7 +35,12 @@ describe("every page at 360×640 passes axe with AAA contrast, has a title and o
     await signIn(p, harness.app.url, "dana@cedarflats.example");
     // A walk-through of its own, started through the API as the fix page does.
     const started = { id: await startCaseFromPage(p, "CF-07", "lost-prime") };
+    // A rig card too, at its shut-down stop (read with the hour meter as it starts).
+    const rig = (await Rig.findOne({ where: { code: "CF-07" } }))!;
+    const card = await startCaseFromPage(p, "CF-07", "pre-start", rig.engineHours);
     const pages = [
+      "/rigs/CF-07/cards",
+      `/cases/${card}/walk`,
       "/",
       "/rigs",
       "/rigs/CF-07",
