@@ -67,6 +67,9 @@ export function startOfDayIn(day: string, timeZone: string): Date {
   return at;
 }
 
+/** The instant today (as the zone's calendar reads `now`) began: where "today's cards" start. */
+export const startOfTodayIn = (timeZone: string, now = new Date()): Date => startOfDayIn(isoInZone(now, timeZone).slice(0, 10), timeZone);
+
 /** Is this an IANA zone this runtime knows? */
 export function isTimeZone(zone: string): boolean {
   try {

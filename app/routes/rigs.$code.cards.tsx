@@ -7,8 +7,8 @@ import { cardStartFormSchema } from "~/lib/cases/schema";
 import { parseForm } from "~/lib/forms/parse";
 import { guideKind, inDayOrder } from "~/lib/guides/kinds";
 import { readingProblem } from "~/lib/rigs/service";
-import { cardsOnPhone, lastHoursOnPhone, loadKit, openWalksOnPhone, startOnPhone } from "~/lib/walk/kept";
-import { isoInZone, startOfDayIn } from "~/lib/format";
+import { cardsOnPhone, lastHoursOnPhone, loadKit, startOnPhone, withWalksOnPhone } from "~/lib/walk/kept";
+import { startOfTodayIn } from "~/lib/format";
 import { isNoSignal } from "~/lib/walk/no-signal";
 import { cardStateLabel } from "~/lib/vocabulary";
 import { cardsOnRig, startOfToday, type CardDone } from "~/services/cards.server";
@@ -51,16 +51,13 @@ export async function clientLoader({ params, serverLoader }: Route.ClientLoaderA
   });
   // The newest reading this phone knows (a card or fix finished here with no signal counts).
   const engineHours = Math.max(page.rig.engineHours, lastHoursOnPhone(window.localStorage, code) ?? 0);
-  const onServer = new Set(page.openWalks.map((w) => w.id));
-  const onPhone = openWalksOnPhone(window.localStorage, code).filter((w) => !onServer.has(w.id));
   // Cards walked on this phone today count at once, sent or not (the server's list may not have them yet).
   const kit = loadKit(window.localStorage);
-  const zone = kit?.person.timeZone ?? "UTC";
-  const since = startOfDayIn(isoInZone(new Date(), zone).slice(0, 10), zone).toISOString();
+  const since = startOfTodayIn(kit?.person.timeZone ?? "UTC").toISOString();
   const known = new Set(page.today.map((c) => c.id));
   const mine = cardsOnPhone(window.localStorage, code, since, kit?.person.name ?? null).filter((c) => !known.has(c.id));
   const today = [...mine, ...page.today].sort((a, b) => b.openedAt.localeCompare(a.openedAt));
-  return { ...page, today, rig: { ...page.rig, engineHours }, openWalks: [...onPhone, ...page.openWalks] };
+  return { ...page, today, rig: { ...page.rig, engineHours }, openWalks: withWalksOnPhone(window.localStorage, code, page.openWalks) };
 }
 
 export async function action({ request, params, context }: Route.ActionArgs) {
@@ -92,7 +89,8 @@ export async function clientAction({ request, params, serverAction }: Route.Clie
     if (submission.status !== "success") return { result: submission.reply(), problem: null };
     const code = params.code.toUpperCase();
     const kept = kit.rigs.find((r) => r.code === code);
-    const last = Math.max(kept?.engineHours ?? 0, lastHoursOnPhone(window.localStorage, code) ?? 0);
+    // The kit's reading, raised by any entered on this phone since.
+    const last = lastHoursOnPhone(window.localStorage, code) ?? 0;
     const problem = kept ? readingProblem(submission.value.engineHours, { hasHourMeter: kept.hasHourMeter, engineHours: last }) : null;
     if (problem) return { result: submission.reply({ fieldErrors: { engineHours: [problem] } }), problem: null };
     const started = startOnPhone(window.localStorage, kit, {

@@ -4,7 +4,7 @@ import { z } from "zod";
 import { serverOrPhone } from "~/components/offline/server-or-phone";
 import { OpenWalks } from "~/components/walk/open-walks";
 import { useGuideSearch } from "~/components/walk/use-guide-search";
-import { loadKit, openWalksOnPhone, startOnPhone } from "~/lib/walk/kept";
+import { loadKit, startOnPhone, withWalksOnPhone } from "~/lib/walk/kept";
 import { isNoSignal } from "~/lib/walk/no-signal";
 import { guideKind } from "~/lib/guides/kinds";
 import type { loader as shellLoader } from "./shell";
@@ -44,9 +44,7 @@ export async function clientLoader({ params, serverLoader }: Route.ClientLoaderA
       caseId: crypto.randomUUID(),
     };
   });
-  const onServer = new Set(page.openWalks.map((w) => w.id));
-  const onPhone = openWalksOnPhone(window.localStorage, code).filter((w) => !onServer.has(w.id));
-  return { ...page, openWalks: [...onPhone, ...page.openWalks] };
+  return { ...page, openWalks: withWalksOnPhone(window.localStorage, code, page.openWalks) };
 }
 
 const optionalId = z

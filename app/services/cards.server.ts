@@ -1,9 +1,10 @@
 import { Op } from "sequelize";
-import { startOfDayIn, isoInZone } from "~/lib/format";
+import { startOfTodayIn } from "~/lib/format";
 import type { DayCheck } from "~/lib/guides/kinds";
 import type { Guide } from "~/lib/guides/schema";
 import { dayFacts, type DayFacts } from "~/lib/walk/day-facts";
 import type { Outcome } from "~/lib/vocabulary";
+import { guideVersion } from "./case-detail.server";
 import { Case, CaseEvent, GuideRecord, GuideVersion, User } from "./db.server";
 import type { SessionUser } from "./guards.server";
 import { ownedBy } from "./tenancy.server";
@@ -20,25 +21,21 @@ export interface CardDone {
 }
 
 type WithVersion = Case & { guideVersion: GuideVersion & { guide: GuideRecord }; opener: User | null };
-const withVersion = [
-  {
-    model: GuideVersion,
-    as: "guideVersion",
-    attributes: ["id", "number", "definition"],
-    include: [{ model: GuideRecord, as: "guide", attributes: ["title"] }],
-  },
+// The card's title and who walked it; a definition, when needed, comes from the settled-version cache.
+const withTitle = [
+  { model: GuideVersion, as: "guideVersion", attributes: ["id"], include: [{ model: GuideRecord, as: "guide", attributes: ["title"] }] },
   { model: User, as: "opener", attributes: ["name"] },
 ];
 
 /** The start of today where the company works. */
-export const startOfToday = (user: SessionUser, now = new Date()) => startOfDayIn(isoInZone(now, user.timeZone).slice(0, 10), user.timeZone);
+export const startOfToday = (user: SessionUser, now = new Date()) => startOfTodayIn(user.timeZone, now);
 
 /** The cards walked on a rig since a time (today, by default), newest first. */
 export async function cardsOnRig(user: SessionUser, rigId: number, opts: { since?: Date; limit?: number } = {}): Promise<CardDone[]> {
   const rows = (await Case.findAll({
     where: ownedBy(user, { rigId, kind: "card", ...(opts.since ? { openedAt: { [Op.gte]: opts.since } } : {}) }),
     attributes: ["id", "outcome", "cardGaps", "openedAt", "engineHours"],
-    include: withVersion,
+    include: withTitle,
     order: [["openedAt", "DESC"]],
     limit: opts.limit ?? 20,
   })) as WithVersion[];
@@ -62,19 +59,18 @@ export async function todaysFacts(user: SessionUser, rigId: number, guide: Guide
   if (!asked.size) return {};
   const cards = (await Case.findAll({
     where: ownedBy(user, { rigId, kind: "card", openedAt: { [Op.gte]: startOfToday(user, now), [Op.lte]: now } }),
-    attributes: ["id"],
-    include: withVersion,
+    attributes: ["id", "guideVersionId"],
+    include: withTitle,
   })) as WithVersion[];
   if (!cards.length) return {};
-  const events = await CaseEvent.findAll({
-    where: { caseId: cards.map((c) => c.id) },
-    attributes: ["caseId", "stepId", "answer", "at"],
-    order: [["seq", "ASC"]],
-  });
+  const [events, definitions] = await Promise.all([
+    CaseEvent.findAll({ where: { caseId: cards.map((c) => c.id) }, attributes: ["caseId", "stepId", "answer", "at"], order: [["seq", "ASC"]] }),
+    Promise.all(cards.map(async (c) => (await guideVersion(c.guideVersionId)).definition)),
+  ]);
   const facts = dayFacts(
-    cards.map((c) => ({
+    cards.map((c, i) => ({
       title: c.guideVersion.guide.title,
-      definition: c.guideVersion.definition,
+      definition: definitions[i],
       by: c.opener?.name ?? null,
       events: events.filter((e) => e.caseId === c.id).map((e) => ({ stepId: e.stepId, answer: e.answer, at: e.at.toISOString() })),
     })),

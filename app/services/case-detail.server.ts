@@ -11,7 +11,7 @@ type VersionInfo = { id: number; number: number; guideId: number; definition: Gu
 // once per process rather than 12 KB of definition for every batch of answers.
 const versions = new Map<number, VersionInfo>();
 
-async function guideVersion(id: number): Promise<VersionInfo> {
+export async function guideVersion(id: number): Promise<VersionInfo> {
   let version = versions.get(id);
   if (!version) {
     const row = await GuideVersion.findByPk(id, { attributes: ["id", "number", "definition", "guideId", "status"] });

@@ -33,15 +33,21 @@ export async function deskGuide(user: SessionUser, guideId: number) {
   return guide;
 }
 
+/** A version's kind read in SQL, without its definition (`table`: the alias when the versions are included). */
+const kindOf = (table?: string) =>
+  [sequelize.literal(`JSON_VALUE(${table ? `\`${table}\`.` : ""}\`definition\`, '$.kind')`), "kind"] as [ReturnType<typeof sequelize.literal>, string];
+/** Every version of a guide has the same kind: a card, or a guide. */
+const kindOfVersions = (versions: GuideVersion[]): GuideKind => (versions.some((v) => v.get("kind") === "card") ? "card" : "guide");
+
 /** A guide for the versions page: what it is, and every version newest first (plain data). */
 export async function deskGuideVersions(user: SessionUser, guideId: number) {
   const guide = await deskGuide(user, guideId);
   const versions = await GuideVersion.findAll({
     where: { guideId: guide.id },
-    attributes: ["number", "status", "changeNote", "reviewComment", "updatedAt", [sequelize.literal("JSON_VALUE(`definition`, '$.kind')"), "kind"]],
+    attributes: ["number", "status", "changeNote", "reviewComment", "updatedAt", kindOf()],
     order: [["number", "DESC"]],
   });
-  const kind: GuideKind = versions.some((v) => v.get("kind") === "card") ? "card" : "guide";
+  const kind = kindOfVersions(versions);
   return {
     guide: { id: guide.id, title: guide.title, slug: guide.slug, builtIn: guide.companyId === null, publishedVersion: guide.publishedVersion, kind },
     versions: versions.map((v) => ({
@@ -71,7 +77,7 @@ export async function deskList(user: SessionUser) {
         model: GuideVersion,
         as: "versions",
         // The kind from each version's definition (every version of one guide has the same kind).
-        attributes: ["number", "status", "updatedAt", [sequelize.literal("JSON_VALUE(`versions`.`definition`, '$.kind')"), "kind"]],
+        attributes: ["number", "status", "updatedAt", kindOf("versions")],
       },
     ],
     order: [["title", "ASC"]],
@@ -79,7 +85,7 @@ export async function deskList(user: SessionUser) {
   const replaced = replacedBuiltIns(guides);
   return guides.map((g) => ({
     id: g.id,
-    kind: ((g as GuideRecord & { versions: GuideVersion[] }).versions ?? []).some((v) => v.get("kind") === "card") ? ("card" as const) : ("guide" as const),
+    kind: kindOfVersions((g as GuideRecord & { versions: GuideVersion[] }).versions ?? []),
     slug: g.slug,
     title: g.title,
     builtIn: g.companyId === null,

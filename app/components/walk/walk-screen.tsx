@@ -3,7 +3,7 @@ import type { AgitatorDirection } from "~/lib/rigs/schema";
 import { Form, Link, useRouteLoaderData } from "react-router";
 import type { loader as shellLoader } from "~/routes/shell";
 import { useTimes } from "~/components/use-time-zone";
-import { isoInZone, startOfDayIn } from "~/lib/format";
+import { startOfTodayIn } from "~/lib/format";
 import { mergeDayFacts, type DayFacts } from "~/lib/walk/day-facts";
 import type { Guide } from "~/lib/guides/schema";
 import { guideSteps } from "~/lib/walk/next-step";
@@ -94,7 +94,7 @@ export function WalkScreen({
   const asksFacts = useMemo(() => kind === "fix" && Object.values(guide.states).some((st) => st.meta.dayCheck), [guide, kind]);
   useEffect(() => {
     if (!asksFacts) return;
-    const since = startOfDayIn(isoInZone(new Date(), zone).slice(0, 10), zone).toISOString();
+    const since = startOfTodayIn(zone).toISOString();
     setFacts(mergeDayFacts(serverDayFacts ?? {}, dayFactsOnPhone(window.localStorage, rig.code, since, shell?.user.name ?? null)));
   }, [asksFacts, serverDayFacts, rig.code, zone, shell?.user.name]);
 

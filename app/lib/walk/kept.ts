@@ -264,6 +264,16 @@ export function openWalksOnPhone(
     .sort((a, b) => b.openedAt.localeCompare(a.openedAt));
 }
 
+/** The server's open walks on a rig with this phone's own first (those it has not sent, or not heard of). */
+export function withWalksOnPhone<T extends { id: string }>(
+  store: KeyValueStore & { length: number; key(index: number): string | null },
+  rigCode: string,
+  fromServer: T[],
+): (T | ReturnType<typeof openWalksOnPhone>[number])[] {
+  const onServer = new Set(fromServer.map((w) => w.id));
+  return [...openWalksOnPhone(store, rigCode).filter((w) => !onServer.has(w.id)), ...fromServer];
+}
+
 /** The rig of the newest walk started on this phone after `since`, if any. */
 export function lastRigOnPhone(store: KeyValueStore & { length: number; key(index: number): string | null }, since: string): string | null {
   const newest = keptCaseIds(store)
