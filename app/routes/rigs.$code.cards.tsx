@@ -1,6 +1,6 @@
 import { useEffect, useState } from "react";
 import { data, Form, Link, redirect, useNavigation } from "react-router";
-import { serverOrPhone } from "~/components/offline/server-or-phone";
+import { serverOrPhoneAction, serverOrPhoneRig } from "~/components/offline/server-or-phone";
 import { OpenWalks } from "~/components/walk/open-walks";
 import { useTimes } from "~/components/use-time-zone";
 import { cardStartFormSchema } from "~/lib/cases/schema";
@@ -9,7 +9,6 @@ import { guideKind, inDayOrder } from "~/lib/guides/kinds";
 import { readingProblem } from "~/lib/rigs/service";
 import { cardsOnPhone, lastHoursOnPhone, loadKit, startOnPhone, withWalksOnPhone } from "~/lib/walk/kept";
 import { startOfTodayIn } from "~/lib/format";
-import { isNoSignal } from "~/lib/walk/no-signal";
 import { cardStateLabel } from "~/lib/vocabulary";
 import { cardsOnRig, startOfToday, type CardDone } from "~/services/cards.server";
 import { openWalksOn, startCase } from "~/services/cases.server";
@@ -37,18 +36,14 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
 /** With no signal the cards come from what the phone keeps; what was done today waits for signal. */
 export async function clientLoader({ params, serverLoader }: Route.ClientLoaderArgs) {
   const code = params.code.toUpperCase();
-  const page = await serverOrPhone(serverLoader, (kit) => {
-    const rig = kit.rigs.find((r) => r.code === code);
-    if (!rig) return null;
-    return {
-      rig: { code: rig.code, name: rig.name, retired: false, hasHourMeter: rig.hasHourMeter, engineHours: rig.engineHours },
-      cards: inDayOrder(kit.guides.filter((g) => guideKind(g.definition) === "card").map((g) => ({ slug: g.slug, title: g.title, summary: g.summary }))),
-      today: [] as CardDone[],
-      openWalks: [],
-      fromPhone: true,
-      caseId: crypto.randomUUID(),
-    };
-  });
+  const page = await serverOrPhoneRig(serverLoader, code, (rig, kit) => ({
+    rig: { code: rig.code, name: rig.name, retired: false, hasHourMeter: rig.hasHourMeter, engineHours: rig.engineHours },
+    cards: inDayOrder(kit.guides.filter((g) => guideKind(g.definition) === "card").map((g) => ({ slug: g.slug, title: g.title, summary: g.summary }))),
+    today: [] as CardDone[],
+    openWalks: [],
+    fromPhone: true,
+    caseId: crypto.randomUUID(),
+  }));
   // The newest reading this phone knows (a card or fix finished here with no signal counts).
   const engineHours = Math.max(page.rig.engineHours, lastHoursOnPhone(window.localStorage, code) ?? 0);
   // Cards walked on this phone today count at once, sent or not (the server's list may not have them yet).
@@ -77,32 +72,32 @@ export async function action({ request, params, context }: Route.ActionArgs) {
 }
 
 /** With no signal the phone starts the card itself, with the reading, and sends it later. */
-export async function clientAction({ request, params, serverAction }: Route.ClientActionArgs) {
-  const form = await request.clone().formData();
-  try {
-    return await serverAction();
-  } catch (error) {
-    if (!isNoSignal(error)) throw error;
-    const kit = loadKit(window.localStorage);
-    if (!kit) return { result: null, problem: "No signal, and this phone has not kept the cards yet. Open Tankside once where there is signal." };
-    const submission = parseForm(form, cardStartFormSchema);
-    if (submission.status !== "success") return { result: submission.reply(), problem: null };
-    const code = params.code.toUpperCase();
-    const kept = kit.rigs.find((r) => r.code === code);
-    // The kit's reading, raised by any entered on this phone since.
-    const last = lastHoursOnPhone(window.localStorage, code) ?? 0;
-    const problem = kept ? readingProblem(submission.value.engineHours, { hasHourMeter: kept.hasHourMeter, engineHours: last }) : null;
-    if (problem) return { result: submission.reply({ fieldErrors: { engineHours: [problem] } }), problem: null };
-    const started = startOnPhone(window.localStorage, kit, {
-      caseId: submission.value.caseId ?? crypto.randomUUID(),
-      rigCode: code,
-      guideSlug: submission.value.cardSlug,
-      now: new Date(),
-      engineHours: submission.value.engineHours ?? undefined,
-    });
-    if (!started.ok) return { result: null, problem: started.problem };
-    return redirect(`/cases/${started.caseId}/walk`);
-  }
+export function clientAction({ request, params, serverAction }: Route.ClientActionArgs) {
+  const noKit = { result: null, problem: "No signal, and this phone has not kept the cards yet. Open Tankside once where there is signal." };
+  return serverOrPhoneAction(
+    request,
+    serverAction,
+    (kit, form) => {
+      const submission = parseForm(form, cardStartFormSchema);
+      if (submission.status !== "success") return { result: submission.reply(), problem: null };
+      const code = params.code.toUpperCase();
+      const kept = kit.rigs.find((r) => r.code === code);
+      // The kit's reading, raised by any entered on this phone since.
+      const last = lastHoursOnPhone(window.localStorage, code) ?? 0;
+      const problem = kept ? readingProblem(submission.value.engineHours, { hasHourMeter: kept.hasHourMeter, engineHours: last }) : null;
+      if (problem) return { result: submission.reply({ fieldErrors: { engineHours: [problem] } }), problem: null };
+      const started = startOnPhone(window.localStorage, kit, {
+        caseId: submission.value.caseId ?? crypto.randomUUID(),
+        rigCode: code,
+        guideSlug: submission.value.cardSlug,
+        now: new Date(),
+        engineHours: submission.value.engineHours ?? undefined,
+      });
+      if (!started.ok) return { result: null, problem: started.problem };
+      return redirect(`/cases/${started.caseId}/walk`);
+    },
+    noKit,
+  );
 }
 
 export default function RigCards({ loaderData, actionData }: Route.ComponentProps) {

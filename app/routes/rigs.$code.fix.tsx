@@ -1,11 +1,10 @@
 import { useEffect, useState } from "react";
 import { Form, redirect, useNavigation, useRouteLoaderData } from "react-router";
 import { z } from "zod";
-import { serverOrPhone } from "~/components/offline/server-or-phone";
+import { serverOrPhoneAction, serverOrPhoneRig } from "~/components/offline/server-or-phone";
 import { OpenWalks } from "~/components/walk/open-walks";
 import { useGuideSearch } from "~/components/walk/use-guide-search";
-import { loadKit, startOnPhone, withWalksOnPhone } from "~/lib/walk/kept";
-import { isNoSignal } from "~/lib/walk/no-signal";
+import { startOnPhone, withWalksOnPhone } from "~/lib/walk/kept";
 import { guideKind } from "~/lib/guides/kinds";
 import type { loader as shellLoader } from "./shell";
 import { openWalksOn, startCase } from "~/services/cases.server";
@@ -34,16 +33,12 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
  */
 export async function clientLoader({ params, serverLoader }: Route.ClientLoaderArgs) {
   const code = params.code.toUpperCase();
-  const page = await serverOrPhone(serverLoader, (kit) => {
-    const rig = kit.rigs.find((r) => r.code === code);
-    if (!rig) return null;
-    return {
-      rig: { code: rig.code, name: rig.name, retired: false },
-      openWalks: [],
-      tiles: kit.guides.filter((g) => guideKind(g.definition) === "guide").map((g) => ({ slug: g.slug, title: g.title, hint: g.symptoms[0] })),
-      caseId: crypto.randomUUID(),
-    };
-  });
+  const page = await serverOrPhoneRig(serverLoader, code, (rig, kit) => ({
+    rig: { code: rig.code, name: rig.name, retired: false },
+    openWalks: [],
+    tiles: kit.guides.filter((g) => guideKind(g.definition) === "guide").map((g) => ({ slug: g.slug, title: g.title, hint: g.symptoms[0] })),
+    caseId: crypto.randomUUID(),
+  }));
   return { ...page, openWalks: withWalksOnPhone(window.localStorage, code, page.openWalks) };
 }
 
@@ -68,26 +63,25 @@ export async function action({ request, params, context }: Route.ActionArgs) {
 }
 
 /** With no signal the phone starts the fix itself: it names the case and the time, and sends the start later. */
-export async function clientAction({ request, params, serverAction }: Route.ClientActionArgs) {
-  const form = await request.clone().formData();
-  try {
-    return await serverAction();
-  } catch (error) {
-    if (!isNoSignal(error)) throw error;
-    const kit = loadKit(window.localStorage);
-    if (!kit) return { problem: "No signal, and this phone has not kept the guides yet. Open Tankside once where there is signal." };
-    const caseId = String(form.get("caseId") ?? "") || crypto.randomUUID();
-    const fromCaseId = String(form.get("fromCaseId") ?? "");
-    const started = startOnPhone(window.localStorage, kit, {
-      caseId,
-      rigCode: params.code,
-      guideSlug: String(form.get("guideSlug") ?? ""),
-      now: new Date(),
-      fromCard: fromCaseId ? { caseId: fromCaseId, title: String(form.get("fromTitle") ?? "the card") } : undefined,
-    });
-    if (!started.ok) return { problem: started.problem };
-    return redirect(`/cases/${started.caseId}/walk`);
-  }
+export function clientAction({ request, params, serverAction }: Route.ClientActionArgs) {
+  const noKit = { problem: "No signal, and this phone has not kept the guides yet. Open Tankside once where there is signal." };
+  return serverOrPhoneAction(
+    request,
+    serverAction,
+    (kit, form) => {
+      const fromCaseId = String(form.get("fromCaseId") ?? "");
+      const started = startOnPhone(window.localStorage, kit, {
+        caseId: String(form.get("caseId") ?? "") || crypto.randomUUID(),
+        rigCode: params.code,
+        guideSlug: String(form.get("guideSlug") ?? ""),
+        now: new Date(),
+        fromCard: fromCaseId ? { caseId: fromCaseId, title: String(form.get("fromTitle") ?? "the card") } : undefined,
+      });
+      if (!started.ok) return { problem: started.problem };
+      return redirect(`/cases/${started.caseId}/walk`);
+    },
+    noKit,
+  );
 }
 
 interface Hit {

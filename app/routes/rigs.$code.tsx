@@ -12,7 +12,7 @@ import { serviceCounts } from "~/lib/rigs/service";
 import { useTimes } from "~/components/use-time-zone";
 import { readForm } from "~/services/read-request.server";
 import { can } from "~/lib/permissions";
-import { serverOrPhone } from "~/components/offline/server-or-phone";
+import { serverOrPhoneRig } from "~/components/offline/server-or-phone";
 import { useOnline } from "~/components/offline/use-online";
 import { walkRigOf } from "~/lib/rigs/specs";
 import type { KitRig } from "~/lib/walk/kept";
@@ -42,9 +42,7 @@ type RigView = KitRig & { retired: boolean; notes: string | null };
 
 /** With no signal, the rig's specs come from what the phone keeps (its recent cases need signal). */
 export async function clientLoader({ params, serverLoader }: Route.ClientLoaderArgs) {
-  return serverOrPhone(serverLoader, (kit) => {
-    const kept = kit.rigs.find((r) => r.code === params.code.toUpperCase());
-    if (!kept) return null;
+  return serverOrPhoneRig(serverLoader, params.code, (kept) => {
     const rig: RigView = { ...kept, retired: false, notes: null };
     return { rig, canEdit: false, canReadCases: false, cases: [], cards: [] as CardDone[], service: null, fromPhone: true };
   });
