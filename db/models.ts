@@ -5,6 +5,7 @@ import type { Guide } from "../app/lib/guides/schema";
 import { ROLES, type Role } from "../app/lib/people/roles";
 import { ANSWERS, CASE_KINDS, OUTCOMES, VERSION_STATUSES, type Answer, type CaseKind, type Outcome, type VersionStatus } from "../app/lib/vocabulary";
 import type { ServiceTask } from "../app/lib/guides/kinds";
+import type { JobMaterial } from "../app/lib/jobs/schema";
 
 export { ROLES, type Role };
 
@@ -167,6 +168,8 @@ export class Case extends Model<InferAttributes<Case>, InferCreationAttributes<C
   declare fromCaseId: CreationOptional<string | null>;
   /** On a closed card: items on its path answered "can't do it" (0: complete). */
   declare cardGaps: CreationOptional<number | null>;
+  /** The job its rig was on that day (the company's calendar), if any. */
+  declare jobId: CreationOptional<number | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -237,6 +240,52 @@ export class ServiceRecord extends Model<InferAttributes<ServiceRecord>, InferCr
   declare note: string | null;
   /** The card it was recorded on, if any. */
   declare caseId: CreationOptional<string | null>;
+  declare createdAt: CreationOptional<Date>;
+}
+
+/** A job: a site, its customer and spec, and its dates; rigs and people are put on it by day (JobDay). */
+export class Job extends Model<InferAttributes<Job>, InferCreationAttributes<Job>> {
+  declare id: CreationOptional<number>;
+  declare companyId: number;
+  declare name: string;
+  declare customer: string;
+  declare address: string | null;
+  declare latitude: number | null;
+  declare longitude: number | null;
+  declare elevationFt: number | null;
+  declare areaAcres: number;
+  declare passes: number;
+  declare waterGalPerAcre: number | null;
+  declare materials: JobMaterial[];
+  /** Calendar days in the company's zone (YYYY-MM-DD). */
+  declare startsOn: string;
+  declare endsOn: string | null;
+  declare closedAt: CreationOptional<Date | null>;
+  declare notes: string | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+/** One rig or one person on a job on one day (at most one job per rig, and per person, per day). */
+export class JobDay extends Model<InferAttributes<JobDay>, InferCreationAttributes<JobDay>> {
+  declare id: CreationOptional<number>;
+  declare companyId: number;
+  declare jobId: number;
+  declare day: string;
+  declare rigId: number | null;
+  declare userId: number | null;
+}
+
+/** One load sprayed on a job; the phone's own id makes a resend harmless. */
+export class JobLoad extends Model<InferAttributes<JobLoad>, InferCreationAttributes<JobLoad>> {
+  declare id: string;
+  declare companyId: number;
+  declare jobId: number;
+  declare rigId: number | null;
+  declare sprayedBy: number | null;
+  declare sprayedAt: Date;
+  declare areaSqFt: number;
+  declare waterGal: number;
   declare createdAt: CreationOptional<Date>;
 }
 
@@ -375,6 +424,7 @@ export function initModels(sequelize: Sequelize) {
       kind: { type: DataTypes.ENUM(...CASE_KINDS), defaultValue: "fix" },
       fromCaseId: DataTypes.CHAR(36),
       cardGaps: DataTypes.TINYINT.UNSIGNED,
+      jobId: DataTypes.INTEGER.UNSIGNED,
       ...timestamps,
     },
     { sequelize, tableName: "cases" },
@@ -435,6 +485,54 @@ export function initModels(sequelize: Sequelize) {
       createdAt: DataTypes.DATE,
     },
     { sequelize, tableName: "service_records", updatedAt: false },
+  );
+
+  Job.init(
+    {
+      id,
+      companyId: DataTypes.INTEGER.UNSIGNED,
+      name: DataTypes.STRING(120),
+      customer: DataTypes.STRING(120),
+      address: DataTypes.STRING(300),
+      latitude: decimal(9, 6, "latitude"),
+      longitude: decimal(9, 6, "longitude"),
+      elevationFt: DataTypes.INTEGER,
+      areaAcres: decimal(8, 2, "areaAcres"),
+      passes: { type: DataTypes.TINYINT.UNSIGNED, defaultValue: 1 },
+      waterGalPerAcre: decimal(7, 1, "waterGalPerAcre"),
+      materials: DataTypes.JSON,
+      startsOn: DataTypes.DATEONLY,
+      endsOn: DataTypes.DATEONLY,
+      closedAt: DataTypes.DATE(3),
+      notes: DataTypes.STRING(1000),
+      ...timestamps,
+    },
+    { sequelize, tableName: "jobs" },
+  );
+  JobDay.init(
+    {
+      id,
+      companyId: DataTypes.INTEGER.UNSIGNED,
+      jobId: DataTypes.INTEGER.UNSIGNED,
+      day: DataTypes.DATEONLY,
+      rigId: DataTypes.INTEGER.UNSIGNED,
+      userId: DataTypes.INTEGER.UNSIGNED,
+    },
+    { sequelize, tableName: "job_days", timestamps: false },
+  );
+  JobLoad.init(
+    {
+      id: { type: DataTypes.CHAR(36), primaryKey: true },
+      companyId: DataTypes.INTEGER.UNSIGNED,
+      jobId: DataTypes.INTEGER.UNSIGNED,
+      rigId: DataTypes.INTEGER.UNSIGNED,
+      sprayedBy: DataTypes.INTEGER.UNSIGNED,
+      sprayedAt: DataTypes.DATE(3),
+      areaSqFt: decimal(12, 1, "areaSqFt"),
+      waterGal: decimal(8, 1, "waterGal"),
+      createdAt: DataTypes.DATE,
+    },
+    { sequelize, tableName: "job_loads", updatedAt: false },
   );
 
   Company.hasMany(User, { foreignKey: "companyId" });

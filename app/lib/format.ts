@@ -89,3 +89,7 @@ export function formatDuration(ms: number): string {
   const h = Math.floor(m / 60);
   return `${h} h ${m % 60} min`;
 }
+
+const dayFormat = new Intl.DateTimeFormat("en-US", { weekday: "short", month: "short", day: "numeric", year: "numeric", timeZone: "UTC" });
+/** A calendar day (YYYY-MM-DD) as people read it, "Tue, Jun 2, 2026": already the company's own day, so no zone applies. */
+export const formatDay = (day: string) => dayFormat.format(new Date(`${day}T00:00:00Z`));

@@ -14,6 +14,7 @@ export interface NavItem {
 export const NAV_ITEMS: NavItem[] = [
   { to: "/", label: "Start a fix", permission: "start-fix", about: "Pick a rig and walk through what is wrong." },
   { to: "/rigs", label: "Rigs", permission: "read-rigs", about: "Each rig's specs, tips, labels and recent cases." },
+  { to: "/jobs", label: "Jobs", permission: "read-jobs", about: "Today's site, its spec and who is on it; progress of each job." },
   { to: "/field-math", label: "Field math", permission: "use-field-math", about: "Tank loads, hose friction and reach, suction head, torque." },
   { to: "/desk", label: "Guide desk", permission: "edit-guides", about: "Write, check, preview and publish the guides; see how crews go through them." },
   { to: "/board", label: "Fault board", permission: "read-board", about: "Which faults recur on which rigs and why, downtime, open hand-offs." },

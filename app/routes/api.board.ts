@@ -1,5 +1,5 @@
 import { boardQuerySchema } from "~/lib/stats/board-query";
-import { boardFor } from "~/services/board.server";
+import { boardFor, jobBoardFor } from "~/services/board.server";
 import { careFor } from "~/services/care.server";
 import { requirePermission } from "~/services/guards.server";
 import { keptJson } from "~/services/kept-json.server";
@@ -10,8 +10,8 @@ import type { Route } from "./+types/api.board";
 export async function loader({ request, context }: Route.LoaderArgs) {
   const user = await requirePermission({ request, context }, "read-board");
   const q = readQuery(request, boardQuerySchema);
-  const [board, care] = await Promise.all([boardFor(user, q), careFor(user, q)]);
+  const [board, care, jobs] = await Promise.all([boardFor(user, q), careFor(user, q), jobBoardFor(user, q)]);
   // Both are kept per company and window (report-cache) under the same reports version, so the
   // encoded answer is kept with the board.
-  return keptJson(request, board, () => ({ window: { from: q.fromDay, to: q.toDay, rig: q.rigCode ?? null, repeatDays: q.repeatDays }, ...board, care }));
+  return keptJson(request, board, () => ({ window: { from: q.fromDay, to: q.toDay, rig: q.rigCode ?? null, repeatDays: q.repeatDays }, ...board, care, jobs }));
 }

@@ -5,7 +5,8 @@ import { PageTitle } from "~/components/ui/page-title";
 import { boardQuerySchema, type BoardQuery } from "~/lib/stats/board-query";
 import { fmt } from "~/lib/field-math/units";
 import { shortLabel } from "~/lib/format";
-import { boardFor } from "~/services/board.server";
+import { boardFor, jobBoardFor } from "~/services/board.server";
+import { JobsSection } from "~/components/board/jobs-section";
 import { careFor } from "~/services/care.server";
 import { CareSection } from "~/components/board/care-section";
 import { sendDigest } from "~/services/digest.server";
@@ -31,7 +32,13 @@ export async function loader({ request, context }: Route.LoaderArgs) {
     if (!formError) throw thrown;
     q = boardQuerySchema.parse({});
   }
-  const [board, rigs, service, care] = await Promise.all([boardFor(user, q), listRigs(user, { includeRetired: true }), serviceToDo(user), careFor(user, q)]);
+  const [board, rigs, service, care, jobs] = await Promise.all([
+    boardFor(user, q),
+    listRigs(user, { includeRetired: true }),
+    serviceToDo(user),
+    careFor(user, q),
+    jobBoardFor(user, q),
+  ]);
   return {
     board,
     formError,
@@ -41,6 +48,7 @@ export async function loader({ request, context }: Route.LoaderArgs) {
     canSendDigest: can(user, "send-digest"),
     service,
     care,
+    jobs,
   };
 }
 
@@ -219,6 +227,8 @@ export default function BoardPage({ loaderData, actionData }: Route.ComponentPro
           definitions). Range: exact Poisson (Garwood).
         </p>
       </section>
+
+      <JobsSection jobs={loaderData.jobs} causeName={name} />
 
       <CareSection care={loaderData.care} />
 

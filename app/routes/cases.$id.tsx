@@ -78,6 +78,7 @@ export default function CasePage({ loaderData: c }: Route.ComponentProps) {
     ["Closed", c.closedAt ? `${times.dateTime(c.closedAt)}` : "—"],
     ["Time taken", duration],
     ["Outcome", caseOutcomeLabel(c.kind, c.outcome, c.cardGaps)],
+    ["Job", c.rig.job ? <Link to={`/jobs/${c.rig.job.id}`}>{c.rig.job.name}</Link> : "none that day"],
     ...(c.kind === "card"
       ? []
       : ([

@@ -52,6 +52,7 @@ export default function Cases({ loaderData }: Route.ComponentProps) {
         {cards ? null : <FilterSelect label="Cause" name="cause" value={filters.cause} options={causes.map((c) => [c.code, c.name])} />}
         <FilterSelect label="Outcome" name="outcome" value={filters.outcome} options={Object.entries(cards ? CARD_OUTCOME_LABELS : OUTCOME_LABELS)} />
         <FilterSelect label="Person" name="person" value={filters.person} options={options.people.map((p) => [String(p.id), p.name])} all="Anyone" />
+        <FilterSelect label="Job" name="job" value={filters.job} options={options.jobs.map((j) => [String(j.id), j.name])} all="Any job" />
         <label className="font-bold">
           From
           <input type="date" name="from" defaultValue={filters.from ?? ""} className={select} />

@@ -11,11 +11,15 @@ import { ServiceToDo } from "~/components/service-to-do";
 import { PhoneReadiness } from "~/components/offline/phone-readiness";
 import { serverOrPhone } from "~/components/offline/server-or-phone";
 import { lastRigOnPhone } from "~/lib/walk/kept";
+import { upcomingPlan } from "~/services/jobs.server";
+import { jobOn, type KeptJobs } from "~/lib/jobs/today";
+import { isoInZone } from "~/lib/format";
+import { TodaysJob } from "~/components/jobs/todays-job";
 import type { Route } from "./+types/home";
 
 export async function loader({ request, context }: Route.LoaderArgs) {
   const user = await requireUser({ request, context });
-  const [rigs, lastRigId, service] = await Promise.all([listRigs(user), lastRigIdFor(user), serviceToDo(user)]);
+  const [rigs, lastRigId, service, upcoming] = await Promise.all([listRigs(user), lastRigIdFor(user), serviceToDo(user), upcomingPlan(user, 1)]);
   return {
     personId: user.id,
     role: user.role,
@@ -27,7 +31,15 @@ export async function loader({ request, context }: Route.LoaderArgs) {
     lastRigCode: rigs.find((r) => r.id === lastRigId)?.code ?? null,
     hidden: hiddenSections(),
     service,
+    today: todaysJobFor(upcoming, upcoming.today, user.id),
   };
+}
+
+/** The job this person is on today, and that day's plan of it (rigs and people). */
+function todaysJobFor(kept: KeptJobs | undefined, day: string, personId: number) {
+  const id = kept ? jobOn(kept.plan, day, { personId }) : null;
+  const job = kept?.jobs.find((j) => j.id === id);
+  return job ? { job, day: kept!.plan.find((p) => p.day === day && p.jobId === job.id) ?? null } : null;
 }
 
 type HomeRig = { code: string; name: string; tankGal: number; mount: string };
@@ -52,17 +64,19 @@ export async function clientLoader({ serverLoader }: Route.ClientLoaderArgs) {
       hidden: kit.hidden,
       // What service is due needs the server's records: with no signal the list waits.
       service: [],
+      today: todaysJobFor(kit.jobs, isoInZone(new Date(), kit.person.timeZone).slice(0, 10), kit.person.id),
     };
   });
 }
 
 export default function Home({ loaderData }: Route.ComponentProps) {
-  const { rigs, role, firstName, lastRigCode, hidden, personId, service } = loaderData;
+  const { rigs, role, firstName, lastRigCode, hidden, personId, service, today } = loaderData;
   const more = navFor(role).filter((item) => !forEveryone(item) && !hidden.includes(item.to));
   return (
     <>
       <PageTitle lead="Pick the rig that is acting up, or start its day with a card.">Hi {firstName}. Which rig?</PageTitle>
       <PhoneReadiness personId={personId} />
+      {today ? <TodaysJob job={today.job} day={today.day} personId={personId} /> : null}
       {rigs.length === 0 ? (
         <p className="rounded-md bg-paper p-4">Your company has no active rigs yet. An admin can add them under Rigs.</p>
       ) : (

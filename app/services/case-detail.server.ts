@@ -1,6 +1,7 @@
 import type { Guide } from "~/lib/guides/schema";
 import { ownedBy } from "./tenancy.server";
 import { walkRigOf, type WalkRig } from "~/lib/rigs/specs";
+import { jobSummaryById } from "./jobs.server";
 import type { CaseKind, Outcome } from "~/lib/vocabulary";
 import { Case, CaseEvent, CasePhoto, GuideRecord, GuideVersion, Rig, User } from "./db.server";
 import { notFound, type SessionUser } from "./guards.server";
@@ -88,7 +89,7 @@ async function cardLinks(user: SessionUser, found: Case) {
 
 export async function caseDetail(user: SessionUser, caseId: string): Promise<CaseDetail> {
   const { found, guide, version } = await findCaseWithGuide(user, caseId);
-  const [rig, record, opener, resolver, events, photos, links] = await Promise.all([
+  const [rig, record, opener, resolver, events, photos, links, job] = await Promise.all([
     Rig.findByPk(found.rigId),
     GuideRecord.findByPk(version.guideId, { attributes: ["slug", "title"] }),
     found.openedBy ? User.findByPk(found.openedBy, { attributes: ["name"] }) : null,
@@ -96,6 +97,7 @@ export async function caseDetail(user: SessionUser, caseId: string): Promise<Cas
     CaseEvent.findAll({ where: { caseId }, order: [["seq", "ASC"]] }),
     CasePhoto.findAll({ where: { caseId }, attributes: ["id", "stepId", "contentType", "createdAt"], order: [["id", "ASC"]] }),
     cardLinks(user, found),
+    jobSummaryById(user, found.jobId),
   ]);
   return {
     id: found.id,
@@ -110,7 +112,7 @@ export async function caseDetail(user: SessionUser, caseId: string): Promise<Cas
     handoffResolvedAt: found.handoffResolvedAt?.toISOString() ?? null,
     handoffResolvedBy: resolver?.name ?? null,
     handoffResolvedNote: found.handoffResolvedNote,
-    rig: walkRigOf(rig!),
+    rig: { ...walkRigOf(rig!), job },
     guide: { slug: record!.slug, title: record!.title, version: version.number, versionId: version.id, definition: guide },
     openedBy: opener?.name ?? null,
     events: events.map((e) => ({ id: e.id, seq: e.seq, stepId: e.stepId, answer: e.answer, at: e.at.toISOString(), note: e.note })),

@@ -5,7 +5,7 @@ import { PAGE_SIZE, type CaseFilters } from "~/lib/cases/filters";
 import { startOfDayIn } from "~/lib/format";
 
 const nextDay = (day: string) => new Date(Date.parse(`${day}T00:00:00Z`) + 86_400_000).toISOString().slice(0, 10);
-import { reports, Rig, User } from "./db.server";
+import { Job, reports, Rig, User } from "./db.server";
 import { keptReport } from "./report-cache.server";
 import type { SessionUser } from "./guards.server";
 
@@ -42,6 +42,7 @@ function where(user: SessionUser, f: CaseFilters) {
     cause: f.cause ?? null,
     outcome: f.outcome ?? null,
     person: f.person ?? null,
+    job: f.job ?? null,
     // Days are the company's own: "to" includes the whole of its day.
     from: f.from ? startOfDayIn(f.from, user.timeZone) : null,
     to: f.to ? startOfDayIn(nextDay(f.to), user.timeZone) : null,
@@ -50,6 +51,7 @@ function where(user: SessionUser, f: CaseFilters) {
     LEFT JOIN users u ON u.id = c.opened_by
     WHERE c.company_id = :company AND c.kind = :kind AND (:rig IS NULL OR r.code = :rig) AND (:guide IS NULL OR g.slug = :guide)
       AND (:cause IS NULL OR c.cause_code = :cause) AND (:outcome IS NULL OR c.outcome = :outcome) AND (:person IS NULL OR c.opened_by = :person)
+      AND (:job IS NULL OR c.job_id = :job)
       AND (:from IS NULL OR c.opened_at >= :from) AND (:to IS NULL OR c.opened_at < :to)`;
   return { sql, replacements };
 }
@@ -94,13 +96,19 @@ export async function caseFilterOptions(user: SessionUser) {
 }
 
 async function readFilterOptions(user: SessionUser) {
-  const [rigs, people, guides] = await Promise.all([
+  const [rigs, people, jobs, guides] = await Promise.all([
     Rig.findAll({ where: ownedBy(user), attributes: ["code"], order: [["code", "ASC"]] }),
     User.findAll({ where: ownedBy(user), attributes: ["id", "name"], order: [["name", "ASC"]] }),
+    Job.findAll({ where: ownedBy(user), attributes: ["id", "name"], order: [["startsOn", "DESC"]] }),
     reports().query<{ slug: string; title: string }>(`SELECT DISTINCT g.slug, g.title FROM guides g WHERE ${usableGuideSql("g")} ORDER BY g.title`, {
       replacements: { company: user.companyId },
       type: QueryTypes.SELECT,
     }),
   ]);
-  return { rigs: rigs.map((r) => r.code), people: people.map((p) => ({ id: p.id, name: p.name })), guides };
+  return {
+    rigs: rigs.map((r) => r.code),
+    people: people.map((p) => ({ id: p.id, name: p.name })),
+    jobs: jobs.map((j) => ({ id: j.id, name: j.name })),
+    guides,
+  };
 }

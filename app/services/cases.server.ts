@@ -1,4 +1,5 @@
 import { randomUUID } from "node:crypto";
+import { jobAt } from "./jobs.server";
 import { ownedBy, usableBy } from "./tenancy.server";
 import { Op, UniqueConstraintError, type Transaction } from "sequelize";
 import { LATE_START_DAYS, type CaseEventInput, type CloseCaseInput, type StartCaseInput } from "~/lib/cases/schema";
@@ -68,6 +69,8 @@ export async function startCase(user: SessionUser, input: StartCaseInput) {
   const engineHours = version.kind === "card" && rig.hasHourMeter ? (input.engineHours ?? null) : null;
   if (version.kind === "card" && rig.hasHourMeter && engineHours === null)
     fail(422, `Give the hour meter reading: rig ${rig.code} has one, and a card records it as it starts.`, { engineHours: "required for a card on this rig" });
+  // The job the rig was on that day, read at the case's own time (a case sent later keeps its day).
+  const jobId = await jobAt(user, rig.id, openedAt);
   const fromCaseId = input.fromCaseId ?? null;
   if (fromCaseId) {
     // A card still on the phone (no signal) may arrive after the fix it opened: an unknown id is kept;
@@ -85,6 +88,7 @@ export async function startCase(user: SessionUser, input: StartCaseInput) {
           guideVersionId: version.id,
           kind: version.kind,
           fromCaseId,
+          jobId,
           openedBy: user.id,
           openedAt,
           closedAt: null,

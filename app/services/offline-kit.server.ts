@@ -8,12 +8,13 @@ import { hiddenSections } from "./env.server";
 import type { SessionUser } from "./guards.server";
 import { causeNames, usableGuides } from "./guides.server";
 import { ownedBy } from "./tenancy.server";
+import { upcomingPlan } from "./jobs.server";
 
 export type { OfflineKit };
 
 /** What a phone keeps so its person can start a fix with no signal: the company's active rigs, the guides they may start, cause names. */
 export async function offlineKit(user: SessionUser): Promise<OfflineKit> {
-  const [rigs, guides, lastRigId, loadRules] = await Promise.all([
+  const [rigs, guides, lastRigId, loadRules, upcoming] = await Promise.all([
     Rig.findAll({
       where: ownedBy(user, { retired: false }),
       attributes: ["id", ...RIG_SPEC_FIELDS, "hasHourMeter", "engineHours", "mount", "pumpKind"],
@@ -22,6 +23,7 @@ export async function offlineKit(user: SessionUser): Promise<OfflineKit> {
     usableGuides(user),
     lastRigIdFor(user),
     loadRulesFor(user),
+    upcomingPlan(user),
   ]);
   return {
     madeAt: new Date().toISOString(),
@@ -49,5 +51,6 @@ export async function offlineKit(user: SessionUser): Promise<OfflineKit> {
     })),
     causeNames: causeNames(),
     loadRules,
+    jobs: { jobs: upcoming.jobs, plan: upcoming.plan },
   };
 }

@@ -20,6 +20,7 @@ import * as m018 from "./018-load-rules-and-pace";
 import * as m019 from "./019-service-rules";
 import * as m020 from "./020-reports-version";
 import * as m021 from "./021-rig-cards";
+import * as m022 from "./022-jobs";
 
 export interface Migration {
   name: string;
@@ -50,4 +51,5 @@ export const migrations: Migration[] = [
   { name: "019-service-rules", ...m019 },
   { name: "020-reports-version", ...m020 },
   { name: "021-rig-cards", ...m021 },
+  { name: "022-jobs", ...m022 },
 ];

@@ -5,6 +5,7 @@ import { Case, Company, GuideVersion, Rig, User } from "../../db/index";
 import { createGuide } from "~/services/desk.server";
 import { resetDatabase } from "../helpers/db";
 import { caseRow } from "../helpers/cases";
+import { makeJob } from "../helpers/jobs";
 import { cookieFor, run } from "../helpers/requests";
 import { routeModule, routeTable } from "../helpers/route-table";
 
@@ -87,6 +88,14 @@ const EXPECTED: Record<string, Row> = {
   "GET /desk/:guideId/v/:number": r(302, 403, 200, 200, 200, 404),
   "POST /desk/:guideId/v/:number": r(302, 403, 400, 400, 400),
   "GET /desk/:guideId/v/:number/preview": r(302, 403, 200, 200, 200, 404),
+  "POST /api/jobs/:jobId/loads": r(401, 415, 415, 415, 415),
+  "GET /jobs": r(302, 200, 200, 200, 200),
+  "GET /jobs/new": r(302, 403, 403, 200, 200),
+  "POST /jobs/new": r(302, 403, 403, 400, 400),
+  "GET /jobs/:jobId": r(302, 200, 200, 200, 200, 404),
+  "POST /jobs/:jobId": r(302, 403, 403, 400, 400),
+  "GET /jobs/:jobId/edit": r(302, 403, 403, 200, 200, 404),
+  "POST /jobs/:jobId/edit": r(302, 403, 403, 400, 400),
   "GET /field-math": r(302, 200, 200, 200, 200),
   "GET /field-math/:screen": r(302, 200, 200, 200, 200),
   "GET /*": r(302, 404, 404, 404, 404),
@@ -115,8 +124,16 @@ beforeAll(async () => {
   );
   const builtIn = (await GuideVersion.findOne())!;
   const shared = { number: "1", token: "not-a-token", photoId: "1", kind: "hose", screen: "load", "*": "nothing" };
-  own = { ...shared, id: await handoffOn("CF-07"), code: "CF-07", guideId: String(builtIn.guideId) };
-  foreign = { ...shared, id: await handoffOn("BM-01"), code: "BM-01", guideId: String(bmGuide.guideId), number: String(bmGuide.number) };
+  const jobOf = async (code: string) => String((await makeJob((await Rig.findOne({ where: { code } }))!.companyId)).id);
+  own = { ...shared, id: await handoffOn("CF-07"), code: "CF-07", guideId: String(builtIn.guideId), jobId: await jobOf("CF-07") };
+  foreign = {
+    ...shared,
+    id: await handoffOn("BM-01"),
+    code: "BM-01",
+    guideId: String(bmGuide.guideId),
+    number: String(bmGuide.number),
+    jobId: await jobOf("BM-01"),
+  };
 });
 
 const keyOf = (method: string, path: string, file: string) =>

@@ -5,6 +5,7 @@ import { acresToSqFt, fmt, galToL, lbPerAcreToKgPerHa, lbToKg, sqFtToAcres, sqMT
 import { NumberField, ResultBox, SourceNote, toNumber, tryFieldMath } from "./kit";
 import { SeedClock } from "./seed-clock";
 import type { RigSpecs } from "~/lib/rigs/specs";
+import { SprayedLoads } from "./sprayed-loads";
 
 interface Row {
   key: number;
@@ -28,6 +29,8 @@ const today = () => new Date().toLocaleDateString("en-CA");
 const KEPT_INPUTS = "tankside.load-card";
 interface KeptInputs {
   job: string;
+  /** The job the inputs were for (a job's card restores only its own). */
+  jobId?: number | null;
   area: string;
   areaUnit: keyof typeof AREA_UNITS;
   slopeWidth: string;
@@ -45,22 +48,28 @@ function keptInputs(): KeptInputs | null {
 
 /** The load sheet as the tank-side card: marks, whole bags, order, weight, strips and the seed clock; prints on one page. */
 export function LoadCardMath({ rig, rules = DEFAULT_LOAD_RULES, compact = false }: { rig?: RigSpecs; rules?: LoadRules; compact?: boolean }) {
-  const [job, setJob] = useState("");
+  // A rig on a job starts from the job's spec and the area it has left.
+  const onJob = rig?.job ?? null;
+  const [job, setJob] = useState(onJob?.name ?? "");
   const [date, setDate] = useState(today);
-  const [area, setArea] = useState("1");
+  const [area, setArea] = useState(onJob ? String(Math.round(onJob.remainingAcres * 100) / 100) : "1");
   const [areaUnit, setAreaUnit] = useState<keyof typeof AREA_UNITS>("acres");
   const [tank, setTank] = useState(String(rig?.tankGal ?? 1000));
   const [ceiling, setCeiling] = useState(String(rules.fiberCeilingLbPer100Gal));
   const [slopeWidth, setSlopeWidth] = useState("60");
-  const [waterRate, setWaterRate] = useState("");
-  const [rows, setRows] = useState<Row[]>(STARTER);
+  const [waterRate, setWaterRate] = useState(onJob?.waterGalPerAcre ? String(onJob.waterGalPerAcre) : "");
+  const [rows, setRows] = useState<Row[]>(
+    onJob
+      ? onJob.materials.map((m, i) => ({ key: i + 1, name: m.name, rate: String(m.lbPerAcre), kind: m.kind, bag: m.bagLb ? String(m.bagLb) : "" }))
+      : STARTER,
+  );
   const setRow = (key: number, change: Partial<Row>) => setRows(rows.map((r) => (r.key === key ? { ...r, ...change } : r)));
   // The job, area and materials come back as the crew left them (the full screen only; a guide's figure starts fresh).
   const [restored, setRestored] = useState(compact);
   useEffect(() => {
     if (compact) return;
     const kept = keptInputs();
-    if (kept) {
+    if (kept && (kept.jobId ?? null) === (onJob?.id ?? null)) {
       setJob(kept.job);
       setArea(kept.area);
       setAreaUnit(kept.areaUnit);
@@ -69,10 +78,11 @@ export function LoadCardMath({ rig, rules = DEFAULT_LOAD_RULES, compact = false 
       setRows(kept.rows);
     }
     setRestored(true);
-  }, [compact]);
+  }, [compact, onJob?.id]);
   useEffect(() => {
-    if (restored && !compact) localStorage.setItem(KEPT_INPUTS, JSON.stringify({ job, area, areaUnit, slopeWidth, waterRate, rows } satisfies KeptInputs));
-  }, [restored, compact, job, area, areaUnit, slopeWidth, waterRate, rows]);
+    if (restored && !compact)
+      localStorage.setItem(KEPT_INPUTS, JSON.stringify({ job, jobId: onJob?.id ?? null, area, areaUnit, slopeWidth, waterRate, rows } satisfies KeptInputs));
+  }, [restored, compact, job, onJob?.id, area, areaUnit, slopeWidth, waterRate, rows]);
 
   const a = toNumber(area);
   const areaSqFt = areaUnit === "acres" ? acresToSqFt(a) : areaUnit === "sqm" ? sqMToSqFt(a) : a;
@@ -117,6 +127,12 @@ export function LoadCardMath({ rig, rules = DEFAULT_LOAD_RULES, compact = false 
             </label>
           </div>
         )}
+        {onJob ? (
+          <p className="rounded-md border-2 border-ink bg-field p-3">
+            From the job <span className="font-bold">{onJob.name}</span>: its spec, and {fmt(onJob.remainingAcres, 2)} acres left to spray of{" "}
+            {fmt(onJob.areaAcres * onJob.passes, 2)}. Change the area to today&apos;s section if you spray less.
+          </p>
+        ) : null}
         <div className="grid grid-cols-[1fr_auto] items-end gap-2">
           <NumberField id="load-area" label="Area to cover" value={area} onChange={setArea} unit="" error={errors.areaSqFt} />
           <select
@@ -242,6 +258,7 @@ export function LoadCardMath({ rig, rules = DEFAULT_LOAD_RULES, compact = false 
         )}
       </div>
       {r ? <CardResult card={r} rules={rules} rig={rig} job={job} date={date} rates={rows} compact={compact} /> : null}
+      {r && onJob && !compact ? <SprayedLoads job={onJob} rigCode={rig?.code ?? null} loads={r.loads} /> : null}
     </div>
   );
 }

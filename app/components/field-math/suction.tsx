@@ -6,11 +6,13 @@ import type { RigSpecs } from "~/lib/rigs/specs";
 
 /**
  * Will the pump hold prime drafting from here? The suction it gets (NPSH available) against what it
- * needs from its curve (NPSH required). Starts from the rig's own figure; the site's elevation, the
- * water and the lift are typed for this site — no verdict from figures nobody measured.
+ * needs from its curve (NPSH required). Starts from the rig's own figure and its job's site elevation;
+ * the water and the lift are typed for this site — no verdict from figures nobody measured.
  */
 export function SuctionMath({ rig }: { rig?: RigSpecs; compact?: boolean }) {
-  const [altitude, setAltitude] = useState("");
+  // The job's site elevation when the rig is on a job with one recorded: the yard's is often far off.
+  const site = rig?.job?.elevationFt != null ? rig.job : null;
+  const [altitude, setAltitude] = useState(site ? String(site.elevationFt) : "");
   const [temp, setTemp] = useState("");
   const [lift, setLift] = useState("");
   const [loss, setLoss] = useState("");
@@ -38,7 +40,15 @@ export function SuctionMath({ rig }: { rig?: RigSpecs; compact?: boolean }) {
         value={altitude}
         onChange={setAltitude}
         unit="ft"
-        beside={Number.isFinite(altFt) ? `${fmt(ftToM(altFt))} m` : rig ? `The yard is at ${fmt(rig.yardElevationFt)} ft; this site may not be.` : undefined}
+        beside={
+          site && altFt === site.elevationFt
+            ? `${fmt(ftToM(altFt))} m, from the job: ${site.name}.`
+            : Number.isFinite(altFt)
+              ? `${fmt(ftToM(altFt))} m`
+              : rig
+                ? `The yard is at ${fmt(rig.yardElevationFt)} ft; this site may not be.`
+                : undefined
+        }
         error={errorIf(altitude, errors.altitudeFt)}
       />
       <NumberField

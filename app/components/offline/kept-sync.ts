@@ -2,6 +2,7 @@ import { useEffect, useState } from "react";
 import { keptCaseIds, waitingToSend } from "~/lib/walk/kept";
 import { loadRecord, saveRecord, type WalkRecord } from "~/lib/walk/queue";
 import { sendKept } from "./send-kept";
+import { sendKeptLoads } from "./send-loads";
 
 const RETRY_MS = 4000;
 const CHANGED = "tankside:kept-changed";
@@ -55,6 +56,7 @@ async function sendAll(skipCaseId: string | null) {
       if (outcome === "signed-out") signedOut = true;
       if (outcome === "waiting") break; // the connection dropped: try the rest next time
     }
+    if ((await sendKeptLoads()) === "signed-out") signedOut = true;
     window.sessionStorage.setItem("tankside:signed-out", signedOut ? "yes" : "no");
   } finally {
     running = false;

@@ -14,6 +14,7 @@ export const caseFiltersSchema = z.object({
   cause: z.string().trim().max(60).optional(),
   outcome: z.enum(OUTCOMES, { error: `outcome must be one of ${OUTCOMES.join(", ")}` }).optional(),
   person: z.coerce.number().int().positive().optional(),
+  job: z.coerce.number({ error: "job must be a job's number" }).int("job must be a job's number").positive("job must be a job's number").optional(),
   from: day.optional(),
   to: day.optional(),
   sort: z.enum(CASE_SORTS, { error: `sort must be one of ${CASE_SORTS.join(", ")}` }).default("opened"),

@@ -1,4 +1,5 @@
 import type { AgitatorDirection, NozzleTipInput, TorqueSpecInput } from "./schema";
+import type { JobSummary } from "../jobs/today";
 
 /** What the field-math screens and widgets are filled from: one rig's specs, in one shape everywhere. */
 export interface RigSpecs {
@@ -18,6 +19,8 @@ export interface RigSpecs {
   carrierRatingLb: number | null;
   nozzleTips: NozzleTipInput[];
   torqueSpecs: TorqueSpecInput[];
+  /** The job the rig is on: today's on the field-math screens, the case's own in a walk (the site's elevation and spec). */
+  job?: JobSummary | null;
 }
 
 /** A rig as the walk-through needs it: its specs, and whether it has an hour meter and what it read. */

@@ -1,4 +1,5 @@
 import type { LoadRules } from "../field-math/load-rules";
+import { keptJobAt, type KeptJobs } from "../jobs/today";
 import type { Guide } from "../guides/schema";
 import type { GuideTexts } from "../guides/text-tree";
 import { stepsToEnd } from "../guides/graph";
@@ -45,6 +46,8 @@ export interface OfflineKit {
   causeNames: Record<string, string>;
   /** The company's loading rules with this person's pace, for the load card with no signal. Older kits lack it. */
   loadRules?: LoadRules;
+  /** The jobs planned over the coming week: today's job with no signal. Older kits lack it. */
+  jobs?: KeptJobs;
 }
 
 /** The walk-through screen's data, from the server or rebuilt on the phone. */
@@ -146,7 +149,9 @@ export function startOnPhone(
   // A second tap on the same start (or a reload mid-start) opens the same case, never a second one.
   if (existing.start) return { ok: true, caseId: input.caseId };
   const openedAt = input.now.toISOString();
-  const { mount: _mount, pumpKind: _pumpKind, ...walkRig } = rig;
+  const { mount: _mount, pumpKind: _pumpKind, ...kitRig } = rig;
+  // The case records the job the server finds for its day; the phone shows the same one meanwhile.
+  const walkRig = { ...kitRig, job: keptJobAt(kit.jobs, input.now, kit.person.timeZone, { rigCode: rig.code, personId: kit.person.id }) };
   const kind = guideKind(guide.definition) === "card" ? "card" : "fix";
   if (kind === "card" && rig.hasHourMeter && input.engineHours === undefined)
     return { ok: false, problem: "Give the hour meter reading: a card records it as it starts." };
