@@ -20,7 +20,6 @@ import { args, requestAs, run } from "../helpers/requests";
 const MO = "mo@cedarflats.example";
 const DANA = "dana@cedarflats.example";
 const JUNE = "june@cedarflats.example";
-const LI = "li@bluemesa.example";
 
 /** The job form as the browser sends it: every field, blanks included, materials as conform names them. */
 function jobForm(change: Record<string, string> = {}): Record<string, string> {
