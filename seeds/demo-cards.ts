@@ -1,9 +1,9 @@
 /**
  * The rig cards in the demo history: each working day a rig may get its pre-start (read at the
  * day's first start) and its shut-down clean-out (read at the end), Mondays its weekly service.
- * How often each rig's crew does them is invented for the demo, so the board has a pattern to
- * find: CF-03's crews often skip the pre-start, its lubricator goes uncharged, and it leaks at the
- * pump shaft far more than the rest (association in the demo by construction, not a finding).
+ * How often each rig's crew does them is invented for the demo (`care` in demo-fleet.ts), so the
+ * board has a pattern to find: CF-03's crews often skip the pre-start, its lubricator goes uncharged,
+ * and it leaks at the pump shaft far more than the rest (association in the demo by construction).
  */
 import { randomUUID } from "node:crypto";
 import type { CreationAttributes } from "sequelize";
@@ -12,15 +12,6 @@ import { affirms, cardGaps } from "../app/lib/walk/held-answers";
 import type { Answer } from "../app/lib/vocabulary";
 import type { Case, CaseEvent, ServiceRecord } from "../db/index";
 import type { seededRandom } from "./random";
-
-/** Per rig: chance of a pre-start on a working day, of its grease item left undone, of the shut-down card, of the Monday service. */
-export const CARE_HABITS: Record<string, { preStart: number; greaseSkip: number; shutDown: number; weekly: number }> = {
-  "CF-03": { preStart: 0.55, greaseSkip: 0.2, shutDown: 0.75, weekly: 0.6 },
-  "CF-07": { preStart: 0.88, greaseSkip: 0.06, shutDown: 0.9, weekly: 0.85 },
-  "CF-11": { preStart: 0.96, greaseSkip: 0.02, shutDown: 0.95, weekly: 0.95 },
-  "BM-01": { preStart: 0.82, greaseSkip: 0.08, shutDown: 0.85, weekly: 0.8 },
-  "BM-02": { preStart: 0.9, greaseSkip: 0.05, shutDown: 0.9, weekly: 0.85 },
-};
 
 export interface DemoCardSink {
   cases: CreationAttributes<Case>[];
@@ -60,7 +51,15 @@ export function saveCard(
   sink: DemoCardSink,
   random: Random,
   card: DemoCard,
-  at: { companyId: number; rigId: number; openedBy: number; start: number; hours: number | null; rules: { id: number; task: string | null }[] },
+  at: {
+    companyId: number;
+    rigId: number;
+    openedBy: number;
+    start: number;
+    hours: number | null;
+    rules: { id: number; task: string | null }[];
+    jobId: number | null;
+  },
   choose: (stepId: string) => Answer | undefined = () => undefined,
 ): { answers: { stepId: string; answer: Answer }[] } {
   const def = card.definition;
@@ -92,6 +91,7 @@ export function saveCard(
     safetyAckAt: firstAck,
     note: null,
     cardGaps: cardGaps(held.map((e) => ({ ...e, at: e.at.toISOString() }))),
+    jobId: at.jobId,
     handoffResolvedAt: outcome === "handoff" ? new Date(t + 3_600_000) : null,
   });
   for (const e of held) {

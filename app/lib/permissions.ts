@@ -10,7 +10,7 @@ export const PERMISSIONS = {
   "read-rigs": { role: "crew", words: "see the rigs" },
   "use-field-math": { role: "crew", words: "use the field math" },
   "record-service": { role: "crew", words: "record routine service done on a rig" },
-  "read-jobs": { role: "crew", words: "see the jobs, who is on them each day, and record loads sprayed" },
+  "read-jobs": { role: "crew", words: "see the jobs and record the loads sprayed on them" },
   "edit-guides": { role: "trainer", words: "write and edit guides on the guide desk" },
   "read-board": { role: "supervisor", words: "see the fault board" },
   "read-cases": { role: "supervisor", words: "see every case" },

@@ -40,11 +40,11 @@ describe("reports kept in memory", () => {
     const again = await board();
     expect(again.gzipped).toBe(false);
     expect(again.data).toEqual(first.data);
-    // One look at the company's reports version per kept report (the board and its care figures), none at
-    // the figures (the other queries are the sign-in's).
+    // One look at the company's reports version per kept report (the board, its care figures and its jobs),
+    // none at the figures (the other queries are the sign-in's).
     const sql = spy.mock.calls.map((c) => String(c[0]));
-    expect(sql.filter((q) => /reports_version/.test(q))).toHaveLength(2);
-    expect(sql.filter((q) => /board_|FROM cases|FROM rigs|service_/.test(q))).toEqual([]);
+    expect(sql.filter((q) => /reports_version/.test(q))).toHaveLength(3);
+    expect(sql.filter((q) => /board_|FROM cases|FROM rigs|service_|FROM jobs|job_days/.test(q))).toEqual([]);
     spy.mockRestore();
   });
 

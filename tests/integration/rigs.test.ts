@@ -29,9 +29,9 @@ describe("rigs are scoped to the company", () => {
   it("lists only the signed-in person's company rigs", async () => {
     const cedar = await run(async () => rigsLoader(args(await requestAs("dana@cedarflats.example", "/rigs"))));
     const codes = (cedar.data as { rigs: { code: string }[] }).rigs.map((r) => r.code);
-    expect(codes).toEqual(["CF-03", "CF-07", "CF-11"]);
+    expect(codes).toEqual(["CF-01", "CF-02", "CF-03", "CF-05", "CF-07", "CF-08", "CF-09", "CF-11", "CF-12"]);
     const mesa = await run(async () => rigsLoader(args(await requestAs("sam@bluemesa.example", "/rigs"))));
-    expect((mesa.data as { rigs: { code: string }[] }).rigs.map((r) => r.code)).toEqual(["BM-01", "BM-02"]);
+    expect((mesa.data as { rigs: { code: string }[] }).rigs.map((r) => r.code)).toEqual(["BM-01", "BM-02", "BM-03", "BM-04"]);
   });
 
   it("answers 404, not 403, for another company's rig, also to its admin-only actions", async () => {

@@ -17,11 +17,11 @@ describe("the permission map", () => {
   });
 
   it("derives the menu, where people land and the words for each role", () => {
-    expect(navFor("crew").map((i) => i.label)).toEqual(["Start a fix", "Rigs", "Field math"]);
+    expect(navFor("crew").map((i) => i.label)).toEqual(["Start a fix", "Rigs", "Jobs", "Field math"]);
     expect(navFor("admin")).toHaveLength(NAV_ITEMS.length);
     expect([landingFor("crew"), landingFor("trainer"), landingFor("supervisor"), landingFor("admin")]).toEqual(["/", "/", "/board", "/board"]);
     expect(roleDescription("crew")).toBe(
-      "start a fix on a rig and walk through a guide, see the rigs, use the field math and record routine service done on a rig",
+      "start a fix on a rig and walk through a guide, see the rigs, use the field math, record routine service done on a rig and see the jobs and record the loads sprayed on them",
     );
     expect(roleDescription("trainer")).toBe("also write and edit guides on the guide desk");
     expect(roleDescription("admin")).toMatch(
