@@ -1,7 +1,7 @@
 /**
  * `npm run seed`: puts the demo companies, people, rigs and the built-in guide library into the
  * database at DATABASE_URL (migrated first with `npm run db:migrate`). `--history` adds the demo's
- * year of cases when the demo is new. Safe to run again: what is there is kept.
+ * two seasons of history when the demo is new. Safe to run again: what is there is kept.
  */
 import { closeDb } from "../db/index";
 import { seedAll } from "./seed-all";

@@ -123,7 +123,7 @@ const CEDAR_FLATS: DemoRig[] = [
     },
     behaviour: {
       use: 0.75,
-      per100h: 4.2,
+      per100h: 4.8,
       favourites: [
         ["lost-prime", 5],
         ["leaks", 3],
@@ -343,7 +343,7 @@ const BLUE_MESA: DemoRig[] = [
     },
     behaviour: {
       use: 0.9,
-      per100h: 3.8,
+      per100h: 4.8,
       favourites: [
         ["foaming", 4],
         ["agitator-stall", 2],

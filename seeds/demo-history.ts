@@ -129,16 +129,23 @@ export async function seedDemoHistory(now = new Date(), log: (line: string) => v
     const open: SimJob[] = [];
     const current = new Map<number, SimJob>();
     const sites = new Map<number, DemoSite[]>();
+    const rounds = new Map<number, number>();
     const newJob = (day: number, rig: Rig): SimJob => {
-      // Each season works through the company's sites in its own order; the hard site comes once a season.
+      // Each season works through the company's sites in its own order; a site met again that season is
+      // its next area (a subdivision's next lots, the road's next miles). The hard site is met once.
       const season = new Date(day).getUTCFullYear();
-      if (!sites.get(season)?.length) sites.set(season, shuffled(SITES[slug], random));
-      const site = sites.get(season)!.shift()!;
+      if (!sites.get(season)?.length) {
+        rounds.set(season, (rounds.get(season) ?? 0) + 1);
+        sites.set(season, shuffled(rounds.get(season)! > 1 ? SITES[slug].filter((x) => !x.hard) : SITES[slug], random));
+      }
+      const round = rounds.get(season)!;
+      const next = sites.get(season)!.shift()!;
+      const site = round > 1 ? { ...next, name: `${next.name}, area ${round}` } : next;
       const big = rig.tankGal >= 1500;
       const job: SimJob = {
         key: ++jobKey,
         site,
-        left: site.hard ? random.int(24, 34) : random.int(big ? 5 : 3, big ? 18 : 10),
+        left: site.hard ? random.int(28, 40) : random.int(big ? 8 : 4, big ? 30 : 16),
         maxRigs: site.hard ? 3 : random.int(1, 3),
         rigs: new Set(),
         firstDay: day,
@@ -160,7 +167,7 @@ export async function seedDemoHistory(now = new Date(), log: (line: string) => v
         let job = current.get(rig.id);
         if (!job || job.left <= 0) {
           const joinable = open.filter((j) => j.left > 0 && day - j.lastDay <= 7 * DAY && j.rigs.size < j.maxRigs && !j.rigs.has(rig.id));
-          job = joinable.length && random.next() < 0.45 ? random.pick(joinable) : newJob(day, rig);
+          job = joinable.length && random.next() < 0.55 ? random.pick(joinable) : newJob(day, rig);
           current.set(rig.id, job);
         }
         job.left -= 1;
@@ -452,8 +459,10 @@ async function planToday(
   const dana = (await User.findOne({ where: { companyId, email: "dana@cedarflats.example" }, attributes: ["id"] }))?.id;
   if (!dana) return;
   const rig = rigs.find((r) => r.code === "CF-07")!;
-  if (plan.some((p) => p.day === today && (p.rigId === rig.id || p.userId === dana))) return;
-  const job: SimJob = {
+  if (plan.some((p) => p.day === today && p.userId === dana)) return;
+  // CF-07 carries on with a job: Dana joins it. Otherwise a short winter erosion-control job for the two.
+  const carried = plan.find((p) => p.day === today && p.rigId === rig.id)?.job;
+  const job: SimJob = carried ?? {
     key: Math.max(0, ...jobs.map((j) => j.job.key)) + 1,
     site: { name: "Millrace Creek culvert", customer: "Larch County Roads", address: "Millrace Rd at the creek crossing", elevationFt: 610, spec: "mulch" },
     left: 6,
@@ -464,10 +473,10 @@ async function planToday(
     rigDays: 0,
     sprayedSqFt: 0,
   };
-  jobs.push({ companyId, job });
+  if (!carried) jobs.push({ companyId, job });
   for (const day of days) {
-    plan.push({ companyId, job, day, rigId: rig.id, userId: null });
-    if (!busy.has(dana)) plan.push({ companyId, job, day, rigId: null, userId: dana });
+    if (!carried) plan.push({ companyId, job, day, rigId: rig.id, userId: null });
+    plan.push({ companyId, job, day, rigId: null, userId: dana });
   }
 }
 

@@ -69,7 +69,7 @@ export const SITES: Record<CompanySlug, DemoSite[]> = {
       spec: "mulch",
       // Crushed-rock fines in the mulch water, 400 ft hose runs up the benches (invented).
       hard: {
-        factor: 2.6,
+        factor: 3.2,
         ends: [
           ["excessive-wear", "handoff-wear"],
           ["excessive-wear", "fixed-worn-tip"],
@@ -100,7 +100,7 @@ export const SITES: Record<CompanySlug, DemoSite[]> = {
       spec: "mulch",
       // Thin air and a creek 12 ft below the pump: the suction lift is near the limit (invented).
       hard: {
-        factor: 2.4,
+        factor: 3,
         ends: [
           ["lost-prime", "fixed-lift"],
           ["lost-prime", "handoff-lift"],

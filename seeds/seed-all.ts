@@ -5,7 +5,7 @@ import { seedServiceHistory } from "./demo-service";
 import { importBuiltinGuides } from "./import-guides";
 
 /**
- * Everything a start puts in the database; safe to run on every start. The year of demo
+ * Everything a start puts in the database; safe to run on every start. The two seasons of demo
  * history is added only with `history` (npm start), not for the tests' clean databases.
  */
 export async function seedAll({ history = false, log = console.log }: { history?: boolean; log?: (line: string) => void } = {}): Promise<void> {

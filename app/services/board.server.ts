@@ -187,17 +187,20 @@ async function liveChains(params: Params, rigFilter: string): Promise<ChainRow[]
   return rows.map(chainRow);
 }
 
-/** Faults, downtime and rig-days per job over the board's window (and rig): the board's "Jobs" table. */
-export async function jobBoardFor(user: SessionUser, w: BoardWindow): Promise<JobBoardRow[]> {
-  return keptReport(user.companyId, "job-board", w, async () => {
-    const ymd = (t: Date) => t.toISOString().slice(0, 10);
-    const params = { company: user.companyId, from: ymd(w.from), to: ymd(w.to), start: w.from, end: w.to, rig: w.rigCode ?? null };
-    const rigDays = w.rigCode ? "AND d.rig_id = (SELECT id FROM rigs WHERE company_id = :company AND code = :rig)" : "";
-    const rigCases = w.rigCode ? "AND c.rig_id = (SELECT id FROM rigs WHERE company_id = :company AND code = :rig)" : "";
-    const q = <T extends object>(sql: string) => reports().query<T>(sql, { replacements: params, type: QueryTypes.SELECT });
-    const fixes = `FROM cases c WHERE c.company_id = :company AND c.kind = 'fix' AND c.job_id IS NOT NULL AND c.opened_at >= :start AND c.opened_at < :end ${rigCases}`;
-    const [rows, causes] = await Promise.all([
-      q<Record<string, unknown>>(`
+/** The board's "Jobs" table, kept per company and window like the board. */
+export const jobBoardFor = (user: SessionUser, w: BoardWindow): Promise<JobBoardRow[]> =>
+  keptReport(user.companyId, "job-board", w, () => jobBoardRows(user.companyId, w));
+
+/** Faults, downtime and rig-days per job over the board's window (and rig), read fresh. */
+export async function jobBoardRows(companyId: number, w: BoardWindow): Promise<JobBoardRow[]> {
+  const ymd = (t: Date) => t.toISOString().slice(0, 10);
+  const params = { company: companyId, from: ymd(w.from), to: ymd(w.to), start: w.from, end: w.to, rig: w.rigCode ?? null };
+  const rigDays = w.rigCode ? "AND d.rig_id = (SELECT id FROM rigs WHERE company_id = :company AND code = :rig)" : "";
+  const rigCases = w.rigCode ? "AND c.rig_id = (SELECT id FROM rigs WHERE company_id = :company AND code = :rig)" : "";
+  const q = <T extends object>(sql: string) => reports().query<T>(sql, { replacements: params, type: QueryTypes.SELECT });
+  const fixes = `FROM cases c WHERE c.company_id = :company AND c.kind = 'fix' AND c.job_id IS NOT NULL AND c.opened_at >= :start AND c.opened_at < :end ${rigCases}`;
+  const [rows, causes] = await Promise.all([
+    q<Record<string, unknown>>(`
         SELECT j.id, j.name, j.elevation_ft, j.closed_at IS NOT NULL AS closed, d.rig_days, f.faults, f.downtime, f.open_handoffs
         FROM jobs j
         LEFT JOIN (SELECT d.job_id, COUNT(*) AS rig_days FROM job_days d
@@ -205,25 +208,24 @@ export async function jobBoardFor(user: SessionUser, w: BoardWindow): Promise<Jo
         LEFT JOIN (SELECT c.job_id, COUNT(*) AS faults, COALESCE(SUM(TIMESTAMPDIFF(SECOND, c.opened_at, c.closed_at)), 0) AS downtime,
           SUM(c.outcome = 'handoff' AND c.handoff_resolved_at IS NULL) AS open_handoffs ${fixes} GROUP BY c.job_id) f ON f.job_id = j.id
         WHERE j.company_id = :company AND (d.rig_days IS NOT NULL OR f.faults IS NOT NULL)`),
-      q<Record<string, unknown>>(`SELECT c.job_id, c.cause_code, COUNT(*) AS n ${fixes} AND c.cause_code IS NOT NULL GROUP BY c.job_id, c.cause_code`),
-    ]);
-    const top = new Map<number, { code: string; count: number }>();
-    for (const c of causes) {
-      const id = n(c.job_id);
-      if (!top.has(id) || n(c.n) > top.get(id)!.count) top.set(id, { code: String(c.cause_code), count: n(c.n) });
-    }
-    return jobBoard(
-      rows.map((r) => ({
-        jobId: n(r.id),
-        name: String(r.name),
-        elevationFt: r.elevation_ft === null ? null : n(r.elevation_ft),
-        closed: Boolean(n(r.closed)),
-        rigDays: n(r.rig_days),
-        faults: n(r.faults),
-        downtimeSeconds: n(r.downtime),
-        openHandoffs: n(r.open_handoffs),
-        topCause: top.get(n(r.id)) ?? null,
-      })),
-    );
-  });
+    q<Record<string, unknown>>(`SELECT c.job_id, c.cause_code, COUNT(*) AS n ${fixes} AND c.cause_code IS NOT NULL GROUP BY c.job_id, c.cause_code`),
+  ]);
+  const top = new Map<number, { code: string; count: number }>();
+  for (const c of causes) {
+    const id = n(c.job_id);
+    if (!top.has(id) || n(c.n) > top.get(id)!.count) top.set(id, { code: String(c.cause_code), count: n(c.n) });
+  }
+  return jobBoard(
+    rows.map((r) => ({
+      jobId: n(r.id),
+      name: String(r.name),
+      elevationFt: r.elevation_ft === null ? null : n(r.elevation_ft),
+      closed: Boolean(n(r.closed)),
+      rigDays: n(r.rig_days),
+      faults: n(r.faults),
+      downtimeSeconds: n(r.downtime),
+      openHandoffs: n(r.open_handoffs),
+      topCause: top.get(n(r.id)) ?? null,
+    })),
+  );
 }

@@ -1,10 +1,14 @@
 import type { Page } from "playwright-core";
 import { describe, expect, it } from "vitest";
-import { GuideRecord, Rig } from "../../db/index";
+import { GuideRecord, type Job, JobDay, Rig, User } from "../../db/index";
+import { isoInZone } from "~/lib/format";
+import { makeJob } from "../helpers/jobs";
 import { appAndBrowserForFile, signIn, startCaseFromPage } from "../helpers/app";
 import { axeFindings } from "../helpers/axe";
 
 const harness = appAndBrowserForFile();
+/** The job the crew's checks make; the admin's pages open it too. */
+let job: Job;
 
 /** Every page a person of this role opens, checked at 360×640: axe (AAA contrast included), a title and one level-one heading. */
 async function checkPages(p: Page, paths: string[]) {
@@ -38,7 +42,17 @@ describe("every page at 360×640 passes axe with AAA contrast, has a title and o
     // A rig card too, at its shut-down stop (read with the hour meter as it starts).
     const rig = (await Rig.findOne({ where: { code: "CF-07" } }))!;
     const card = await startCaseFromPage(p, "CF-07", "pre-start", rig.engineHours);
+    // A job today for CF-07 and Dana: her home shows it, the load card and suction check work to it.
+    const dana = (await User.findOne({ where: { email: "dana@cedarflats.example" } }))!;
+    job = await makeJob(rig.companyId);
+    const today = isoInZone(new Date(), "America/Denver").slice(0, 10);
+    await JobDay.bulkCreate([
+      { companyId: rig.companyId, jobId: job.id, day: today, rigId: rig.id, userId: null },
+      { companyId: rig.companyId, jobId: job.id, day: today, rigId: null, userId: dana.id },
+    ]);
     const pages = [
+      "/jobs",
+      `/jobs/${job.id}`,
       "/rigs/CF-07/cards",
       `/cases/${card}/walk`,
       "/",
@@ -82,6 +96,10 @@ describe("every page at 360×640 passes axe with AAA contrast, has a title and o
         "/admin/company",
         "/rigs/new",
         "/rigs/CF-07/edit",
+        "/jobs",
+        "/jobs/new",
+        `/jobs/${job.id}`,
+        `/jobs/${job.id}/edit`,
       ]),
     ).toEqual([]);
     await p.close();

@@ -14,13 +14,13 @@ const navLabels = async (p: Page) => (await p.getByRole("navigation", { name: "M
 
 describe("sign-in and navigation at 360 px", () => {
   it.each([
-    ["dana@cedarflats.example", "Crew", ["Start a fix", "Rigs", "Field math"]],
-    ["ravi@cedarflats.example", "Trainer", ["Start a fix", "Rigs", "Field math", "Guide desk"]],
-    ["mo@cedarflats.example", "Supervisor", ["Start a fix", "Rigs", "Field math", "Guide desk", "Fault board", "Cases"]],
+    ["dana@cedarflats.example", "Crew", ["Start a fix", "Rigs", "Jobs", "Field math"]],
+    ["ravi@cedarflats.example", "Trainer", ["Start a fix", "Rigs", "Jobs", "Field math", "Guide desk"]],
+    ["mo@cedarflats.example", "Supervisor", ["Start a fix", "Rigs", "Jobs", "Field math", "Guide desk", "Fault board", "Cases"]],
     [
       "june@cedarflats.example",
       "Admin",
-      ["Start a fix", "Rigs", "Field math", "Guide desk", "Fault board", "Cases", "Add a rig", "People", "Outbox", "Company"],
+      ["Start a fix", "Rigs", "Jobs", "Field math", "Guide desk", "Fault board", "Cases", "Add a rig", "People", "Outbox", "Company"],
     ],
   ])("%s sees the %s navigation and their company", async (email, role, expected) => {
     const p = await freshPage();

@@ -10,6 +10,7 @@ import { action as newAction } from "~/routes/jobs.new";
 import { action as loadAction } from "~/routes/api.jobs.$jobId.loads";
 import { loader as kitLoader } from "~/routes/api.offline-kit";
 import { loader as casesLoader } from "~/routes/cases";
+import { loader as walkLoader } from "~/routes/cases.$id.walk";
 import { todayIn } from "~/services/jobs.server";
 import { Case, Company, Job, JobDay, JobLoad, Rig, User } from "../../db/index";
 import { resetDatabase, rebuildRollups } from "../helpers/db";
@@ -183,6 +184,9 @@ describe("planning rigs and people by day", () => {
     expect(kit.data.jobs.jobs.map((j: { id: number }) => j.id)).toContain(a.id);
     const fix = await walkThroughApi(DANA, LOW_WATER_WALK);
     expect((await Case.findByPk(fix))!.jobId).toBe(a.id);
+    // The walk's calculators work to the case's job (the suction check inside lost prime starts from its elevation).
+    const walk = await run(async () => walkLoader(args(await requestAs(DANA, `/cases/${fix}/walk`), { id: fix })));
+    expect(walk.data.rig.job).toMatchObject({ id: a.id, elevationFt: 7200 });
     const card = await walkThroughApi(DANA, preStartWalk((await Rig.findOne({ where: { code: "CF-07" } }))!.engineHours + 1));
     expect(await Case.findByPk(card)).toMatchObject({ kind: "card", jobId: a.id });
     // A fix sent late keeps its own day: started yesterday, nobody was planned.
