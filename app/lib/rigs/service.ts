@@ -31,8 +31,9 @@ const worst = (a: ServiceStatus, b: ServiceStatus) => (rank(a) <= rank(b) ? a : 
 const statusOf = (left: number, soonWithin: number): ServiceStatus => (left < 0 ? "overdue" : left === 0 ? "due" : left <= soonWithin ? "soon" : "ok");
 
 /** Whole calendar days between two instants as the company's clock reads them. */
-export function calendarDaysBetween(from: Date | string, to: Date | string, timeZone: string): number {
-  const day = (at: Date | string) => Date.parse(`${isoInZone(at, timeZone).slice(0, 10)}T00:00:00Z`);
+export function calendarDaysBetween(from: Date | string, to: Date | string, timeZone: string, dayIn?: (at: string) => string): number {
+  const day = (at: Date | string) =>
+    Date.parse(`${dayIn ? dayIn(typeof at === "string" ? at : at.toISOString()) : isoInZone(at, timeZone).slice(0, 10)}T00:00:00Z`);
   return Math.round((day(to) - day(from)) / 86_400_000);
 }
 
@@ -46,6 +47,8 @@ export function serviceDue(
   rig: { hasHourMeter: boolean; engineHours: number },
   now: Date,
   timeZone: string,
+  /** The day of a time in `timeZone`, when the caller keeps them worked out (the board asks thousands). */
+  dayIn?: (at: string) => string,
 ): ServiceDue {
   if (!last) return { status: "never", hoursLeft: null, daysLeft: null };
   let status: ServiceStatus | null = null;
@@ -57,7 +60,7 @@ export function serviceDue(
     status = statusOf(hoursLeft, rule.everyHours / 10);
   }
   if (rule.everyDays !== null) {
-    daysLeft = rule.everyDays - calendarDaysBetween(last.doneAt, now, timeZone);
+    daysLeft = rule.everyDays - calendarDaysBetween(last.doneAt, now, timeZone, dayIn);
     const byDays = statusOf(daysLeft, Math.floor(rule.everyDays / 10));
     status = status ? worst(status, byDays) : byDays;
   }

@@ -81,7 +81,15 @@ const MAX_DAY_HOURS = 24;
 /** A reading further back than this (a long weekend and some) cannot say what one day ran. */
 const MAX_GAP_DAYS = 4;
 
-const dayIn = (at: string, zone: string) => isoInZone(at, zone).slice(0, 10);
+/** A time's day in the zone, worked out once per time: a board asks it of thousands of cards, several times each. */
+function daysIn(zone: string): (at: string) => string {
+  const known = new Map<string, string>();
+  return (at) => {
+    let day = known.get(at);
+    if (day === undefined) known.set(at, (day = isoInZone(at, zone).slice(0, 10)));
+    return day;
+  };
+}
 /** The Monday of a day's week, as YYYY-MM-DD. */
 export function weekOf(day: string): string {
   const t = Date.parse(`${day}T00:00:00Z`);
@@ -101,7 +109,7 @@ function rateGroup(days: number, hours: number, faults: number, confidence: numb
  * running; a day whose end was not read passes its hours on to the next day read, if that is
  * within a few days (else the day is left unmeasured: the hours could belong to any day between).
  */
-export function hoursByDay(readings: readonly Reading[], zone: string): Map<string, number> {
+export function hoursByDay(readings: readonly Reading[], zone: string, dayIn = daysIn(zone)): Map<string, number> {
   const byRig = new Map<number, Reading[]>();
   for (const r of readings) {
     const list = byRig.get(r.rigId);
@@ -111,7 +119,7 @@ export function hoursByDay(readings: readonly Reading[], zone: string): Map<stri
   const out = new Map<string, number>();
   for (const [rigId, list] of byRig) {
     const lastOfDay = new Map<string, number>();
-    for (const r of [...list].sort((a, b) => a.at.localeCompare(b.at))) lastOfDay.set(dayIn(r.at, zone), r.hours);
+    for (const r of [...list].sort((a, b) => a.at.localeCompare(b.at))) lastOfDay.set(dayIn(r.at), r.hours);
     let before: { day: string; hours: number } | null = null;
     for (const [day, hours] of [...lastOfDay].sort(([a], [b]) => a.localeCompare(b))) {
       const run = before === null ? null : hours - before.hours;
@@ -134,20 +142,25 @@ export function overdueAt(
   hours: number | null,
   hasHourMeter: boolean,
   zone: string,
+  dayIn: (at: string) => string = daysIn(zone),
 ): string[] {
   return rules.flatMap((rule) => {
     if (rule.since > at) return [];
     const list = done.get(rule.id) ?? [];
-    let last: DoneRow | undefined;
-    for (const d of list) {
-      if (d.at > at) break;
-      last = d;
+    // The last record at or before `at` (the list is oldest first): a binary search, as a board reads thousands.
+    let lo = 0;
+    let hi = list.length;
+    while (lo < hi) {
+      const mid = (lo + hi) >> 1;
+      if (list[mid].at <= at) lo = mid + 1;
+      else hi = mid;
     }
+    const last: DoneRow | undefined = list[lo - 1];
     // Never recorded: not known to be overdue (it may have been done before Tankside kept it).
     if (!last) return [];
     const from = { doneAt: last.at, engineHours: last.hours };
     const rig = { hasHourMeter: hasHourMeter && hours !== null && from.engineHours !== null, engineHours: hours ?? 0 };
-    return serviceDue(rule, from, rig, new Date(at), zone).status === "overdue" ? [rule.name] : [];
+    return serviceDue(rule, from, rig, new Date(at), zone, dayIn).status === "overdue" ? [rule.name] : [];
   });
 }
 
@@ -170,8 +183,9 @@ export function careFigures(
   confidence = 0.95,
 ): CareFigures {
   const { zone } = input;
+  const dayIn = daysIn(zone);
   const inWindow = (at: string) => {
-    const day = dayIn(at, zone);
+    const day = dayIn(at);
     return day >= input.fromDay && day < input.toDay;
   };
   const cardsIn = input.cards.filter((c) => inWindow(c.at));
@@ -180,14 +194,14 @@ export function careFigures(
   const hours = hoursByDay(
     input.readings.filter((r) => metered.has(r.rigId)),
     zone,
+    dayIn,
   );
-  const complete = new Set(cardsIn.filter((c) => c.slug === PRE_START && c.complete).map((c) => `${c.rigId}:${dayIn(c.at, zone)}`));
+  const complete = new Set(cardsIn.filter((c) => c.slug === PRE_START && c.complete).map((c) => `${c.rigId}:${dayIn(c.at)}`));
   const faultsOn = new Map<string, number>();
-  for (const f of faultsIn)
-    if (metered.has(f.rigId)) faultsOn.set(`${f.rigId}:${dayIn(f.at, zone)}`, (faultsOn.get(`${f.rigId}:${dayIn(f.at, zone)}`) ?? 0) + 1);
+  for (const f of faultsIn) if (metered.has(f.rigId)) faultsOn.set(`${f.rigId}:${dayIn(f.at)}`, (faultsOn.get(`${f.rigId}:${dayIn(f.at)}`) ?? 0) + 1);
 
   // A worked rig-day: one with a card or a fault. Measured when its hours are known.
-  const worked = new Set<string>([...faultsOn.keys(), ...cardsIn.filter((c) => metered.has(c.rigId)).map((c) => `${c.rigId}:${dayIn(c.at, zone)}`)]);
+  const worked = new Set<string>([...faultsOn.keys(), ...cardsIn.filter((c) => metered.has(c.rigId)).map((c) => `${c.rigId}:${dayIn(c.at)}`)]);
   const sums = { with: { days: 0, hours: 0, faults: 0 }, without: { days: 0, hours: 0, faults: 0 } };
   const measured: { key: string; run: number; faults: number }[] = [];
   let unmeasured = 0;
@@ -223,6 +237,7 @@ export function careFigures(
       f.hours,
       rig.hasHourMeter,
       zone,
+      dayIn,
     );
     if (names.length) withOverdue++;
     for (const n of names) byService.set(n, (byService.get(n) ?? 0) + 1);
@@ -231,7 +246,7 @@ export function careFigures(
   // The same rig-days split by whether a service was overdue at the day's last reading.
   const lastReading = new Map<string, Reading>();
   for (const r of input.readings) {
-    const key = `${r.rigId}:${dayIn(r.at, zone)}`;
+    const key = `${r.rigId}:${dayIn(r.at)}`;
     if (!lastReading.has(key) || lastReading.get(key)!.at < r.at) lastReading.set(key, r);
   }
   const overdueSums = { with: { days: 0, hours: 0, faults: 0 }, without: { days: 0, hours: 0, faults: 0 } };
@@ -245,6 +260,7 @@ export function careFigures(
       r.hours,
       true,
       zone,
+      dayIn,
     );
     const g = names.length ? overdueSums.with : overdueSums.without;
     g.days++;
@@ -255,18 +271,30 @@ export function careFigures(
   const shown = input.weeksShown ?? 8;
   const lastWeek = Date.parse(`${weekOf(input.today)}T00:00:00Z`);
   const weeks = Array.from({ length: shown }, (_, i) => new Date(lastWeek - i * 7 * 86_400_000).toISOString().slice(0, 10));
-  const allFaultDays = new Set(input.faults.map((f) => `${f.rigId}:${dayIn(f.at, zone)}`));
+  // Cards and fault days by rig and week, gathered once (a board reads thousands of cards).
+  const weekly = new Map<string, { days: Set<string>; preStartDays: Set<string>; otherCards: number }>();
+  const cell = (rigId: number, day: string) => {
+    const key = `${rigId}:${weekOf(day)}`;
+    let c = weekly.get(key);
+    if (!c) weekly.set(key, (c = { days: new Set(), preStartDays: new Set(), otherCards: 0 }));
+    return c;
+  };
+  for (const c of input.cards) {
+    const day = dayIn(c.at);
+    const w = cell(c.rigId, day);
+    w.days.add(day);
+    if (c.complete && c.slug === PRE_START) w.preStartDays.add(day);
+    else if (c.complete) w.otherCards++;
+  }
+  for (const f of input.faults) {
+    const day = dayIn(f.at);
+    cell(f.rigId, day).days.add(day);
+  }
   const cardWeeks = input.rigs.map((rig) => ({
     rigCode: rig.code,
     cells: weeks.map((week) => {
-      const cards = input.cards.filter((c) => c.rigId === rig.id && weekOf(dayIn(c.at, zone)) === week);
-      const days = new Set(cards.map((c) => dayIn(c.at, zone)));
-      for (const key of allFaultDays) {
-        const [id, day] = [Number(key.slice(0, key.indexOf(":"))), key.slice(key.indexOf(":") + 1)];
-        if (id === rig.id && weekOf(day) === week) days.add(day);
-      }
-      const preStartDays = new Set(cards.filter((c) => c.slug === PRE_START && c.complete).map((c) => dayIn(c.at, zone))).size;
-      return { week, workedDays: days.size, preStartDays, otherCards: cards.filter((c) => c.slug !== PRE_START && c.complete).length };
+      const w = weekly.get(`${rig.id}:${week}`);
+      return { week, workedDays: w?.days.size ?? 0, preStartDays: w?.preStartDays.size ?? 0, otherCards: w?.otherCards ?? 0 };
     }),
   }));
 
