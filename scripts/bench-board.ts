@@ -183,7 +183,7 @@ async function rebuild(label: string, companyId?: number) {
   const t = performance.now();
   await rebuildBoardRollups(sequelize, companyId);
   rebuilds.push([label, performance.now() - t]);
-  await sequelize.query("ANALYZE TABLE board_rig_days, board_mix, board_chains");
+  await sequelize.query("ANALYZE TABLE board_rig_days, board_mix, board_chains, board_job_mix");
 }
 try {
   await reset();

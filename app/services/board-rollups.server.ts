@@ -58,6 +58,24 @@ async function refreshDays(sequelize: Sequelize, s: Scope, from: Date, to: Date)
     days,
   );
 
+  await run("DELETE FROM board_job_mix WHERE company_id = :company AND span = 'day' AND period >= :from AND period < :to", days);
+  await run(
+    `INSERT INTO board_job_mix (company_id, span, period, job_id, rig_id, cause_code, cases, handoff, repair_seconds)
+     SELECT c.company_id, 'day', DATE(c.opened_at), c.job_id, c.rig_id, COALESCE(c.cause_code, ''), COUNT(*), SUM(c.outcome = 'handoff'),
+       COALESCE(SUM(TIMESTAMPDIFF(SECOND, c.opened_at, c.closed_at)), 0)
+     FROM cases c WHERE ${caseDays} AND c.job_id IS NOT NULL
+     GROUP BY c.company_id, DATE(c.opened_at), c.job_id, c.rig_id, COALESCE(c.cause_code, '')`,
+    days,
+  );
+  await run("DELETE FROM board_job_mix WHERE company_id = :company AND span = 'month' AND period >= :from AND period < :to", months);
+  await run(
+    `INSERT INTO board_job_mix (company_id, span, period, job_id, rig_id, cause_code, cases, handoff, repair_seconds)
+     SELECT company_id, 'month', DATE_FORMAT(period, '%Y-%m-01'), job_id, rig_id, cause_code, SUM(cases), SUM(handoff), SUM(repair_seconds)
+     FROM board_job_mix WHERE company_id = :company AND span = 'day' AND period >= :from AND period < :to
+     GROUP BY company_id, DATE_FORMAT(period, '%Y-%m-01'), job_id, rig_id, cause_code`,
+    months,
+  );
+
   await run("DELETE FROM board_mix WHERE company_id = :company AND span = 'day' AND period >= :from AND period < :to", days);
   await run(
     `INSERT INTO board_mix (company_id, span, period, rig_id, opened_by, guide_id, cause_code, cases, handoff, repair_seconds)

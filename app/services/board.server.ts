@@ -191,41 +191,67 @@ async function liveChains(params: Params, rigFilter: string): Promise<ChainRow[]
 export const jobBoardFor = (user: SessionUser, w: BoardWindow): Promise<JobBoardRow[]> =>
   keptReport(user.companyId, "job-board", w, () => jobBoardRows(user.companyId, w));
 
-/** Faults, downtime and rig-days per job over the board's window (and rig), read fresh. */
+/**
+ * Faults, downtime and rig-days per job over the board's window (and rig), read fresh: faults from
+ * the job rollup (per month and edge day, job, rig and cause), rig-days from the plan, open hand-offs from the few
+ * open ones, so the cost follows jobs and days rather than cases.
+ */
 export async function jobBoardRows(companyId: number, w: BoardWindow): Promise<JobBoardRow[]> {
-  const ymd = (t: Date) => t.toISOString().slice(0, 10);
-  const params = { company: companyId, from: ymd(w.from), to: ymd(w.to), start: w.from, end: w.to, rig: w.rigCode ?? null };
-  const rigDays = w.rigCode ? "AND d.rig_id = (SELECT id FROM rigs WHERE company_id = :company AND code = :rig)" : "";
-  const rigCases = w.rigCode ? "AND c.rig_id = (SELECT id FROM rigs WHERE company_id = :company AND code = :rig)" : "";
+  const [rig] = w.rigCode
+    ? await reports().query<{ id: number }>("SELECT id FROM rigs WHERE company_id = :company AND code = :code", {
+        replacements: { company: companyId, code: w.rigCode },
+        type: QueryTypes.SELECT,
+      })
+    : [];
+  const params = { company: companyId, ...periods(w.from, w.to), start: w.from, end: w.to, rig: rig?.id ?? -1 };
+  const onRig = (alias: string) => (w.rigCode ? `AND ${alias}.rig_id = :rig` : "");
   const q = <T extends object>(sql: string) => reports().query<T>(sql, { replacements: params, type: QueryTypes.SELECT });
-  const fixes = `FROM cases c WHERE c.company_id = :company AND c.kind = 'fix' AND c.job_id IS NOT NULL AND c.opened_at >= :start AND c.opened_at < :end ${rigCases}`;
-  const [rows, causes] = await Promise.all([
+  const [faults, rigDays, open] = await Promise.all([
     q<Record<string, unknown>>(`
-        SELECT j.id, j.name, j.elevation_ft, j.closed_at IS NOT NULL AS closed, d.rig_days, f.faults, f.downtime, f.open_handoffs
-        FROM jobs j
-        LEFT JOIN (SELECT d.job_id, COUNT(*) AS rig_days FROM job_days d
-          WHERE d.company_id = :company AND d.rig_id IS NOT NULL AND d.day >= :from AND d.day < :to ${rigDays} GROUP BY d.job_id) d ON d.job_id = j.id
-        LEFT JOIN (SELECT c.job_id, COUNT(*) AS faults, COALESCE(SUM(TIMESTAMPDIFF(SECOND, c.opened_at, c.closed_at)), 0) AS downtime,
-          SUM(c.outcome = 'handoff' AND c.handoff_resolved_at IS NULL) AS open_handoffs ${fixes} GROUP BY c.job_id) f ON f.job_id = j.id
-        WHERE j.company_id = :company AND (d.rig_days IS NOT NULL OR f.faults IS NOT NULL)`),
-    q<Record<string, unknown>>(`SELECT c.job_id, c.cause_code, COUNT(*) AS n ${fixes} AND c.cause_code IS NOT NULL GROUP BY c.job_id, c.cause_code`),
+      SELECT b.job_id, b.cause_code, SUM(b.cases) AS cases, SUM(b.repair_seconds) AS repair_seconds
+      FROM board_job_mix b WHERE b.company_id = :company AND ${inPeriods} ${onRig("b")}
+      GROUP BY b.job_id, b.cause_code`),
+    q<Record<string, unknown>>(`
+      SELECT d.job_id, COUNT(*) AS rig_days FROM job_days d
+      WHERE d.company_id = :company AND d.day >= :from AND d.day < :to AND d.rig_id IS NOT NULL ${onRig("d")} GROUP BY d.job_id`),
+    q<Record<string, unknown>>(`
+      SELECT c.job_id, COUNT(*) AS n FROM cases c
+      WHERE c.company_id = :company AND c.outcome = 'handoff' AND c.handoff_resolved_at IS NULL AND c.opened_at >= :start AND c.opened_at < :end
+        AND c.kind = 'fix' AND c.job_id IS NOT NULL ${onRig("c")} GROUP BY c.job_id`),
   ]);
-  const top = new Map<number, { code: string; count: number }>();
-  for (const c of causes) {
-    const id = n(c.job_id);
-    if (!top.has(id) || n(c.n) > top.get(id)!.count) top.set(id, { code: String(c.cause_code), count: n(c.n) });
+  const byJob = new Map<number, { faults: number; downtime: number; top: { code: string; count: number } | null; rigDays: number; open: number }>();
+  const row = (id: number) => {
+    let r = byJob.get(id);
+    if (!r) byJob.set(id, (r = { faults: 0, downtime: 0, top: null, rigDays: 0, open: 0 }));
+    return r;
+  };
+  for (const f of faults) {
+    const r = row(n(f.job_id));
+    r.faults += n(f.cases);
+    r.downtime += n(f.repair_seconds);
+    if (f.cause_code && (!r.top || n(f.cases) > r.top.count)) r.top = { code: String(f.cause_code), count: n(f.cases) };
   }
+  for (const d of rigDays) row(n(d.job_id)).rigDays = n(d.rig_days);
+  for (const o of open) row(n(o.job_id)).open = n(o.n);
+  if (!byJob.size) return [];
+  const jobs = await reports().query<{ id: number; name: string; elevation_ft: number | null; closed: number }>(
+    "SELECT id, name, elevation_ft, closed_at IS NOT NULL AS closed FROM jobs WHERE company_id = :company AND id IN (:ids)",
+    { replacements: { company: companyId, ids: [...byJob.keys()] }, type: QueryTypes.SELECT },
+  );
   return jobBoard(
-    rows.map((r) => ({
-      jobId: n(r.id),
-      name: String(r.name),
-      elevationFt: r.elevation_ft === null ? null : n(r.elevation_ft),
-      closed: Boolean(n(r.closed)),
-      rigDays: n(r.rig_days),
-      faults: n(r.faults),
-      downtimeSeconds: n(r.downtime),
-      openHandoffs: n(r.open_handoffs),
-      topCause: top.get(n(r.id)) ?? null,
-    })),
+    jobs.map((j) => {
+      const r = byJob.get(n(j.id))!;
+      return {
+        jobId: n(j.id),
+        name: String(j.name),
+        elevationFt: j.elevation_ft === null ? null : n(j.elevation_ft),
+        closed: Boolean(n(j.closed)),
+        rigDays: r.rigDays,
+        faults: r.faults,
+        downtimeSeconds: r.downtime,
+        openHandoffs: r.open,
+        topCause: r.top,
+      };
+    }),
   );
 }

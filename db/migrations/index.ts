@@ -21,6 +21,7 @@ import * as m019 from "./019-service-rules";
 import * as m020 from "./020-reports-version";
 import * as m021 from "./021-rig-cards";
 import * as m022 from "./022-jobs";
+import * as m023 from "./023-board-job-mix";
 
 export interface Migration {
   name: string;
@@ -52,4 +53,5 @@ export const migrations: Migration[] = [
   { name: "020-reports-version", ...m020 },
   { name: "021-rig-cards", ...m021 },
   { name: "022-jobs", ...m022 },
+  { name: "023-board-job-mix", ...m023 },
 ];

@@ -4,12 +4,14 @@ import { changeCase } from "~/services/board-rollups.server";
 import { Case, Company, db, GuideRecord, GuideVersion, Rig, User } from "../../db/index";
 import type { BoardAggregates } from "~/lib/stats/board";
 import { findRepeats, summariseChain } from "~/lib/stats/repeats";
-import { boardAggregates } from "~/services/board.server";
+import { boardAggregates, jobBoardRows } from "~/services/board.server";
+import { Op } from "sequelize";
 import { closeCase } from "~/services/cases.server";
 import type { SessionUser } from "~/services/guards.server";
 import { seededRandom } from "../../seeds/random";
 import { rebuildRollups, resetDatabase } from "../helpers/db";
 import { caseRow } from "../helpers/cases";
+import { makeJob } from "../helpers/jobs";
 
 /*
  * The board reads rollups kept as cases open and close. Two checks keep them honest:
@@ -24,10 +26,13 @@ const sequelize = db();
 let cedar: Company;
 let crew: SessionUser[];
 const opened: { id: string; at: Date; rigId: number }[] = [];
+/** Two jobs the fixture's cases fall on by day (a third of days on neither). */
+let jobIds: number[] = [];
+const jobOfDay = (at: Date) => [...jobIds, null][Math.floor(at.getTime() / DAY) % 3] ?? null;
 
 const snapshot = async () => {
   const out: Record<string, unknown[]> = {};
-  for (const table of ["board_rig_days", "board_mix", "board_chains"]) {
+  for (const table of ["board_rig_days", "board_mix", "board_chains", "board_job_mix"]) {
     const [rows] = await sequelize.query(`SELECT * FROM ${table} ORDER BY 1, 2, 3, 4, 5, 6`);
     out[table] = rows;
   }
@@ -51,6 +56,7 @@ beforeAll(async () => {
   }));
   const rigs = await Rig.findAll({ where: { companyId: cedar.id }, order: [["code", "ASC"]] });
   const version = (await GuideVersion.findOne({ include: [{ model: GuideRecord, as: "guide", where: { slug: "lost-prime" } }] }))!;
+  jobIds = [(await makeJob(cedar.id, { name: "North" })).id, (await makeJob(cedar.id, { name: "South" })).id];
   const random = seededRandom(2026);
   // 120 cases over ten months on two rigs: dense spells (chains) and quiet gaps (new chains).
   for (let i = 0; i < 120; i++) {
@@ -67,7 +73,7 @@ beforeAll(async () => {
 async function openAt(at: Date, rigId: number, openedBy: number, guideVersionId: number): Promise<string> {
   const id = randomUUID();
   await changeCase(sequelize, cedar.id, async (transaction) => {
-    await Case.create(caseRow({ id, companyId: cedar.id, rigId, guideVersionId, openedBy, openedAt: at }), { transaction });
+    await Case.create(caseRow({ id, companyId: cedar.id, rigId, guideVersionId, openedBy, openedAt: at, jobId: jobOfDay(at) }), { transaction });
     return { id, companyId: cedar.id, rigId, causeCode: null, openedAt: at };
   });
   return id;
@@ -208,6 +214,27 @@ describe("the board read from the rollups", () => {
     const loose = (p: BoardAggregates["people"][number]) => ({ ...p, guides: p.guides.map((g) => g.count), causes: p.causes.map((c) => c.count) });
     expect(got.people.map(loose)).toEqual(want.people.map(loose));
     expect(got.repeatChains.length + got.causes.length).toBeGreaterThan(0);
+    // The job table: faults, downtime, most frequent cause and open hand-offs per job, counted from the cases.
+    const cases = await Case.findAll({ where: { companyId: cedar.id, kind: "fix", openedAt: { [Op.gte]: from, [Op.lt]: to } } });
+    const jobs = await jobBoardRows(cedar.id, { from, to });
+    for (const jobId of jobIds) {
+      const mine = cases.filter((c) => c.jobId === jobId);
+      const row = jobs.find((j) => j.jobId === jobId);
+      if (!mine.length) {
+        expect(row).toBeUndefined();
+        continue;
+      }
+      const downtime = mine.reduce((s, c) => s + (c.closedAt ? Math.floor((+c.closedAt - +c.openedAt) / 1000) : 0), 0);
+      const causes = new Map<string, number>();
+      for (const c of mine) if (c.causeCode) causes.set(c.causeCode, (causes.get(c.causeCode) ?? 0) + 1);
+      const most = Math.max(0, ...causes.values());
+      expect(row).toMatchObject({
+        faults: mine.length,
+        downtimeSeconds: downtime,
+        openHandoffs: mine.filter((c) => c.outcome === "handoff" && !c.handoffResolvedAt).length,
+      });
+      if (most) expect(causes.get(row!.topCause!.code)).toBe(most);
+    }
   });
 
   it("refuses a window that does not run midnight to midnight UTC", async () => {
