@@ -17,6 +17,7 @@ export default [
   route("api/cases/:id/close", "routes/api.cases.$id.close.ts"),
   route("api/cases/:id/photos", "routes/api.cases.$id.photos.ts"),
   route("api/jobs/:jobId/loads", "routes/api.jobs.$jobId.loads.ts"),
+  route("api/jobs/:jobId/loads/:loadId", "routes/api.jobs.$jobId.loads.$loadId.ts"),
   route("cases/:id/photos/:photoId", "routes/cases.$id.photos.$photoId.ts"),
   route("rigs/:code/label", "routes/rigs.$code.label.tsx"),
   route("cases/export", "routes/cases.export.ts"),

@@ -1,3 +1,4 @@
+import { useEffect } from "react";
 import { isRouteErrorResponse } from "react-router";
 import { isNoSignal } from "~/lib/walk/no-signal";
 
@@ -18,7 +19,8 @@ const SAID: Record<number, { title: string; detail: string }> = {
 
 const NO_SIGNAL = {
   title: "No signal",
-  detail: "This page needs signal to open. Answers already kept on this phone are safe and are sent when there is signal. Try again when you have signal.",
+  detail:
+    "This page needs signal to open. What is kept on this phone (answers, photos, loads sprayed) is safe and is sent once there is signal; this page opens by itself then.",
 };
 
 /** The title and sentence for an error a route threw; the server's own message (`{ error }`) is used when it gave one. */
@@ -38,6 +40,14 @@ export function describeError(error: unknown): { title: string; detail: string }
 /** The one error screen: a page title, a heading, a plain sentence and ways back. */
 export function ErrorPanel({ error }: { error: unknown }) {
   const { title, detail } = describeError(error);
+  const noSignal = title === NO_SIGNAL.title;
+  // Signal back: open the page that could not open, so what waits is sent from it too.
+  useEffect(() => {
+    if (!noSignal) return;
+    const retry = () => window.location.reload();
+    window.addEventListener("online", retry);
+    return () => window.removeEventListener("online", retry);
+  }, [noSignal]);
   return (
     <div role="alert" className="rounded-lg border-2 border-ink bg-paper p-5">
       <title>{`${title} · Tankside`}</title>

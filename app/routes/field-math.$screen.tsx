@@ -121,7 +121,9 @@ export default function FieldMathScreen({ loaderData }: Route.ComponentProps) {
               <label htmlFor="job" className="block font-bold">
                 Job
               </label>
+              {/* Keyed on the rig and its job: a new rig brings its own job, and the box must show it. */}
               <select
+                key={`${rig?.code}:${rig?.job?.id ?? "none"}`}
                 id="job"
                 name="job"
                 defaultValue={rig?.job ? String(rig.job.id) : "none"}

@@ -7,6 +7,7 @@ import { Job, JobDay, JobLoad, Rig, sequelize, User } from "./db.server";
 import { fail, notFound, type SessionUser } from "./guards.server";
 import { reportsChanged } from "./report-cache.server";
 import { ownedBy } from "./tenancy.server";
+import { can } from "~/lib/permissions";
 
 type Tenant = Pick<SessionUser, "companyId">;
 const n = (v: unknown) => (v === null || v === undefined ? 0 : Number(v));
@@ -309,4 +310,20 @@ export async function openJobSummaries(user: SessionUser): Promise<JobSummary[]>
     jobs.map((j) => j.id),
   );
   return jobs.map((j) => jobSummary(j, totals.get(j.id)));
+}
+
+/** How long the person who marked a load may take it back (a supervisor may at any time). */
+export const TAKE_BACK_MINUTES = 60;
+
+/** Drops a load marked sprayed by mistake; another company's job or load answers 404. */
+export async function takeBackLoad(user: SessionUser, jobId: number, loadId: string): Promise<void> {
+  const job = await jobRecord(user, jobId);
+  const load = await JobLoad.findOne({ where: ownedBy(user, { id: loadId, jobId: job.id }) });
+  if (!load) notFound(`Load ${loadId}`);
+  const supervisor = can(user, "manage-jobs");
+  if (!supervisor && load.sprayedBy !== user.id) fail(403, "Only the person who marked this load, or a supervisor, can take it back.");
+  if (!supervisor && Date.now() - load.createdAt.getTime() > TAKE_BACK_MINUTES * 60_000)
+    fail(409, `Loads can be taken back within ${TAKE_BACK_MINUTES} minutes of marking. Ask your supervisor to take this one back.`);
+  await load.destroy();
+  await reportsChanged(user.companyId);
 }

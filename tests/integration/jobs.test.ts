@@ -8,6 +8,7 @@ import { action as jobAction, loader as jobLoader } from "~/routes/jobs.$jobId";
 import { loader as jobsLoader } from "~/routes/jobs";
 import { action as newAction } from "~/routes/jobs.new";
 import { action as loadAction } from "~/routes/api.jobs.$jobId.loads";
+import { action as takeBackAction } from "~/routes/api.jobs.$jobId.loads.$loadId";
 import { loader as kitLoader } from "~/routes/api.offline-kit";
 import { loader as casesLoader } from "~/routes/cases";
 import { loader as walkLoader } from "~/routes/cases.$id.walk";
@@ -291,6 +292,38 @@ describe("a job's progress", () => {
     expect(late.status).toBe(409);
     expect(late.data.error).toMatch(/closed before this load/);
     expect(await JobLoad.count({ where: { jobId: job.id } })).toBe(1);
+  });
+});
+
+describe("taking back a load marked by mistake", () => {
+  const takeBack = async (email: string, jobId: number, loadId: string, method = "DELETE") =>
+    run(async () => takeBackAction(args(await requestAs(email, `/api/jobs/${jobId}/loads/${loadId}`, { method }), { jobId: String(jobId), loadId })));
+
+  it("lets its marker take it back within the hour and a supervisor any time; nobody else, and never another company's", async () => {
+    const job = await makeJob(cf, { name: "Take back" });
+    const mark = async () => {
+      const id = randomUUID();
+      expect((await postLoad(DANA, job.id, { id, sprayedAt: new Date().toISOString(), areaSqFt: 4000, waterGal: 600 })).status).toBe(201);
+      return id;
+    };
+    const first = await mark();
+    expect((await takeBack(DANA, job.id, first, "POST")).status).toBe(405);
+    expect((await takeBack("ravi@cedarflats.example", job.id, first)).status).toBe(403);
+    expect((await takeBack(DANA, job.id, first)).status).toBe(200);
+    expect(await JobLoad.count({ where: { id: first } })).toBe(0);
+    expect((await takeBack(DANA, job.id, first)).status).toBe(404);
+    const old = await mark();
+    await JobLoad.update({ createdAt: new Date(Date.now() - 61 * 60_000) }, { where: { id: old } });
+    const late = await takeBack(DANA, job.id, old);
+    expect(late.status).toBe(409);
+    expect(late.data.error).toMatch(/within 60 minutes/);
+    expect((await takeBack(MO, job.id, old)).status).toBe(200);
+    const theirs = await makeJob(bm, { name: "Mesa take back" });
+    const sam = "sam@bluemesa.example";
+    const id = randomUUID();
+    expect((await postLoad(sam, theirs.id, { id, sprayedAt: new Date().toISOString(), areaSqFt: 4000, waterGal: 600 })).status).toBe(201);
+    expect((await takeBack(MO, theirs.id, id)).status).toBe(404);
+    expect(await JobLoad.count({ where: { id } })).toBe(1);
   });
 });
 

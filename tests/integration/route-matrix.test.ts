@@ -89,6 +89,8 @@ const EXPECTED: Record<string, Row> = {
   "POST /desk/:guideId/v/:number": r(302, 403, 400, 400, 400),
   "GET /desk/:guideId/v/:number/preview": r(302, 403, 200, 200, 200, 404),
   "POST /api/jobs/:jobId/loads": r(401, 415, 415, 415, 415),
+  // Taking a load back answers DELETE only.
+  "POST /api/jobs/:jobId/loads/:loadId": r(401, 405, 405, 405, 405),
   "GET /jobs": r(302, 200, 200, 200, 200),
   "GET /jobs/new": r(302, 403, 403, 200, 200),
   "POST /jobs/new": r(302, 403, 403, 400, 400),
@@ -123,7 +125,15 @@ beforeAll(async () => {
     "Blue Mesa own guide",
   );
   const builtIn = (await GuideVersion.findOne())!;
-  const shared = { number: "1", token: "not-a-token", photoId: "1", kind: "hose", screen: "load", "*": "nothing" };
+  const shared = {
+    number: "1",
+    token: "not-a-token",
+    photoId: "1",
+    loadId: "00000000-0000-4000-8000-000000000000",
+    kind: "hose",
+    screen: "load",
+    "*": "nothing",
+  };
   const jobOf = async (code: string) => String((await makeJob((await Rig.findOne({ where: { code } }))!.companyId)).id);
   own = { ...shared, id: await handoffOn("CF-07"), code: "CF-07", guideId: String(builtIn.guideId), jobId: await jobOf("CF-07") };
   foreign = {

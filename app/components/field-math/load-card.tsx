@@ -23,6 +23,8 @@ const STARTER: Row[] = [
 ];
 
 const AREA_UNITS = { sqft: "ft²", acres: "acres", sqm: "m²" } as const;
+/** The most the load sheet plans at once (its area limit, 100 acres). */
+const MAX_CARD_ACRES = 100;
 const today = () => new Date().toLocaleDateString("en-CA");
 
 /** What the crew typed, kept on the phone so a trip to another screen or a reload does not lose it. */
@@ -52,7 +54,8 @@ export function LoadCardMath({ rig, rules = DEFAULT_LOAD_RULES, compact = false 
   const onJob = rig?.job ?? null;
   const [job, setJob] = useState(onJob?.name ?? "");
   const [date, setDate] = useState(today);
-  const [area, setArea] = useState(onJob ? String(Math.round(onJob.remainingAcres * 100) / 100) : "1");
+  // The card plans at most 100 acres at a time: a bigger job starts from its first 100 (today's section is usually less).
+  const [area, setArea] = useState(onJob ? String(Math.round(Math.min(onJob.remainingAcres, MAX_CARD_ACRES) * 100) / 100) : "1");
   const [areaUnit, setAreaUnit] = useState<keyof typeof AREA_UNITS>("acres");
   const [tank, setTank] = useState(String(rig?.tankGal ?? 1000));
   const [ceiling, setCeiling] = useState(String(rules.fiberCeilingLbPer100Gal));
@@ -108,7 +111,7 @@ export function LoadCardMath({ rig, rules = DEFAULT_LOAD_RULES, compact = false 
         {compact ? null : (
           <div className="grid grid-cols-1 gap-3 sm:grid-cols-2">
             <label className="block font-bold">
-              Job
+              Job name on the printed card
               <input
                 value={job}
                 onChange={(e) => setJob(e.target.value)}
@@ -130,11 +133,25 @@ export function LoadCardMath({ rig, rules = DEFAULT_LOAD_RULES, compact = false 
         {onJob ? (
           <p className="rounded-md border-2 border-ink bg-field p-3">
             From the job <span className="font-bold">{onJob.name}</span>: its spec, and {fmt(onJob.remainingAcres, 2)} acres left to spray of{" "}
-            {fmt(onJob.areaAcres * onJob.passes, 2)}. Change the area to today&apos;s section if you spray less.
+            {fmt(onJob.areaAcres * onJob.passes, 2)}.{" "}
+            {onJob.remainingAcres > MAX_CARD_ACRES
+              ? `The card plans up to ${MAX_CARD_ACRES} acres at a time: put in today's section.`
+              : "Change the area to today's section if you spray less."}
           </p>
         ) : null}
         <div className="grid grid-cols-[1fr_auto] items-end gap-2">
-          <NumberField id="load-area" label="Area to cover" value={area} onChange={setArea} unit="" error={errors.areaSqFt} />
+          <NumberField
+            id="load-area"
+            label="Area to cover"
+            value={area}
+            onChange={setArea}
+            unit=""
+            error={
+              errors.areaSqFt && areaSqFt > MAX_CARD_ACRES * 43_560
+                ? `The card plans up to ${MAX_CARD_ACRES} acres (${fmt(MAX_CARD_ACRES * 43_560)} ft²) at a time: put in today's section.`
+                : errors.areaSqFt
+            }
+          />
           <select
             aria-label="Area unit"
             value={areaUnit}
@@ -257,8 +274,9 @@ export function LoadCardMath({ rig, rules = DEFAULT_LOAD_RULES, compact = false 
           </fieldset>
         )}
       </div>
-      {r ? <CardResult card={r} rules={rules} rig={rig} job={job} date={date} rates={rows} compact={compact} /> : null}
+      {/* Marking loads sprayed comes first: it is what the crew comes back to between loads. */}
       {r && onJob && !compact ? <SprayedLoads job={onJob} rigCode={rig?.code ?? null} loads={r.loads} /> : null}
+      {r ? <CardResult card={r} rules={rules} rig={rig} job={job} date={date} rates={rows} compact={compact} /> : null}
     </div>
   );
 }

@@ -2,26 +2,42 @@ import { useEffect, useState } from "react";
 import type { CardLoad } from "~/lib/field-math/load-card";
 import { fmt } from "~/lib/field-math/units";
 import { startOfTodayIn } from "~/lib/format";
-import { keepLoad, keptLoads, type KeptLoad } from "~/lib/jobs/kept-loads";
+import { keepLoad, keptLoads, takeBackLoad, type KeptLoad } from "~/lib/jobs/kept-loads";
 import type { JobSummary } from "~/lib/jobs/today";
+import { KEPT_CHANGED } from "~/components/offline/kept-sync";
 import { sendKeptLoads } from "~/components/offline/send-loads";
 import { useTimes } from "~/components/use-time-zone";
+
+const acres = (sqFt: number) => `${fmt(sqFt / 43_560, 2)} ac`;
 
 /**
  * "Load 3 sprayed": each tap records one load of the card on the job (its area and water), which is
  * how the job's progress grows. Kept on the phone first, so it works with no signal; sent at once
- * when there is signal, else when it returns.
+ * when there is signal, else when it returns. The last load marked can be taken back.
  */
 export function SprayedLoads({ job, rigCode, loads }: { job: JobSummary; rigCode: string | null; loads: CardLoad[] }) {
   const times = useTimes();
   const [marked, setMarked] = useState<KeptLoad[]>([]);
+  const [asking, setAsking] = useState(false);
   const read = () => {
     const since = startOfTodayIn(times.zone).getTime();
-    setMarked(keptLoads(window.localStorage).filter((l) => l.jobId === job.id && Date.parse(l.sprayedAt) >= since));
+    setMarked(keptLoads(window.localStorage).filter((l) => l.jobId === job.id && !l.takeBack && Date.parse(l.sprayedAt) >= since));
   };
-  useEffect(read, [job.id, times.zone]);
+  useEffect(() => {
+    read();
+    // The frame sends what waits when signal returns: show it as saved then.
+    const sendNow = () => void sendKeptLoads().then(read);
+    window.addEventListener(KEPT_CHANGED, read);
+    window.addEventListener("online", sendNow);
+    return () => {
+      window.removeEventListener(KEPT_CHANGED, read);
+      window.removeEventListener("online", sendNow);
+    };
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- read depends only on these
+  }, [job.id, times.zone]);
   const next = loads[Math.min(marked.length, loads.length - 1)];
   const allDone = marked.length >= loads.length;
+  const last = marked.at(-1);
 
   // A gloved double tap must not mark two loads: the button rests for a moment after each.
   const [resting, setResting] = useState(false);
@@ -43,32 +59,51 @@ export function SprayedLoads({ job, rigCode, loads }: { job: JobSummary; rigCode
     read();
   }
 
+  async function takeBack(id: string) {
+    takeBackLoad(window.localStorage, id);
+    setAsking(false);
+    read();
+    await sendKeptLoads();
+    read();
+  }
+
   return (
     <section aria-labelledby="sprayed-h" className="no-print mt-4 rounded-lg border-2 border-ink bg-paper p-4">
       <h2 id="sprayed-h" className="text-xl font-bold">
         Loads sprayed on {job.name} today
       </h2>
+      <button type="button" disabled={resting} onClick={() => void mark()} className="mt-3 min-h-16 w-full rounded-md bg-go px-4 text-lg font-bold text-white">
+        {allDone ? `Another load sprayed (${acres(next.areaSqFt)})` : `Load ${marked.length + 1} sprayed (${acres(next.areaSqFt)})`}
+      </button>
       {marked.length ? (
-        <ul className="mt-2 space-y-1">
+        <ul className="mt-3 space-y-1">
           {marked.map((l) => (
             <li key={l.id}>
-              Load {l.number}: {fmt(l.areaSqFt)} ft² at {times.time(l.sprayedAt)} ·{" "}
-              {l.refused ? (
-                <span className="font-bold text-stop">not taken: {l.refused}</span>
-              ) : l.sent ? (
-                "saved"
-              ) : (
-                "kept on this phone, sent when there is signal"
-              )}
+              Load {l.number}: {acres(l.areaSqFt)} at {times.time(l.sprayedAt)} ·{" "}
+              {l.refused ? <span className="font-bold text-stop">{l.refused}</span> : l.sent ? "saved" : "kept on this phone, sent when there is signal"}
             </li>
           ))}
         </ul>
       ) : (
         <p className="mt-2">None marked yet. Tap once each load is sprayed out: the job&apos;s progress counts them.</p>
       )}
-      <button type="button" disabled={resting} onClick={() => void mark()} className="mt-3 min-h-16 w-full rounded-md bg-go px-4 text-lg font-bold text-white">
-        {allDone ? `Another load sprayed (${fmt(next.acres, 2)} ac)` : `Load ${marked.length + 1} sprayed (${fmt(next.acres, 2)} ac)`}
-      </button>
+      {last && !last.refused ? (
+        asking ? (
+          <div className="mt-3 space-y-2 rounded-md border-2 border-stop p-3">
+            <p className="font-bold">Take back load {last.number}? It no longer counts on the job.</p>
+            <button type="button" onClick={() => void takeBack(last.id)} className="min-h-12 w-full rounded-md bg-stop px-4 font-bold text-white">
+              Yes, take back load {last.number}
+            </button>
+            <button type="button" onClick={() => setAsking(false)} className="min-h-12 w-full rounded-md border-2 border-ink px-4 font-bold">
+              Keep it
+            </button>
+          </div>
+        ) : (
+          <button type="button" onClick={() => setAsking(true)} className="mt-3 min-h-12 w-full rounded-md border-2 border-ink px-4 font-bold">
+            Marked by mistake? Take back load {last.number}
+          </button>
+        )
+      ) : null}
     </section>
   );
 }

@@ -17,12 +17,12 @@ export function TodaysJob({ job, day, personId }: { job: JobSummary; day: PlanDa
       <p>
         {job.customer}
         {site ? ` · ${site}` : ""}
-        {job.elevationFt !== null ? ` · ${fmt(job.elevationFt)} ft` : ""}
+        {job.elevationFt !== null ? ` · elevation ${fmt(job.elevationFt)} ft` : ""}
       </p>
       {day ? (
         <p className="mt-1 font-bold">
           {day.rigCodes.length ? `Rigs: ${day.rigCodes.join(", ")}` : "No rig planned"}
-          {others.length ? ` · with ${others.join(", ")}` : ""}
+          {others.length ? ` · with ${others.join(", ")}` : " · just you"}
         </p>
       ) : null}
       <p className="mt-1">{fmt(job.remainingAcres, 2)} acres left to spray.</p>

@@ -5,7 +5,9 @@ import { sendKept } from "./send-kept";
 import { sendKeptLoads } from "./send-loads";
 
 const RETRY_MS = 4000;
-const CHANGED = "tankside:kept-changed";
+/** Said on the window after each round of sending: screens that show what waits read it again. */
+export const KEPT_CHANGED = "tankside:kept-changed";
+const CHANGED = KEPT_CHANGED;
 /** A walk fully sent is dropped from the phone this long after it closed. */
 const KEEP_SENT_MS = 7 * 24 * 3600 * 1000;
 

@@ -1,4 +1,4 @@
-import { loadsToSend, updateLoad } from "~/lib/jobs/kept-loads";
+import { forgetLoad, loadsToSend, loadsToTakeBack, updateLoad } from "~/lib/jobs/kept-loads";
 
 /**
  * Sends the loads marked sprayed that wait on the phone. "waiting" when the connection dropped
@@ -24,7 +24,23 @@ export async function sendKeptLoads(store: Storage = window.localStorage): Promi
     else if (res.status >= 500 || res.status === 408 || res.status === 429) return "waiting";
     else {
       const said = (await res.json().catch(() => null)) as { error?: string } | null;
-      updateLoad(store, load.id, { refused: said?.error ?? `The server did not take this load (${res.status}).` });
+      updateLoad(store, load.id, { refused: `Not taken: ${said?.error ?? `the server refused it (${res.status}).`}` });
+    }
+  }
+  for (const load of loadsToTakeBack(store)) {
+    let res: Response;
+    try {
+      res = await fetch(`/api/jobs/${load.jobId}/loads/${load.id}`, { method: "DELETE", credentials: "same-origin" });
+    } catch {
+      return "waiting";
+    }
+    if (res.status === 401) return "signed-out";
+    // Gone already (404) is as good as taken back.
+    if (res.ok || res.status === 404) forgetLoad(store, load.id);
+    else if (res.status >= 500 || res.status === 408 || res.status === 429) return "waiting";
+    else {
+      const said = (await res.json().catch(() => null)) as { error?: string } | null;
+      updateLoad(store, load.id, { takeBack: false, refused: `Still counted: ${said?.error ?? `the server kept it (${res.status}).`}` });
     }
   }
   return "sent";

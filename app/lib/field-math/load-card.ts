@@ -72,6 +72,11 @@ export function loadCard(input: unknown, rules: LoadRules = DEFAULT_LOAD_RULES) 
   const i = parseInput(loadCardInput, input);
   const { fiberRate, waterPerAcre } = sizing(i);
   const notes: string[] = [];
+  // A spec's water rate too low for its fiber: the ceiling wins, and the card says so.
+  if (i.waterGalPerAcre && waterPerAcre > i.waterGalPerAcre)
+    notes.push(
+      `${fmt(i.waterGalPerAcre)} gal of water per acre would carry ${fmt((fiberRate * 100) / i.waterGalPerAcre)} lb of fiber per 100 gal, over the ${fmt(i.maxFiberLbPer100Gal)} lb ceiling: the loads use ${fmt(waterPerAcre)} gal per acre.`,
+    );
 
   // With one bagged fiber, a full load takes the whole bags that fit under the ceiling, and the load is sized to them.
   let acresPerFullLoad = i.tankGal / waterPerAcre;

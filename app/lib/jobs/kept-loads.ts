@@ -12,6 +12,8 @@ export interface KeptLoad extends JobLoadInput {
   sent: boolean;
   /** What the server said when it refused it (kept and shown, never dropped). */
   refused?: string;
+  /** Taken back after it was sent: the phone asks the server to drop it when there is signal. */
+  takeBack?: boolean;
 }
 
 const KEY = "tankside:job-loads";
@@ -47,3 +49,21 @@ export function updateLoad(store: KeyValueStore, id: string, change: Partial<Kep
 
 /** Loads still to send (refused ones wait for the person, not for signal). */
 export const loadsToSend = (store: KeyValueStore) => keptLoads(store).filter((l) => !l.sent && !l.refused);
+
+/** Loads taken back after they were sent: the server still has them. */
+export const loadsToTakeBack = (store: KeyValueStore) => keptLoads(store).filter((l) => l.sent && l.takeBack);
+
+/** A load marked by mistake: one the server never had is forgotten at once; a sent one waits to be taken back there. */
+export function takeBackLoad(store: KeyValueStore, id: string): void {
+  const load = keptLoads(store).find((l) => l.id === id);
+  if (!load) return;
+  if (load.sent) updateLoad(store, id, { takeBack: true });
+  else forgetLoad(store, id);
+}
+
+export function forgetLoad(store: KeyValueStore, id: string): void {
+  save(
+    store,
+    keptLoads(store).filter((l) => l.id !== id),
+  );
+}
