@@ -59,6 +59,8 @@ export default function JobPage({ loaderData, actionData }: Route.ComponentProps
   const ahead = days.filter((d) => d.day >= today);
   const past = days.filter((d) => d.day < today).reverse();
   const busy = useNavigation().state !== "idle";
+  // The load card for the rig on the job today (else the last rig on it): the tank sizes the loads.
+  const todaysRig = days.find((d) => d.day === today)?.rigCodes[0] ?? past[0]?.rigCodes[0] ?? ahead[0]?.rigCodes[0];
   const refusal = actionData && "error" in actionData ? actionData : null;
   return (
     <>
@@ -117,7 +119,7 @@ export default function JobPage({ loaderData, actionData }: Route.ComponentProps
         </ul>
         {job.closedAt ? null : (
           <Link
-            to={`/field-math/load?job=${job.id}`}
+            to={`/field-math/load?job=${job.id}${todaysRig ? `&rig=${todaysRig}` : ""}`}
             className="mt-3 flex min-h-14 items-center justify-center rounded-md bg-go px-4 text-lg font-bold text-white no-underline"
           >
             Load card for this job
@@ -130,7 +132,7 @@ export default function JobPage({ loaderData, actionData }: Route.ComponentProps
           Progress
         </h2>
         <div className="mt-2 rounded-lg border-2 border-ink bg-paper p-4">
-          <JobProgressView progress={progress} />
+          <JobProgressView progress={progress} closed={job.closedAt !== null} />
           <p className="mt-2 text-sm">
             Area from the loads marked sprayed on the load card; faults, downtime (start to close of each fix) and hand-offs from the cases on this job.
           </p>
@@ -229,7 +231,7 @@ export default function JobPage({ loaderData, actionData }: Route.ComponentProps
           ) : (
             <ConfirmAction
               label="Close this job"
-              question={`Close ${job.name}? It leaves the crews' screens and the load card, and takes no more plans; its cases and loads stay.`}
+              question={`Close ${job.name}? It leaves the crews' screens and the load card, its days after today are released for other jobs, and it takes no more plans; its cases and loads stay.`}
               confirmLabel={`Yes, close ${job.name}`}
               intent="close"
             />
@@ -251,7 +253,7 @@ function PlanList({ days, today }: { days: { day: string; rigCodes: string[]; pe
             {formatDay(d.day)}
           </span>
           <span className="block">
-            {d.rigCodes.length ? d.rigCodes.join(", ") : "no rig"} · {d.people.length ? d.people.map((p) => p.name).join(", ") : "nobody yet"}
+            {d.rigCodes.length ? d.rigCodes.join(", ") : "no rig"} · {d.people.length ? d.people.map((p) => p.name).join(", ") : "nobody planned"}
           </span>
         </li>
       ))}

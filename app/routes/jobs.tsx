@@ -63,7 +63,7 @@ export default function Jobs({ loaderData }: Route.ComponentProps) {
                 {site ? ` · ${site}` : ""}
               </p>
               <p>
-                {formatDay(job.startsOn)}
+                Dates: {formatDay(job.startsOn)}
                 {job.endsOn ? ` to ${formatDay(job.endsOn)}` : ""}
                 {job.closedAt ? ` · closed ${times.date(job.closedAt)}` : ""}
               </p>
@@ -71,7 +71,7 @@ export default function Jobs({ loaderData }: Route.ComponentProps) {
                 <p className="mt-1 font-bold">Today: {[...on.rigCodes, ...on.people.map((p) => (p.id === personId ? "you" : p.name))].join(", ")}</p>
               ) : null}
               <div className="mt-2">
-                <JobProgressView progress={job.progress} brief />
+                <JobProgressView progress={job.progress} brief closed={job.closedAt !== null} />
               </div>
             </li>
           );

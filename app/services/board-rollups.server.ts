@@ -49,21 +49,25 @@ async function refreshDays(sequelize: Sequelize, s: Scope, from: Date, to: Date)
   const caseDays = "c.company_id = :company AND c.kind = 'fix' AND c.opened_at >= :from AND c.opened_at < :to";
 
   await run("DELETE FROM board_rig_days WHERE company_id = :company AND day >= :from AND day < :to", days);
+  // Faults from fixes only; the hour meter from every reading, rig cards' too (read each working day, they measure
+  // a short window's engine hours where a few faults' readings would not).
   await run(
     `INSERT INTO board_rig_days (company_id, day, rig_id, cases, fixed, handoff, abandoned, closed, repair_seconds, min_hours, max_hours)
-     SELECT c.company_id, DATE(c.opened_at), c.rig_id, COUNT(*), SUM(c.outcome = 'fixed'), SUM(c.outcome = 'handoff'), SUM(c.outcome = 'abandoned'),
-       COUNT(c.closed_at), COALESCE(SUM(TIMESTAMPDIFF(SECOND, c.opened_at, c.closed_at)), 0), MIN(c.engine_hours), MAX(c.engine_hours)
-     FROM cases c WHERE ${caseDays}
+     SELECT c.company_id, DATE(c.opened_at), c.rig_id, SUM(c.kind = 'fix'), SUM(c.kind = 'fix' AND c.outcome = 'fixed'),
+       SUM(c.kind = 'fix' AND c.outcome = 'handoff'), SUM(c.kind = 'fix' AND c.outcome = 'abandoned'), SUM(c.kind = 'fix' AND c.closed_at IS NOT NULL),
+       COALESCE(SUM(IF(c.kind = 'fix', TIMESTAMPDIFF(SECOND, c.opened_at, c.closed_at), 0)), 0), MIN(c.engine_hours), MAX(c.engine_hours)
+     FROM cases c WHERE c.company_id = :company AND c.opened_at >= :from AND c.opened_at < :to
      GROUP BY c.company_id, DATE(c.opened_at), c.rig_id`,
     days,
   );
 
+  // Per job, faults as the rigs table counts them: fixed or handed off (an abandoned walk-through is not a found fault).
   await run("DELETE FROM board_job_mix WHERE company_id = :company AND span = 'day' AND period >= :from AND period < :to", days);
   await run(
     `INSERT INTO board_job_mix (company_id, span, period, job_id, rig_id, cause_code, cases, handoff, repair_seconds)
      SELECT c.company_id, 'day', DATE(c.opened_at), c.job_id, c.rig_id, COALESCE(c.cause_code, ''), COUNT(*), SUM(c.outcome = 'handoff'),
        COALESCE(SUM(TIMESTAMPDIFF(SECOND, c.opened_at, c.closed_at)), 0)
-     FROM cases c WHERE ${caseDays} AND c.job_id IS NOT NULL
+     FROM cases c WHERE ${caseDays} AND c.job_id IS NOT NULL AND c.outcome IN ('fixed', 'handoff')
      GROUP BY c.company_id, DATE(c.opened_at), c.job_id, c.rig_id, COALESCE(c.cause_code, '')`,
     days,
   );
@@ -197,7 +201,10 @@ export async function changeCase<T extends CaseKey>(sequelize: Sequelize, compan
   return sequelize.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED }, async (transaction) => {
     await lockCompany(sequelize, companyId, transaction);
     const changed = await change(transaction);
+    // A card is no fault, but its hour reading measures the rig's day: only its day is refreshed.
     if (changed.kind !== "card") await refreshForCase(sequelize, changed, transaction);
+    else
+      await refreshDays(sequelize, { companyId: changed.companyId, transaction }, dayOf(changed.openedAt), new Date(dayOf(changed.openedAt).getTime() + DAY));
     await raiseReportsVersion(sequelize, companyId, transaction);
     return changed;
   });

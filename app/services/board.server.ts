@@ -203,7 +203,8 @@ export async function jobBoardRows(companyId: number, w: BoardWindow): Promise<J
         type: QueryTypes.SELECT,
       })
     : [];
-  const params = { company: companyId, ...periods(w.from, w.to), start: w.from, end: w.to, rig: rig?.id ?? -1 };
+  // Days planned ahead are not worked yet: they are no exposure.
+  const params = { company: companyId, ...periods(w.from, w.to), start: w.from, end: w.to, rig: rig?.id ?? -1, today: new Date().toISOString().slice(0, 10) };
   const onRig = (alias: string) => (w.rigCode ? `AND ${alias}.rig_id = :rig` : "");
   const q = <T extends object>(sql: string) => reports().query<T>(sql, { replacements: params, type: QueryTypes.SELECT });
   const [faults, rigDays, open] = await Promise.all([
@@ -213,7 +214,7 @@ export async function jobBoardRows(companyId: number, w: BoardWindow): Promise<J
       GROUP BY b.job_id, b.cause_code`),
     q<Record<string, unknown>>(`
       SELECT d.job_id, COUNT(*) AS rig_days FROM job_days d
-      WHERE d.company_id = :company AND d.day >= :from AND d.day < :to AND d.rig_id IS NOT NULL ${onRig("d")} GROUP BY d.job_id`),
+      WHERE d.company_id = :company AND d.day >= :from AND d.day < :to AND d.day <= :today AND d.rig_id IS NOT NULL ${onRig("d")} GROUP BY d.job_id`),
     q<Record<string, unknown>>(`
       SELECT c.job_id, COUNT(*) AS n FROM cases c
       WHERE c.company_id = :company AND c.outcome = 'handoff' AND c.handoff_resolved_at IS NULL AND c.opened_at >= :start AND c.opened_at < :end
@@ -234,8 +235,8 @@ export async function jobBoardRows(companyId: number, w: BoardWindow): Promise<J
   for (const d of rigDays) row(n(d.job_id)).rigDays = n(d.rig_days);
   for (const o of open) row(n(o.job_id)).open = n(o.n);
   if (!byJob.size) return [];
-  const jobs = await reports().query<{ id: number; name: string; elevation_ft: number | null; closed: number }>(
-    "SELECT id, name, elevation_ft, closed_at IS NOT NULL AS closed FROM jobs WHERE company_id = :company AND id IN (:ids)",
+  const jobs = await reports().query<{ id: number; name: string; starts_on: string; elevation_ft: number | null; closed: number }>(
+    "SELECT id, name, DATE_FORMAT(starts_on, '%Y-%m-%d') AS starts_on, elevation_ft, closed_at IS NOT NULL AS closed FROM jobs WHERE company_id = :company AND id IN (:ids)",
     { replacements: { company: companyId, ids: [...byJob.keys()] }, type: QueryTypes.SELECT },
   );
   return jobBoard(
@@ -244,6 +245,7 @@ export async function jobBoardRows(companyId: number, w: BoardWindow): Promise<J
       return {
         jobId: n(j.id),
         name: String(j.name),
+        startsOn: String(j.starts_on),
         elevationFt: j.elevation_ft === null ? null : n(j.elevation_ft),
         closed: Boolean(n(j.closed)),
         rigDays: r.rigDays,

@@ -6,6 +6,7 @@ import { startOfDayIn } from "~/lib/format";
 
 const nextDay = (day: string) => new Date(Date.parse(`${day}T00:00:00Z`) + 86_400_000).toISOString().slice(0, 10);
 import { Job, reports, Rig, User } from "./db.server";
+import { jobLabel } from "~/lib/jobs/today";
 import { keptReport } from "./report-cache.server";
 import type { SessionUser } from "./guards.server";
 
@@ -99,7 +100,7 @@ async function readFilterOptions(user: SessionUser) {
   const [rigs, people, jobs, guides] = await Promise.all([
     Rig.findAll({ where: ownedBy(user), attributes: ["code"], order: [["code", "ASC"]] }),
     User.findAll({ where: ownedBy(user), attributes: ["id", "name"], order: [["name", "ASC"]] }),
-    Job.findAll({ where: ownedBy(user), attributes: ["id", "name"], order: [["startsOn", "DESC"]] }),
+    Job.findAll({ where: ownedBy(user), attributes: ["id", "name", "startsOn"], order: [["startsOn", "DESC"]] }),
     reports().query<{ slug: string; title: string }>(`SELECT DISTINCT g.slug, g.title FROM guides g WHERE ${usableGuideSql("g")} ORDER BY g.title`, {
       replacements: { company: user.companyId },
       type: QueryTypes.SELECT,
@@ -108,7 +109,7 @@ async function readFilterOptions(user: SessionUser) {
   return {
     rigs: rigs.map((r) => r.code),
     people: people.map((p) => ({ id: p.id, name: p.name })),
-    jobs: jobs.map((j) => ({ id: j.id, name: j.name })),
+    jobs: jobs.map((j) => ({ id: j.id, name: jobLabel(j) })),
     guides,
   };
 }

@@ -1,5 +1,5 @@
 import { Op, QueryTypes, UniqueConstraintError, type Transaction } from "sequelize";
-import { isoInZone } from "~/lib/format";
+import { formatDay, isoInZone } from "~/lib/format";
 import { jobProgress, NO_TOTALS, type JobProgress, type JobTotals } from "~/lib/jobs/progress";
 import { planDays, type JobInput, type JobLoadInput, type JobPlanInput } from "~/lib/jobs/schema";
 import { jobOn, type JobSummary, type PlanDay } from "~/lib/jobs/today";
@@ -113,11 +113,17 @@ export async function updateJob(user: SessionUser, id: number, input: JobInput):
   await reportsChanged(user.companyId);
 }
 
-/** Closes a job (it leaves today's plans and the load card's list) or opens it again. */
+/**
+ * Closes a job (it leaves today's plans and the load card's list, and its days after today are
+ * released for other jobs) or opens it again.
+ */
 export async function setJobClosed(user: SessionUser, id: number, closed: boolean): Promise<void> {
   const job = await jobRecord(user, id);
-  await job.update({ closedAt: closed ? (job.closedAt ?? new Date()) : null });
-  await reportsChanged(user.companyId);
+  await sequelize.transaction(async (transaction) => {
+    await job.update({ closedAt: closed ? (job.closedAt ?? new Date()) : null }, { transaction });
+    if (closed) await JobDay.destroy({ where: ownedBy(user, { jobId: job.id, day: { [Op.gt]: todayIn(user.timeZone) } }), transaction });
+    await reportsChanged(user.companyId, transaction);
+  });
 }
 
 /**
@@ -129,6 +135,13 @@ export async function planJob(user: SessionUser, id: number, plan: JobPlanInput)
   const job = await jobRecord(user, id);
   if (job.closedAt) return { ok: false, error: "This job is closed. Open it again to plan days on it." };
   const days = planDays(plan.from, plan.to ?? plan.from);
+  // Days outside the job's dates: change its dates first, so the plan and the job say the same.
+  const outside = days.find((d) => d < job.startsOn || (job.endsOn !== null && d > job.endsOn));
+  if (outside)
+    return {
+      ok: false,
+      error: `${formatDay(outside)} is outside the job's dates (${formatDay(job.startsOn)}${job.endsOn ? ` to ${formatDay(job.endsOn)}` : " on"}). Change the job's dates first.`,
+    };
   const [rigs, people] = await Promise.all([
     plan.rigs.length ? Rig.findAll({ where: ownedBy(user, { code: plan.rigs, retired: false }), attributes: ["id", "code"] }) : [],
     plan.people.length ? User.findAll({ where: ownedBy(user, { id: plan.people, accessRemovedAt: null }), attributes: ["id", "name"] }) : [],
@@ -151,7 +164,9 @@ export async function planJob(user: SessionUser, id: number, plan: JobPlanInput)
       if (clash) {
         const other = await Job.findByPk(clash.jobId, { attributes: ["name"], transaction });
         const who = clash.rigId ? rigs.find((r) => r.id === clash.rigId)!.code : people.find((p) => p.id === clash.userId)!.name;
-        throw new PlanClash(`${who} is already on ${other?.name ?? "another job"} on ${clash.day}. Take them off that job first, or plan other days.`);
+        throw new PlanClash(
+          `${who} is already on ${other?.name ?? "another job"} on ${formatDay(clash.day)}. Take ${clash.rigId ? "the rig" : "them"} off that job first, or plan other days.`,
+        );
       }
       await JobDay.bulkCreate(
         days.flatMap((day) => [

@@ -39,7 +39,8 @@ describe("a rig card", () => {
 
   it("is saved as a card with its reading, raises the rig's hours, records its services once, and counts as no fault", async () => {
     const before = cf07.engineHours;
-    const boardRows = await db().query<{ n: number }>("SELECT COUNT(*) AS n FROM board_rig_days", { type: QueryTypes.SELECT });
+    const faultsOnBoard = () => db().query<{ n: number }>("SELECT COALESCE(SUM(cases), 0) AS n FROM board_rig_days", { type: QueryTypes.SELECT });
+    const boardFaults = await faultsOnBoard();
     const id = await walkThroughApi(DANA, preStartWalk(before + 4.5));
     const card = (await Case.findByPk(id))!;
     expect(card.kind).toBe("card");
@@ -51,8 +52,13 @@ describe("a rig card", () => {
     const rules = new Map((await ServiceRule.findAll({ where: { rigId: cf07.id } })).map((r) => [r.id, r.task]));
     expect(records.map((r) => rules.get(r.ruleId)).sort()).toEqual(["grease", "lubricator"]);
     expect(records.every((r) => r.engineHours === before + 4.5)).toBe(true);
-    // Not a fault: no board row, not in the cases table.
-    expect(await db().query("SELECT COUNT(*) AS n FROM board_rig_days", { type: QueryTypes.SELECT })).toEqual(boardRows);
+    // Not a fault: no fault on the board (its reading measures the rig's day), not in the cases table.
+    expect(await faultsOnBoard()).toEqual(boardFaults);
+    const [day] = await db().query<{ max_hours: string }>("SELECT max_hours FROM board_rig_days WHERE rig_id = :rig AND day = DATE(:at)", {
+      replacements: { rig: cf07.id, at: card.openedAt },
+      type: QueryTypes.SELECT,
+    });
+    expect(Number(day.max_hours)).toBe(before + 4.5);
     const table = await run(async () => casesPage(args(await requestAs("mo@cedarflats.example", "/cases"))));
     expect(table.data.rows.map((r: { id: string }) => r.id)).not.toContain(id);
     // Asked for, the cards are a list of their own, with their own words.

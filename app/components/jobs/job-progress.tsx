@@ -2,12 +2,13 @@ import { fmt } from "~/lib/field-math/units";
 import type { JobProgress } from "~/lib/jobs/progress";
 
 /** A job's progress in words and a bar: area sprayed of the spec's, loads, faults, downtime, open hand-offs. */
-export function JobProgressView({ progress: p, brief = false }: { progress: JobProgress; brief?: boolean }) {
+export function JobProgressView({ progress: p, brief = false, closed = false }: { progress: JobProgress; brief?: boolean; closed?: boolean }) {
   const pct = Math.min(100, p.percent);
   return (
     <div className="space-y-2">
       <p className="text-lg font-bold">
-        {fmt(p.sprayedAcres, 2)} of {fmt(p.targetAcres, 2)} acres sprayed ({fmt(p.percent)} %) · {fmt(p.remainingAcres, 2)} acres to go
+        {fmt(p.sprayedAcres, 2)} of {fmt(p.targetAcres, 2)} acres sprayed ({fmt(p.percent)} %)
+        {closed ? " · job closed" : ` · ${fmt(p.remainingAcres, 2)} acres to go`}
       </p>
       <div
         role="progressbar"

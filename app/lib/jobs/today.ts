@@ -55,3 +55,7 @@ export function keptJobAt(
   const id = jobOn(kept.plan, isoInZone(at, timeZone).slice(0, 10), who);
   return kept.jobs.find((j) => j.id === id) ?? null;
 }
+
+const monthYear = new Intl.DateTimeFormat("en-US", { month: "short", year: "numeric", timeZone: "UTC" });
+/** A job's name with the month it started, "Route 9 widening cut slopes (Apr 2026)": a site worked again next season is told apart. */
+export const jobLabel = (job: { name: string; startsOn: string }) => `${job.name} (${monthYear.format(new Date(`${job.startsOn}T00:00:00Z`))})`;

@@ -4,6 +4,8 @@ import { poissonInterval } from "./chi-square";
 export interface JobAggregate {
   jobId: number;
   name: string;
+  /** When it started (YYYY-MM-DD): a site worked again next season is told apart by it. */
+  startsOn: string;
   elevationFt: number | null;
   closed: boolean;
   /** Rig-days planned on the job in the window: the exposure its faults are measured against. */

@@ -93,6 +93,7 @@ describe("the board by job", () => {
     const row = (jobId: number, rigDays: number, faults: number) => ({
       jobId,
       name: `J${jobId}`,
+      startsOn: "2026-06-01",
       elevationFt: null,
       closed: false,
       rigDays,
