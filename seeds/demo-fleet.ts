@@ -35,7 +35,7 @@ export interface DemoRig {
 
 const tips = (...t: [string, number, number][]) => t.map(([name, reachFt, widthFt]) => ({ name, reachFt, widthFt }));
 
-/** Cedar Flats: a lowland outfit (yard at 420 ft) with nine rigs of mixed sizes and ages, and a little winter work. */
+/** Cedar Flats: a valley outfit (yard at 2,740 ft) with nine rigs of mixed sizes and ages, and a little winter work in dry spells. */
 const CEDAR_FLATS: DemoRig[] = [
   {
     spec: {
@@ -53,7 +53,7 @@ const CEDAR_FLATS: DemoRig[] = [
       engineHours: 2280,
       hoseLengthFt: 150,
       hoseDiameterIn: 1.25,
-      yardElevationFt: 420,
+      yardElevationFt: 2740,
       nozzleTips: tips(["Wide fan", 30, 8]),
       notes: "Small jobs and touch-ups; lawns and ditches.",
     },
@@ -83,7 +83,7 @@ const CEDAR_FLATS: DemoRig[] = [
       engineHours: 4415,
       hoseLengthFt: 200,
       hoseDiameterIn: 1.5,
-      yardElevationFt: 420,
+      yardElevationFt: 2740,
       nozzleTips: tips(["Wide fan", 35, 10], ["Narrow fan", 60, 5]),
     },
     behaviour: {
@@ -113,7 +113,7 @@ const CEDAR_FLATS: DemoRig[] = [
       engineHours: 4120,
       hoseLengthFt: 200,
       hoseDiameterIn: 1.5,
-      yardElevationFt: 420,
+      yardElevationFt: 2740,
       nozzleTips: tips(["Wide fan", 40, 12], ["Narrow fan", 70, 6]),
       torqueSpecs: [
         { part: "Agitator bearing flange bolts", ftLb: 25 },
@@ -149,7 +149,7 @@ const CEDAR_FLATS: DemoRig[] = [
       engineHours: 3610,
       hoseLengthFt: 250,
       hoseDiameterIn: 1.5,
-      yardElevationFt: 420,
+      yardElevationFt: 2740,
       nozzleTips: tips(["Wide fan", 45, 14], ["Narrow fan", 75, 7]),
     },
     behaviour: {
@@ -179,7 +179,7 @@ const CEDAR_FLATS: DemoRig[] = [
       engineHours: 2310.5,
       hoseLengthFt: 300,
       hoseDiameterIn: 1.5,
-      yardElevationFt: 420,
+      yardElevationFt: 2740,
       nozzleTips: tips(["Wide fan", 50, 15], ["Narrow fan", 90, 8], ["Long range", 150, 4]),
       torqueSpecs: [
         { part: "Agitator bearing flange bolts", ftLb: 25 },
@@ -214,7 +214,7 @@ const CEDAR_FLATS: DemoRig[] = [
       engineHours: 3290,
       hoseLengthFt: 300,
       hoseDiameterIn: 1.5,
-      yardElevationFt: 420,
+      yardElevationFt: 2740,
       nozzleTips: tips(["Wide fan", 50, 15], ["Narrow fan", 90, 8]),
     },
     behaviour: {
@@ -244,7 +244,7 @@ const CEDAR_FLATS: DemoRig[] = [
       engineHours: 2385,
       hoseLengthFt: 350,
       hoseDiameterIn: 2,
-      yardElevationFt: 420,
+      yardElevationFt: 2740,
       nozzleTips: tips(["Wide fan", 55, 16], ["Long range", 170, 5]),
     },
     behaviour: {
@@ -274,7 +274,7 @@ const CEDAR_FLATS: DemoRig[] = [
       engineHours: 1650,
       hoseLengthFt: 400,
       hoseDiameterIn: 2,
-      yardElevationFt: 420,
+      yardElevationFt: 2740,
       nozzleTips: tips(["Wide fan", 60, 18], ["Long range", 200, 5]),
     },
     behaviour: {
@@ -303,7 +303,7 @@ const CEDAR_FLATS: DemoRig[] = [
       engineHours: 640,
       hoseLengthFt: 400,
       hoseDiameterIn: 2,
-      yardElevationFt: 420,
+      yardElevationFt: 2740,
       nozzleTips: tips(["Wide fan", 60, 18], ["Long range", 210, 5]),
       notes: "Bought this spring.",
     },

@@ -128,6 +128,8 @@ export async function seedDemoHistory(now = new Date(), log: (line: string) => v
 
     const open: SimJob[] = [];
     const current = new Map<number, SimJob>();
+    // A rig's crew stays with it while it stays on a job and they are free; a new job or a day off brings a new pick.
+    const crewOf = new Map<number, { job: SimJob; ids: number[] }>();
     const sites = new Map<number, DemoSite[]>();
     const rounds = new Map<number, number>();
     const newJob = (day: number, rig: Rig): SimJob => {
@@ -464,7 +466,7 @@ async function planToday(
   const carried = plan.find((p) => p.day === today && p.rigId === rig.id)?.job;
   const job: SimJob = carried ?? {
     key: Math.max(0, ...jobs.map((j) => j.job.key)) + 1,
-    site: { name: "Millrace Creek culvert", customer: "Larch County Roads", address: "Millrace Rd at the creek crossing", elevationFt: 610, spec: "mulch" },
+    site: { name: "Millrace Creek culvert", customer: "Larch County Roads", address: "Millrace Rd at the creek crossing", elevationFt: 3010, spec: "mulch" },
     left: 6,
     maxRigs: 1,
     rigs: new Set([rig.id]),
@@ -498,7 +500,8 @@ function choosePath(paths: GuidePath[], guide: Guide, random: Random, repeat?: [
   return random.weighted(
     paths.map((p) => {
       const kind = guide.states[p.steps[p.steps.length - 1]].meta.kind;
-      return [p, (kind === "handoff" ? 0.35 : 1) / p.steps.length ** 1.5] as const;
+      // About one fault in six or seven goes to the shop (invented).
+      return [p, (kind === "handoff" ? 0.12 : 1) / p.steps.length ** 1.5] as const;
     }),
   );
 }

@@ -28,7 +28,8 @@ export const SPECS: Record<string, { materials: JobMaterial[]; passes: number; w
   },
   mulch: {
     passes: 1,
-    waterGalPerAcre: 3000,
+    // 2,500 lb of fiber at the usual 50 lb per 100 gal ceiling needs 5,000 gal an acre.
+    waterGalPerAcre: 5000,
     materials: [
       { name: "Wood fiber mulch", lbPerAcre: 2500, kind: "fiber", bagLb: 50 },
       { name: "Guar tackifier", lbPerAcre: 80, kind: "tackifier", bagLb: 50 },
@@ -58,14 +59,14 @@ export interface DemoSite {
 
 export const SITES: Record<CompanySlug, DemoSite[]> = {
   "cedar-flats": [
-    { name: "Alder Bend subdivision lots", customer: "Alder Bend Homes", address: "Alder Bend Rd, lots 14–40", elevationFt: 380, spec: "lawn" },
-    { name: "Route 9 widening cut slopes", customer: "State DOT District 3", address: "Route 9, mile 22–24", elevationFt: 910, spec: "slope" },
-    { name: "Millpond dam face", customer: "Millpond Irrigation District", address: "Millpond Reservoir, east embankment", elevationFt: 640, spec: "slope" },
+    { name: "Alder Bend subdivision lots", customer: "Alder Bend Homes", address: "Alder Bend Rd, lots 14–40", elevationFt: 2780, spec: "lawn" },
+    { name: "Route 9 widening cut slopes", customer: "State DOT District 3", address: "Route 9, mile 22–24", elevationFt: 3310, spec: "slope" },
+    { name: "Millpond dam face", customer: "Millpond Irrigation District", address: "Millpond Reservoir, east embankment", elevationFt: 3040, spec: "slope" },
     {
       name: "Basalt Ridge quarry reclamation",
       customer: "Basalt Ridge Aggregates",
       address: "Quarry Rd, upper benches",
-      elevationFt: 2950,
+      elevationFt: 5350,
       spec: "mulch",
       // Crushed-rock fines in the mulch water, 400 ft hose runs up the benches (invented).
       hard: {
@@ -78,16 +79,16 @@ export const SITES: Record<CompanySlug, DemoSite[]> = {
         ],
       },
     },
-    { name: "Cedar Creek pipeline corridor", customer: "Northfork Gas", address: "ROW markers 12–31", elevationFt: 1240, spec: "seeding" },
-    { name: "Harmon school playing fields", customer: "Harmon School District", address: "Harmon Middle School", elevationFt: 450, spec: "lawn" },
-    { name: "Oak Hollow solar farm", customer: "Brightline Solar", address: "Oak Hollow Rd", elevationFt: 720, spec: "seeding" },
-    { name: "County Road 8 ditches", customer: "Larch County Roads", address: "CR 8, mile 3–9", elevationFt: 560, spec: "seeding" },
-    { name: "Riverside park restoration", customer: "City of Cedar Flats", address: "Riverside Park, north bank", elevationFt: 300, spec: "mulch" },
-    { name: "Falcon Heights hillside", customer: "Falcon Heights HOA", address: "Falcon Heights Dr", elevationFt: 1520, spec: "slope" },
-    { name: "Landfill cap, cell 4", customer: "Larch County Solid Waste", address: "Landfill Rd, cell 4", elevationFt: 830, spec: "seeding" },
-    { name: "Kestrel logistics pad", customer: "Kestrel Freight", address: "Industrial Way 220", elevationFt: 410, spec: "lawn" },
-    { name: "Burn scar, Dry Fork", customer: "US Forest Service", address: "Dry Fork drainage, units 2–5", elevationFt: 2380, spec: "mulch" },
-    { name: "Spring Valley wetland buffer", customer: "Spring Valley Conservancy", address: "Spring Valley Rd", elevationFt: 340, spec: "seeding" },
+    { name: "Cedar Creek pipeline corridor", customer: "Northfork Gas", address: "ROW markers 12–31", elevationFt: 3640, spec: "seeding" },
+    { name: "Harmon school playing fields", customer: "Harmon School District", address: "Harmon Middle School", elevationFt: 2850, spec: "lawn" },
+    { name: "Oak Hollow solar farm", customer: "Brightline Solar", address: "Oak Hollow Rd", elevationFt: 3120, spec: "seeding" },
+    { name: "County Road 8 ditches", customer: "Larch County Roads", address: "CR 8, mile 3–9", elevationFt: 2960, spec: "seeding" },
+    { name: "Riverside park restoration", customer: "City of Cedar Flats", address: "Riverside Park, north bank", elevationFt: 2700, spec: "mulch" },
+    { name: "Falcon Heights hillside", customer: "Falcon Heights HOA", address: "Falcon Heights Dr", elevationFt: 3920, spec: "slope" },
+    { name: "Landfill cap, cell 4", customer: "Larch County Solid Waste", address: "Landfill Rd, cell 4", elevationFt: 3230, spec: "seeding" },
+    { name: "Kestrel logistics pad", customer: "Kestrel Freight", address: "Industrial Way 220", elevationFt: 2810, spec: "lawn" },
+    { name: "Burn scar, Dry Fork", customer: "US Forest Service", address: "Dry Fork drainage, units 2–5", elevationFt: 4780, spec: "mulch" },
+    { name: "Spring Valley wetland buffer", customer: "Spring Valley Conservancy", address: "Spring Valley Rd", elevationFt: 2740, spec: "seeding" },
   ],
   "blue-mesa": [
     { name: "Juniper Draw subdivision", customer: "Juniper Draw Builders", address: "Juniper Draw, phase 2", elevationFt: 6240, spec: "seeding" },
@@ -132,7 +133,14 @@ export const SEASONAL_CREW: SeasonalPerson[] = [
   { email: "hollis@cedarflats.example", name: "Hollis Grant", company: "cedar-flats", fromMonth: 2, toMonth: null, weight: 6 },
   { email: "carlos@cedarflats.example", name: "Carlos Ybarra", company: "cedar-flats", fromMonth: 7, toMonth: null, weight: 5 },
   { email: "priya@cedarflats.example", name: "Priya Nandakumar", company: "cedar-flats", fromMonth: 15, toMonth: null, weight: 6 },
+  { email: "bo@cedarflats.example", name: "Bo Lindqvist", company: "cedar-flats", fromMonth: 2, toMonth: null, weight: 6 },
+  { email: "ana@cedarflats.example", name: "Ana Ruelas", company: "cedar-flats", fromMonth: 2, toMonth: 10, weight: 5 },
+  { email: "tess@cedarflats.example", name: "Tess Okonkwo", company: "cedar-flats", fromMonth: 3, toMonth: null, weight: 5 },
+  { email: "marcus@cedarflats.example", name: "Marcus Webb", company: "cedar-flats", fromMonth: 14, toMonth: 22, weight: 5 },
+  { email: "eli@cedarflats.example", name: "Eli Navarro", company: "cedar-flats", fromMonth: 15, toMonth: null, weight: 5 },
   { email: "wren@bluemesa.example", name: "Wren Castillo", company: "blue-mesa", fromMonth: 3, toMonth: 9, weight: 5 },
+  { email: "rosa@bluemesa.example", name: "Rosa Tsosie", company: "blue-mesa", fromMonth: 3, toMonth: null, weight: 5 },
+  { email: "kit@bluemesa.example", name: "Kit Larsen", company: "blue-mesa", fromMonth: 15, toMonth: 21, weight: 4 },
   { email: "joaquin@bluemesa.example", name: "Joaquin Baca", company: "blue-mesa", fromMonth: 15, toMonth: null, weight: 5 },
 ];
 

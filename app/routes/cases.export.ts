@@ -25,8 +25,9 @@ export async function loader({ request, context }: Route.LoaderArgs) {
       r.person ?? "",
       isoInZone(r.openedAt, user.timeZone),
       r.durationSeconds ?? "",
+      r.jobName ?? "",
     ]),
-    ["case_id", "rig", "guide", "cause_code", "cause", "cause_basis", "outcome", "opened_by", "opened_at", "duration_seconds"],
+    ["case_id", "rig", "guide", "cause_code", "cause", "cause_basis", "outcome", "opened_by", "opened_at", "duration_seconds", "job"],
   );
   const stamp = new Date().toISOString().slice(0, 10);
   return new Response(csv, {

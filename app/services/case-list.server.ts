@@ -30,6 +30,8 @@ export interface CaseRow {
   /** On a card: items not done. */
   cardGaps: number | null;
   person: string | null;
+  /** The job it happened on, if any. */
+  jobName: string | null;
   openedAt: string;
   durationSeconds: number | null;
 }
@@ -49,7 +51,7 @@ function where(user: SessionUser, f: CaseFilters) {
     to: f.to ? startOfDayIn(nextDay(f.to), user.timeZone) : null,
   };
   const sql = `FROM cases c JOIN rigs r ON r.id = c.rig_id JOIN guide_versions v ON v.id = c.guide_version_id JOIN guides g ON g.id = v.guide_id
-    LEFT JOIN users u ON u.id = c.opened_by
+    LEFT JOIN users u ON u.id = c.opened_by LEFT JOIN jobs j ON j.id = c.job_id
     WHERE c.company_id = :company AND c.kind = :kind AND (:rig IS NULL OR r.code = :rig) AND (:guide IS NULL OR g.slug = :guide)
       AND (:cause IS NULL OR c.cause_code = :cause) AND (:outcome IS NULL OR c.outcome = :outcome) AND (:person IS NULL OR c.opened_by = :person)
       AND (:job IS NULL OR c.job_id = :job)
@@ -66,6 +68,7 @@ const toRow = (r: Record<string, unknown>): CaseRow => ({
   kind: String(r.kind) as CaseKind,
   cardGaps: r.card_gaps === null || r.card_gaps === undefined ? null : Number(r.card_gaps),
   person: (r.name as string) ?? null,
+  jobName: (r.job_name as string) ?? null,
   openedAt: new Date(r.opened_at as string).toISOString(),
   durationSeconds: r.duration === null ? null : Number(r.duration),
 });
@@ -83,7 +86,7 @@ async function readCases(user: SessionUser, f: CaseFilters, limit: number, all: 
   const page = all ? "LIMIT 50000" : `LIMIT ${limit} OFFSET ${(f.page - 1) * limit}`;
   const [rows, count] = await Promise.all([
     reports().query<Record<string, unknown>>(
-      `SELECT c.id, r.code, g.title, c.cause_code, c.outcome, c.kind, c.card_gaps, u.name, c.opened_at, TIMESTAMPDIFF(SECOND, c.opened_at, c.closed_at) AS duration ${sql} ORDER BY ${order} ${page}`,
+      `SELECT c.id, r.code, g.title, c.cause_code, c.outcome, c.kind, c.card_gaps, u.name, j.name AS job_name, c.opened_at, TIMESTAMPDIFF(SECOND, c.opened_at, c.closed_at) AS duration ${sql} ORDER BY ${order} ${page}`,
       { replacements, type: QueryTypes.SELECT },
     ),
     all ? Promise.resolve([{ n: 0 }]) : reports().query<{ n: number }>(`SELECT COUNT(*) AS n ${sql}`, { replacements, type: QueryTypes.SELECT }),

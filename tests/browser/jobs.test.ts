@@ -55,7 +55,7 @@ describe("jobs at 360×640", () => {
     await p.getByLabel("Job", { exact: true }).selectOption("No job");
     await p.waitForURL(/job=none/);
     await expect.poll(() => p.getByLabel("Elevation of this site").inputValue()).toBe("");
-    await p.getByText("The yard is at 420 ft; this site may not be.").waitFor();
+    await p.getByText("The yard is at 2,740 ft; this site may not be.").waitFor();
     await p.close();
   });
 

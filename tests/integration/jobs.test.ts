@@ -11,6 +11,7 @@ import { action as loadAction } from "~/routes/api.jobs.$jobId.loads";
 import { action as takeBackAction } from "~/routes/api.jobs.$jobId.loads.$loadId";
 import { loader as kitLoader } from "~/routes/api.offline-kit";
 import { loader as casesLoader } from "~/routes/cases";
+import { loader as exportLoader } from "~/routes/cases.export";
 import { loader as walkLoader } from "~/routes/cases.$id.walk";
 import { todayIn } from "~/services/jobs.server";
 import { formatDay } from "~/lib/format";
@@ -346,6 +347,12 @@ describe("the board by job, and the cases table's job filter", () => {
     expect(row.downtimeHours).toBeCloseTo(80 / 60, 9);
     const filtered = await run(async () => casesLoader(args(await requestAs(MO, `/cases?job=${job.id}&rig=&person=`))));
     expect(filtered.data.total).toBe(4);
+    // The CSV follows the filter and names the job on each row.
+    const csv = await ((await exportLoader(args(await requestAs(MO, `/cases/export?job=${job.id}`)))) as Response).text();
+    const [head, ...lines] = csv.trim().split("\n");
+    expect(head.split(",").at(-1)).toBe("job");
+    expect(lines).toHaveLength(4);
+    expect(lines.every((l) => l.endsWith(",Progress fixture"))).toBe(true);
     const any = await run(async () => casesLoader(args(await requestAs(MO, "/cases?job=&from=2026-06-02&to=2026-06-02"))));
     expect(any.data.total).toBeGreaterThanOrEqual(4);
   });
