@@ -178,12 +178,18 @@ export async function seedDemoHistory(now = new Date(), log: (line: string) => v
         job.lastDay = day;
         const ymd = new Date(day).toISOString().slice(0, 10);
         plan.push({ companyId: company.id, job, day: ymd, rigId: rig.id, userId: null });
-        // One or two people on the rig that day, from who was on the books then.
-        const crew = pickCrew(
-          roster(day).filter(([id]) => !busyPeople.has(id)),
-          random,
-          random.next() < 0.4 ? 2 : 1,
-        );
+        // Usually two people on the rig (one sprays, one tends the tank and hose), from who was on the books then.
+        const onBooks = roster(day);
+        const kept = crewOf.get(rig.id);
+        const crew =
+          kept && kept.job === job && kept.ids.every((id) => !busyPeople.has(id) && onBooks.some(([x]) => x === id))
+            ? kept.ids
+            : pickCrew(
+                onBooks.filter(([id]) => !busyPeople.has(id)),
+                random,
+                random.next() < 0.75 ? 2 : 1,
+              );
+        crewOf.set(rig.id, { job, ids: crew });
         for (const id of crew) {
           busyPeople.add(id);
           plan.push({ companyId: company.id, job, day: ymd, rigId: null, userId: id });
