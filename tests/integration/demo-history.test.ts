@@ -152,6 +152,12 @@ describe("demo history: a fleet a contractor recognises", () => {
     expect(Number(svc.n)).toBeGreaterThan(1000);
   });
 
+  it("sends a minority of faults to the shop: most are fixed on site", async () => {
+    const [row] = await q<{ share: number }>("SELECT SUM(outcome = 'handoff') / COUNT(*) AS share FROM cases WHERE kind = 'fix'");
+    expect(Number(row.share)).toBeGreaterThan(0.05);
+    expect(Number(row.share)).toBeLessThan(0.25);
+  });
+
   it("contains repeats: the same cause on the same rig within 30 days", async () => {
     const [row] = await q<{ repeats: number }>(
       `SELECT COUNT(*) AS repeats FROM cases a JOIN cases b ON a.rig_id = b.rig_id AND a.cause_code = b.cause_code
