@@ -75,6 +75,15 @@ describe("jobs at 360×640", () => {
     await signal.signalOn(p);
     await expect.poll(() => JobLoad.count({ where: { jobId: job.id } }), { timeout: 20_000 }).toBe(2);
 
+    await p.getByText(/Load 2: .* · saved$/).waitFor();
+    // A third tap by mistake, taken back: the job counts two.
+    await p.getByRole("button", { name: /^Load 3 sprayed/ }).click();
+    await expect.poll(() => JobLoad.count({ where: { jobId: job.id } })).toBe(3);
+    await p.getByRole("button", { name: "Marked by mistake? Take back load 3" }).click();
+    await p.getByRole("button", { name: "Yes, take back load 3" }).click();
+    await expect.poll(() => JobLoad.count({ where: { jobId: job.id } })).toBe(2);
+    await p.getByRole("button", { name: /^Load 3 sprayed/ }).waitFor();
+
     await p.goto(`${harness.app.url}/jobs/${job.id}`);
     await p.getByText(/^2 loads \(/).waitFor();
     expect(await JobLoad.count({ where: { jobId: job.id } })).toBe(2);

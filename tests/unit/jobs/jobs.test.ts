@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { jobProgress, NO_TOTALS } from "~/lib/jobs/progress";
 import { jobOn, keptJobAt, siteLine, type JobSummary, type PlanDay } from "~/lib/jobs/today";
-import { keepLoad, keptLoads, loadsToSend, updateLoad } from "~/lib/jobs/kept-loads";
+import { keepLoad, keptLoads, loadsToSend, loadsToTakeBack, takeBackLoad, updateLoad } from "~/lib/jobs/kept-loads";
 import { jobInputSchema, jobPlanSchema, planDays } from "~/lib/jobs/schema";
 import { jobBoard } from "~/lib/stats/job-board";
 import { poissonInterval } from "~/lib/stats/chi-square";
@@ -85,6 +85,19 @@ describe("loads kept on the phone", () => {
     keepLoad(store, { ...load, id: "old", sprayedAt: new Date(Date.now() - 8 * 86_400_000).toISOString() });
     updateLoad(store, "old", { sent: true });
     expect(keptLoads(store).map((l) => l.id)).toEqual(["a", "b"]);
+  });
+
+  it("takes back a load the server never had at once, and one it has when there is signal", () => {
+    const store = new MemoryStore();
+    const load = { id: "x", jobId: 1, number: 1, sprayedAt: new Date().toISOString(), areaSqFt: 1000, waterGal: 500 };
+    keepLoad(store, load);
+    takeBackLoad(store, "x");
+    expect(keptLoads(store)).toEqual([]);
+    keepLoad(store, { ...load, id: "y" });
+    updateLoad(store, "y", { sent: true });
+    takeBackLoad(store, "y");
+    expect(loadsToTakeBack(store).map((l) => l.id)).toEqual(["y"]);
+    expect(loadsToSend(store)).toEqual([]);
   });
 });
 
