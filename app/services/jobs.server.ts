@@ -54,9 +54,8 @@ const plainJob = (job: Job) => {
   return { ...j, closedAt: j.closedAt ? j.closedAt.toISOString() : null, createdAt: undefined, updatedAt: undefined };
 };
 
-/** The company's jobs, open ones first (newest start first), each with its progress. */
-export async function listJobs(user: SessionUser, { show = "open" }: { show?: "open" | "closed" | "all" } = {}): Promise<JobRow[]> {
-  const where = show === "open" ? { closedAt: null } : show === "closed" ? { closedAt: { [Op.ne]: null } } : {};
+/** The company's jobs matching `where`, newest start first, with what each has so far. */
+async function jobsWithTotals(user: SessionUser, where: object) {
   const jobs = await Job.findAll({
     where: ownedBy(user, where),
     order: [
@@ -68,7 +67,13 @@ export async function listJobs(user: SessionUser, { show = "open" }: { show?: "o
     user,
     jobs.map((j) => j.id),
   );
-  return jobs.map((j) => ({ ...plainJob(j), progress: jobProgress(j, totals.get(j.id)!) }));
+  return jobs.map((job) => ({ job, totals: totals.get(job.id)! }));
+}
+
+/** The company's jobs (open, closed or all), newest start first, each with its progress. */
+export async function listJobs(user: SessionUser, { show = "open" }: { show?: "open" | "closed" | "all" } = {}): Promise<JobRow[]> {
+  const where = show === "open" ? { closedAt: null } : show === "closed" ? { closedAt: { [Op.ne]: null } } : {};
+  return (await jobsWithTotals(user, where)).map(({ job, totals }) => ({ ...plainJob(job), progress: jobProgress(job, totals) }));
 }
 
 /** One job with its progress and its plan around today; another company's id answers 404. */
@@ -313,18 +318,7 @@ export async function plannablePeople(user: SessionUser) {
 
 /** The company's open jobs as summaries (the load card's list), newest start first. */
 export async function openJobSummaries(user: SessionUser): Promise<JobSummary[]> {
-  const jobs = await Job.findAll({
-    where: ownedBy(user, { closedAt: null }),
-    order: [
-      ["startsOn", "DESC"],
-      ["id", "DESC"],
-    ],
-  });
-  const totals = await jobTotals(
-    user,
-    jobs.map((j) => j.id),
-  );
-  return jobs.map((j) => jobSummary(j, totals.get(j.id)));
+  return (await jobsWithTotals(user, { closedAt: null })).map(({ job, totals }) => jobSummary(job, totals));
 }
 
 /** How long the person who marked a load may take it back (a supervisor may at any time). */
