@@ -1,4 +1,3 @@
-import { useEffect } from "react";
 import { isRouteErrorResponse } from "react-router";
 import { isNoSignal } from "~/lib/walk/no-signal";
 
@@ -20,7 +19,7 @@ const SAID: Record<number, { title: string; detail: string }> = {
 const NO_SIGNAL = {
   title: "No signal",
   detail:
-    "This page needs signal to open. What is kept on this phone (answers, photos, loads sprayed) is safe and is sent once there is signal; this page opens by itself then.",
+    "This page needs signal to open. What is kept on this phone (answers, photos, loads sprayed) is safe: it is sent when there is signal and Tankside is open. Try again when you have signal.",
 };
 
 /** The title and sentence for an error a route threw; the server's own message (`{ error }`) is used when it gave one. */
@@ -41,19 +40,17 @@ export function describeError(error: unknown): { title: string; detail: string }
 export function ErrorPanel({ error }: { error: unknown }) {
   const { title, detail } = describeError(error);
   const noSignal = title === NO_SIGNAL.title;
-  // Signal back: open the page that could not open, so what waits is sent from it too.
-  useEffect(() => {
-    if (!noSignal) return;
-    const retry = () => window.location.reload();
-    window.addEventListener("online", retry);
-    return () => window.removeEventListener("online", retry);
-  }, [noSignal]);
   return (
     <div role="alert" className="rounded-lg border-2 border-ink bg-paper p-5">
       <title>{`${title} · Tankside`}</title>
       <h1 className="text-2xl font-bold">{title}</h1>
       <p className="mt-2 text-lg">{detail}</p>
       <p className="mt-4 flex flex-wrap gap-x-6 gap-y-2">
+        {noSignal ? (
+          <button type="button" onClick={() => window.location.reload()} className="min-h-12 rounded-md bg-go px-4 text-lg font-bold text-white">
+            Try again
+          </button>
+        ) : null}
         <a href="/" className="inline-flex min-h-12 items-center text-lg font-bold">
           Back to the start
         </a>

@@ -162,7 +162,9 @@ describe("the walk tells the truth (360×640)", () => {
     onTestFinished(() => harness.browser.context.setOffline(false));
     await p.getByRole("link", { name: /CF-07/ }).first().click();
     await p.getByRole("heading", { level: 1, name: "No signal" }).waitFor();
-    expect(await p.getByRole("alert").textContent()).toMatch(/What is kept on this phone \(answers, photos, loads sprayed\) is safe/);
+    expect(await p.getByRole("alert").textContent()).toMatch(
+      /What is kept on this phone \(answers, photos, loads sprayed\) is safe: it is sent when there is signal/,
+    );
     expect(await p.content()).not.toMatch(/Something went wrong/);
     await harness.browser.context.setOffline(false);
     await p.close();
