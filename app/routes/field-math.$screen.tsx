@@ -15,7 +15,7 @@ import { serverOrPhone } from "~/components/offline/server-or-phone";
 import { rigSpecsOf } from "~/lib/rigs/specs";
 import { lastRigOnPhone } from "~/lib/walk/kept";
 import { lastRigCodeFor } from "~/services/cases.server";
-import { openJobSummaries, upcomingPlan } from "~/services/jobs.server";
+import { openJobSummaries, planAhead } from "~/services/jobs.server";
 import { jobOn, keptJobAt, type JobSummary } from "~/lib/jobs/today";
 import type { Route } from "./+types/field-math.$screen";
 
@@ -28,13 +28,15 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
     loadRulesFor(user),
     lastRigCodeFor(user),
     openJobSummaries(user),
-    upcomingPlan(user, 1),
+    planAhead(user, 1),
   ]);
   const query = new URL(request.url).searchParams;
   // The rig asked for, else the one this person last worked on (usually the one at hand), else the first.
   const wanted = query.get("rig")?.toUpperCase() ?? lastRig;
   const rig = rigs.find((r) => r.code === wanted) ?? rigs[0] ?? null;
-  const job = chosenJob(query.get("job"), jobs, () => jobOn(upcoming.plan, upcoming.today, { rigCode: rig?.code, personId: user.id }));
+  // Plans of open jobs only: a rig still on a job closed today falls back to its person's job.
+  const open = upcoming.plan.filter((p) => jobs.some((j) => j.id === p.jobId));
+  const job = chosenJob(query.get("job"), jobs, () => jobOn(open, upcoming.today, { rigCode: rig?.code, personId: user.id }));
   if (job === undefined) notFound(`Job ${query.get("job")}`);
   return {
     screen,

@@ -8,7 +8,7 @@ import { siteLine } from "~/lib/jobs/today";
 import { formatDay } from "~/lib/format";
 import { can } from "~/lib/permissions";
 import { requirePermission } from "~/services/guards.server";
-import { listJobs, upcomingPlan } from "~/services/jobs.server";
+import { listJobs, planAhead } from "~/services/jobs.server";
 import { readQuery } from "~/services/read-request.server";
 import type { Route } from "./+types/jobs";
 
@@ -18,7 +18,7 @@ const querySchema = z.object({ show: z.enum(["open", "closed", "all"], { error: 
 export async function loader({ request, context }: Route.LoaderArgs) {
   const user = await requirePermission({ request, context }, "read-jobs");
   const { show } = readQuery(request, querySchema);
-  const [jobs, { plan }] = await Promise.all([listJobs(user, { show }), upcomingPlan(user, 1)]);
+  const [jobs, { plan }] = await Promise.all([listJobs(user, { show }), planAhead(user, 1)]);
   return { jobs, show, today: plan, canManage: can(user, "manage-jobs"), personId: user.id };
 }
 

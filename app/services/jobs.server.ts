@@ -2,7 +2,7 @@ import { Op, QueryTypes, UniqueConstraintError, type Transaction } from "sequeli
 import { formatDay, isoInZone } from "~/lib/format";
 import { jobProgress, NO_TOTALS, type JobProgress, type JobTotals } from "~/lib/jobs/progress";
 import { planDays, type JobInput, type JobLoadInput, type JobPlanInput } from "~/lib/jobs/schema";
-import { jobOn, type JobSummary, type PlanDay } from "~/lib/jobs/today";
+import { type JobSummary, type PlanDay } from "~/lib/jobs/today";
 import { Job, JobDay, JobLoad, Rig, sequelize, User } from "./db.server";
 import { fail, notFound, type SessionUser } from "./guards.server";
 import { reportsChanged } from "./report-cache.server";
@@ -213,13 +213,18 @@ async function planOf(user: Tenant, where: { jobIds?: number[]; from?: string; t
   return [...byKey.values()];
 }
 
+/** Who and what is planned from today for `days` days (every job's rows; pages that list the jobs themselves need no more). */
+export async function planAhead(user: SessionUser, days: number): Promise<{ today: string; plan: PlanDay[] }> {
+  const today = todayIn(user.timeZone);
+  return { today, plan: await planOf(user, { from: today, to: addDays(today, days - 1) }) };
+}
+
 /**
  * The open jobs planned from today for `days` days, with their plans: the crew's home, a rig's
  * field math and the phone's kit (so "today's job" is known with no signal, for a week).
  */
 export async function upcomingPlan(user: SessionUser, days = 7): Promise<{ today: string; jobs: JobSummary[]; plan: PlanDay[] }> {
-  const today = todayIn(user.timeZone);
-  const plan = await planOf(user, { from: today, to: addDays(today, days - 1) });
+  const { today, plan } = await planAhead(user, days);
   const ids = [...new Set(plan.map((p) => p.jobId))];
   const jobs = ids.length ? await Job.findAll({ where: ownedBy(user, { id: ids, closedAt: null }) }) : [];
   const totals = await jobTotals(
@@ -260,13 +265,6 @@ export async function jobAt(user: SessionUser, rigId: number, at: Date, transact
     { replacements: { company: user.companyId, day, rig: rigId, person: user.id, at }, type: QueryTypes.SELECT, transaction },
   );
   return (rows.find((r) => r.rig_id !== null) ?? rows[0])?.job_id ?? null;
-}
-
-/** The job a rig is on today, as a summary (the field-math screens fill from it); null when none. */
-export async function todaysJobForRig(user: SessionUser, rigCode: string): Promise<JobSummary | null> {
-  const { today, jobs, plan } = await upcomingPlan(user, 1);
-  const id = jobOn(plan, today, { rigCode, personId: user.id });
-  return jobs.find((j) => j.id === id) ?? null;
 }
 
 /** A job's summary by id for a case that records it (closed jobs too: the case happened on it). */
