@@ -1,3 +1,4 @@
+import { useEffect } from "react";
 import { Links, Meta, Outlet, Scripts, ScrollRestoration } from "react-router";
 import { ErrorPanel } from "~/components/error-panel";
 import type { Route } from "./+types/root";
@@ -31,6 +32,10 @@ export function Layout({ children }: { children: React.ReactNode }) {
 }
 
 export default function App() {
+  // Set once the page has hydrated (the root's effect runs after every child's), so a test types only into live fields.
+  useEffect(() => {
+    document.documentElement.dataset.hydrated = "true";
+  }, []);
   return <Outlet />;
 }
 

@@ -4,7 +4,7 @@ import os from "node:os";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
 import { Rig } from "../../db/index";
-import { signIn, appAndBrowserForFile } from "../helpers/app";
+import { signIn, appAndBrowserForFile, hydrated } from "../helpers/app";
 
 const harness = appAndBrowserForFile();
 
@@ -67,6 +67,8 @@ describe("the load card at 360×640", () => {
   it("prints on one Letter page with the job, the date and the rig", async () => {
     const p = await crewPage();
     await p.goto(`${harness.app.url}/field-math/load?rig=CF-07`);
+    // The card restores what the crew last typed once it hydrates; typing earlier would be overwritten.
+    await hydrated(p);
     await p.getByLabel("Job").fill("Ridge Road cut slope");
     // 7.3 acres: 15 loads in three recipes, the widest card the form makes for three materials.
     await p.getByLabel("Area to cover").fill("7.3");

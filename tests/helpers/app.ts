@@ -156,3 +156,8 @@ export async function startCaseFromPage(page: Page, rigCode: string, guideSlug: 
     [rigCode, guideSlug, engineHours ?? null] as const,
   );
 }
+
+/** Waits until React has hydrated the page: typing before that can be overwritten by state kept on the phone. */
+export async function hydrated(page: Page) {
+  await page.locator("html[data-hydrated]").waitFor({ state: "attached" });
+}
