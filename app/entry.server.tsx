@@ -5,6 +5,12 @@ import type { RenderToPipeableStreamOptions } from "react-dom/server";
 import { renderToPipeableStream } from "react-dom/server";
 import type { EntryContext } from "react-router";
 import { ServerRouter } from "react-router";
+import { registerLanguage } from "~/i18n";
+import en from "~/locales/en";
+import es from "~/locales/es";
+
+registerLanguage("en", en);
+registerLanguage("es", es);
 
 export const streamTimeout = 5_000;
 

@@ -1,6 +1,10 @@
 import { useEffect } from "react";
-import { Links, Meta, Outlet, Scripts, ScrollRestoration } from "react-router";
+import { I18nextProvider } from "react-i18next";
+import { Links, Meta, Outlet, Scripts, ScrollRestoration, useRouteLoaderData, type ShouldRevalidateFunction } from "react-router";
 import { ErrorPanel } from "~/components/error-panel";
+import { i18nFor } from "~/i18n";
+import { languageFromHeader, type Language } from "~/lib/i18n/languages";
+import { currentUser } from "~/services/guards.server";
 import type { Route } from "./+types/root";
 import "./app.css";
 import regularFont from "@fontsource/atkinson-hyperlegible/files/atkinson-hyperlegible-latin-400-normal.woff2?url";
@@ -11,9 +15,19 @@ import boldFont from "@fontsource/atkinson-hyperlegible/files/atkinson-hyperlegi
 export const links: Route.LinksFunction = () =>
   [regularFont, boldFont].map((href) => ({ rel: "preload", href, as: "font", type: "font/woff2", crossOrigin: "anonymous" as const }));
 
+/** The language the page is drawn in: the signed-in person's choice, else the browser's. */
+export async function loader({ request, context }: Route.LoaderArgs): Promise<{ lang: Language }> {
+  const user = await currentUser({ request, context });
+  return { lang: user?.language ?? languageFromHeader(request.headers.get("Accept-Language")) };
+}
+
+// The language changes only with a form (the account page reloads the whole page when it does).
+export const shouldRevalidate: ShouldRevalidateFunction = ({ formMethod, defaultShouldRevalidate }) => (formMethod ? defaultShouldRevalidate : false);
+
 export function Layout({ children }: { children: React.ReactNode }) {
+  const lang = useRouteLoaderData<typeof loader>("root")?.lang ?? "en";
   return (
-    <html lang="en">
+    <html lang={lang}>
       <head>
         <meta charSet="utf-8" />
         <meta name="viewport" content="width=device-width, initial-scale=1" />
@@ -23,7 +37,7 @@ export function Layout({ children }: { children: React.ReactNode }) {
         <Links />
       </head>
       <body>
-        {children}
+        <I18nextProvider i18n={i18nFor(lang)}>{children}</I18nextProvider>
         <ScrollRestoration />
         <Scripts />
       </body>

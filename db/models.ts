@@ -43,6 +43,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare accessRemovedAt: CreationOptional<Date | null>;
   /** The person's own walking pace, for strips paced out on a slope; null takes the company's. */
   declare paceFt: CreationOptional<number | null>;
+  /** "en" or "es"; null until the first sign-in takes it from the browser. */
+  declare language: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -311,6 +313,7 @@ export function initModels(sequelize: Sequelize) {
       role: DataTypes.ENUM(...ROLES),
       accessRemovedAt: DataTypes.DATE,
       paceFt: decimal(3, 1, "paceFt"),
+      language: DataTypes.STRING(5),
       ...timestamps,
     },
     { sequelize, tableName: "users" },

@@ -1,4 +1,9 @@
 import { afterAll, afterEach, beforeEach, inject } from "vitest";
+import { registerLanguage } from "../app/i18n";
+import en from "../app/locales/en";
+
+// Components drawn outside the app (Testing Library) speak English, as the app's default.
+registerLanguage("en", en);
 
 for (const [key, value] of Object.entries(inject("serviceEnv"))) process.env[key] = value;
 

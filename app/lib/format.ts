@@ -21,16 +21,17 @@ const OPTIONS = {
 // Building a formatter costs far more than using one: one per kind and zone, kept (a CSV of
 // thousands of rows, a page of cases).
 const formatters = new Map<string, Intl.DateTimeFormat>();
-function formatter(kind: keyof typeof OPTIONS, timeZone: string): Intl.DateTimeFormat {
-  const key = `${kind} ${timeZone}`;
+function formatter(kind: keyof typeof OPTIONS, timeZone: string, locale = "en-US"): Intl.DateTimeFormat {
+  const key = `${kind} ${timeZone} ${locale}`;
   let f = formatters.get(key);
-  if (!f) formatters.set(key, (f = new Intl.DateTimeFormat("en-US", { ...OPTIONS[kind], timeZone })));
+  if (!f) formatters.set(key, (f = new Intl.DateTimeFormat(locale, { ...OPTIONS[kind], timeZone })));
   return f;
 }
 
-export const formatDateTime = (iso: string | Date, timeZone: string) => formatter("dateTime", timeZone).format(new Date(iso));
-export const formatTime = (iso: string | Date, timeZone: string) => formatter("time", timeZone).format(new Date(iso));
-export const formatDate = (iso: string | Date, timeZone: string) => formatter("date", timeZone).format(new Date(iso));
+/** In the reader's locale (en-US unless given: e-mails, CSV and supervisor screens are English). */
+export const formatDateTime = (iso: string | Date, timeZone: string, locale?: string) => formatter("dateTime", timeZone, locale).format(new Date(iso));
+export const formatTime = (iso: string | Date, timeZone: string, locale?: string) => formatter("time", timeZone, locale).format(new Date(iso));
+export const formatDate = (iso: string | Date, timeZone: string, locale?: string) => formatter("date", timeZone, locale).format(new Date(iso));
 
 /** A label cut at a word boundary (never mid-word), with an ellipsis when cut. */
 export function shortLabel(text: string, max: number): string {

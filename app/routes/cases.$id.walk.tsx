@@ -12,6 +12,7 @@ import { caseDetail } from "~/services/case-detail.server";
 import { guideTexts } from "~/services/guide-text.server";
 import { requireUser } from "~/services/guards.server";
 import { causeNames } from "~/services/guides.server";
+import { localizeGuide } from "~/lib/guides/translations";
 import { todaysFacts } from "~/services/cards.server";
 import type { Route } from "./+types/cases.$id.walk";
 
@@ -23,20 +24,24 @@ export async function loader({ request, params, context }: Route.LoaderArgs): Pr
   // The page the phone keeps for walks started with no signal: it fills itself from the phone.
   if (params.id === ON_PHONE_CASE) return null;
   const detail = await caseDetail(user, params.id);
+  // The guide in the reader's language; steps with no up-to-date translation stay in English, marked.
+  const lang = user.language ?? "en";
+  const { guide: definition, inEnglish } = localizeGuide(detail.guide.definition, lang);
   return {
     caseId: detail.id,
     closedAs: detail.outcome === "open" ? null : detail.outcome,
     openedAt: detail.openedAt,
     guide: {
       slug: detail.guide.slug,
-      title: detail.guide.title,
+      title: lang === "en" ? detail.guide.title : definition.title,
       versionId: detail.guide.versionId,
-      definition: detail.guide.definition,
-      texts: guideTexts(detail.guide.versionId, detail.guide.definition),
+      definition,
+      texts: guideTexts(detail.guide.versionId, definition, lang),
+      inEnglish,
     },
     rig: detail.rig,
     stepsToEnd: stepsToEnd(detail.guide.definition),
-    causeNames: namesFor(detail.guide.definition, causeNames()),
+    causeNames: namesFor(definition, causeNames(lang)),
     events: detail.events.map((e) => ({ id: e.id, seq: e.seq, stepId: e.stepId, answer: e.answer as Answer, at: e.at, ...(e.note ? { note: e.note } : {}) })),
     kind: detail.kind,
     fromCard: detail.fromCard,
@@ -83,6 +88,7 @@ export default function Walk({ loaderData }: Route.ComponentProps) {
         caseId={d.caseId}
         guide={d.guide.definition}
         guideTitle={d.guide.title}
+        inEnglish={d.guide.inEnglish}
         rig={d.rig}
         stepsToEnd={d.stepsToEnd}
         causeNames={d.causeNames}

@@ -1,7 +1,7 @@
 import { Link } from "react-router";
+import { useTranslation } from "react-i18next";
 import { PageTitle } from "~/components/ui/page-title";
 import { forEveryone, navFor } from "~/lib/navigation";
-import { ROLE_LABELS } from "~/lib/people/roles";
 import { hiddenSections } from "~/services/env.server";
 import { lastRigIdFor } from "~/services/cases.server";
 import { requireUser } from "~/services/guards.server";
@@ -15,6 +15,8 @@ import { upcomingPlan } from "~/services/jobs.server";
 import { jobOn, type KeptJobs } from "~/lib/jobs/today";
 import { isoInZone } from "~/lib/format";
 import { TodaysJob } from "~/components/jobs/todays-job";
+import { useTimes } from "~/components/use-time-zone";
+import { useNavText } from "~/components/ui/nav-text";
 import type { Route } from "./+types/home";
 
 export async function loader({ request, context }: Route.LoaderArgs) {
@@ -72,13 +74,16 @@ export async function clientLoader({ serverLoader }: Route.ClientLoaderArgs) {
 export default function Home({ loaderData }: Route.ComponentProps) {
   const { rigs, role, firstName, lastRigCode, hidden, personId, service, today } = loaderData;
   const more = navFor(role).filter((item) => !forEveryone(item) && !hidden.includes(item.to));
+  const { t } = useTranslation();
+  const { number } = useTimes();
+  const nav = useNavText();
   return (
     <>
-      <PageTitle lead="Pick the rig that is acting up, or start its day with a card.">Hi {firstName}. Which rig?</PageTitle>
+      <PageTitle lead={t("home.lead")}>{t("home.title", { name: firstName })}</PageTitle>
       <PhoneReadiness personId={personId} />
       {today ? <TodaysJob job={today.job} day={today.day} personId={personId} /> : null}
       {rigs.length === 0 ? (
-        <p className="rounded-md bg-paper p-4">Your company has no active rigs yet. An admin can add them under Rigs.</p>
+        <p className="rounded-md bg-paper p-4">{t("home.noRigs")}</p>
       ) : (
         <ul className="grid gap-3 sm:grid-cols-2">
           {rigs.map((rig) => (
@@ -89,17 +94,15 @@ export default function Home({ loaderData }: Route.ComponentProps) {
               >
                 <span className="text-2xl font-bold">
                   {rig.code}
-                  {rig.code === lastRigCode ? <span className="ml-2 text-base font-normal">(your last rig)</span> : null}
+                  {rig.code === lastRigCode ? <span className="ml-2 text-base font-normal">{t("home.lastRig")}</span> : null}
                 </span>
-                <span>
-                  {rig.name} · {rig.tankGal.toLocaleString("en-US")} gal {rig.mount}
-                </span>
+                <span>{t("home.rigLine", { name: rig.name, gal: number(rig.tankGal), mount: t(`mounts.${rig.mount as "truck"}`) })}</span>
               </Link>
               <Link
                 to={`/rigs/${rig.code}/cards`}
                 className="mt-2 flex min-h-14 items-center rounded-lg border-2 border-ink bg-field px-4 text-lg font-bold text-ink no-underline"
               >
-                Pre-start and other cards for {rig.code}
+                {t("home.cards", { code: rig.code })}
               </Link>
             </li>
           ))}
@@ -109,15 +112,15 @@ export default function Home({ loaderData }: Route.ComponentProps) {
       {more.length ? (
         <section aria-labelledby="more-h" className="mt-8 rounded-lg bg-paper p-4">
           <h2 id="more-h" className="text-xl font-bold">
-            Also yours as {ROLE_LABELS[role].toLowerCase()}
+            {t("home.also", { role: t(`roles.${role}`).toLowerCase() })}
           </h2>
           <ul className="mt-2 space-y-2">
             {more.map((item) => (
               <li key={item.to}>
                 <Link to={item.to} className="text-lg font-bold">
-                  {item.label}
+                  {nav.label(item)}
                 </Link>
-                <span className="block">{item.about}</span>
+                <span className="block">{nav.about(item)}</span>
               </li>
             ))}
           </ul>

@@ -13,6 +13,7 @@ import { currentUser } from "~/services/guards.server";
 import { landingFor } from "~/lib/navigation";
 import { safeRedirect } from "~/lib/forms/safe-redirect";
 import { signInCookie } from "~/services/session.server";
+import { settleLanguage } from "~/services/account.server";
 import { readForm } from "~/services/read-request.server";
 import type { Route } from "./+types/login";
 
@@ -31,6 +32,7 @@ export async function action({ request }: Route.ActionArgs) {
   const form = await readForm(request.clone());
   try {
     const person = await authenticator.authenticate("form", request);
+    await settleLanguage(person.id, request.headers.get("Accept-Language"));
     // Where they were going, else where their role starts the day (the board for supervisors).
     return redirect(safeRedirect(form.get("redirectTo")) ?? landingFor(person.role), { headers: await signInCookie(request, person.id) });
   } catch (error) {

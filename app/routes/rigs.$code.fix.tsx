@@ -1,4 +1,5 @@
 import { useEffect, useState } from "react";
+import { useTranslation } from "react-i18next";
 import { Form, redirect, useNavigation, useRouteLoaderData } from "react-router";
 import { z } from "zod";
 import { serverOrPhoneAction, serverOrPhoneRig } from "~/components/offline/server-or-phone";
@@ -9,7 +10,9 @@ import { guideKind } from "~/lib/guides/kinds";
 import type { loader as shellLoader } from "./shell";
 import { openWalksOn, startCase } from "~/services/cases.server";
 import { fail, requireUser } from "~/services/guards.server";
+import { i18nFor } from "~/i18n";
 import { faultGuides } from "~/services/guides.server";
+import { localizeGuide } from "~/lib/guides/translations";
 import { findRig } from "~/services/rigs.server";
 import { readForm } from "~/services/read-request.server";
 import type { Route } from "./+types/rigs.$code.fix";
@@ -18,10 +21,17 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
   const user = await requireUser({ request, context });
   const rig = await findRig(user, params.code);
   const [guides, openWalks] = await Promise.all([faultGuides(user), openWalksOn(user, rig.id)]);
+  const lang = user.language ?? "en";
   return {
     rig: { code: rig.code, name: rig.name, retired: rig.retired },
     openWalks: openWalks.map((w) => ({ ...w, onPhoneOnly: false })),
-    tiles: guides.map((g) => ({ slug: g.slug, title: g.title, hint: g.definition.symptoms[0] })),
+    // Titles and the first symptom in the reader's language (English where a guide has none yet).
+    tiles: guides
+      .map((g) => {
+        const { guide } = localizeGuide(g.definition, lang);
+        return { slug: g.slug, title: lang === "en" ? g.title : guide.title, hint: guide.symptoms[0] };
+      })
+      .sort((a, b) => a.title.localeCompare(b.title, lang)),
     // Made with the page, so even a tap before the scripts load (or a double tap) starts one case.
     caseId: crypto.randomUUID(),
   };
@@ -57,14 +67,14 @@ const startForm = z.object({
 export async function action({ request, params, context }: Route.ActionArgs) {
   const user = await requireUser({ request, context });
   const parsed = startForm.safeParse(Object.fromEntries(await readForm(request)));
-  if (!parsed.success) fail(400, "Pick a guide to start.");
+  if (!parsed.success) fail(400, i18nFor(user.language ?? "en").t("fix.pickGuide"));
   const { id } = await startCase(user, { id: parsed.data.caseId, rigCode: params.code, guideSlug: parsed.data.guideSlug, fromCaseId: parsed.data.fromCaseId });
   return redirect(`/cases/${id}/walk`);
 }
 
 /** With no signal the phone starts the fix itself: it names the case and the time, and sends the start later. */
 export function clientAction({ request, params, serverAction }: Route.ClientActionArgs) {
-  const noKit = { problem: "No signal, and this phone has not kept the guides yet. Open Tankside once where there is signal." };
+  const noKit = { problem: i18nFor(document.documentElement.lang === "es" ? "es" : "en").t("fix.noKit") };
   return serverOrPhoneAction(
     request,
     serverAction,
@@ -101,10 +111,11 @@ export default function StartFix({ loaderData, actionData }: Route.ComponentProp
   const navigation = useNavigation();
   // The tapped guide shows at once that it was taken, before the server answers on a slow link.
   const opening = navigation.state !== "idle" ? (navigation.formData?.get("guideSlug")?.toString() ?? "") : null;
+  const { t } = useTranslation();
 
   return (
     <>
-      <h1 className="text-3xl font-bold">What is {rig.code} doing?</h1>
+      <h1 className="text-3xl font-bold">{t("fix.title", { code: rig.code })}</h1>
       <p className="mt-1 text-lg">{rig.name}</p>
       {actionData && "problem" in actionData ? (
         <p role="alert" className="mt-3 rounded-md border-2 border-stop bg-paper px-3 py-2 text-lg font-bold text-stop">
@@ -113,7 +124,7 @@ export default function StartFix({ loaderData, actionData }: Route.ComponentProp
       ) : null}
       <OpenWalks walks={openWalks} />
       {rig.retired ? (
-        <p className="mt-2 font-bold text-stop">This rig is retired; a fix cannot be started on it.</p>
+        <p className="mt-2 font-bold text-stop">{t("fix.retired")}</p>
       ) : (
         <FixChooser
           query={query}
@@ -126,7 +137,28 @@ export default function StartFix({ loaderData, actionData }: Route.ComponentProp
           caseId={caseId}
         />
       )}
+      <PaperGuides rigCode={rig.code} tiles={tiles} />
     </>
+  );
+}
+
+/** Any guide on one printed page, in the reader's language, for the clipboard in the truck. */
+function PaperGuides({ rigCode, tiles }: { rigCode: string; tiles: Tile[] }) {
+  const { t } = useTranslation();
+  return (
+    <details className="mt-8 rounded-lg border-2 border-ink bg-paper p-3">
+      <summary className="flex min-h-12 cursor-pointer items-center text-lg font-bold">{t("fix.paper")}</summary>
+      <p className="mt-1">{t("fix.paperLead")}</p>
+      <ul className="mt-2 space-y-1">
+        {tiles.map((tile) => (
+          <li key={tile.slug}>
+            <a href={`/guides/${tile.slug}/print?rig=${encodeURIComponent(rigCode)}`} className="flex min-h-12 items-center font-bold">
+              {t("fix.print", { title: tile.title })}
+            </a>
+          </li>
+        ))}
+      </ul>
+    </details>
   );
 }
 
@@ -139,6 +171,7 @@ interface Tile {
 /** A guide to start: the phone-made case id goes with it, so a double press on a slow signal makes one case. */
 function StartGuideButton({ slug, title, hint, opening, caseId }: Tile & { opening: string | null; caseId: string }) {
   const mine = opening === slug;
+  const { t } = useTranslation();
   return (
     <Form method="post">
       <input type="hidden" name="guideSlug" value={slug} />
@@ -151,12 +184,8 @@ function StartGuideButton({ slug, title, hint, opening, caseId }: Tile & { openi
           mine ? "border-4 border-go bg-caution text-ink" : "border-ink bg-paper"
         }`}
       >
-        <span className="text-xl font-bold">{mine ? `Opening ${title}…` : title}</span>
-        {mine ? (
-          <span className="text-base">Taken. Waiting for the server — keep this screen open.</span>
-        ) : hint ? (
-          <span className="text-base">“{hint}”</span>
-        ) : null}
+        <span className="text-xl font-bold">{mine ? t("fix.opening", { title }) : title}</span>
+        {mine ? <span className="text-base">{t("fix.taken")}</span> : hint ? <span className="text-base">“{hint}”</span> : null}
       </button>
     </Form>
   );
@@ -182,34 +211,35 @@ function FixChooser({
   opening: string | null;
   caseId: string;
 }) {
+  const { t } = useTranslation();
   return (
     <>
       <label htmlFor="symptom" className="mt-5 block text-lg font-bold">
-        Say it in your own words
+        {t("fix.ownWords")}
       </label>
       <input
         id="symptom"
         type="search"
         value={query}
         onChange={(e) => setQuery(e.target.value)}
-        placeholder="e.g. pump won't pick up water"
+        placeholder={t("fix.placeholder")}
         autoComplete="off"
         className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink bg-paper px-3 text-lg"
       />
       {hits.length ? (
-        <section aria-label="Matching guides" className="mt-3 space-y-2">
+        <section aria-label={t("fix.matching")} className="mt-3 space-y-2">
           {hits.slice(0, 3).map((h) => (
             <StartGuideButton key={h.slug} slug={h.slug} title={h.title} opening={opening} caseId={caseId} />
           ))}
         </section>
       ) : query.trim().length >= 2 && !searching && searched ? (
-        <p className="mt-2">No guide matches those words. Pick one below.</p>
+        <p className="mt-2">{t("fix.noMatch")}</p>
       ) : null}
-      <h2 className="mt-6 text-xl font-bold">Or tap what it looks like</h2>
+      <h2 className="mt-6 text-xl font-bold">{t("fix.orTap")}</h2>
       <ul className="mt-2 grid gap-2 sm:grid-cols-2">
-        {tiles.map((t) => (
-          <li key={t.slug}>
-            <StartGuideButton {...t} opening={opening} caseId={caseId} />
+        {tiles.map((tile) => (
+          <li key={tile.slug}>
+            <StartGuideButton {...tile} opening={opening} caseId={caseId} />
           </li>
         ))}
       </ul>

@@ -1,14 +1,15 @@
 import { lazy, Suspense, useEffect, useState } from "react";
+import { useTranslation } from "react-i18next";
 import { SEED_CLOCK_CHANGED, SEED_CLOCK_KEY } from "~/lib/field-math/seed-clock";
 import { Form, Link, NavLink, Outlet, useLocation, useRouteLoaderData } from "react-router";
 import { ErrorPanel } from "~/components/error-panel";
+import { useNavText } from "~/components/ui/nav-text";
 import { useKeptSync } from "~/components/offline/kept-sync";
 import { forgetPhoneKit, useKitRefresh } from "~/components/offline/phone-kit";
 import { useOnline } from "~/components/offline/use-online";
 import { loadKit } from "~/lib/walk/kept";
 import { isNoSignal } from "~/lib/walk/no-signal";
 import { navFor } from "~/lib/navigation";
-import { ROLE_LABELS } from "~/lib/people/roles";
 import { hiddenSections } from "~/services/env.server";
 import { requireUser } from "~/services/guards.server";
 import type { Route } from "./+types/shell";
@@ -50,6 +51,9 @@ export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
 }
 
 function ShellFrame({ user, hidden, children }: Awaited<ReturnType<typeof loader>> & { children: React.ReactNode }) {
+  const { t } = useTranslation();
+  const role = t(`roles.${user.role}`);
+  const nav = useNavText();
   return (
     <div className="min-h-dvh">
       <header className="no-print bg-go text-white">
@@ -61,20 +65,20 @@ function ShellFrame({ user, hidden, children }: Awaited<ReturnType<typeof loader
           <Link
             to="/account"
             className="ml-auto flex min-h-12 min-w-0 flex-col justify-center text-right text-sm leading-tight text-white no-underline"
-            aria-label={`Your account: ${user.name}, ${ROLE_LABELS[user.role]} at ${user.companyName}`}
+            aria-label={t("shell.account", { name: user.name, role, company: user.companyName })}
           >
             <span className="truncate font-bold underline">{user.name}</span>
             <span className="truncate">
-              {ROLE_LABELS[user.role]} · {user.companyName}
+              {role} · {user.companyName}
             </span>
           </Link>
           <Form method="post" action="/logout" onSubmit={() => void forgetPhoneKit()} className="shrink-0">
             <button type="submit" className="min-h-12 rounded-md border-2 border-white px-2 font-bold">
-              Sign out
+              {t("shell.signOut")}
             </button>
           </Form>
         </div>
-        <nav aria-label="Main" className="mx-auto max-w-3xl px-1 pb-1">
+        <nav aria-label={t("shell.main")} className="mx-auto max-w-3xl px-1 pb-1">
           {/* One row that scrolls sideways on a phone, so the menu does not push the page down. */}
           <ul className="flex items-center gap-x-1 overflow-x-auto whitespace-nowrap sm:flex-wrap">
             {navFor(user.role)
@@ -88,7 +92,7 @@ function ShellFrame({ user, hidden, children }: Awaited<ReturnType<typeof loader
                       `flex min-h-12 items-center rounded-md px-2 font-bold text-white no-underline ${isActive ? "underline decoration-caution decoration-4 underline-offset-8" : ""}`
                     }
                   >
-                    {item.label}
+                    {nav.label(item)}
                   </NavLink>
                 </li>
               ))}
@@ -128,10 +132,11 @@ function KeptSeedClock() {
 /** Says, on every page, that there is no signal and what still works. */
 function NoSignalBanner() {
   const online = useOnline();
+  const { t } = useTranslation();
   if (online) return null;
   return (
     <p role="status" className="no-print border-b-4 border-ink bg-caution px-3 py-2 text-center text-lg font-bold text-ink" data-testid="no-signal">
-      No signal. Fixes you start and answers you give are kept on this phone and sent when there is signal.
+      {t("shell.noSignal")}
     </p>
   );
 }

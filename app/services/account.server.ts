@@ -1,3 +1,4 @@
+import { languageFromHeader, type Language } from "~/lib/i18n/languages";
 import { checkPassword, hashPassword } from "~/services/password.server";
 import { PasswordReset, sequelize, SessionRecord, User } from "./db.server";
 import type { SessionUser } from "./guards.server";
@@ -38,4 +39,14 @@ export async function listSessions(user: SessionUser) {
 /** Ends one of the person's own sessions (another person's key ends nothing). */
 export async function endOneSession(user: SessionUser, key: string) {
   await SessionRecord.destroy({ where: { userId: user.id, idHash: key } });
+}
+
+/** At a first sign-in the person's language comes from their browser; after that it is theirs to change. */
+export async function settleLanguage(userId: number, acceptLanguage: string | null) {
+  await User.update({ language: languageFromHeader(acceptLanguage) }, { where: { id: userId, language: null } });
+}
+
+/** The language the person reads Tankside in, from the account page. */
+export async function setLanguage(user: SessionUser, language: Language) {
+  await User.update({ language }, { where: { id: user.id, companyId: user.companyId } });
 }

@@ -1,4 +1,5 @@
 import { createContext, data, redirect, type RouterContextProvider } from "react-router";
+import { isLanguage, type Language } from "~/lib/i18n/languages";
 import { can, lowestRole, type Permission } from "~/lib/permissions";
 import type { Role } from "~/lib/people/roles";
 import { Company, User } from "./db.server";
@@ -13,6 +14,8 @@ export interface SessionUser {
   companyName: string;
   /** The company's IANA time zone: every time a person reads is shown in it. */
   timeZone: string;
+  /** The language they read Tankside in; null until their first sign-in (then the browser's). */
+  language?: Language | null;
 }
 
 const isApi = (request: Request) => new URL(request.url).pathname.startsWith("/api/");
@@ -22,13 +25,22 @@ async function getUser(request: Request): Promise<SessionUser | null> {
   const userId = session.get("userId");
   if (!userId) return null;
   const user = await User.findByPk(userId, {
-    attributes: ["id", "name", "email", "role", "companyId", "accessRemovedAt"],
+    attributes: ["id", "name", "email", "role", "companyId", "accessRemovedAt", "language"],
     include: [{ model: Company, attributes: ["name", "timeZone"] }],
   });
   // A sign-in turned off by an admin ends at once, on every device (its sessions are deleted too).
   if (!user || user.accessRemovedAt) return null;
   const company = (user as User & { Company: Company }).Company;
-  return { id: user.id, name: user.name, email: user.email, role: user.role, companyId: user.companyId, companyName: company.name, timeZone: company.timeZone };
+  return {
+    id: user.id,
+    name: user.name,
+    email: user.email,
+    role: user.role,
+    companyId: user.companyId,
+    companyName: company.name,
+    timeZone: company.timeZone,
+    language: isLanguage(user.language) ? user.language : null,
+  };
 }
 
 /** What a loader or action is handed: the request and the request's own context (one per request, shared by every loader). */

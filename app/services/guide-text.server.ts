@@ -2,6 +2,7 @@ import { isValidElement, type ReactNode } from "react";
 import Markdown from "react-markdown";
 import { DISALLOWED_ELEMENTS, htmlAsText } from "~/lib/guides/markdown-safety";
 import type { Guide } from "~/lib/guides/schema";
+import type { Language } from "~/lib/i18n/languages";
 import { guideTextSources, isTextTag, type GuideTexts, type TextNode } from "~/lib/guides/text-tree";
 
 /** One piece of guide markdown as a safe element tree, through the same react-markdown settings as the desk. */
@@ -22,16 +23,17 @@ function toTree(node: ReactNode): TextNode[] {
   return [[node.type, attrs, ...children]];
 }
 
-// A published version never changes, so its trees are made once per version.
-const byVersion = new Map<number, GuideTexts>();
+// A published version never changes, so its trees are made once per version and language.
+const byVersion = new Map<string, GuideTexts>();
 
-/** Trees for every prompt and help text of a guide version. */
-export function guideTexts(versionId: number, guide: Guide): GuideTexts {
-  let texts = byVersion.get(versionId);
+/** Trees for every prompt and help text of a guide version (as localized for one language). */
+export function guideTexts(versionId: number, guide: Guide, lang: Language = "en"): GuideTexts {
+  const key = `${versionId}:${lang}`;
+  let texts = byVersion.get(key);
   if (!texts) {
     texts = Object.fromEntries(guideTextSources(guide).map((md) => [md, textTree(md)]));
     if (byVersion.size >= 500) byVersion.delete(byVersion.keys().next().value!);
-    byVersion.set(versionId, texts);
+    byVersion.set(key, texts);
   }
   return texts;
 }

@@ -4,14 +4,17 @@ import { loadCauses } from "~/lib/guides/files.server";
 import type { Cause } from "~/lib/guides/causes";
 import { guideKind, type Guide, type GuideKind } from "~/lib/guides/schema";
 import { createGuideSearch, searchDocFor, type SearchHit } from "~/lib/guides/search";
+import { localizeGuide } from "~/lib/guides/translations";
+import type { Language } from "~/lib/i18n/languages";
 import { GuideRecord, GuideVersion } from "./db.server";
 import type { SessionUser } from "./guards.server";
 
 let causes: Cause[] | undefined;
 /** The cause list from content/causes.json, read once per process. */
 export const causeList = () => (causes ??= loadCauses());
-/** Every cause's name by its code. */
-export const causeNames = (): Record<string, string> => Object.fromEntries(causeList().map((c) => [c.code, c.name]));
+/** Every cause's name by its code, in a language (English where it has none). */
+export const causeNames = (lang: Language = "en"): Record<string, string> =>
+  Object.fromEntries(causeList().map((c) => [c.code, (lang !== "en" && c.names?.[lang]) || c.name]));
 
 export interface UsableGuide {
   guideId: number;
@@ -75,20 +78,29 @@ async function publishedDefinitions(ids: number[]): Promise<Map<number, Guide>> 
 // Search indexes by the exact set of guide versions they cover: a new publish changes the key.
 const indexes = new Map<string, ReturnType<typeof createGuideSearch>>();
 
-export async function searchGuides(user: SessionUser, query: string): Promise<SearchHit[]> {
+/** Symptom search in the reader's language (their own, unless asked for another). */
+export async function searchGuides(user: SessionUser, query: string, lang: Language = user.language ?? "en"): Promise<SearchHit[]> {
   const guides = await usableGuides(user);
-  const key = guides.map((g) => g.versionId).join(",");
+  const key = `${lang}:${guides.map((g) => g.versionId).join(",")}`;
   let search = indexes.get(key);
   if (!search) {
-    search = buildIndex(guides);
+    search = buildIndex(guides, lang);
     if (indexes.size >= 100) indexes.delete(indexes.keys().next().value!);
     indexes.set(key, search);
   }
   return search(query);
 }
 
-function buildIndex(guides: UsableGuide[]) {
-  const names = causeNames();
+function buildIndex(guides: UsableGuide[], lang: Language) {
+  const names = causeNames(lang);
   // Symptom search finds fault guides; rig cards are chosen from their own list.
-  return createGuideSearch(guides.filter((g) => g.kind === "guide").map((g) => searchDocFor(g, names)));
+  return createGuideSearch(
+    guides
+      .filter((g) => g.kind === "guide")
+      .map((g) => {
+        const definition = localizeGuide(g.definition, lang).guide;
+        return searchDocFor({ slug: g.slug, title: lang === "en" ? g.title : definition.title, definition }, names);
+      }),
+    lang,
+  );
 }

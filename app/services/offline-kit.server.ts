@@ -8,6 +8,7 @@ import { hiddenSections } from "./env.server";
 import type { SessionUser } from "./guards.server";
 import { causeNames, usableGuides } from "./guides.server";
 import { ownedBy } from "./tenancy.server";
+import { localizeGuide } from "~/lib/guides/translations";
 import { upcomingPlan } from "./jobs.server";
 
 export type { OfflineKit };
@@ -25,6 +26,7 @@ export async function offlineKit(user: SessionUser): Promise<OfflineKit> {
     loadRulesFor(user),
     upcomingPlan(user),
   ]);
+  const lang = user.language ?? "en";
   return {
     madeAt: new Date().toISOString(),
     person: {
@@ -39,17 +41,23 @@ export async function offlineKit(user: SessionUser): Promise<OfflineKit> {
     hidden: hiddenSections(),
     rigs: rigs.map((r) => ({ ...walkRigOf(r), mount: r.mount, pumpKind: r.pumpKind })),
     lastRigCode: rigs.find((r) => r.id === lastRigId)?.code ?? null,
-    guides: guides.map((g) => ({
-      slug: g.slug,
-      title: g.title,
-      summary: g.definition.summary,
-      symptoms: g.definition.symptoms,
-      versionId: g.versionId,
-      version: g.version,
-      definition: g.definition,
-      texts: guideTexts(g.versionId, g.definition),
-    })),
-    causeNames: causeNames(),
+    // In the person's language, as the walk's own page has them.
+    guides: guides.map((g) => {
+      const { guide: definition, inEnglish } = localizeGuide(g.definition, lang);
+      return {
+        slug: g.slug,
+        title: lang === "en" ? g.title : definition.title,
+        summary: definition.summary,
+        symptoms: definition.symptoms,
+        versionId: g.versionId,
+        version: g.version,
+        definition,
+        texts: guideTexts(g.versionId, definition, lang),
+        inEnglish,
+      };
+    }),
+    language: lang,
+    causeNames: causeNames(lang),
     loadRules,
     jobs: { jobs: upcoming.jobs, plan: upcoming.plan },
   };

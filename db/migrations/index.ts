@@ -22,6 +22,7 @@ import * as m020 from "./020-reports-version";
 import * as m021 from "./021-rig-cards";
 import * as m022 from "./022-jobs";
 import * as m023 from "./023-board-job-mix";
+import * as m024 from "./024-person-language";
 
 export interface Migration {
   name: string;
@@ -54,4 +55,5 @@ export const migrations: Migration[] = [
   { name: "021-rig-cards", ...m021 },
   { name: "022-jobs", ...m022 },
   { name: "023-board-job-mix", ...m023 },
+  { name: "024-person-language", ...m024 },
 ];

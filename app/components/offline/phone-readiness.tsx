@@ -1,4 +1,5 @@
 import { useEffect, useState } from "react";
+import { useTranslation } from "react-i18next";
 import { Link } from "react-router";
 import { useTimes } from "~/components/use-time-zone";
 import { useKeptSummary } from "./kept-sync";
@@ -9,6 +10,7 @@ export function PhoneReadiness({ personId }: { personId: number }) {
   const { status, read } = useKitStatus(personId);
   const kept = useKeptSummary();
   const times = useTimes();
+  const { t } = useTranslation();
   // Once fixes were waiting here, say when the last of them has gone, rather than just going quiet.
   const [wasWaiting, setWasWaiting] = useState(false);
   const [allSent, setAllSent] = useState(false);
@@ -24,37 +26,30 @@ export function PhoneReadiness({ personId }: { personId: number }) {
   if (!read)
     return (
       <div className="mb-4" data-testid="phone-readiness">
-        <p className={`${line} border-ink bg-paper text-ink`}>Looking at what this phone keeps for no signal…</p>
+        <p className={`${line} border-ink bg-paper text-ink`}>{t("readiness.looking")}</p>
       </div>
     );
   const ready = status && status.pagesAt && status.pagesFailed === 0;
   return (
     <div className="mb-4 space-y-2" data-testid="phone-readiness">
       <p className={`${line} ${ready ? "border-go bg-paper text-go" : "border-ink bg-caution text-ink"}`}>
-        {ready
-          ? `Ready for no signal · updated ${times.time(status.madeAt)}`
-          : status
-            ? "Partly ready for no signal: rigs and guides kept, some pages not yet."
-            : "Not ready for no signal yet: keep Tankside open a moment."}
+        {ready ? t("readiness.ready", { time: times.time(status.madeAt) }) : status ? t("readiness.partly") : t("readiness.notReady")}
       </p>
       {kept && kept.waiting > 0 ? (
         <p role="status" className="rounded-md border-2 border-ink bg-caution px-3 py-2 font-bold">
-          {kept.signedOut
-            ? `${kept.waiting} walk-through${kept.waiting === 1 ? "" : "s"} (fixes or cards) kept on this phone: your sign-in ended before ${kept.waiting === 1 ? "it was" : "they were"} sent. Sign in again and ${kept.waiting === 1 ? "it" : "they"} will be sent.`
-            : `${kept.waiting} walk-through${kept.waiting === 1 ? "" : "s"} (fixes or cards) kept on this phone, to be sent when there is signal.`}
+          {t(kept.signedOut ? "readiness.waitingSignedOut" : "readiness.waiting", { count: kept.waiting })}
         </p>
       ) : null}
       {allSent ? (
         <p role="status" className="rounded-md border-2 border-go bg-paper px-3 py-2 font-bold text-go">
-          All fixes and cards kept on this phone are now saved to Tankside.
+          {t("readiness.allSent")}
         </p>
       ) : null}
       {kept?.refused.map((r) => (
         <p key={r.caseId} role="alert" className="rounded-md border-2 border-stop bg-paper px-3 py-2 font-bold text-stop">
-          Not saved to Tankside. {r.message}
-          {/supervisor/i.test(r.message) ? "" : " Tell your supervisor."} The answers stay on this phone.{" "}
+          {t(/supervisor/i.test(r.message) ? "readiness.refused" : "readiness.refusedTell", { reason: r.message })}{" "}
           <Link to={`/cases/${r.caseId}/walk`} className="text-stop">
-            Open it
+            {t("readiness.openIt")}
           </Link>
         </p>
       ))}

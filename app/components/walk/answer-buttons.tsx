@@ -1,5 +1,6 @@
+import { useTranslation } from "react-i18next";
 import type { StepKind } from "~/lib/guides/schema";
-import { ANSWER_LABELS, ANSWER_MARKS, ANSWERS_BY_KIND, type StepAnswer } from "~/lib/vocabulary";
+import { ANSWER_MARKS, ANSWERS_BY_KIND, type StepAnswer } from "~/lib/vocabulary";
 
 /**
  * Each answer has its own shade as well as its own word and mark, so a glance in glare (or a
@@ -26,6 +27,7 @@ export function AnswerButtons({
   /** For a moment after a step opens: no look change (that would flicker), the tap just does nothing. */
   disabled?: boolean;
 }) {
+  const { t } = useTranslation();
   const answers: readonly StepAnswer[] = ANSWERS_BY_KIND[kind];
   return (
     <div className={`grid gap-3 ${answers.length === 2 ? "grid-cols-2" : "grid-cols-1"}`}>
@@ -43,10 +45,10 @@ export function AnswerButtons({
           <span aria-hidden="true" className="text-2xl leading-none">
             {ANSWER_MARKS[a]}
           </span>
-          {ANSWER_LABELS[a]}
+          {t(`answers.${a}`)}
           {suggested === a ? (
             <span id="todays-answer-mark" className="text-base font-normal">
-              (today&apos;s card)
+              {t("step.todaysMark")}
             </span>
           ) : null}
         </button>

@@ -1,3 +1,5 @@
+import type { TFunction } from "i18next";
+import { useTranslation } from "react-i18next";
 import { Link } from "react-router";
 import { useState } from "react";
 import { ErrorList } from "~/components/ui/error-list";
@@ -5,17 +7,20 @@ import { GuideText } from "~/components/ui/guide-text";
 import type { StepMeta } from "~/lib/guides/schema";
 import type { QueuedClose, WalkRecord } from "~/lib/walk/queue";
 import { useTimes } from "../use-time-zone";
-import { CARD_OUTCOME_LABELS, type CaseKind } from "~/lib/vocabulary";
+import type { CaseKind } from "~/lib/vocabulary";
 
 /** What the crew is told about the hand-off mail: what will happen until the server says what did. */
-function handoffNews(record: WalkRecord, finished: boolean, online: boolean, time: (iso: string) => string): string {
+function handoffNews(record: WalkRecord, finished: boolean, online: boolean, time: (iso: string) => string, t: TFunction): string {
   const result = record.closeResult;
-  if (result?.mailFailed) return "The e-mail to your supervisor could not be sent. Call your supervisor.";
-  if (result?.notified.length) return `E-mailed to ${result.notified.join(", ")}${result.mailedAt ? ` at ${time(result.mailedAt)}` : ""}.`;
-  if (result?.mailPending) return "The case is closed; the e-mail to your supervisor is being sent.";
-  if (result) return "The case is closed; the e-mail to your supervisor is not confirmed yet. Call if it is urgent.";
-  if (!finished) return "When you finish, your supervisor will be e-mailed with your answers.";
-  return online ? "Sending… your supervisor will be e-mailed when the server has the case." : "Your supervisor will be e-mailed when this phone has signal.";
+  if (result?.mailFailed) return t("end.mailFailed");
+  if (result?.notified.length) {
+    const to = result.notified.join(", ");
+    return result.mailedAt ? t("end.mailedAt", { to, time: time(result.mailedAt) }) : t("end.mailed", { to });
+  }
+  if (result?.mailPending) return t("end.mailPending");
+  if (result) return t("end.mailUnconfirmed");
+  if (!finished) return t("end.mailWhenFinished");
+  return online ? t("end.mailSending") : t("end.mailNoSignal");
 }
 
 /** The end of a walk-through: what was found (or who is told), engine hours, and Finish. */
@@ -42,7 +47,8 @@ export function EndCard({
   const [hours, setHours] = useState("");
   const [note, setNote] = useState("");
   const [error, setError] = useState<string | null>(null);
-  const { time } = useTimes();
+  const { time, number } = useTimes();
+  const { t } = useTranslation();
   const fixed = meta.kind === "fixed";
   const finished = !!record.close;
   const card = kind === "card";
@@ -53,8 +59,8 @@ export function EndCard({
     let engineHours: number | undefined;
     if (asksHours && hours.trim() !== "") {
       engineHours = Number(hours);
-      if (!Number.isFinite(engineHours) || engineHours < 0 || engineHours > 100_000) return setError("Engine hours must be a number from 0 to 100,000.");
-      if (engineHours < hourMeter.current) return setError(`The meter read ${hourMeter.current} h before; enter the reading now (the same or more).`);
+      if (!Number.isFinite(engineHours) || engineHours < 0 || engineHours > 100_000) return setError(t("end.hoursBad"));
+      if (engineHours < hourMeter.current) return setError(t("end.hoursLow", { last: number(hourMeter.current, 1) }));
     }
     setError(null);
     onFinish({ engineHours, note: note.trim() || undefined });
@@ -63,29 +69,29 @@ export function EndCard({
   return (
     <section aria-labelledby="end-title" className={`rounded-lg border-4 p-4 ${fixed ? "border-go bg-paper" : "border-stop bg-paper"}`}>
       <h1 id="end-title" tabIndex={-1} data-step-heading className={`text-2xl font-bold ${fixed ? "text-go" : "text-stop"}`}>
-        {card ? CARD_OUTCOME_LABELS[fixed ? "fixed" : "handoff"] : fixed ? "Fixed" : "Handed off"}
+        {card ? t(`cardOutcomes.${fixed ? "fixed" : "handoff"}`) : fixed ? t("end.fixed") : t("end.handoff")}
       </h1>
       <GuideText text={meta.prompt} className="mt-2 text-xl" />
       {fixed && causeName ? (
         <p className="mt-2 text-lg">
-          <strong>Cause:</strong> {causeName}
+          <strong>{t("end.cause")}</strong> {causeName}
           {meta.component ? ` (${meta.component})` : ""}
         </p>
       ) : null}
       {meta.help ? <GuideText text={meta.help} className="mt-3 text-lg" /> : null}
       {!fixed ? (
         <p className="mt-3 text-lg font-bold" data-testid="handoff-mail">
-          {handoffNews(record, finished, online, time)}
+          {handoffNews(record, finished, online, time, t)}
         </p>
       ) : null}
       {finished ? (
         <>
           <p className="mt-4 text-lg font-bold">
             {record.closeResult
-              ? `${card ? "Card" : "Case"} closed and saved.`
+              ? t(card ? "end.savedCard" : "end.savedFix")
               : online
-                ? `Finished. Saving the ${card ? "card" : "case"}…`
-                : `Finished. The ${card ? "card" : "case"} is saved when this phone has signal.`}
+                ? t(card ? "end.savingCard" : "end.savingFix")
+                : t(card ? "end.laterCard" : "end.laterFix")}
           </p>
           <p className="mt-4 flex flex-wrap gap-2">
             {fromCard ? (
@@ -93,11 +99,11 @@ export function EndCard({
                 to={`/cases/${fromCard.caseId}/walk`}
                 className="inline-flex min-h-14 items-center rounded-lg bg-go px-4 text-lg font-bold text-white no-underline"
               >
-                Back to the {fromCard.title} card
+                {t("end.backToCard", { title: fromCard.title })}
               </Link>
             ) : null}
             <Link to="/" className="inline-flex min-h-14 items-center rounded-lg border-2 border-ink bg-paper px-4 text-lg font-bold no-underline">
-              {card ? "Back to the rigs" : "Start a new fix"}
+              {card ? t("walk.backToRigs") : t("walk.newFix")}
             </Link>
           </p>
         </>
@@ -105,7 +111,7 @@ export function EndCard({
         <div className="mt-4 space-y-3">
           {asksHours ? (
             <label className="block font-bold">
-              Engine hours now (hour meter; last reading {hourMeter.current.toLocaleString("en-US")} h)
+              {t("end.hours", { last: number(hourMeter.current, 1) })}
               <input
                 value={hours}
                 onChange={(e) => setHours(e.target.value)}
@@ -115,7 +121,7 @@ export function EndCard({
             </label>
           ) : null}
           <label className="block font-bold">
-            Note for the {card ? "card" : "case"} (optional)
+            {t(card ? "end.noteCard" : "end.noteFix")}
             <textarea
               value={note}
               onChange={(e) => setNote(e.target.value)}
@@ -126,7 +132,7 @@ export function EndCard({
           </label>
           {error ? <ErrorList error={error} /> : null}
           <button type="button" onClick={finish} className="min-h-16 w-full rounded-lg bg-go text-xl font-bold text-white">
-            Finish
+            {t("end.finish")}
           </button>
         </div>
       )}

@@ -1,4 +1,5 @@
 import { useState } from "react";
+import { useTranslation } from "react-i18next";
 import type { QueuedPhoto } from "~/lib/walk/queue";
 
 /**
@@ -20,10 +21,11 @@ export function PhotoPicker({
   onTake: (file: File) => Promise<string | null>;
 }) {
   const [problem, setProblem] = useState<string | null>(null);
+  const { t } = useTranslation();
   return (
     <div>
       <label className="flex min-h-12 w-fit items-center rounded-md border-2 border-ink bg-paper px-3 font-bold">
-        Add a photo
+        {t("photo.add")}
         <input
           type="file"
           accept="image/*"
@@ -41,20 +43,24 @@ export function PhotoPicker({
         {photos.map((p, i) => (
           <li key={p.id} className="flex items-center gap-3">
             {p.sentAs ? (
-              <img src={`/cases/${caseId}/photos/${p.sentAs}`} alt={`Photo ${i + 1}`} className="h-16 w-16 rounded border-2 border-ink object-cover" />
+              <img
+                src={`/cases/${caseId}/photos/${p.sentAs}`}
+                alt={t("photo.alt", { n: i + 1 })}
+                className="h-16 w-16 rounded border-2 border-ink object-cover"
+              />
             ) : null}
             <span>
               {p.name}:{" "}
               {p.error ? (
                 <strong className="text-stop">{p.error}</strong>
               ) : p.sentAs ? (
-                "saved"
+                t("photo.saved")
               ) : online && progress[p.id] !== undefined ? (
-                <progress max={100} value={progress[p.id]} aria-label={`Sending ${p.name}`}>
+                <progress max={100} value={progress[p.id]} aria-label={t("photo.sending", { name: p.name })}>
                   {progress[p.id]}%
                 </progress>
               ) : (
-                "kept on this phone, sent when there is signal"
+                t("photo.kept")
               )}
             </span>
           </li>

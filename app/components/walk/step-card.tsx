@@ -1,4 +1,5 @@
 import { useEffect, useState } from "react";
+import { useTranslation } from "react-i18next";
 
 /** How long a new step's answers wait before taking a tap (ms). */
 const ARM_MS = 350;
@@ -7,12 +8,12 @@ import type { Guide } from "~/lib/guides/schema";
 import type { Stepper } from "~/lib/walk/next-step";
 import { AnswerButtons } from "./answer-buttons";
 import { SafetyCaution } from "./safety-caution";
-import { CHECKLIST_LABELS, checklistOf } from "~/lib/guides/safety";
+import { checklistOf } from "~/lib/guides/safety";
 import { fillRigWords } from "~/lib/guides/rig-words";
 import type { AgitatorDirection } from "~/lib/rigs/schema";
 import { suggestedAnswer, type DayFact } from "~/lib/walk/day-facts";
 import { useTimes } from "~/components/use-time-zone";
-import { answerLabel } from "~/lib/vocabulary";
+import type { Answer } from "~/lib/vocabulary";
 
 /**
  * One step of the guide. Answering asks the stepper (the guide's own table on the phone, the
@@ -31,7 +32,10 @@ export function StepCard({
   beforeAnswers,
   children,
   headingLevel = 1,
+  inEnglish = false,
 }: {
+  /** The step has no up-to-date text in the reader's language: it shows in English, marked. */
+  inEnglish?: boolean;
   /** What a step offers before its answers (a card item's "open the guide"), so it is seen first. */
   beforeAnswers?: React.ReactNode;
   /** What today's card said about the fact this check asks (its answer is offered, never taken silently). */
@@ -48,6 +52,7 @@ export function StepCard({
   /** 1 on the walk (the step is the page); 2 inside the desk's preview, under the page's own title. */
   headingLevel?: 1 | 2;
 }) {
+  const { t } = useTranslation();
   const Heading = headingLevel === 1 ? "h1" : "h2";
   // Help and the note box open per step: a new step starts with both as a fresh card would.
   const [open, setOpen] = useState({ step: stepId, help: false, note: note !== "" });
@@ -77,17 +82,28 @@ export function StepCard({
       {safety ? <SafetyCaution compact /> : null}
       <div className={`rounded-lg border-2 p-4 ${safety ? "border-ink bg-caution" : "border-ink bg-paper"}`}>
         <Heading className="text-sm font-bold tracking-wide uppercase">
-          {safety ? "Shut-down stop" : meta.kind === "check" ? "Check" : "Do this"}
-          {meta.minutes ? ` · about ${meta.minutes < 1 ? "½" : meta.minutes} min` : ""}
-          {meta.handsOn ? " · hands\u2011on" : ""}
+          {safety ? t("step.stop") : meta.kind === "check" ? t("step.check") : t("step.doThis")}
+          {meta.minutes ? t("step.minutes", { minutes: meta.minutes < 1 ? "½" : meta.minutes }) : ""}
+          {meta.handsOn ? t("step.handsOn") : ""}
         </Heading>
-        <div id="step-prompt" tabIndex={-1} data-step-heading className={`mt-1 leading-snug ${safety ? "text-xl" : "text-[1.45rem] font-bold"}`}>
+        {inEnglish ? (
+          <p lang="en" data-testid="in-english" className="mt-1 inline-block rounded border-2 border-ink px-2 text-sm font-bold">
+            {t("step.inEnglish")}
+          </p>
+        ) : null}
+        <div
+          id="step-prompt"
+          tabIndex={-1}
+          lang={inEnglish ? "en" : undefined}
+          data-step-heading
+          className={`mt-1 leading-snug ${safety ? "text-xl" : "text-[1.45rem] font-bold"}`}
+        >
           <GuideText text={meta.prompt} fill={fill} />
         </div>
         {safety ? (
-          <ul aria-label="Before you go on" className="mt-3 list-disc space-y-1 pl-6 text-lg font-bold">
+          <ul aria-label={t("step.beforeYouGoOn")} className="mt-3 list-disc space-y-1 pl-6 text-lg font-bold">
             {checklistOf(meta).map((item) => (
-              <li key={item}>{CHECKLIST_LABELS[item]}</li>
+              <li key={item}>{t(`checklist.${item}`)}</li>
             ))}
           </ul>
         ) : null}
@@ -99,7 +115,7 @@ export function StepCard({
               onClick={() => setShowHelp(!showHelp)}
               className="min-h-12 rounded-md border-2 border-ink px-3 font-bold"
             >
-              {showHelp ? "Less" : "More about this"}
+              {showHelp ? t("step.less") : t("step.more")}
             </button>
             {showHelp ? <GuideText text={meta.help} fill={fill} className="mt-2 text-lg" /> : null}
           </div>
@@ -115,7 +131,7 @@ export function StepCard({
       <div>
         {showNote ? (
           <label className="block font-bold">
-            Note (goes with your answer)
+            {t("step.note")}
             <textarea
               value={note}
               onChange={(e) => onNoteChange(e.target.value)}
@@ -126,7 +142,7 @@ export function StepCard({
           </label>
         ) : (
           <button type="button" onClick={() => setShowNote(true)} className="min-h-12 rounded-md border-2 border-ink bg-paper px-3 font-bold">
-            Add a note
+            {t("step.addNote")}
           </button>
         )}
       </div>
@@ -137,13 +153,18 @@ export function StepCard({
 /** Today's card answer for this check, with its time: the matching button is marked, the crew taps to confirm. */
 function TodaysAnswer({ fact }: { fact: DayFact }) {
   const { time } = useTimes();
+  const { t } = useTranslation();
   return (
     <p data-testid="todays-answer" className="mb-2 rounded-md border-2 border-ink bg-paper px-3 py-2 text-lg">
       <strong>
-        Today&apos;s {fact.card} at {time(fact.at)}
-        {fact.by ? ` (${fact.by})` : ""}: {answerLabel(suggestedAnswer(fact)!)}.
+        {t("step.todays", {
+          card: fact.card,
+          time: time(fact.at),
+          by: fact.by ? ` (${fact.by})` : "",
+          answer: t(`answers.${suggestedAnswer(fact)! as Answer}`),
+        })}
       </strong>{" "}
-      Still so? Tap to confirm, or answer what you see now.
+      {t("step.todaysConfirm")}
     </p>
   );
 }

@@ -1,3 +1,5 @@
+import { useTranslation } from "react-i18next";
+
 /** Says plainly whether the answers are safe on the server or still only on this phone, and why. */
 export function SyncBadge({
   online,
@@ -17,30 +19,32 @@ export function SyncBadge({
   rejected?: string;
   signedOut?: boolean;
 }) {
+  const { t } = useTranslation();
   let text: string;
   let tone: string;
   const what = [
-    waiting.answers ? `${waiting.answers} answer${waiting.answers === 1 ? "" : "s"}` : "",
-    waiting.photos ? `${waiting.photos} photo${waiting.photos === 1 ? "" : "s"}` : "",
-    waiting.close ? `the end of the ${noun}` : "",
+    waiting.answers ? t("sync.answers", { count: waiting.answers }) : "",
+    waiting.photos ? t("sync.photos", { count: waiting.photos }) : "",
+    waiting.close ? t(noun === "card" ? "sync.endCard" : "sync.endFix") : "",
   ].filter(Boolean);
   const count = what.length;
-  const listed = what.length > 1 ? `${what.slice(0, -1).join(", ")} and ${what[what.length - 1]}` : (what[0] ?? "");
+  const list = what.length > 1 ? t("sync.and", { list: what.slice(0, -1).join(", "), last: what[what.length - 1] }) : (what[0] ?? "");
   if (rejected) {
-    text = `Not saved to Tankside. ${rejected}${/supervisor/i.test(rejected) ? "" : " Tell your supervisor."} Everything you answered stays on this phone.`;
+    text = t(/supervisor/i.test(rejected) ? "sync.rejected" : "sync.rejectedTell", { reason: rejected });
     tone = "border-stop bg-paper text-stop";
   } else if (count === 0 && !startWaiting) {
-    text = "All answers saved to Tankside.";
+    text = t("sync.allSaved");
     tone = "border-go bg-paper text-go";
   } else if (count === 0) {
-    text = online ? `Sending the ${noun} to Tankside…` : `This ${noun} is kept on this phone — no signal; it will be sent when there is.`;
+    text = online ? t(noun === "card" ? "sync.sendingCard" : "sync.sendingFix") : t(noun === "card" ? "sync.keptCard" : "sync.keptFix");
     tone = "border-ink bg-caution text-ink";
   } else if (signedOut) {
-    text = `Kept on this phone: ${listed}. Your sign-in has ended: sign in again on this phone and they will be sent.`;
+    text = t("sync.signedOut", { list });
     tone = "border-ink bg-caution text-ink";
   } else {
+    const List = `${list[0].toUpperCase()}${list.slice(1)}`;
     const one = what.length === 1 && (waiting.answers === 1 || waiting.photos === 1 || waiting.close);
-    text = `${listed[0].toUpperCase()}${listed.slice(1)} kept on this phone${online ? ", sending…" : ` — no signal; ${one ? "it" : "they"} will be sent when there is.`}`;
+    text = online ? t("sync.keptSending", { list, List }) : t(one ? "sync.keptOneLater" : "sync.keptLater", { list, List });
     tone = "border-ink bg-caution text-ink";
   }
   return (

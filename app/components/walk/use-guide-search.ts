@@ -15,7 +15,10 @@ async function searchOnPhone(query: string, personId: number): Promise<SearchHit
     const { createGuideSearch, searchDocFor } = await import("~/lib/guides/search");
     phoneSearch = {
       madeAt: kit.madeAt,
-      search: createGuideSearch(kit.guides.filter((g) => guideKind(g.definition) === "guide").map((g) => searchDocFor(g, kit.causeNames))),
+      search: createGuideSearch(
+        kit.guides.filter((g) => guideKind(g.definition) === "guide").map((g) => searchDocFor(g, kit.causeNames)),
+        kit.language ?? "en",
+      ),
     };
   }
   return phoneSearch.search(query);

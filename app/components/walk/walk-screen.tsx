@@ -1,4 +1,5 @@
 import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from "react";
+import { useTranslation } from "react-i18next";
 import type { AgitatorDirection } from "~/lib/rigs/schema";
 import { Form, Link, useRouteLoaderData } from "react-router";
 import type { loader as shellLoader } from "~/routes/shell";
@@ -8,7 +9,7 @@ import { mergeDayFacts, type DayFacts } from "~/lib/walk/day-facts";
 import type { Guide } from "~/lib/guides/schema";
 import { guideSteps } from "~/lib/walk/next-step";
 import { replayFrom, replayWalk } from "~/lib/walk/replay";
-import { CARD_OUTCOME_LABELS, outcomeLabel, type CaseKind, type Outcome } from "~/lib/vocabulary";
+import type { CaseKind, Outcome } from "~/lib/vocabulary";
 import { appendEvent, loadRecord, mergeServerEvents, saveRecord, type QueuedEvent, type WalkRecord } from "~/lib/walk/queue";
 import { MAX_PHOTO_BYTES } from "~/lib/cases/limits";
 import { dayFactsOnPhone, fixesFromCardOnPhone, lastHoursOnPhone, noteHoursOnPhone, PHOTO_WAIT_CAP_BYTES, waitingPhotoBytes } from "~/lib/walk/kept";
@@ -41,6 +42,8 @@ export interface WalkScreenProps {
   /** On a card: the fixes its items opened, as the server has them (the phone adds its own). */
   serverFixesOpened?: { caseId: string; title: string; outcome: string }[];
   renderFieldMath?: (widget: string) => React.ReactNode;
+  /** Steps shown in English because the reader's language has no up-to-date text for them. */
+  inEnglish?: string[];
 }
 
 /** The crew's walk-through: state lives on the phone, the server hears about it in batches. */
@@ -60,7 +63,9 @@ export function WalkScreen({
   serverDayFacts,
   serverFixesOpened,
   renderFieldMath,
+  inEnglish = [],
 }: WalkScreenProps) {
+  const { t } = useTranslation();
   const steps = useMemo(() => guideSteps(guide), [guide]);
   // A page the server drew starts from the server's answers (the phone's are read after hydration);
   // one rebuilt on the phone opens straight at the phone's step.
@@ -162,17 +167,14 @@ export function WalkScreen({
   }, [stepKey]);
 
   const takePhoto = async (file: File): Promise<string | null> => {
-    if (file.size === 0) return "That photo is empty.";
-    if (file.size > MAX_PHOTO_BYTES)
-      return `Photos can be at most ${MAX_PHOTO_BYTES / 1024 / 1024} MB; this one is ${(file.size / 1024 / 1024).toFixed(1)} MB.`;
-    if (waitingPhotoBytes(window.localStorage) + file.size > PHOTO_WAIT_CAP_BYTES) {
-      return `This phone already holds ${PHOTO_WAIT_CAP_BYTES / 1024 / 1024} MB of photos waiting for signal. Send those first (find signal), then add more.`;
-    }
+    if (file.size === 0) return t("walk.photoEmpty");
+    if (file.size > MAX_PHOTO_BYTES) return t("walk.photoTooBig", { max: MAX_PHOTO_BYTES / 1024 / 1024, size: (file.size / 1024 / 1024).toFixed(1) });
+    if (waitingPhotoBytes(window.localStorage) + file.size > PHOTO_WAIT_CAP_BYTES) return t("walk.photoCap", { max: PHOTO_WAIT_CAP_BYTES / 1024 / 1024 });
     const id = crypto.randomUUID();
     try {
       await keepPhotoBytes(id, file);
     } catch {
-      return "This phone has no room to keep the photo. Free some space, or add it when there is signal.";
+      return t("walk.photoNoRoom");
     }
     update((r) => ({ ...r, photos: [...(r.photos ?? []), { id, stepId: here, name: file.name || "photo.jpg", bytes: file.size }] }));
     setTimeout(sync.flushNow, 0);
@@ -189,9 +191,9 @@ export function WalkScreen({
           <strong>{rig.code}</strong> · {guideTitle}
         </p>
         {closedElsewhere || stoppedHere ? null : (
-          <p className="text-base" aria-label="Progress">
-            Step {path.length}
-            {atEnd ? " · end" : ` · at least ${stepsToEnd[here]} more to an end`}
+          <p className="text-base" aria-label={t("walk.progress")}>
+            {t("walk.stepOf", { n: path.length })}
+            {atEnd ? t("walk.end") : t("walk.toEnd", { count: stepsToEnd[here] })}
           </p>
         )}
       </header>
@@ -217,6 +219,7 @@ export function WalkScreen({
           guide={guide}
           steps={steps}
           stepId={here}
+          inEnglish={inEnglish.includes(here)}
           rig={rig}
           note={note}
           onNoteChange={setNote}
@@ -250,7 +253,7 @@ export function WalkScreen({
         signedOut={sync.signedOut}
       />
       {/* Its place is kept until the phone has answered, so the buttons below do not jump. */}
-      <p className="min-h-12 text-base">{offlineReady ? "This walk-through is kept on this phone: it opens again even with no signal." : null}</p>
+      <p className="min-h-12 text-base">{offlineReady ? t("walk.keptOnPhone") : null}</p>
       {path.length > 1 && !record.close && !closedElsewhere ? (
         <button
           type="button"
@@ -261,7 +264,7 @@ export function WalkScreen({
           }}
           className="min-h-14 rounded-lg border-2 border-ink bg-paper text-lg font-bold"
         >
-          Back one step
+          {t("walk.back")}
         </button>
       ) : null}
       {!atEnd && !record.close && !closedElsewhere ? (
@@ -269,9 +272,9 @@ export function WalkScreen({
           // Asked on the page with big buttons (gloves), not in the browser's small dialog.
           <section aria-labelledby="stop-q" className="rounded-lg border-4 border-stop bg-paper p-4">
             <h2 id="stop-q" ref={stopQuestion} tabIndex={-1} className="text-xl font-bold">
-              Stop this walk-through without an answer?
+              {t("walk.stopQuestion")}
             </h2>
-            <p className="mt-1 text-lg">The walk-through takes no more answers and is saved as abandoned{sync.online ? "." : " when this phone has signal."}</p>
+            <p className="mt-1 text-lg">{sync.online ? t("walk.stopSaved") : t("walk.stopSavedLater")}</p>
             <div className="mt-3 grid grid-cols-2 gap-2">
               <button
                 type="button"
@@ -282,16 +285,16 @@ export function WalkScreen({
                 }}
                 className="min-h-14 rounded-lg bg-stop text-lg font-bold text-white"
               >
-                Yes, stop it
+                {t("walk.yesStop")}
               </button>
               <button type="button" onClick={() => setConfirmStop(false)} className="min-h-14 rounded-lg border-2 border-ink bg-paper text-lg font-bold">
-                Keep going
+                {t("walk.keepGoing")}
               </button>
             </div>
           </section>
         ) : (
           <button type="button" ref={stopButton} onClick={() => setConfirmStop(true)} className="min-h-12 text-base underline">
-            Stop without finishing
+            {t("walk.stopWithout")}
           </button>
         )
       ) : null}
@@ -317,6 +320,7 @@ function OpenGuide({
   opened: { caseId: string; title: string; outcome: string }[];
 }) {
   const [fixId] = useState(() => crypto.randomUUID());
+  const { t } = useTranslation();
   const still = opened.find((f) => f.outcome === "open");
   return (
     <Form method="post" action={`/rigs/${rigCode}/fix`} className="mb-3">
@@ -325,7 +329,7 @@ function OpenGuide({
       <input type="hidden" name="fromCaseId" value={cardId} />
       <input type="hidden" name="fromTitle" value={cardTitle} />
       {opened.length ? (
-        <ul aria-label="Opened from this card" className="mb-2 rounded-md border-2 border-ink bg-paper px-3 py-2 text-lg">
+        <ul aria-label={t("walk.openedFromCard")} className="mb-2 rounded-md border-2 border-ink bg-paper px-3 py-2 text-lg">
           {opened.map((f) => (
             <li key={f.caseId}>
               <Link to={`/cases/${f.caseId}/walk`}>{f.title}</Link>: {f.outcome}
@@ -339,39 +343,38 @@ function OpenGuide({
           to={`/cases/${still.caseId}/walk`}
           className="flex min-h-16 w-full items-center justify-center rounded-lg border-4 border-ink bg-caution px-3 text-xl font-bold text-ink no-underline"
         >
-          Carry on with the guide
+          {t("walk.carryOnGuide")}
         </Link>
       ) : (
         <button type="submit" className="min-h-16 w-full rounded-lg border-4 border-ink bg-caution px-3 text-xl font-bold text-ink">
-          {opened.length ? "Open the guide again" : "Open the guide now"}
+          {opened.length ? t("walk.openGuideAgain") : t("walk.openGuideNow")}
         </button>
       )}
-      <p className="mt-1 text-base">This card stays open: come back to it from the guide&apos;s end, or from the rig&apos;s cards.</p>
+      <p className="mt-1 text-base">{t("walk.cardStaysOpen")}</p>
     </Form>
   );
 }
 
 /** A closed case (stopped here, or finished elsewhere): shown as it ended, with nothing to answer. */
 function ClosedCard({ outcome, synced, kind }: { outcome: Outcome; synced: boolean; kind: CaseKind }) {
-  const noun = kind === "card" ? "card" : "case";
-  const label = kind === "card" ? CARD_OUTCOME_LABELS[outcome] : outcomeLabel(outcome);
+  const { t } = useTranslation();
+  const card = kind === "card";
+  const label = (card ? t(`cardOutcomes.${outcome}`) : t(`outcomes.${outcome}`)).toLowerCase();
   return (
     <section aria-labelledby="closed-title" className="rounded-lg border-4 border-ink bg-paper p-4">
       <h1 id="closed-title" tabIndex={-1} data-step-heading className="text-2xl font-bold">
-        {outcome === "abandoned" ? "Stopped without finishing" : `This ${noun} is closed (${label.toLowerCase()})`}
+        {outcome === "abandoned" ? t("walk.stoppedTitle") : card ? t("walk.closedTitleCard", { label }) : t("walk.closedTitleFix", { label })}
       </h1>
       <p className="mt-2 text-lg">
         {outcome === "abandoned"
           ? synced
-            ? `The ${noun} is saved as stopped and takes no more answers.`
-            : `It will be saved as stopped when this phone has signal. It takes no more answers.`
-          : kind === "card"
-            ? "It takes no more answers. Start the card again from the rig's cards if it has to be done again."
-            : "It takes no more answers. If the rig still acts up, start a new fix."}
+            ? t(card ? "walk.stoppedSavedCard" : "walk.stoppedSavedFix")
+            : t("walk.stoppedLater")
+          : t(card ? "walk.closedCard" : "walk.closedFix")}
       </p>
       <p className="mt-4">
         <Link to="/" className="inline-flex min-h-14 items-center rounded-lg border-2 border-ink bg-paper px-4 text-lg font-bold no-underline">
-          {kind === "card" ? "Back to the rigs" : "Start a new fix"}
+          {card ? t("walk.backToRigs") : t("walk.newFix")}
         </Link>
       </p>
     </section>

@@ -11,6 +11,11 @@ export const causeSchema = z.strictObject({
   iso14224: z.enum(ISO_14224_MODES).nullable(),
   /** Where the mapping comes from ("from memory" until checked against the standard's table). */
   isoNote: z.string().optional(),
+  /** The name in other languages (the crew's end card reads it). */
+  names: z
+    .strictObject({ es: z.string().min(1) })
+    .partial()
+    .optional(),
 });
 
 export const causeListSchema = z.array(causeSchema).superRefine((list, ctx) => {

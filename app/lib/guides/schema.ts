@@ -40,6 +40,27 @@ export const stepSchema = z.strictObject({
   meta: stepMetaSchema,
 });
 
+const fromStamp = z.string().regex(/^[0-9a-f]{8}$/, "the stamp of the English it was written from (8 hex digits)");
+
+/** One step's text in another language (lib/guides/translations). */
+export const stepTranslationSchema = z.strictObject({
+  prompt: z.string().trim().min(1, "the translated prompt is empty").max(400, "keep the translated prompt under 400 characters"),
+  help: z.string().max(4000).optional(),
+  from: fromStamp,
+});
+
+/** A guide's text in another language: the head (title, summary, symptoms) and each step. */
+export const guideTranslationSchema = z.strictObject({
+  title: z.string().trim().min(1).max(120).optional(),
+  summary: z.string().trim().min(1).max(600).optional(),
+  symptoms: z.array(z.string().trim().min(2).max(120)).max(60).optional(),
+  from: fromStamp.optional(),
+  steps: z.record(slug, stepTranslationSchema).optional(),
+});
+
+/** Languages other than English a guide file may carry (English is the guide itself). */
+export const translationsSchema = z.strictObject({ es: guideTranslationSchema.optional() });
+
 /** The one definition of a guide file in content/guides (an XState machine config + our meta). */
 export const guideSchema = z.strictObject({
   /** "card" for a rig card (content/cards); a guide leaves it out. */
@@ -50,6 +71,7 @@ export const guideSchema = z.strictObject({
   symptoms: z.array(z.string().trim().min(2).max(120)).min(1, "list at least one symptom phrase"),
   initial: z.string().min(1),
   states: z.record(slug, stepSchema).refine((s) => Object.keys(s).length > 0, "a guide needs at least one step"),
+  translations: translationsSchema.optional(),
 });
 
 export type Guide = z.infer<typeof guideSchema>;
@@ -79,6 +101,19 @@ export const draftShapeSchema = z.object({
       }),
     )
     .refine((s) => Object.keys(s).length <= 200, "a guide has at most 200 steps"),
+  translations: z
+    .object({
+      es: z
+        .object({
+          title: z.string().max(120).optional(),
+          summary: z.string().max(600).optional(),
+          symptoms: z.array(z.string().max(120)).max(60).optional(),
+          from: z.string().max(16).optional(),
+          steps: z.record(z.string().max(80), z.object({ prompt: text, help: text.optional(), from: z.string().max(16) })).optional(),
+        })
+        .optional(),
+    })
+    .optional(),
 });
 
 const LONE_SURROGATE = /[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/;

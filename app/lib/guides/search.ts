@@ -1,4 +1,5 @@
 import Fuse from "fuse.js";
+import type { Language } from "../i18n/languages";
 import type { Guide } from "./schema";
 
 export interface SearchDoc {
@@ -15,7 +16,7 @@ export interface SearchHit {
   score: number;
 }
 
-/** A guide as search reads it: its words, and the names of the causes it can end with. */
+/** A guide as search reads it (in the language it was localized to): its words, and the names of the causes it can end with. */
 export function searchDocFor(guide: { slug: string; title: string; definition: Guide }, causeNames: Record<string, string>): SearchDoc {
   return {
     slug: guide.slug,
@@ -27,7 +28,8 @@ export function searchDocFor(guide: { slug: string; title: string; definition: G
 }
 
 /** Words crews use for the same thing; a query with one also looks for the others. */
-export const SYNONYMS: string[][] = [
+export const SYNONYMS: Record<Language, string[][]> = { en: [], es: [] };
+SYNONYMS.en = [
   ["no pressure", "low pressure", "weak stream", "weak", "short", "won't reach", "not reaching", "falls short", "no push", "no reach"],
   ["suds", "foam", "froth", "frothy", "bubbles", "bubbly", "foaming"],
   ["shaking", "vibration", "vibrating", "jumping", "rattle", "rattling", "wobble", "shudder", "knocking", "banging"],
@@ -37,16 +39,41 @@ export const SYNONYMS: string[][] = [
   ["thick", "heavy", "stiff", "oatmeal", "setting up", "too thick", "sludge"],
   ["agitator", "paddles", "mixer", "stir", "stall", "stalls", "stuck", "jammed"],
 ];
+// Spanish as crews say it on US sites (content/glossary.es.md), accents left off: the query's are too.
+SYNONYMS.es = [
+  ["no tira", "no avienta", "alcance corto", "no llega", "no alcanza", "poca presion", "sin presion", "chorro debil", "tira corto", "sin fuerza", "cortito"],
+  ["espuma", "espumoso", "espumosa", "burbujas", "jabonoso", "espumea", "hace espuma"],
+  ["vibra", "vibracion", "tiembla", "brinca", "golpetea", "cascabelea", "sacude", "zumba", "se mueve mucho"],
+  ["tapado", "tapada", "tapon", "atorado", "atorada", "atascado", "obstruido", "no sale nada", "se tapo"],
+  ["fuga", "gotea", "goteo", "chorrea", "escurre", "charco", "pierde agua", "se sale el agua", "tira agua por"],
+  ["cebado", "descebo", "succion", "no jala", "no chupa", "no agarra agua", "jala aire", "no bombea", "puro aire"],
+  ["espesa", "espeso", "muy espesa", "pesada", "atole", "se endurece", "pastosa", "grumos"],
+  ["agitador", "paletas", "mezclador", "no gira", "se frena", "se traba", "no da vueltas", "se atora"],
+  ["embrague", "clutch", "no engancha", "no pega"],
+  ["valvula", "manija", "palanca", "trabada", "no abre", "no cierra"],
+  ["hidraulico", "aceite hidraulico", "mando", "se calienta"],
+  ["desgaste", "gastado", "gastada", "comida", "se come", "se acaba"],
+];
 
-const STOPWORDS = new Set(
-  "a an the is it its my our and or but of to in on at for with from this that there be was are were has have had i we me up out just keep keeps getting get got very really".split(
-    " ",
+const STOPWORDS: Record<Language, Set<string>> = {
+  en: new Set(
+    "a an the is it its my our and or but of to in on at for with from this that there be was are were has have had i we me up out just keep keeps getting get got very really".split(
+      " ",
+    ),
   ),
-);
+  es: new Set(
+    "el la los las un una unos unas de del al en y o que se me mi mis es esta este esto con por para muy ya lo le les su sus hay pero como mucho mucha todo toda cuando donde tiene esta estan".split(
+      " ",
+    ),
+  ),
+};
 
+/** Lower case, accents off (so "succión" and "succion" match), punctuation out. */
 export const normalise = (text: string) =>
   text
     .toLowerCase()
+    .normalize("NFD")
+    .replace(/[\u0300-\u036f]/g, "")
     .replace(/[’']/g, "")
     .replace(/[^a-z0-9\s-]/g, " ")
     .replace(/\s+/g, " ")
@@ -59,7 +86,7 @@ const MIN_TOTAL = 0.6;
 const unquote = (p: string) => normalise(p);
 
 /** Builds the search once over the guides a company can use; the returned function answers queries. */
-export function createGuideSearch(docs: SearchDoc[]) {
+export function createGuideSearch(docs: SearchDoc[], lang: Language = "en") {
   const fuse = new Fuse(docs, {
     includeScore: true,
     ignoreLocation: true,
@@ -79,11 +106,11 @@ export function createGuideSearch(docs: SearchDoc[]) {
 
   return function search(query: string, limit = 10): SearchHit[] {
     const q = normalise(query);
-    const tokens = q.split(" ").filter((t) => t.length > 2 && !STOPWORDS.has(t));
+    const tokens = q.split(" ").filter((t) => t.length > 2 && !STOPWORDS[lang].has(t));
     const terms = new Map<string, number>(); // term → weight
     terms.set(q, 2);
     for (const t of tokens) terms.set(t, Math.max(terms.get(t) ?? 0, 1));
-    for (const group of SYNONYMS) {
+    for (const group of SYNONYMS[lang]) {
       const words = group.map(unquote);
       if (words.some((w) => (w.includes(" ") ? q.includes(w) : tokens.includes(w) || tokens.some((t) => t.startsWith(w) && w.length > 3)))) {
         for (const w of words) if (!terms.has(w)) terms.set(w, 0.5);

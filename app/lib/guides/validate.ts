@@ -93,6 +93,7 @@ function validate(input: unknown, { causes, name, guideIds }: ValidateOptions): 
   }
 
   checkStructure(raw, causes, add, (message, step) => warnings.push({ guide: guideName, step, message }));
+  checkTranslations(raw, add);
   if (guideIds && isObject(raw.states)) {
     for (const [id, s] of Object.entries(raw.states)) {
       const target = isObject(s) && isObject(s.meta) ? s.meta.opensGuide : undefined;
@@ -187,6 +188,23 @@ function checkStructure(raw: Loose, causes: Cause[], add: (message: string, step
   // On every path to a hands-on step, a stop since the last restart that covers what the step exposes.
   for (const f of unguardedSteps(guide)) add(f.message, f.step);
   for (const f of restartsWithoutReturnToService(guide)) warn(f.message, f.step);
+}
+
+/** Translated text names real steps and uses only rig words (the stop rules live on the English steps they translate). */
+function checkTranslations(raw: Loose, add: (message: string, step?: string) => void) {
+  if (!isObject(raw.translations) || !isObject(raw.states)) return;
+  for (const [lang, t] of Object.entries(raw.translations)) {
+    if (!isObject(t) || !isObject(t.steps)) continue;
+    for (const [id, tr] of Object.entries(t.steps)) {
+      if (!(id in raw.states)) {
+        add(`the ${lang} text names step "${id}", which is not a step`);
+        continue;
+      }
+      if (!isObject(tr)) continue;
+      const text = `${typeof tr.prompt === "string" ? tr.prompt : ""} ${typeof tr.help === "string" ? tr.help : ""}`;
+      for (const name of unknownRigWords(text)) add(`the ${lang} text uses {{${name}}}, which is not a rig word`, id);
+    }
+  }
 }
 
 /** Day facts, services and guides to open: which step of which kind may carry them. */

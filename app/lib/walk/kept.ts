@@ -1,3 +1,4 @@
+import type { Language } from "../i18n/languages";
 import type { LoadRules } from "../field-math/load-rules";
 import { keptJobAt, type KeptJobs } from "../jobs/today";
 import type { Guide } from "../guides/schema";
@@ -29,6 +30,8 @@ export interface KitGuide {
   definition: Guide;
   /** Its prompts and help as element trees (the phone has no markdown parser). */
   texts: GuideTexts;
+  /** In the person's language; these steps had no up-to-date translation and are in English. */
+  inEnglish?: string[];
 }
 
 /** Made by the server (GET /api/offline-kit) for one person; refreshed whenever there is signal. */
@@ -43,6 +46,8 @@ export interface OfflineKit {
   /** The rig this person last started a fix on, as the server knew when it made the kit. */
   lastRigCode: string | null;
   guides: KitGuide[];
+  /** The language the guides and cause names are in (the person's). Older kits lack it: English. */
+  language?: Language;
   causeNames: Record<string, string>;
   /** The company's loading rules with this person's pace, for the load card with no signal. Older kits lack it. */
   loadRules?: LoadRules;
@@ -55,7 +60,7 @@ export interface WalkData {
   caseId: string;
   closedAs: Outcome | null;
   openedAt: string;
-  guide: { slug: string; title: string; versionId: number; definition: Guide; texts: GuideTexts };
+  guide: { slug: string; title: string; versionId: number; definition: Guide; texts: GuideTexts; inEnglish?: string[] };
   rig: WalkRig;
   stepsToEnd: Record<string, number>;
   causeNames: Record<string, string>;
@@ -158,7 +163,14 @@ export function startOnPhone(
   saveView(store, {
     caseId: input.caseId,
     openedAt,
-    guide: { slug: guide.slug, title: guide.title, versionId: guide.versionId, definition: guide.definition, texts: guide.texts },
+    guide: {
+      slug: guide.slug,
+      title: guide.title,
+      versionId: guide.versionId,
+      definition: guide.definition,
+      texts: guide.texts,
+      inEnglish: guide.inEnglish ?? [],
+    },
     rig: kind === "card" && input.engineHours !== undefined ? { ...walkRig, engineHours: Math.max(walkRig.engineHours, input.engineHours) } : walkRig,
     causeNames: namesFor(guide.definition, kit.causeNames),
     kind,

@@ -1,0 +1,22 @@
+import { startTransition, StrictMode } from "react";
+import { hydrateRoot } from "react-dom/client";
+import { HydratedRouter } from "react-router/dom";
+import { registerLanguage } from "~/i18n";
+import { isLanguage } from "~/lib/i18n/languages";
+
+// The page says its language (<html lang>, set by the server from the person's choice): load only
+// that language's words, then hydrate, so the first draw on the phone matches the server's.
+async function hydrate() {
+  const lang = document.documentElement.lang;
+  const strings = lang === "es" ? (await import("./locales/es")).default : (await import("./locales/en")).default;
+  registerLanguage(isLanguage(lang) ? lang : "en", strings);
+  startTransition(() => {
+    hydrateRoot(
+      document,
+      <StrictMode>
+        <HydratedRouter />
+      </StrictMode>,
+    );
+  });
+}
+void hydrate();

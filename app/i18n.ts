@@ -1,0 +1,37 @@
+import { createInstance, type i18n, type Resource } from "i18next";
+import { initReactI18next } from "react-i18next";
+import { LOCALES, type Language } from "~/lib/i18n/languages";
+
+/**
+ * One i18next instance per language, made once and never switched: a page is drawn in one language
+ * from first byte to hydration. The server registers both (entry.server); the phone registers only
+ * the language of the page it opened (entry.client loads that one file), so it never ships both.
+ */
+const instances = new Map<Language, i18n>();
+
+export function registerLanguage(lang: Language, strings: Resource[string]) {
+  if (instances.has(lang)) return instances.get(lang)!;
+  const instance = createInstance();
+  void instance.use(initReactI18next).init({
+    lng: lang,
+    fallbackLng: false,
+    resources: { [lang]: strings },
+    initAsync: false,
+    // React escapes what it draws.
+    interpolation: { escapeValue: false },
+    returnNull: false,
+  });
+  // Numbers inside messages take the language's own form.
+  instance.services.formatter?.add("num", (value: number, _lng, options: { digits?: number }) =>
+    new Intl.NumberFormat(LOCALES[lang], { maximumFractionDigits: options?.digits ?? 0 }).format(value),
+  );
+  instances.set(lang, instance);
+  return instance;
+}
+
+/** The instance for a language (the one registered when the phone has only that one). */
+export function i18nFor(lang: Language): i18n {
+  const instance = instances.get(lang) ?? instances.values().next().value;
+  if (!instance) throw new Error("No language registered: entry.server or entry.client registers them before drawing.");
+  return instance;
+}
