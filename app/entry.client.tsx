@@ -8,8 +8,8 @@ import { isLanguage } from "~/lib/i18n/languages";
 // that language's words, then hydrate, so the first draw on the phone matches the server's.
 async function hydrate() {
   const lang = document.documentElement.lang;
-  const strings = lang === "es" ? (await import("./locales/es")).default : (await import("./locales/en")).default;
-  registerLanguage(isLanguage(lang) ? lang : "en", strings);
+  const words = lang === "es" ? await import("./locales/es") : await import("./locales/en");
+  registerLanguage(isLanguage(lang) ? lang : "en", words.default, words.messages);
   startTransition(() => {
     hydrateRoot(
       document,

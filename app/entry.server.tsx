@@ -6,11 +6,11 @@ import { renderToPipeableStream } from "react-dom/server";
 import type { EntryContext } from "react-router";
 import { ServerRouter } from "react-router";
 import { registerLanguage } from "~/i18n";
-import en from "~/locales/en";
-import es from "~/locales/es";
+import * as en from "~/locales/en";
+import * as es from "~/locales/es";
 
-registerLanguage("en", en);
-registerLanguage("es", es);
+registerLanguage("en", en.default, en.messages);
+registerLanguage("es", es.default, es.messages);
 
 export const streamTimeout = 5_000;
 

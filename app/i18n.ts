@@ -9,13 +9,13 @@ import { LOCALES, type Language } from "~/lib/i18n/languages";
  */
 const instances = new Map<Language, i18n>();
 
-export function registerLanguage(lang: Language, strings: Resource[string]) {
+export function registerLanguage(lang: Language, strings: Resource[string][string], messages: Record<string, string> = {}) {
   if (instances.has(lang)) return instances.get(lang)!;
   const instance = createInstance();
   void instance.use(initReactI18next).init({
     lng: lang,
     fallbackLng: false,
-    resources: { [lang]: strings },
+    resources: { [lang]: { translation: strings, messages } },
     initAsync: false,
     // React escapes what it draws.
     interpolation: { escapeValue: false },
@@ -27,6 +27,11 @@ export function registerLanguage(lang: Language, strings: Resource[string]) {
   );
   instances.set(lang, instance);
   return instance;
+}
+
+/** A message the server or a form said in English, in the instance's language (English when it has none). */
+export function sayIn(instance: i18n, message: string): string {
+  return (instance.getResource(instance.language, "messages", message, { keySeparator: false }) as string | undefined) ?? message;
 }
 
 /** The instance for a language (the one registered when the phone has only that one). */

@@ -351,6 +351,7 @@ async function seasonalCrew(companyId: number, slug: CompanySlug, first: number,
       role: "crew" as const,
       passwordHash: hash,
       accessRemovedAt: p.toMonth !== null && monthStart(p.toMonth + 1) < end ? new Date(monthStart(p.toMonth + 1)) : null,
+      language: p.language ?? null,
     })),
   );
   const signIns = await User.findAll({ where: { companyId }, attributes: ["id", "email"] });

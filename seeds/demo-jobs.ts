@@ -126,12 +126,14 @@ export interface SeasonalPerson {
   fromMonth: number;
   toMonth: number | null;
   weight: number;
+  /** Reads Tankside in Spanish (invented: two of the hands who stayed, so the demo shows both languages). */
+  language?: "es";
 }
 
 export const SEASONAL_CREW: SeasonalPerson[] = [
   { email: "jesse@cedarflats.example", name: "Jesse Marsh", company: "cedar-flats", fromMonth: 2, toMonth: 10, weight: 6 },
   { email: "hollis@cedarflats.example", name: "Hollis Grant", company: "cedar-flats", fromMonth: 2, toMonth: null, weight: 6 },
-  { email: "carlos@cedarflats.example", name: "Carlos Ybarra", company: "cedar-flats", fromMonth: 7, toMonth: null, weight: 5 },
+  { email: "carlos@cedarflats.example", name: "Carlos Ybarra", company: "cedar-flats", fromMonth: 7, toMonth: null, weight: 5, language: "es" },
   { email: "priya@cedarflats.example", name: "Priya Nandakumar", company: "cedar-flats", fromMonth: 15, toMonth: null, weight: 6 },
   { email: "bo@cedarflats.example", name: "Bo Lindqvist", company: "cedar-flats", fromMonth: 2, toMonth: null, weight: 6 },
   { email: "ana@cedarflats.example", name: "Ana Ruelas", company: "cedar-flats", fromMonth: 2, toMonth: 10, weight: 5 },
@@ -141,7 +143,7 @@ export const SEASONAL_CREW: SeasonalPerson[] = [
   { email: "wren@bluemesa.example", name: "Wren Castillo", company: "blue-mesa", fromMonth: 3, toMonth: 9, weight: 5 },
   { email: "rosa@bluemesa.example", name: "Rosa Tsosie", company: "blue-mesa", fromMonth: 3, toMonth: null, weight: 5 },
   { email: "kit@bluemesa.example", name: "Kit Larsen", company: "blue-mesa", fromMonth: 15, toMonth: 21, weight: 4 },
-  { email: "joaquin@bluemesa.example", name: "Joaquin Baca", company: "blue-mesa", fromMonth: 15, toMonth: null, weight: 5 },
+  { email: "joaquin@bluemesa.example", name: "Joaquin Baca", company: "blue-mesa", fromMonth: 15, toMonth: null, weight: 5, language: "es" },
 ];
 
 /** The demo sign-ins' share of the field work (supervisors and trainers fill in now and then). */

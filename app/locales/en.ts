@@ -197,6 +197,14 @@ const en = {
     demo: "Demo sign-ins (development only)",
     demoPassword: "Password for all:",
   },
+  password: {
+    current: "Current password",
+    new: "New password",
+    password: "Password",
+    again: "The same password again",
+    saving: "Saving…",
+    hint: "At least {{min}} characters. A few words strung together are easy to type with gloves off.",
+  },
   account: {
     lead: "{{email}} · {{role}} at {{company}}. Your admin can change your role.",
     language: "Language",
@@ -220,4 +228,7 @@ const en = {
 };
 
 export default en;
+
+/** Messages the server and the forms say, by their English text: English needs no entries. */
+export const messages: Record<string, string> = {};
 export type Strings = typeof en;

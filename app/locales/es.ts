@@ -214,6 +214,14 @@ const es: Translated<Strings> = {
     demo: "Cuentas de prueba (solo desarrollo)",
     demoPassword: "Contraseña para todas:",
   },
+  password: {
+    current: "Contraseña actual",
+    new: "Contraseña nueva",
+    password: "Contraseña",
+    again: "La misma contraseña otra vez",
+    saving: "Guardando…",
+    hint: "Al menos {{min}} caracteres. Unas cuantas palabras juntas son fáciles de escribir sin guantes.",
+  },
   account: {
     lead: "{{email}} · {{role}} en {{company}}. Tu administrador puede cambiar tu puesto.",
     language: "Idioma",
@@ -239,3 +247,40 @@ const es: Translated<Strings> = {
 };
 
 export default es;
+
+/**
+ * What the server and the forms say (in English, the product's one wording), as a Spanish reader
+ * sees it; a message not listed shows in English. Only the ones a crew member meets are here.
+ */
+export const messages: Record<string, string> = {
+  "Check the highlighted fields.": "Revisa los campos marcados.",
+  "That e-mail and password do not match an account. Check both and try again.":
+    "Ese correo y esa contraseña no corresponden a ninguna cuenta. Revisa los dos y vuelve a intentar.",
+  "Your company's admin has turned this sign-in off. Ask them if you need it back.":
+    "El administrador de tu empresa desactivó esta cuenta. Pídele que la active si la necesitas.",
+  "Enter your e-mail.": "Escribe tu correo.",
+  "Enter a whole e-mail address, like name@company.com.": "Escribe un correo completo, como nombre@empresa.com.",
+  "That e-mail is too long.": "Ese correo es demasiado largo.",
+  "Enter your password.": "Escribe tu contraseña.",
+  "Enter your current password.": "Escribe tu contraseña actual.",
+  "That is not your current password.": "Esa no es tu contraseña actual.",
+  "Choose a password.": "Escoge una contraseña.",
+  "Type the password again.": "Escribe la contraseña otra vez.",
+  "The two passwords are not the same.": "Las dos contraseñas no son iguales.",
+  "Use at least 10 characters; a few words strung together make a good one.": "Usa al menos 10 caracteres; unas cuantas palabras juntas hacen una buena.",
+  "Sign in first.": "Primero entra con tu cuenta.",
+  "Pick a guide to start.": "Escoge una guía para empezar.",
+  "Give the hour meter reading: a card records it as it starts.": "Escribe la lectura del horómetro: la tarjeta la guarda al empezar.",
+  "openedAt is in the future: check the phone's clock.": "La hora de inicio está en el futuro: revisa el reloj del teléfono.",
+  "Photos can be at most 10 MB.": "Las fotos pueden ser de 10 MB como máximo.",
+  "That case id belongs to a case on another rig.": "Ese número de caso es de un caso en otro equipo.",
+  "Give your pace in feet, like 2.5, or leave it blank.": "Escribe tu paso en pies, como 2.5, o déjalo en blanco.",
+  "A pace under 1 ft is not plausible.": "Un paso de menos de 1 ft no es creíble.",
+  "A pace over 6 ft is not plausible.": "Un paso de más de 6 ft no es creíble.",
+  "Your pace is back to the company's.": "Tu paso volvió al de la empresa.",
+  "That device is signed out.": "Ese aparato ya cerró la sesión.",
+  "Every other device is signed out.": "Todos los demás aparatos cerraron la sesión.",
+  "Password changed. Any other phone or computer signed in as you has been signed out.":
+    "Contraseña cambiada. Cualquier otro teléfono o computadora con tu sesión la cerró.",
+  "Pick English or Spanish.": "Escoge inglés o español.",
+};

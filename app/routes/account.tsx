@@ -1,4 +1,5 @@
-import { data, Form } from "react-router";
+import { useTranslation } from "react-i18next";
+import { data, Form, redirect } from "react-router";
 import { z } from "zod";
 import { ChoosePasswordForm } from "~/components/choose-password-form";
 import { DoneNote } from "~/components/ui/done-note";
@@ -8,8 +9,8 @@ import { deviceName } from "~/lib/people/device-name";
 import { toFieldErrors } from "~/lib/forms/errors";
 import { parseForm } from "~/lib/forms/parse";
 import { changePasswordSchema } from "~/lib/people/schema";
-import { ROLE_LABELS } from "~/lib/people/roles";
-import { changePassword, endOneSession, listSessions } from "~/services/account.server";
+import { LANGUAGE_NAMES, LANGUAGES } from "~/lib/i18n/languages";
+import { changePassword, endOneSession, listSessions, setLanguage } from "~/services/account.server";
 import { paceAndRules, savePace } from "~/services/company.server";
 import { fail, requireUser } from "~/services/guards.server";
 import { readForm } from "~/services/read-request.server";
@@ -25,9 +26,11 @@ export async function loader({ request, context }: Route.LoaderArgs) {
     email: user.email,
     role: user.role,
     company: user.companyName,
+    language: user.language ?? "en",
     // The key names a device in the form; the current one is marked, not offered for ending here.
     devices: sessions.map((s) => ({ ...s, name: deviceName(s.userAgent), current: s.key === current })),
     limits: { idleDays: IDLE_DAYS, absoluteDays: ABSOLUTE_DAYS },
+    languageSaved: new URL(request.url).searchParams.get("saved") === "language",
   };
 }
 
@@ -47,6 +50,9 @@ const paceAction = z.object({
     ),
 });
 
+/** The language the person reads Tankside in. */
+const languageAction = z.object({ intent: z.literal("language"), language: z.enum(LANGUAGES, { error: "Pick English or Spanish." }) });
+
 const deviceAction = z.discriminatedUnion("intent", [
   z.object({ intent: z.literal("end-device"), key: z.string().regex(/^[0-9a-f]{64}$/, "Pick a device from the list.") }),
   z.object({ intent: z.literal("end-others") }),
@@ -56,6 +62,13 @@ export async function action({ request, context }: Route.ActionArgs) {
   const user = await requireUser({ request, context });
   const form = await readForm(request);
   const current = await currentSessionKey(request);
+  if (form.get("intent") === "language") {
+    const parsed = languageAction.safeParse(Object.fromEntries(form));
+    if (!parsed.success) return data({ result: null, message: null, languageError: parsed.error.issues[0].message }, { status: 400 });
+    await setLanguage(user, parsed.data.language);
+    // A fresh request, so the whole page (and the root's language) is drawn in the new one.
+    throw redirect("/account?saved=language");
+  }
   if (form.get("intent") === "pace") {
     const parsed = paceAction.safeParse(Object.fromEntries(form));
     if (!parsed.success) return data({ result: null, message: null, paceError: parsed.error.issues[0].message }, { status: 400 });
@@ -84,22 +97,45 @@ export async function action({ request, context }: Route.ActionArgs) {
 export default function Account({ loaderData, actionData }: Route.ComponentProps) {
   const times = useTimes();
   const others = loaderData.devices.filter((d) => !d.current);
+  const { t } = useTranslation();
+  const languageError = actionData && "languageError" in actionData ? actionData.languageError : null;
   return (
     <>
-      <PageTitle lead={`${loaderData.email} · ${ROLE_LABELS[loaderData.role]} at ${loaderData.company}. Your admin can change your role.`}>
+      <PageTitle lead={t("account.lead", { email: loaderData.email, role: t(`roles.${loaderData.role}`), company: loaderData.company })}>
         {loaderData.name}
       </PageTitle>
-      <DoneNote message={actionData?.message} />
-      <h2 className="text-2xl font-bold">Change your password</h2>
-      <ChoosePasswordForm lastResult={actionData?.result ?? undefined} submitLabel="Change password" askCurrent />
-      <h2 className="mt-8 text-2xl font-bold">Your pace</h2>
+      <DoneNote message={actionData?.message ?? (loaderData.languageSaved ? t("account.languageSaved") : null)} />
+      <h2 className="text-2xl font-bold">{t("account.language")}</h2>
+      {/* A whole-page load: the page (and the phone's kept words) come back in the new language. */}
+      <Form method="post" reloadDocument className="mt-2 space-y-2">
+        <fieldset aria-describedby="language-hint">
+          <legend className="sr-only">{t("account.language")}</legend>
+          <p id="language-hint" className="text-sm">
+            {t("account.languageLead")}
+          </p>
+          <div className="mt-2 grid grid-cols-2 gap-2">
+            {LANGUAGES.map((lang) => (
+              <label key={lang} lang={lang} className="flex min-h-14 items-center gap-2 rounded-md border-2 border-ink bg-paper px-3 text-lg font-bold">
+                <input type="radio" name="language" value={lang} defaultChecked={loaderData.language === lang} className="h-6 w-6" />
+                {LANGUAGE_NAMES[lang]}
+              </label>
+            ))}
+          </div>
+        </fieldset>
+        {languageError ? <p className="font-bold text-stop">{languageError}</p> : null}
+        <button name="intent" value="language" className="min-h-14 w-full rounded-md border-2 border-ink bg-paper px-4 text-lg font-bold">
+          {t("account.saveLanguage")}
+        </button>
+      </Form>
+      <h2 className="mt-8 text-2xl font-bold">{t("account.changePassword")}</h2>
+      <ChoosePasswordForm lastResult={actionData?.result ?? undefined} submitLabel={t("account.changePasswordButton")} askCurrent />
+      <h2 className="mt-8 text-2xl font-bold">{t("account.pace")}</h2>
       <Form method="post" className="mt-2 space-y-2">
         <label htmlFor="paceFt" className="block font-bold">
-          One step, heel to heel, in feet
+          {t("account.paceLabel")}
         </label>
         <p id="pace-hint" className="text-sm">
-          The load card shows each load as a strip you can pace out. Pace 100 ft and divide by your steps. Blank uses the company&apos;s
-          {loaderData.pace.own ? "" : ` (${loaderData.pace.ft} ft)`}.
+          {loaderData.pace.own ? t("account.paceHint") : t("account.paceHintCompany", { ft: loaderData.pace.ft })}
         </p>
         <input
           id="paceFt"
@@ -112,25 +148,23 @@ export default function Account({ loaderData, actionData }: Route.ComponentProps
         />
         {actionData && "paceError" in actionData ? <p className="font-bold text-stop">{actionData.paceError}</p> : null}
         <button name="intent" value="pace" className="min-h-14 w-full rounded-md border-2 border-ink bg-paper px-4 text-lg font-bold">
-          Save my pace
+          {t("account.savePace")}
         </button>
       </Form>
-      <h2 className="mt-8 text-2xl font-bold">Where you are signed in</h2>
+      <h2 className="mt-8 text-2xl font-bold">{t("account.devices")}</h2>
       <ul className="mt-2 space-y-2">
         {loaderData.devices.map((d) => (
           <li key={d.key} className="rounded-md border-2 border-rule bg-paper p-3">
             <p className="font-bold">
               {d.name}
-              {d.current ? " · this device" : ""}
+              {d.current ? t("account.thisDevice") : ""}
             </p>
-            <p className="text-sm">
-              Signed in {times.dateTime(d.createdAt)} · last used {times.dateTime(d.lastSeenAt)}
-            </p>
+            <p className="text-sm">{t("account.signedIn", { at: times.dateTime(d.createdAt), last: times.dateTime(d.lastSeenAt) })}</p>
             {d.current ? null : (
               <Form method="post" className="mt-2">
                 <input type="hidden" name="key" value={d.key} />
                 <button name="intent" value="end-device" className="min-h-12 rounded-md border-2 border-ink bg-paper px-4 font-bold">
-                  Sign this device out
+                  {t("account.signOutDevice")}
                 </button>
               </Form>
             )}
@@ -140,13 +174,11 @@ export default function Account({ loaderData, actionData }: Route.ComponentProps
       {others.length > 1 ? (
         <Form method="post" className="mt-3">
           <button name="intent" value="end-others" className="min-h-12 rounded-md border-2 border-ink bg-paper px-4 font-bold">
-            Sign out every other device
+            {t("account.signOutOthers")}
           </button>
         </Form>
       ) : null}
-      <p className="mt-2 text-sm">
-        A sign-in ends after {loaderData.limits.idleDays} days without use and after {loaderData.limits.absoluteDays} days in any case: then sign in again.
-      </p>
+      <p className="mt-2 text-sm">{t("account.limits", { idle: loaderData.limits.idleDays, absolute: loaderData.limits.absoluteDays })}</p>
     </>
   );
 }

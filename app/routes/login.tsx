@@ -1,4 +1,5 @@
 import { useMemo } from "react";
+import { useTranslation } from "react-i18next";
 import { data, Form, Link, redirect, useNavigation } from "react-router";
 import { FormField, inputClass } from "~/components/forms/form-field";
 import { useCheckedForm } from "~/components/forms/use-checked-form";
@@ -64,33 +65,34 @@ export default function Login({ loaderData, actionData }: Route.ComponentProps) 
     [actionData],
   );
   const [form, fields] = useCheckedForm(signInSchema, { lastResult });
+  const { t } = useTranslation();
   return (
     <main className="mx-auto max-w-md px-4 py-8">
       <h1 className="text-3xl font-bold">Tankside</h1>
-      <p className="mt-1 text-lg">Sign in to troubleshoot your rigs.</p>
+      <p className="mt-1 text-lg">{t("login.lead")}</p>
       <Form method="post" {...getFormProps(form)} className="mt-6 space-y-4 rounded-lg border-2 border-ink bg-paper p-5">
         <input type="hidden" name="redirectTo" value={loaderData.redirectTo} />
         {actionData?.error ? <ErrorList error={actionData.error} /> : null}
-        <EmailField field={fields.email} />
-        <FormField field={fields.password} label="Password">
+        <EmailField field={fields.email} label={t("login.email")} />
+        <FormField field={fields.password} label={t("login.password")}>
           <input {...getInputProps(fields.password, { type: "password" })} autoComplete="current-password" className={inputClass} />
         </FormField>
         <button type="submit" disabled={busy} className="min-h-14 w-full rounded-md bg-go text-lg font-bold text-white">
-          {busy ? "Signing in…" : "Sign in"}
+          {busy ? t("login.signingIn") : t("login.signIn")}
         </button>
         <p>
           <Link to="/forgot" className="font-bold underline">
-            Forgot your password?
+            {t("login.forgot")}
           </Link>
         </p>
       </Form>
       {loaderData.demo ? (
         <section aria-labelledby="demo-heading" className="mt-6 rounded-lg border-2 border-dashed border-rule bg-paper p-4">
           <h2 id="demo-heading" className="font-bold">
-            Demo sign-ins (development only)
+            {t("login.demo")}
           </h2>
           <p className="mt-1">
-            Password for all: <code className="font-bold">{loaderData.demo.password}</code>
+            {t("login.demoPassword")} <code className="font-bold">{loaderData.demo.password}</code>
           </p>
           <ul className="mt-2 space-y-1">
             {loaderData.demo.people.map((p) => (

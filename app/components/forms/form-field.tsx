@@ -1,4 +1,5 @@
 import type { FieldMetadata } from "@conform-to/react";
+import { useSay } from "~/components/ui/say";
 
 /** A label, its control and the field's own error message, wired for screen readers. */
 export function FormField({
@@ -12,6 +13,7 @@ export function FormField({
   hint?: string;
   children: React.ReactNode;
 }) {
+  const say = useSay();
   return (
     <div>
       <label htmlFor={field.id} className="block font-bold">
@@ -25,7 +27,7 @@ export function FormField({
       {children}
       {field.errors?.length ? (
         <p id={field.errorId} className="mt-1 font-bold text-stop">
-          {field.errors.join(" ")}
+          {field.errors.map(say).join(" ")}
         </p>
       ) : null}
     </div>
