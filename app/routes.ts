@@ -20,6 +20,7 @@ export default [
   route("api/jobs/:jobId/loads/:loadId", "routes/api.jobs.$jobId.loads.$loadId.ts"),
   route("cases/:id/photos/:photoId", "routes/cases.$id.photos.$photoId.ts"),
   route("rigs/:code/label", "routes/rigs.$code.label.tsx"),
+  route("guides/:slug/print", "routes/guides.$slug.print.tsx"),
   route("cases/export", "routes/cases.export.ts"),
   route("desk/:guideId/v/:number/export", "routes/desk.$guideId.v.$number.export.ts"),
   route("api/desk/:guideId/v/:number", "routes/api.desk.$guideId.v.$number.ts"),

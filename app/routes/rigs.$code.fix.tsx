@@ -1,6 +1,6 @@
 import { useEffect, useState } from "react";
 import { useTranslation } from "react-i18next";
-import { Form, redirect, useNavigation, useRouteLoaderData } from "react-router";
+import { Form, redirect, useNavigation, useRouteLoaderData, useSearchParams } from "react-router";
 import { z } from "zod";
 import { serverOrPhoneAction, serverOrPhoneRig } from "~/components/offline/server-or-phone";
 import { OpenWalks } from "~/components/walk/open-walks";
@@ -112,6 +112,9 @@ export default function StartFix({ loaderData, actionData }: Route.ComponentProp
   // The tapped guide shows at once that it was taken, before the server answers on a slow link.
   const opening = navigation.state !== "idle" ? (navigation.formData?.get("guideSlug")?.toString() ?? "") : null;
   const { t } = useTranslation();
+  // Scanned from a printed guide: that guide is offered first.
+  const [params] = useSearchParams();
+  const fromPaper = tiles.find((tile) => tile.slug === params.get("guide"));
 
   return (
     <>
@@ -123,6 +126,16 @@ export default function StartFix({ loaderData, actionData }: Route.ComponentProp
         </p>
       ) : null}
       <OpenWalks walks={openWalks} />
+      {fromPaper && !rig.retired ? (
+        <section aria-labelledby="paper-h" className="mt-4 rounded-lg border-4 border-go bg-paper p-3">
+          <h2 id="paper-h" className="text-lg font-bold">
+            {t("fix.fromPaper")}
+          </h2>
+          <div className="mt-2">
+            <StartGuideButton {...fromPaper} opening={opening} caseId={caseId} />
+          </div>
+        </section>
+      ) : null}
       {rig.retired ? (
         <p className="mt-2 font-bold text-stop">{t("fix.retired")}</p>
       ) : (

@@ -7,7 +7,8 @@ import { createGuideSearch, searchDocFor, type SearchHit } from "~/lib/guides/se
 import { localizeGuide } from "~/lib/guides/translations";
 import type { Language } from "~/lib/i18n/languages";
 import { GuideRecord, GuideVersion } from "./db.server";
-import type { SessionUser } from "./guards.server";
+import { notFound, type SessionUser } from "./guards.server";
+import { can } from "~/lib/permissions";
 
 let causes: Cause[] | undefined;
 /** The cause list from content/causes.json, read once per process. */
@@ -103,4 +104,35 @@ function buildIndex(guides: UsableGuide[], lang: Language) {
       }),
     lang,
   );
+}
+
+/**
+ * A guide version to print: by default the one crews use (the company's own copy once published,
+ * else the built-in); a trainer may ask for any version of the company's own or the built-in
+ * (the desk's print). Another company's guide, or a version a crew member may not see, is a 404.
+ */
+export async function printableGuide(user: SessionUser, slug: string, number?: number) {
+  const records = await GuideRecord.findAll({
+    where: usableBy(user, { slug }),
+    attributes: ["id", "companyId", "slug", "title", "publishedVersion", "basedOnGuideId"],
+  });
+  const own = records.find((r) => r.companyId === user.companyId);
+  const builtIn = records.find((r) => r.companyId === null);
+  const trainer = can(user, "edit-guides");
+  const record = number !== undefined && trainer ? (own ?? builtIn) : own?.publishedVersion ? own : builtIn;
+  const wanted = number !== undefined && trainer ? number : record?.publishedVersion;
+  if (!record || !wanted) notFound("That guide");
+  const version = await GuideVersion.findOne({
+    where: { guideId: record.id, number: wanted },
+    attributes: ["number", "status", "definition", "publishedAt", "updatedAt"],
+  });
+  if (!version) notFound("That version");
+  return {
+    slug: record.slug,
+    number: version.number,
+    status: version.status,
+    definition: version.definition,
+    /** Published versions carry their publish date; a draft the date it was last changed. */
+    dated: (version.publishedAt ?? version.updatedAt).toISOString(),
+  };
 }

@@ -52,7 +52,7 @@ export function StepCard({
   /** 1 on the walk (the step is the page); 2 inside the desk's preview, under the page's own title. */
   headingLevel?: 1 | 2;
 }) {
-  const { t } = useTranslation();
+  const { t, i18n } = useTranslation();
   const Heading = headingLevel === 1 ? "h1" : "h2";
   // Help and the note box open per step: a new step starts with both as a fresh card would.
   const [open, setOpen] = useState({ step: stepId, help: false, note: note !== "" });
@@ -62,7 +62,8 @@ export function StepCard({
   const setShowHelp = (help: boolean) => setOpen((o) => ({ ...o, help }));
   const setShowNote = (shown: boolean) => setOpen((o) => ({ ...o, note: shown }));
   const meta = guide.states[stepId].meta;
-  const fill = (text: string) => fillRigWords(text, rig);
+  // Rig words in the language of the text: a step left in English keeps English words.
+  const fill = (text: string) => fillRigWords(text, rig, inEnglish || i18n.language !== "es" ? "en" : "es");
   // A new step's buttons take taps only after a moment: a glove's double tap must not answer a
   // question that was never on screen (the next step's button appears where the thumb just was).
   const [armed, setArmed] = useState<string | null>(null);
