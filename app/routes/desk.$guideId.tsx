@@ -1,3 +1,4 @@
+import { spanishLine } from "~/components/desk/translation-status";
 import { Form, Link, redirect } from "react-router";
 import { FormField, inputClass } from "~/components/forms/form-field";
 import { useCheckedForm } from "~/components/forms/use-checked-form";
@@ -99,6 +100,7 @@ export default function DeskGuide({ loaderData, actionData }: Route.ComponentPro
               Version {v.number}: {statusLabel(v.status)} <span className="font-normal">· {times.dateTime(v.updatedAt)}</span>
             </p>
             {v.changeNote ? <p>Change: {v.changeNote}</p> : null}
+            <p data-testid={`spanish-v${v.number}`}>{spanishLine(v.spanish)}</p>
             {v.reviewComment ? <p>Review: {v.reviewComment}</p> : null}
             <p className="mt-1 flex flex-wrap gap-x-4">
               <Link to={`v/${v.number}`}>{v.status === "draft" && !guide.builtIn ? "Edit" : "View"}</Link>
@@ -106,6 +108,8 @@ export default function DeskGuide({ loaderData, actionData }: Route.ComponentPro
               <a href={`/desk/${guide.id}/v/${v.number}/export`} download>
                 Export JSON
               </a>
+              <a href={`/guides/${guide.slug}/print?v=${v.number}&lang=en`}>Print (English)</a>
+              <a href={`/guides/${guide.slug}/print?v=${v.number}&lang=es`}>Print (Spanish)</a>
               {versions[i + 1] ? <Link to={`diff?a=${versions[i + 1].number}&b=${v.number}`}>What changed from v{versions[i + 1].number}</Link> : null}
             </p>
             {v.status === "draft" && !guide.builtIn ? <SubmitVersionForm number={v.number} /> : null}

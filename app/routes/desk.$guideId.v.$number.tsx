@@ -8,6 +8,7 @@ import { Form, Link, redirect } from "react-router";
 import { GuideEditor, type Draft } from "~/components/desk/guide-editor";
 import { ProblemsPanel } from "~/components/desk/problems-panel";
 import { TreeDrawing } from "~/components/desk/tree-drawing";
+import { TranslationPanel } from "~/components/desk/translation-status";
 import { PageTitle } from "~/components/ui/page-title";
 import { ErrorList } from "~/components/ui/error-list";
 import { definitionChecks, openableGuides, submitDraft, versionFor } from "~/services/desk.server";
@@ -51,9 +52,12 @@ export default function EditVersion({ loaderData, actionData }: Route.ComponentP
       <p className="mb-3 flex flex-wrap gap-x-4">
         <Link to={`/desk/${guide.id}`}>Versions and review</Link>
         <Link to="preview">Preview as crew</Link>
+        <Link to="preview?lang=es">Preview in Spanish</Link>
         <a href={`/desk/${guide.id}/v/${version.number}/export`} download>
           Export JSON
         </a>
+        <a href={`/guides/${guide.slug}/print?v=${version.number}&lang=en`}>Print (English)</a>
+        <a href={`/guides/${guide.slug}/print?v=${version.number}&lang=es`}>Print (Spanish)</a>
       </p>
       {version.reviewComment && version.status === "draft" ? (
         <p className="mb-3 rounded-md border-2 border-ink bg-caution p-3 font-bold">Reviewer: {version.reviewComment}</p>
@@ -72,6 +76,7 @@ export default function EditVersion({ loaderData, actionData }: Route.ComponentP
         <div className="space-y-3">
           <p>This version is {version.status.replace("_", " ")} and is never changed. Open a draft from the versions page to change the guide.</p>
           <ProblemsPanel problems={problems} warnings={loaderData.warnings} onSelect={() => {}} />
+          <TranslationPanel definition={version.definition} />
           <TreeDrawing states={version.definition.states} selected={null} onSelect={() => {}} />
         </div>
       )}

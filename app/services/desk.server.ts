@@ -1,3 +1,4 @@
+import { translationReport } from "~/lib/guides/translations";
 import { createHash } from "node:crypto";
 import { replacedBuiltIns, usableBy } from "./tenancy.server";
 import { Op, QueryTypes } from "sequelize";
@@ -44,7 +45,7 @@ export async function deskGuideVersions(user: SessionUser, guideId: number) {
   const guide = await deskGuide(user, guideId);
   const versions = await GuideVersion.findAll({
     where: { guideId: guide.id },
-    attributes: ["number", "status", "changeNote", "reviewComment", "updatedAt", kindOf()],
+    attributes: ["number", "status", "changeNote", "reviewComment", "updatedAt", "definition", kindOf()],
     order: [["number", "DESC"]],
   });
   const kind = kindOfVersions(versions);
@@ -56,8 +57,25 @@ export async function deskGuideVersions(user: SessionUser, guideId: number) {
       changeNote: v.changeNote,
       reviewComment: v.reviewComment,
       updatedAt: v.updatedAt.toISOString(),
+      spanish: translationSummary(v.definition),
     })),
   };
+}
+
+/** What a version's Spanish lacks: the title block and how many steps are missing or out of date. */
+export function translationSummary(definition: Guide) {
+  if (!definition?.states || typeof definition.states !== "object") return null;
+  const report = translationReport(
+    {
+      title: definition.title ?? "",
+      summary: definition.summary ?? "",
+      symptoms: definition.symptoms ?? [],
+      states: definition.states,
+      translations: definition.translations,
+    },
+    "es",
+  );
+  return { head: report.head, missing: report.missing.length, stale: report.stale.length, steps: Object.keys(report.steps).length };
 }
 
 async function deskVersion(user: SessionUser, guideId: number, number: number) {

@@ -54,4 +54,48 @@ describe("guide desk in the browser", () => {
     await p.getByRole("button", { name: "Machine is shut down and locked out" }).waitFor();
     await p.close();
   });
+
+  it("edits a step's Spanish beside its English; a changed English marks the Spanish out of date until it is checked", async () => {
+    await harness.browser.context.clearCookies();
+    const p = await harness.browser.context.newPage();
+    await signIn(p, harness.app.url, "ravi@cedarflats.example");
+    await p.goto(`${harness.app.url}/desk`);
+    await p.getByRole("link", { name: "Foam in the tank" }).click();
+    await p.getByRole("button", { name: "Edit as your company's copy" }).click();
+    await p.waitForURL(/\/desk\/\d+\/v\/\d+$/);
+    const spanish = p.getByTestId("spanish-status");
+    await spanish.getByText("Spanish: complete and up to date").waitFor();
+    const selected = p.getByRole("region", { name: "Selected step" });
+    const first = (await selected.getByLabel("Step id").inputValue()).trim();
+    // Changing the English leaves the Spanish behind: marked on the step, listed, and the crew would see English.
+    const english = selected.getByLabel("Prompt (markdown, short)");
+    await english.fill(`${await english.inputValue()} Look from the top hatch.`);
+    await selected.getByText("Out of date: the English changed after the Spanish was written.", { exact: false }).waitFor();
+    await spanish.getByText(/1 out of date/).waitFor();
+    await spanish.getByRole("button", { name: first }).waitFor();
+    // Bringing the Spanish up to date clears it.
+    const es = selected.getByLabel("Prompt in Spanish");
+    await es.fill(`${await es.inputValue()} Mira desde la escotilla de arriba.`);
+    await selected.getByText("Spanish up to date.").waitFor();
+    await spanish.getByText("Spanish: complete and up to date").waitFor();
+    // A help text written in English only is missing in Spanish.
+    await selected.getByLabel("Help (markdown, shown behind “More about this”)").fill("Use a flashlight.");
+    await spanish.getByText(/1 of \d+ steps missing/).waitFor();
+    await p.getByRole("button", { name: "Save draft" }).click();
+    await p.getByText("All changes saved.").waitFor();
+    // The versions page says per version what the Spanish lacks; the preview shows the step in English, marked.
+    await p.getByRole("link", { name: "Versions and review" }).click();
+    await p.waitForURL(/\/desk\/\d+$/);
+    await p
+      .getByText(/^Spanish: 1 of \d+ steps missing\./)
+      .first()
+      .waitFor();
+    await p.getByRole("link", { name: "Edit" }).first().click();
+    await p.getByRole("link", { name: "Preview in Spanish" }).click();
+    await p.getByTestId("in-english").waitFor();
+    await p.locator("#step-prompt", { hasText: "Look from the top hatch" }).waitFor();
+    const saved = await GuideVersion.findOne({ where: { status: "draft" }, order: [["id", "DESC"]] });
+    expect(saved!.definition.translations?.es?.steps?.[first]?.prompt).toMatch(/Mira desde la escotilla de arriba\.$/);
+    await p.close();
+  });
 });

@@ -2,7 +2,9 @@ import { useEffect, useMemo, useState } from "react";
 import { useBlocker } from "react-router";
 import { type Cause } from "~/lib/guides/causes";
 import { validateGuide } from "~/lib/guides/validate";
+import { headStamp, headState, stepState, type GuideTranslation } from "~/lib/guides/translations";
 import { ProblemsPanel } from "./problems-panel";
+import { TranslationPanel, TranslationState } from "./translation-status";
 import { StepForm, type LooseStep } from "./step-form";
 import { TreeDrawing } from "./tree-drawing";
 
@@ -14,6 +16,8 @@ export interface Draft {
   symptoms: string[];
   initial: string;
   states: Record<string, LooseStep>;
+  /** The guide's text in Spanish, edited beside the English (lib/guides/translations). */
+  translations?: { es?: GuideTranslation };
 }
 
 const field = "mt-1 block min-h-12 w-full rounded-md border-2 border-ink bg-paper px-2";
@@ -59,6 +63,17 @@ export function GuideEditor({
     setSaved("unsaved");
   };
   const setStep = (id: string, step: LooseStep) => change({ ...draft, states: { ...draft.states, [id]: step } });
+  const es: GuideTranslation = draft.translations?.es ?? {};
+  const withEs = (base: Draft, next: GuideTranslation): Draft => ({ ...base, translations: { ...base.translations, es: next } });
+  /** Spanish steps follow their step's renames and removals, so none points at a step that is gone. */
+  const esSteps = (base: Draft, edit: (steps: NonNullable<GuideTranslation["steps"]>) => void): Draft => {
+    const steps = { ...(base.translations?.es?.steps ?? {}) };
+    edit(steps);
+    return withEs(base, { ...(base.translations?.es ?? {}), steps });
+  };
+  // Editing the Spanish title block stamps it with the English it now matches.
+  const setEsHead = (change_: Partial<GuideTranslation>) => change(withEs(draft, { ...es, ...change_, from: headStamp(draft) }));
+  const esHead = headState(draft, es);
   const addStep = (kind: LooseStep["meta"]["kind"] = "check") => {
     const id = uniqueId(draft.states, `new-${kind}`);
     const on: Record<string, string> | undefined =
@@ -73,7 +88,7 @@ export function GuideEditor({
         .filter(([k]) => k !== id)
         .map(([k, s]) => [k, s.on ? { ...s, on: Object.fromEntries(Object.entries(s.on).map(([a, t]) => [a, t === id ? "" : t])) } : s]),
     );
-    change({ ...draft, states });
+    change(esSteps({ ...draft, states }, (steps) => delete steps[id]));
     setSelected(null);
   };
   const rename = (from: string, to: string) => {
@@ -84,7 +99,12 @@ export function GuideEditor({
         s.on ? { ...s, on: Object.fromEntries(Object.entries(s.on).map(([a, t]) => [a, t === from ? to : t])) } : s,
       ]),
     );
-    change({ ...draft, initial: draft.initial === from ? to : draft.initial, states });
+    change(
+      esSteps({ ...draft, initial: draft.initial === from ? to : draft.initial, states }, (steps) => {
+        if (steps[from]) steps[to] = steps[from];
+        delete steps[from];
+      }),
+    );
     setSelected(to);
   };
   const move = (id: string, by: number) => {
@@ -116,35 +136,62 @@ export function GuideEditor({
         </span>
       </div>
       <ProblemsPanel problems={problems} warnings={warnings} onSelect={setSelected} />
-      <fieldset className="space-y-3 rounded-lg border-2 border-ink bg-paper p-3">
-        <legend className="px-1 font-bold">{draft.kind === "card" ? "Rig card" : "Guide"}</legend>
-        <label className="block font-bold">
-          Title
-          <input value={draft.title} onChange={(e) => change({ ...draft, title: e.target.value })} className={field} />
-        </label>
-        <label className="block font-bold">
-          Summary
-          <textarea value={draft.summary} onChange={(e) => change({ ...draft, summary: e.target.value })} rows={2} className={`${field} py-2`} />
-        </label>
-        <label className="block font-bold">
-          {draft.kind === "card" ? "Words a crew member would use for it (one per line)" : "Symptom phrases (one per line, as a crew member would say them)"}
-          <textarea
-            value={draft.symptoms.join("\n")}
-            onChange={(e) => change({ ...draft, symptoms: e.target.value.split("\n") })}
-            onBlur={() => change({ ...draft, symptoms: draft.symptoms.map((s) => s.trim()).filter(Boolean) })}
-            rows={4}
-            className={`${field} py-2`}
-          />
-        </label>
-        <label className="block font-bold">
-          First step
-          <select value={draft.initial} onChange={(e) => change({ ...draft, initial: e.target.value })} className={field}>
-            {ids.map((id) => (
-              <option key={id}>{id}</option>
-            ))}
-          </select>
-        </label>
-      </fieldset>
+      <TranslationPanel definition={draft} onSelect={setSelected} />
+      <div className="grid gap-4 lg:grid-cols-2">
+        <fieldset className="space-y-3 rounded-lg border-2 border-ink bg-paper p-3">
+          <legend className="px-1 font-bold">{draft.kind === "card" ? "Rig card" : "Guide"} (English)</legend>
+          <label className="block font-bold">
+            Title
+            <input value={draft.title} onChange={(e) => change({ ...draft, title: e.target.value })} className={field} />
+          </label>
+          <label className="block font-bold">
+            Summary
+            <textarea value={draft.summary} onChange={(e) => change({ ...draft, summary: e.target.value })} rows={2} className={`${field} py-2`} />
+          </label>
+          <label className="block font-bold">
+            {draft.kind === "card" ? "Words a crew member would use for it (one per line)" : "Symptom phrases (one per line, as a crew member would say them)"}
+            <textarea
+              value={draft.symptoms.join("\n")}
+              onChange={(e) => change({ ...draft, symptoms: e.target.value.split("\n") })}
+              onBlur={() => change({ ...draft, symptoms: draft.symptoms.map((s) => s.trim()).filter(Boolean) })}
+              rows={4}
+              className={`${field} py-2`}
+            />
+          </label>
+          <label className="block font-bold">
+            First step
+            <select value={draft.initial} onChange={(e) => change({ ...draft, initial: e.target.value })} className={field}>
+              {ids.map((id) => (
+                <option key={id}>{id}</option>
+              ))}
+            </select>
+          </label>
+        </fieldset>
+        <fieldset lang="es" className="space-y-3 rounded-lg border-2 border-ink bg-paper p-3" aria-describedby="es-head-state">
+          <legend className="px-1 font-bold" lang="en">
+            Spanish
+          </legend>
+          <TranslationState id="es-head-state" state={esHead} onStillRight={() => setEsHead({})} />
+          <label className="block font-bold">
+            <span lang="en">Title in Spanish</span>
+            <input value={es.title ?? ""} onChange={(e) => setEsHead({ title: e.target.value })} className={field} />
+          </label>
+          <label className="block font-bold">
+            <span lang="en">Summary in Spanish</span>
+            <textarea value={es.summary ?? ""} onChange={(e) => setEsHead({ summary: e.target.value })} rows={2} className={`${field} py-2`} />
+          </label>
+          <label className="block font-bold">
+            <span lang="en">Symptom phrases in Spanish (one per line; add the words crews use)</span>
+            <textarea
+              value={(es.symptoms ?? []).join("\n")}
+              onChange={(e) => setEsHead({ symptoms: e.target.value.split("\n") })}
+              onBlur={() => es.symptoms && setEsHead({ symptoms: es.symptoms.map((s) => s.trim()).filter(Boolean) })}
+              rows={4}
+              className={`${field} py-2`}
+            />
+          </label>
+        </fieldset>
+      </div>
       <TreeDrawing states={draft.states} selected={selected} onSelect={setSelected} />
       <div className="grid gap-4 md:grid-cols-[16rem_1fr]">
         <section aria-label="Steps" className="space-y-2">
@@ -159,6 +206,11 @@ export function GuideEditor({
                 >
                   {draft.states[id].meta.kind === "safety" ? <span className="mr-1 rounded bg-ink px-1 text-sm font-bold text-white">STOP</span> : null}
                   {id}
+                  {stepState(draft.states[id].meta, es.steps?.[id]) !== "current" ? (
+                    <span className="ml-1 rounded border border-ink px-1 text-sm" title="Spanish missing or out of date">
+                      ES?
+                    </span>
+                  ) : null}
                 </button>
                 <button
                   type="button"
@@ -198,6 +250,15 @@ export function GuideEditor({
                 card={draft.kind === "card"}
                 guides={guides}
                 onChange={(s) => setStep(selected, s)}
+                translation={es.steps?.[selected]}
+                onTranslate={(tr) =>
+                  change(
+                    esSteps(draft, (steps) => {
+                      if (tr) steps[selected] = tr;
+                      else delete steps[selected];
+                    }),
+                  )
+                }
                 onRename={(to) => rename(selected, to)}
                 onCreateTarget={(answer) => {
                   const kind = "check";

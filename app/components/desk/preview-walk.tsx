@@ -7,7 +7,7 @@ import { stepsToEnd } from "~/lib/guides/graph";
 import type { Guide } from "~/lib/guides/schema";
 
 /** Walks a draft exactly as the crew's screen shows it, in a phone-sized frame; nothing is saved. */
-export function PreviewWalk({ guide }: { guide: Guide }) {
+export function PreviewWalk({ guide, lang = "en", inEnglish = [] }: { guide: Guide; lang?: "en" | "es"; inEnglish?: string[] }) {
   // The desk walks the compiled machine itself, so a trainer tries exactly what XState makes of the draft.
   const steps = useMemo(() => machineSteps(compileGuide(guide)), [guide]);
   const left = useMemo(() => stepsToEnd(guide), [guide]);
@@ -17,7 +17,7 @@ export function PreviewWalk({ guide }: { guide: Guide }) {
   const end = meta.kind === "fixed" || meta.kind === "handoff";
   return (
     <GuideTextProvider value={markdownRenderer}>
-      <div className="mx-auto w-[360px] max-w-full rounded-xl border-8 border-ink bg-field p-3">
+      <div lang={lang} className="mx-auto w-[360px] max-w-full rounded-xl border-8 border-ink bg-field p-3">
         <p className="mb-2 text-base">
           Preview · step {path.length}
           {end ? " · end" : ` · at least ${left[here]} more to an end`}
@@ -34,6 +34,7 @@ export function PreviewWalk({ guide }: { guide: Guide }) {
             guide={guide}
             steps={steps}
             stepId={here}
+            inEnglish={inEnglish.includes(here)}
             note=""
             onNoteChange={() => {}}
             onAdvance={(_answer, to) => setPath([...path, to])}

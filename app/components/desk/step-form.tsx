@@ -1,4 +1,6 @@
 import { Markdown } from "~/components/ui/markdown";
+import { stepStamp, stepState, type StepTranslation } from "~/lib/guides/translations";
+import { TranslationState } from "./translation-status";
 import { FIELD_MATH_WIDGETS, STEP_KINDS, type StepKind } from "~/lib/guides/schema";
 import { DAY_CHECK_KEYS, DAY_CHECKS, SERVICE_TASK_KEYS, SERVICE_TASKS, type DayCheck, type ServiceTask } from "~/lib/guides/kinds";
 import { ANSWERS_BY_KIND } from "~/lib/vocabulary";
@@ -40,7 +42,12 @@ export function StepForm({
   onChange,
   onRename,
   onCreateTarget,
+  translation,
+  onTranslate,
 }: {
+  /** The step's Spanish, edited beside its English; undefined when there is none. */
+  translation?: StepTranslation;
+  onTranslate: (translation: StepTranslation | undefined) => void;
   id: string;
   step: LooseStep;
   stepIds: string[];
@@ -85,23 +92,28 @@ export function StepForm({
           ))}
         </select>
       </label>
-      <label className="block font-bold">
-        Prompt (markdown, short)
-        <textarea value={meta.prompt} onChange={(e) => set({ prompt: e.target.value })} rows={3} className={`${field} py-2`} />
-      </label>
-      <div className="rounded-md border-2 border-dashed border-rule p-2" aria-label="Prompt preview">
-        <p className="text-sm font-bold">Preview</p>
-        <Markdown className="text-lg">{meta.prompt || "—"}</Markdown>
-      </div>
-      <label className="block font-bold">
-        Help (markdown, shown behind “More about this”)
-        <textarea value={meta.help ?? ""} onChange={(e) => set({ help: e.target.value || undefined })} rows={3} className={`${field} py-2`} />
-      </label>
-      {meta.help ? (
-        <div className="rounded-md border-2 border-dashed border-rule p-2" aria-label="Help preview">
-          <Markdown>{meta.help}</Markdown>
+      <div className="grid gap-3 lg:grid-cols-2">
+        <div className="space-y-3">
+          <label className="block font-bold">
+            Prompt (markdown, short)
+            <textarea value={meta.prompt} onChange={(e) => set({ prompt: e.target.value })} rows={3} className={`${field} py-2`} />
+          </label>
+          <div className="rounded-md border-2 border-dashed border-rule p-2" aria-label="Prompt preview">
+            <p className="text-sm font-bold">Preview</p>
+            <Markdown className="text-lg">{meta.prompt || "—"}</Markdown>
+          </div>
+          <label className="block font-bold">
+            Help (markdown, shown behind “More about this”)
+            <textarea value={meta.help ?? ""} onChange={(e) => set({ help: e.target.value || undefined })} rows={3} className={`${field} py-2`} />
+          </label>
+          {meta.help ? (
+            <div className="rounded-md border-2 border-dashed border-rule p-2" aria-label="Help preview">
+              <Markdown>{meta.help}</Markdown>
+            </div>
+          ) : null}
         </div>
-      ) : null}
+        <SpanishText meta={meta} translation={translation} onTranslate={onTranslate} />
+      </div>
       <div className="grid grid-cols-2 gap-3">
         <label className="flex min-h-12 items-center gap-2 font-bold">
           <input type="checkbox" checked={!!meta.handsOn} onChange={(e) => set({ handsOn: e.target.checked || undefined })} className="h-6 w-6 shrink-0" />
@@ -277,5 +289,43 @@ function Choice<T extends string>({
         ))}
       </select>
     </label>
+  );
+}
+
+/** The step's Spanish beside its English: editing stamps it with the English it now matches. */
+function SpanishText({
+  meta,
+  translation,
+  onTranslate,
+}: {
+  meta: LooseStep["meta"];
+  translation?: StepTranslation;
+  onTranslate: (translation: StepTranslation | undefined) => void;
+}) {
+  const set = (change: Partial<StepTranslation>) => {
+    const next = { prompt: translation?.prompt ?? "", ...(translation?.help ? { help: translation.help } : {}), ...change, from: stepStamp(meta) };
+    if (!next.help) delete next.help;
+    onTranslate(next.prompt || next.help ? next : undefined);
+  };
+  return (
+    <div lang="es" className="space-y-3 rounded-md border-2 border-rule p-2" aria-label="Spanish">
+      <p lang="en" className="font-bold">
+        Spanish
+      </p>
+      <TranslationState id="es-step-state" state={stepState(meta, translation)} onStillRight={() => set({})} />
+      <label className="block font-bold">
+        <span lang="en">Prompt in Spanish</span>
+        <textarea value={translation?.prompt ?? ""} onChange={(e) => set({ prompt: e.target.value })} rows={3} className={`${field} py-2`} />
+      </label>
+      {translation?.prompt ? (
+        <div className="rounded-md border-2 border-dashed border-rule p-2" aria-label="Spanish prompt preview">
+          <Markdown className="text-lg">{translation.prompt}</Markdown>
+        </div>
+      ) : null}
+      <label className="block font-bold">
+        <span lang="en">Help in Spanish{meta.help ? "" : " (the English has none)"}</span>
+        <textarea value={translation?.help ?? ""} onChange={(e) => set({ help: e.target.value || undefined })} rows={3} className={`${field} py-2`} />
+      </label>
+    </div>
   );
 }
