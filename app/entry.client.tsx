@@ -9,7 +9,7 @@ import { isLanguage } from "~/lib/i18n/languages";
 async function hydrate() {
   const lang = document.documentElement.lang;
   const words = lang === "es" ? await import("./locales/es") : await import("./locales/en");
-  registerLanguage(isLanguage(lang) ? lang : "en", words.default, words.messages);
+  registerLanguage(isLanguage(lang) ? lang : "en", words.default, words.messages, words.patterns);
   startTransition(() => {
     hydrateRoot(
       document,

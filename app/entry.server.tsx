@@ -9,8 +9,8 @@ import { registerLanguage } from "~/i18n";
 import * as en from "~/locales/en";
 import * as es from "~/locales/es";
 
-registerLanguage("en", en.default, en.messages);
-registerLanguage("es", es.default, es.messages);
+registerLanguage("en", en.default, en.messages, en.patterns);
+registerLanguage("es", es.default, es.messages, es.patterns);
 
 export const streamTimeout = 5_000;
 

@@ -8,9 +8,19 @@ import { LOCALES, type Language } from "~/lib/i18n/languages";
  * the language of the page it opened (entry.client loads that one file), so it never ships both.
  */
 const instances = new Map<Language, i18n>();
+const rewrites = new Map<string, [RegExp, string][]>();
 
-export function registerLanguage(lang: Language, strings: Resource[string][string], messages: Record<string, string> = {}) {
+/**
+ * Registers a language: its screen words, whole messages by their English text, and patterns for
+ * the sentences the field math composes with figures in them ("Water to 750 gal…"): each is a regular
+ * expression over the English and its replacement ($1… keep the figures).
+ */
+export function registerLanguage(lang: Language, strings: Resource[string][string], messages: Record<string, string> = {}, patterns: [string, string][] = []) {
   if (instances.has(lang)) return instances.get(lang)!;
+  rewrites.set(
+    lang,
+    patterns.map(([from, to]) => [new RegExp(from, "g"), to]),
+  );
   const instance = createInstance();
   void instance.use(initReactI18next).init({
     lng: lang,
@@ -31,7 +41,11 @@ export function registerLanguage(lang: Language, strings: Resource[string][strin
 
 /** A message the server or a form said in English, in the instance's language (English when it has none). */
 export function sayIn(instance: i18n, message: string): string {
-  return (instance.getResource(instance.language, "messages", message, { keySeparator: false }) as string | undefined) ?? message;
+  const whole = instance.getResource(instance.language, "messages", message, { keySeparator: false }) as string | undefined;
+  if (whole !== undefined) return whole;
+  let said = message;
+  for (const [from, to] of rewrites.get(instance.language) ?? []) said = said.replace(from, to);
+  return said;
 }
 
 /** The instance for a language (the one registered when the phone has only that one). */

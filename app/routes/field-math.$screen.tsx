@@ -1,3 +1,4 @@
+import { useTranslation } from "react-i18next";
 import { Form, useSubmit } from "react-router";
 import { HoseMath } from "~/components/field-math/hose";
 import { LoadCardMath } from "~/components/field-math/load-card";
@@ -88,6 +89,7 @@ const JOB_SCREENS = new Set(["load", "suction"]);
 const SCREENS = { load: LoadCardMath, tip: TipMath, hose: HoseMath, suction: SuctionMath, torque: TorqueMath, rate: RateMath };
 
 export default function FieldMathScreen({ loaderData }: Route.ComponentProps) {
+  const { t } = useTranslation();
   const { screen, rigs, rig, rules, jobs } = loaderData;
   const submit = useSubmit();
   const Screen = SCREENS[screen.id];
@@ -95,7 +97,7 @@ export default function FieldMathScreen({ loaderData }: Route.ComponentProps) {
     <>
       {/* The printed load card carries its own heading: job, date and rig. */}
       <div className={screen.id === "load" ? "print:hidden" : undefined}>
-        <PageTitle lead={screen.lead}>{screen.title}</PageTitle>
+        <PageTitle lead={t(`fm.screens.${screen.id}.lead`)}>{t(`fm.screens.${screen.id}.title`)}</PageTitle>
       </div>
       {rigs.length && screen.id !== "rate" ? (
         <Form
@@ -109,7 +111,7 @@ export default function FieldMathScreen({ loaderData }: Route.ComponentProps) {
           }}
         >
           <label htmlFor="rig" className="block font-bold">
-            Filled from rig
+            {t("fm.screen.fromRig")}
           </label>
           <select id="rig" name="rig" defaultValue={rig?.code} className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink bg-paper px-3 text-lg">
             {rigs.map((r) => (
@@ -121,7 +123,7 @@ export default function FieldMathScreen({ loaderData }: Route.ComponentProps) {
           {JOB_SCREENS.has(screen.id) && jobs.length ? (
             <div>
               <label htmlFor="job" className="block font-bold">
-                Job
+                {t("fm.screen.job")}
               </label>
               {/* Keyed on the rig and its job: a new rig brings its own job, and the box must show it. */}
               <select
@@ -131,7 +133,7 @@ export default function FieldMathScreen({ loaderData }: Route.ComponentProps) {
                 defaultValue={rig?.job ? String(rig.job.id) : "none"}
                 className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink bg-paper px-3 text-lg"
               >
-                <option value="none">No job</option>
+                <option value="none">{t("fm.screen.noJob")}</option>
                 {jobs.map((j) => (
                   <option key={j.id} value={String(j.id)}>
                     {j.name}
@@ -141,7 +143,7 @@ export default function FieldMathScreen({ loaderData }: Route.ComponentProps) {
             </div>
           ) : null}
           <noscript>
-            <button className="mt-2 min-h-12 rounded-md border-2 border-ink px-3 font-bold">Use this rig</button>
+            <button className="mt-2 min-h-12 rounded-md border-2 border-ink px-3 font-bold">{t("fm.screen.useRig")}</button>
           </noscript>
         </Form>
       ) : null}
@@ -149,7 +151,7 @@ export default function FieldMathScreen({ loaderData }: Route.ComponentProps) {
       <Screen key={`${rig?.code ?? "none"}:${rig?.job?.id ?? "none"}`} rig={rig ?? undefined} rules={rules} />
       {screen.id === "load" ? (
         <button type="button" onClick={() => window.print()} className="no-print mt-4 min-h-14 w-full rounded-md bg-go text-lg font-bold text-white">
-          Print the load card
+          {t("fm.screen.print")}
         </button>
       ) : null}
     </>

@@ -1,3 +1,4 @@
+import { useTranslation } from "react-i18next";
 import { Link } from "react-router";
 import { PageTitle } from "~/components/ui/page-title";
 import { FIELD_MATH_SCREENS } from "~/lib/field-math/screens";
@@ -16,15 +17,16 @@ export async function clientLoader({ serverLoader }: Route.ClientLoaderArgs) {
 }
 
 export default function FieldMath() {
+  const { t } = useTranslation();
   return (
     <>
-      <PageTitle lead="Figures for the job and for a rig that is acting up. Water figures are a floor: slurry loses more.">Field math</PageTitle>
+      <PageTitle lead={t("fm.index.lead")}>{t("fm.index.title")}</PageTitle>
       <ul className="grid gap-3 sm:grid-cols-2">
-        {FIELD_MATH_SCREENS.map((t) => (
-          <li key={t.id}>
-            <Link to={t.id} className="flex min-h-20 flex-col justify-center rounded-lg border-2 border-ink bg-paper px-4 py-3 text-ink no-underline">
-              <span className="text-xl font-bold">{t.title}</span>
-              <span>{t.lead}</span>
+        {FIELD_MATH_SCREENS.map((s) => (
+          <li key={s.id}>
+            <Link to={s.id} className="flex min-h-20 flex-col justify-center rounded-lg border-2 border-ink bg-paper px-4 py-3 text-ink no-underline">
+              <span className="text-xl font-bold">{t(`fm.screens.${s.id}.title`)}</span>
+              <span>{t(`fm.screens.${s.id}.lead`)}</span>
             </Link>
           </li>
         ))}

@@ -1,4 +1,5 @@
 import { useState } from "react";
+import { useTranslation } from "react-i18next";
 import { fiberCheck } from "~/lib/field-math/fiber-check";
 import { DEFAULT_FIBER_CEILING_LB_PER_100_GAL } from "~/lib/field-math/load-sheet";
 import { fmt, galToL, lbToKg } from "~/lib/field-math/units";
@@ -20,43 +21,50 @@ export function FiberCheckMath({ rig }: { rig?: RigSpecs; compact?: boolean }) {
   });
   const r = typed ? checked.result : null;
   const err = (value: string, message?: string) => (value.trim() === "" ? undefined : message);
+  const { t } = useTranslation();
   return (
     <div className="space-y-3">
       <div className="grid grid-cols-2 gap-3">
-        <NumberField id="fiber-bags" label="Bags of fiber loaded" value={bags} onChange={setBags} unit="bags" error={err(bags, checked.errors.bags)} />
-        <NumberField id="fiber-bag-lb" label="Each bag weighs" value={bagLb} onChange={setBagLb} unit="lb" error={err(bagLb, checked.errors.lbPerBag)} />
+        <NumberField
+          id="fiber-bags"
+          label={t("fm.fiber.bags")}
+          value={bags}
+          onChange={setBags}
+          unit={t("fm.fiber.bagsUnit")}
+          error={err(bags, checked.errors.bags)}
+        />
+        <NumberField id="fiber-bag-lb" label={t("fm.fiber.bagLb")} value={bagLb} onChange={setBagLb} unit="lb" error={err(bagLb, checked.errors.lbPerBag)} />
       </div>
       <NumberField
         id="fiber-water"
-        label="Water in the tank"
+        label={t("fm.fiber.water")}
         value={water}
         onChange={setWater}
         unit="gal"
-        beside={rig ? `${rig.code}'s tank holds ${fmt(rig.tankGal)} gal.` : undefined}
+        beside={rig ? t("fm.fiber.tankHolds", { code: rig.code, gal: fmt(rig.tankGal) }) : undefined}
         error={err(water, checked.errors.waterGal)}
       />
-      {!typed ? <p className="font-bold">Type the bags and the water that went in.</p> : null}
+      {!typed ? <p className="font-bold">{t("fm.fiber.typeIt")}</p> : null}
       {r ? (
         <ResultBox tone={r.overFiber || r.overCarrier ? "bad" : "good"}>
           <p className="text-xl font-bold">
             {r.overFiber
-              ? `Over the limit: ${fmt(r.fiberLb)} lb of fiber in water that carries ${fmt(r.limitLb)} lb.`
-              : `Within the limit: ${fmt(r.fiberLb)} lb of fiber; the water carries ${fmt(r.limitLb)} lb.`}
+              ? t("fm.fiber.over", { fiber: fmt(r.fiberLb), limit: fmt(r.limitLb) })
+              : t("fm.fiber.within", { fiber: fmt(r.fiberLb), limit: fmt(r.limitLb) })}
           </p>
           {r.overFiber ? (
             <p className="text-lg">
               {rig && r.waterNeededGal > rig.tankGal
-                ? `More than the ${fmt(rig.tankGal)} gal tank holds: about ${Math.ceil((r.fiberLb - r.limitLb) / toNumber(bagLb))} bags too many for this water.`
-                : `It needs about ${fmt(r.waterNeededGal)} gal of water to carry that fiber.`}
+                ? t("fm.fiber.moreThanTank", { gal: fmt(rig.tankGal), bags: Math.ceil((r.fiberLb - r.limitLb) / toNumber(bagLb)) })
+                : t("fm.fiber.needsWater", { gal: fmt(r.waterNeededGal) })}
             </p>
           ) : null}
           <p>
-            Load weighs about {fmt(r.loadLb)} lb ({fmt(lbToKg(r.loadLb))} kg)
-            {r.overCarrier === null
-              ? "."
-              : r.overCarrier
-                ? `: more than the ${fmt(rig!.carrierRatingLb!)} lb payload the carrier is rated for.`
-                : `, within the ${fmt(rig!.carrierRatingLb!)} lb payload rating.`}
+            {t(r.overCarrier === null ? "fm.fiber.weighs" : r.overCarrier ? "fm.fiber.weighsOver" : "fm.fiber.weighsWithin", {
+              lb: fmt(r.loadLb),
+              kg: fmt(lbToKg(r.loadLb)),
+              rating: fmt(rig?.carrierRatingLb ?? 0),
+            })}
           </p>
           <SourceNote>
             Limit: {DEFAULT_FIBER_CEILING_LB_PER_100_GAL} lb of wood fiber per 100 gal of water (common practice; your company or the product may set another).

@@ -1,4 +1,6 @@
 import { useState } from "react";
+import { useTranslation } from "react-i18next";
+import { useSay } from "~/components/ui/say";
 import { hoseFriction, reachByHoseLength } from "~/lib/field-math/hose";
 import { FRICTION_TABLES, HAZEN_WILLIAMS, tableFor } from "~/lib/field-math/hose-tables";
 import { fmt, ftToM, psiToKpa } from "~/lib/field-math/units";
@@ -6,11 +8,11 @@ import { NumberField, ResultBox, SourceNote, toNumber, tryFieldMath } from "./ki
 import type { RigSpecs } from "~/lib/rigs/specs";
 
 /** The ways to work friction out, in words a crew reads (the sources stay in the details line). */
-const METHOD_WORDS: Record<string, string> = {
-  "rohnert-park": "Hose table (most hose sizes)",
-  ifsta: "Second hose table (1¾ and 2 in)",
-  [HAZEN_WILLIAMS.id]: "Rigid-pipe formula (any size)",
-};
+const METHOD_WORDS = {
+  "rohnert-park": "fm.hose.methodTable",
+  ifsta: "fm.hose.methodIfsta",
+  [HAZEN_WILLIAMS.id]: "fm.hose.methodPipe",
+} as Record<string, "fm.hose.methodTable" | "fm.hose.methodIfsta" | "fm.hose.methodPipe">;
 const sizes = (id: string) => {
   const t = FRICTION_TABLES.find((x) => x.id === id);
   return t
@@ -27,6 +29,8 @@ const sizes = (id: string) => {
  * a default flow presented as fact would give a verdict about a pump nobody measured.
  */
 export function HoseMath({ rig, compact = false }: { rig?: RigSpecs; compact?: boolean }) {
+  const { t } = useTranslation();
+  const say = useSay();
   const length = rig?.hoseLengthFt ?? 300;
   const [hundreds, setHundreds] = useState(String(Math.floor(length / 100)));
   const [fifties, setFifties] = useState(String(Math.round((length % 100) / 50)));
@@ -64,17 +68,17 @@ export function HoseMath({ rig, compact = false }: { rig?: RigSpecs; compact?: b
   return (
     <div className="space-y-3">
       <div className="grid grid-cols-2 gap-3">
-        <NumberField id="hose-100" label="100 ft sections" value={hundreds} onChange={setHundreds} unit="×100 ft" />
-        <NumberField id="hose-50" label="50 ft sections" value={fifties} onChange={setFifties} unit="×50 ft" />
+        <NumberField id="hose-100" label={t("fm.hose.hundreds")} value={hundreds} onChange={setHundreds} unit="×100 ft" />
+        <NumberField id="hose-50" label={t("fm.hose.fifties")} value={fifties} onChange={setFifties} unit="×50 ft" />
       </div>
       <p>
-        Hose run: <strong>{Number.isFinite(lengthFt) ? `${fmt(lengthFt)} ft (${fmt(ftToM(lengthFt))} m)` : "—"}</strong>
+        {t("fm.hose.run")} <strong>{Number.isFinite(lengthFt) ? `${fmt(lengthFt)} ft (${fmt(ftToM(lengthFt))} m)` : "—"}</strong>
       </p>
-      {friction.errors.lengthFt ? <p className="font-bold text-stop">{friction.errors.lengthFt}</p> : null}
-      <NumberField id="hose-diameter" label="Hose inside diameter" value={diameter} onChange={setDiameter} unit="in" error={friction.errors.diameterIn} />
+      {friction.errors.lengthFt ? <p className="font-bold text-stop">{say(friction.errors.lengthFt)}</p> : null}
+      <NumberField id="hose-diameter" label={t("fm.hose.diameter")} value={diameter} onChange={setDiameter} unit="in" error={friction.errors.diameterIn} />
       {compact ? null : (
         <label className="block font-bold">
-          How to work it out
+          {t("fm.hose.how")}
           <select
             value={table}
             onChange={(e) => setTable(e.target.value)}
@@ -82,7 +86,7 @@ export function HoseMath({ rig, compact = false }: { rig?: RigSpecs; compact?: b
           >
             {Object.keys(METHOD_WORDS).map((id) => (
               <option key={id} value={id}>
-                {METHOD_WORDS[id]}
+                {t(METHOD_WORDS[id])}
                 {sizes(id)}
               </option>
             ))}
@@ -91,18 +95,14 @@ export function HoseMath({ rig, compact = false }: { rig?: RigSpecs; compact?: b
       )}
       <NumberField
         id="hose-flow"
-        label="Flow through the hose"
+        label={t("fm.hose.flow")}
         value={flow}
         onChange={(v) => {
           setFlow(v);
           setFlowConfirmed(true);
         }}
         unit="gpm"
-        beside={
-          rated !== null
-            ? `This rig's pump is rated ${fmt(rated)} gpm; a worn pump or a long run gives less.`
-            : "Type the flow: from a flow meter, or the pump's rating."
-        }
+        beside={rated !== null ? t("fm.hose.rated", { gpm: fmt(rated) }) : t("fm.hose.typeFlow")}
         error={flowConfirmed ? friction.errors.flowGpm : undefined}
       />
       {!flowConfirmed ? (
@@ -115,54 +115,41 @@ export function HoseMath({ rig, compact = false }: { rig?: RigSpecs; compact?: b
             }}
             className="min-h-14 w-full rounded-md border-2 border-ink bg-paper px-3 text-lg font-bold"
           >
-            Use the rated {fmt(rated)} gpm
+            {t("fm.hose.useRated", { gpm: fmt(rated) })}
           </button>
         ) : (
-          <p className="font-bold">Type the flow to see what the hose costs.</p>
+          <p className="font-bold">{t("fm.hose.typeToSee")}</p>
         )
       ) : null}
-      {compact ? null : (
-        <NumberField
-          id="hose-rise"
-          label="Rise from pump to nozzle (negative if downhill)"
-          value={rise}
-          onChange={setRise}
-          unit="ft"
-          error={friction.errors.elevationFt}
-        />
-      )}
-      <NumberField id="hose-pump" label="Pump pressure" value={pump} onChange={setPump} unit="psi" error={reach.errors.pumpPsi} />
+      {compact ? null : <NumberField id="hose-rise" label={t("fm.hose.rise")} value={rise} onChange={setRise} unit="ft" error={friction.errors.elevationFt} />}
+      <NumberField id="hose-pump" label={t("fm.hose.pump")} value={pump} onChange={setPump} unit="psi" error={reach.errors.pumpPsi} />
       {r ? (
         <ResultBox tone={share !== null && share > 0.5 ? "warn" : "plain"}>
-          <p className="text-xl font-bold">
-            Friction loss: {fmt(r.frictionLossPsi, 1)} psi ({fmt(psiToKpa(r.frictionLossPsi))} kPa)
-          </p>
-          {r.elevationPsi ? <p>Rise: {fmt(r.elevationPsi, 1)} psi more</p> : null}
+          <p className="text-xl font-bold">{t("fm.hose.friction", { psi: fmt(r.frictionLossPsi, 1), kpa: fmt(psiToKpa(r.frictionLossPsi)) })}</p>
+          {r.elevationPsi ? <p>{t("fm.hose.risePsi", { psi: fmt(r.elevationPsi, 1) })}</p> : null}
           {share !== null ? (
             <p className="text-lg">
               {share > 1
-                ? `That is more than the ${fmt(pumpPsi)} psi the pump gives: it cannot push this flow through this hose.`
-                : `That is ${fmt(share * 100)} % of the pump's ${fmt(pumpPsi)} psi${share > 0.5 ? ": the hose is eating most of the pressure." : "."}`}
+                ? t("fm.hose.tooMuch", { psi: fmt(pumpPsi) })
+                : t(share > 0.5 ? "fm.hose.shareBig" : "fm.hose.share", { pct: fmt(share * 100), psi: fmt(pumpPsi) })}
             </p>
           ) : null}
-          <p className="mt-1">Slurry loses more than water: read this as the least you will lose.</p>
+          <p className="mt-1">{t("fm.hose.slurry")}</p>
           <SourceNote>
             {r.table === HAZEN_WILLIAMS.id ? `${r.source}.` : `C = ${r.coefficient} for ${diameter} in hose (FL = C·Q²·L), from ${r.source}.`} {r.note}
           </SourceNote>
         </ResultBox>
       ) : null}
-      {compact ? null : <NumberField id="hose-tip" label="Smooth-bore tip diameter" value={tip} onChange={setTip} unit="in" error={reach.errors.tipIn} />}
+      {compact ? null : <NumberField id="hose-tip" label={t("fm.hose.tip")} value={tip} onChange={setTip} unit="in" error={reach.errors.tipIn} />}
       {reach.result && !compact ? (
         <table className="w-full border-collapse text-left">
-          <caption className="text-left font-bold">
-            Reach by hose length at {pump} psi at the pump, {tip} in tip
-          </caption>
+          <caption className="text-left font-bold">{t("fm.hose.reachCaption", { psi: pump, tip })}</caption>
           <thead>
             <tr className="border-b-2 border-ink">
-              <th scope="col">Hose</th>
-              <th scope="col">Flow</th>
-              <th scope="col">At nozzle</th>
-              <th scope="col">Reach</th>
+              <th scope="col">{t("fm.hose.colHose")}</th>
+              <th scope="col">{t("fm.hose.colFlow")}</th>
+              <th scope="col">{t("fm.hose.colNozzle")}</th>
+              <th scope="col">{t("fm.hose.colReach")}</th>
             </tr>
           </thead>
           <tbody>
@@ -171,7 +158,7 @@ export function HoseMath({ rig, compact = false }: { rig?: RigSpecs; compact?: b
                 <td>{row.lengthFt} ft</td>
                 <td>{fmt(row.flowGpm)} gpm</td>
                 <td>{fmt(row.nozzlePsi)} psi</td>
-                <td>{row.reachFt === null ? "under 30 psi" : `${fmt(row.reachFt)} ft`}</td>
+                <td>{row.reachFt === null ? t("fm.hose.under30") : `${fmt(row.reachFt)} ft`}</td>
               </tr>
             ))}
           </tbody>

@@ -1,3 +1,5 @@
+import { useTranslation } from "react-i18next";
+import { useSay } from "~/components/ui/say";
 import { FieldMathInputError } from "~/lib/field-math/validate";
 
 /** Runs a calculator on what the person typed: a result, or each bad field's message. */
@@ -39,6 +41,7 @@ export function NumberField({
   beside?: string;
   error?: string;
 }) {
+  const say = useSay();
   return (
     <div>
       <label htmlFor={id} className="block font-bold">
@@ -59,7 +62,7 @@ export function NumberField({
       {beside ? <p className="text-sm">{beside}</p> : null}
       {error ? (
         <p id={`${id}-error`} className="mt-1 font-bold text-stop">
-          {error}
+          {say(error)}
         </p>
       ) : null}
     </div>
@@ -77,10 +80,12 @@ export function ResultBox({ children, tone = "plain" }: { children: React.ReactN
 
 /** Where a figure comes from: one line to open, so the crew reads the figure and the trainer can check it. */
 export function SourceNote({ children }: { children: React.ReactNode }) {
+  const { t } = useTranslation();
   return (
     <details className="mt-2 text-sm">
-      <summary className="min-h-10 cursor-pointer py-2 font-bold">Where this figure comes from</summary>
-      <p>{children}</p>
+      <summary className="min-h-10 cursor-pointer py-2 font-bold">{t("fm.source")}</summary>
+      {/* The sources are named as published (in English). */}
+      <p lang="en">{children}</p>
     </details>
   );
 }

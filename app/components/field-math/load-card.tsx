@@ -1,6 +1,9 @@
 import { useEffect, useState } from "react";
+import type { TFunction } from "i18next";
+import { Trans, useTranslation } from "react-i18next";
+import { useSay } from "~/components/ui/say";
 import { lbText, loadCard, loadNumbers, loadSteps, type CardLoad, type CardMaterial, type LoadCard } from "~/lib/field-math/load-card";
-import { DEFAULT_LOAD_RULES, MATERIAL_KIND_LABELS, MATERIAL_KINDS, type LoadRules, type MaterialKind } from "~/lib/field-math/load-rules";
+import { DEFAULT_LOAD_RULES, MATERIAL_KINDS, type LoadRules, type MaterialKind } from "~/lib/field-math/load-rules";
 import { acresToSqFt, fmt, galToL, lbPerAcreToKgPerHa, lbToKg, sqFtToAcres, sqMToSqFt } from "~/lib/field-math/units";
 import { NumberField, ResultBox, SourceNote, toNumber, tryFieldMath } from "./kit";
 import { SeedClock } from "./seed-clock";
@@ -15,11 +18,11 @@ interface Row {
   bag: string;
 }
 
-// A one-pass mulch, seed and fertilizer job at WSDOE BMP C120/C121 rates, as a starting point.
-const STARTER: Row[] = [
-  { key: 1, name: "Wood fiber mulch", rate: "1500", kind: "fiber", bag: "50" },
-  { key: 2, name: "Seed mix", rate: "120", kind: "seed", bag: "50" },
-  { key: 3, name: "Fertilizer 10-4-6", rate: "90", kind: "fertilizer", bag: "50" },
+// A one-pass mulch, seed and fertilizer job at WSDOE BMP C120/C121 rates, as a starting point (named in the reader's language).
+const starter = (t: TFunction): Row[] => [
+  { key: 1, name: t("fm.load.starterFiber"), rate: "1500", kind: "fiber", bag: "50" },
+  { key: 2, name: t("fm.load.starterSeed"), rate: "120", kind: "seed", bag: "50" },
+  { key: 3, name: t("fm.load.starterFertilizer"), rate: "90", kind: "fertilizer", bag: "50" },
 ];
 
 const AREA_UNITS = { sqft: "ft²", acres: "acres", sqm: "m²" } as const;
@@ -50,6 +53,8 @@ function keptInputs(): KeptInputs | null {
 
 /** The load sheet as the tank-side card: marks, whole bags, order, weight, strips and the seed clock; prints on one page. */
 export function LoadCardMath({ rig, rules = DEFAULT_LOAD_RULES, compact = false }: { rig?: RigSpecs; rules?: LoadRules; compact?: boolean }) {
+  const { t } = useTranslation();
+  const say = useSay();
   // A rig on a job starts from the job's spec and the area it has left.
   const onJob = rig?.job ?? null;
   const [job, setJob] = useState(onJob?.name ?? "");
@@ -64,7 +69,7 @@ export function LoadCardMath({ rig, rules = DEFAULT_LOAD_RULES, compact = false 
   const [rows, setRows] = useState<Row[]>(
     onJob
       ? onJob.materials.map((m, i) => ({ key: i + 1, name: m.name, rate: String(m.lbPerAcre), kind: m.kind, bag: m.bagLb ? String(m.bagLb) : "" }))
-      : STARTER,
+      : starter(t),
   );
   const setRow = (key: number, change: Partial<Row>) => setRows(rows.map((r) => (r.key === key ? { ...r, ...change } : r)));
   // The job, area and materials come back as the crew left them (the full screen only; a guide's figure starts fresh).
@@ -111,16 +116,16 @@ export function LoadCardMath({ rig, rules = DEFAULT_LOAD_RULES, compact = false 
         {compact ? null : (
           <div className="grid grid-cols-1 gap-3 sm:grid-cols-2">
             <label className="block font-bold">
-              Job name on the printed card
+              {t("fm.load.jobName")}
               <input
                 value={job}
                 onChange={(e) => setJob(e.target.value)}
-                placeholder="Site or customer"
+                placeholder={t("fm.load.jobPlaceholder")}
                 className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink bg-paper px-3 text-lg"
               />
             </label>
             <label className="block font-bold">
-              Date
+              {t("fm.load.date")}
               <input
                 type="date"
                 value={date}
@@ -132,28 +137,29 @@ export function LoadCardMath({ rig, rules = DEFAULT_LOAD_RULES, compact = false 
         )}
         {onJob ? (
           <p className="rounded-md border-2 border-ink bg-field p-3">
-            From the job <span className="font-bold">{onJob.name}</span>: its spec, and {fmt(onJob.remainingAcres, 2)} acres left to spray of{" "}
-            {fmt(onJob.areaAcres * onJob.passes, 2)}.{" "}
-            {onJob.remainingAcres > MAX_CARD_ACRES
-              ? `The card plans up to ${MAX_CARD_ACRES} acres at a time: put in today's section.`
-              : "Change the area to today's section if you spray less."}
+            <Trans
+              i18nKey="fm.load.fromJob"
+              values={{ name: onJob.name, left: fmt(onJob.remainingAcres, 2), total: fmt(onJob.areaAcres * onJob.passes, 2) }}
+              components={{ b: <span className="font-bold" /> }}
+            />{" "}
+            {onJob.remainingAcres > MAX_CARD_ACRES ? t("fm.load.fromJobBig", { max: MAX_CARD_ACRES }) : t("fm.load.fromJobSmall")}
           </p>
         ) : null}
         <div className="grid grid-cols-[1fr_auto] items-end gap-2">
           <NumberField
             id="load-area"
-            label="Area to cover"
+            label={t("fm.load.area")}
             value={area}
             onChange={setArea}
             unit=""
             error={
               errors.areaSqFt && areaSqFt > MAX_CARD_ACRES * 43_560
-                ? `The card plans up to ${MAX_CARD_ACRES} acres (${fmt(MAX_CARD_ACRES * 43_560)} ft²) at a time: put in today's section.`
+                ? t("fm.load.areaTooBig", { max: MAX_CARD_ACRES, sqft: fmt(MAX_CARD_ACRES * 43_560) })
                 : errors.areaSqFt
             }
           />
           <select
-            aria-label="Area unit"
+            aria-label={t("fm.load.areaUnit")}
             value={areaUnit}
             onChange={(e) => setAreaUnit(e.target.value as "acres")}
             className="mb-[2px] min-h-14 rounded-md border-2 border-ink bg-paper px-2 text-lg"
@@ -172,62 +178,62 @@ export function LoadCardMath({ rig, rules = DEFAULT_LOAD_RULES, compact = false 
         ) : null}
         <NumberField
           id="load-tank"
-          label="Tank size"
+          label={t("fm.load.tank")}
           value={tank}
           onChange={setTank}
           unit="gal"
           beside={
             rig && toNumber(tank) > rig.tankGal
-              ? `More than ${rig.code}'s ${fmt(rig.tankGal)} gal tank: check the figure.`
-              : `${fmt(galToL(toNumber(tank) || 0))} L`
+              ? t("fm.load.tankOver", { code: rig.code, gal: fmt(rig.tankGal) })
+              : t("fm.load.liters", { l: fmt(galToL(toNumber(tank) || 0)) })
           }
           error={errors.tankGal}
         />
         <NumberField
           id="load-water-rate"
-          label="Water per acre (optional)"
+          label={t("fm.load.waterRate")}
           value={waterRate}
           onChange={setWaterRate}
           unit="gal"
-          beside="From the spec, if it sets one. Blank: as much as the fiber needs under the ceiling."
+          beside={t("fm.load.waterRateHint")}
           error={errors.waterGalPerAcre}
         />
         <NumberField
           id="load-ceiling"
-          label="Most fiber per 100 gal of water"
+          label={t("fm.load.ceiling")}
           value={ceiling}
           onChange={setCeiling}
           unit="lb"
-          beside="Your company's figure; 50 lb is common practice. Use your product's."
+          beside={t("fm.load.ceilingHint")}
           error={errors.maxFiberLbPer100Gal}
         />
         <NumberField
           id="load-slope-width"
-          label="Width of the strip you spray"
+          label={t("fm.load.stripWidth")}
           value={slopeWidth}
           onChange={setSlopeWidth}
           unit="ft"
-          beside="Shows each load as a length of the slope, in feet and paces."
+          beside={t("fm.load.stripHint")}
           error={errors.slopeWidthFt}
         />
         {compact ? null : (
           <fieldset className="space-y-3 rounded-md border-2 border-rule p-3">
-            <legend className="px-1 font-bold">Materials at the spec rate</legend>
-            {errors.materials ? <p className="font-bold text-stop">{errors.materials}</p> : null}
+            <legend className="px-1 font-bold">{t("fm.load.materials")}</legend>
+            {errors.materials ? <p className="font-bold text-stop">{say(errors.materials)}</p> : null}
             {rows.map((row, i) => (
               <div key={row.key} className="grid grid-cols-1 gap-2 border-b border-rule pb-3 sm:grid-cols-2">
                 <label className="font-bold sm:col-span-2">
-                  Material {i + 1}
+                  {t("fm.load.material", { n: i + 1 })}
                   <input
                     value={row.name}
                     onChange={(e) => setRow(row.key, { name: e.target.value })}
                     className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink bg-paper px-3 text-lg"
                   />
-                  {errors[`materials.${i}.name`] ? <span className="text-stop">{errors[`materials.${i}.name`]}</span> : null}
+                  {errors[`materials.${i}.name`] ? <span className="text-stop">{say(errors[`materials.${i}.name`])}</span> : null}
                 </label>
                 <NumberField
                   id={`rate-${row.key}`}
-                  label="Rate"
+                  label={t("fm.load.rate")}
                   value={row.rate}
                   onChange={(v) => setRow(row.key, { rate: v })}
                   unit="lb/ac"
@@ -235,14 +241,14 @@ export function LoadCardMath({ rig, rules = DEFAULT_LOAD_RULES, compact = false 
                 />
                 <NumberField
                   id={`bag-${row.key}`}
-                  label="Bag size"
+                  label={t("fm.load.bagSize")}
                   value={row.bag}
                   onChange={(v) => setRow(row.key, { bag: v })}
                   unit="lb"
                   error={errors[`materials.${i}.bagLb`]}
                 />
                 <label className="block font-bold">
-                  What it is
+                  {t("fm.load.whatItIs")}
                   <select
                     value={row.kind}
                     onChange={(e) => setRow(row.key, { kind: e.target.value as MaterialKind })}
@@ -250,7 +256,7 @@ export function LoadCardMath({ rig, rules = DEFAULT_LOAD_RULES, compact = false 
                   >
                     {MATERIAL_KINDS.map((k) => (
                       <option key={k} value={k}>
-                        {MATERIAL_KIND_LABELS[k]}
+                        {t(`fm.kinds.${k}`)}
                       </option>
                     ))}
                   </select>
@@ -260,16 +266,16 @@ export function LoadCardMath({ rig, rules = DEFAULT_LOAD_RULES, compact = false 
                   onClick={() => setRows(rows.filter((x) => x.key !== row.key))}
                   className="min-h-12 rounded-md border-2 border-ink bg-paper font-bold"
                 >
-                  Remove
+                  {t("fm.load.remove")}
                 </button>
               </div>
             ))}
             <button
               type="button"
-              onClick={() => setRows([...rows, { key: Date.now(), name: "Tackifier", rate: "100", kind: "tackifier", bag: "" }])}
+              onClick={() => setRows([...rows, { key: Date.now(), name: t("fm.load.newMaterial"), rate: "100", kind: "tackifier", bag: "" }])}
               className="min-h-12 rounded-md border-2 border-ink bg-paper px-3 font-bold"
             >
-              Add a material
+              {t("fm.load.add")}
             </button>
           </fieldset>
         )}
@@ -298,6 +304,8 @@ function CardResult({
   rates: Row[];
   compact: boolean;
 }) {
+  const { t } = useTranslation();
+  const say = useSay();
   const first = card.loads[0];
   const hasSeed = first.materials.some((m) => m.kind === "seed");
   const over = card.loads.some((l) => l.overRatingLb !== null);
@@ -306,19 +314,21 @@ function CardResult({
       <ResultBox tone={over ? "bad" : "plain"}>
         <div className="load-card">
           <p className="hidden text-2xl font-bold print:block">
-            Load card · {job.trim() || "Job not named"} · <span className="whitespace-nowrap">{date}</span> ·{" "}
-            <span className="whitespace-nowrap">{rig ? `${rig.code} ${rig.name}` : "rig not chosen"}</span>
+            {t("fm.load.printedTitle", { job: job.trim() || t("fm.load.jobNotNamed"), date, rig: rig ? `${rig.code} ${rig.name}` : t("fm.load.rigNotChosen") })}
           </p>
           <p className="text-2xl font-bold" data-testid="load-count">
-            {card.sheet.loads} tank load{card.sheet.loads === 1 ? "" : "s"}
+            {t("fm.load.count", { count: card.sheet.loads })}
           </p>
           <p>
-            {card.sheet.loads === 1 ? "The load" : "A full load"}: fill to {fmt(first.fillToGal)} gal, covers {fmt(first.areaSqFt)} ft² ({fmt(first.acres, 3)}{" "}
-            ac).
+            {t(card.sheet.loads === 1 ? "fm.load.theLoad" : "fm.load.fullLoad", {
+              gal: fmt(first.fillToGal),
+              sqft: fmt(first.areaSqFt),
+              ac: fmt(first.acres, 3),
+            })}
           </p>
           {hasSeed ? (
             <div className="mt-2">
-              <SeedClock limitMinutes={rules.seedLimitMinutes} label={job.trim() || (rig ? rig.code : "this load")} />
+              <SeedClock limitMinutes={rules.seedLimitMinutes} label={job.trim() || (rig ? rig.code : t("fm.load.thisLoad"))} />
             </div>
           ) : null}
           {card.notes.map((note) => (
@@ -327,7 +337,7 @@ function CardResult({
               className={`mt-2 rounded-md border-2 p-2 font-bold ${note.startsWith("Over") ? "border-stop text-stop" : "border-ink bg-caution"}`}
               role="alert"
             >
-              {note}
+              {say(note)}
             </p>
           ))}
           <div className="print:hidden">
@@ -337,22 +347,24 @@ function CardResult({
           </div>
           <PrintedLoads card={card} rules={rules} />
           <p className="mt-3">
-            Totals: {fmt(card.waterGal)} gal water ({fmt(galToL(card.waterGal))} L);{" "}
-            {card.totals
-              .map(
-                (m) =>
-                  `${m.name} ${lbText(m.lb)} (${fmt(lbToKg(m.lb), m.lb < 10 ? 1 : 0)} kg)${m.bringBags !== null ? `: bring ${m.bringBags} bag${m.bringBags === 1 ? "" : "s"}` : ""}`,
-              )
-              .join("; ")}
-            .
+            {t("fm.load.totals", {
+              gal: fmt(card.waterGal),
+              l: fmt(galToL(card.waterGal)),
+              list: card.totals
+                .map(
+                  (m) =>
+                    `${m.name} ${lbText(m.lb)} (${fmt(lbToKg(m.lb), m.lb < 10 ? 1 : 0)} kg)${m.bringBags !== null ? `: ${t("fm.load.bring", { count: m.bringBags })}` : ""}`,
+                )
+                .join("; "),
+            })}
           </p>
           {compact ? null : (
             <p className="text-sm print:hidden">
-              Rates in metric: {rates.map((row) => `${row.name} ${fmt(lbPerAcreToKgPerHa(toNumber(row.rate) || 0))} kg/ha`).join("; ")}.
+              {t("fm.load.metric", { list: rates.map((row) => `${row.name} ${fmt(lbPerAcreToKgPerHa(toNumber(row.rate) || 0))} kg/ha`).join("; ") })}
             </p>
           )}
-          <p className="mt-2 text-sm print:text-xs">{card.bagRule}</p>
-          <p className="hidden text-lg font-bold print:block">Seed in at ______ · spray by ______ ({rules.seedLimitMinutes} minutes)</p>
+          <p className="mt-2 text-sm print:text-xs">{say(card.bagRule)}</p>
+          <p className="hidden text-lg font-bold print:block">{t("fm.load.seedLine", { min: rules.seedLimitMinutes })}</p>
           <div className="print:hidden">
             <SourceNote>
               Seed limit {rules.seedLimitMinutes} minutes and the loading order: your company&apos;s rules (defaults from the USDA NRCS Wyoming hydroseeding
@@ -367,11 +379,14 @@ function CardResult({
   );
 }
 
-const shortAmount = (m: CardMaterial) =>
-  m.bags ? `${m.bags} bag${m.bags === 1 ? "" : "s"}${m.weighLb > 0 ? ` + ${lbText(m.weighLb)}` : ""}` : `${lbText(m.lb)}${m.bags === 0 ? " (weigh)" : ""}`;
+const shortAmount = (m: CardMaterial, t: TFunction) =>
+  m.bags
+    ? `${t("fm.load.bags", { count: m.bags })}${m.weighLb > 0 ? ` + ${lbText(m.weighLb)}` : ""}`
+    : `${lbText(m.lb)}${m.bags === 0 ? t("fm.load.weigh") : ""}`;
 
 /** On paper, the recipes side by side: one row per step in the company's order, one column per group of loads. */
 function PrintedLoads({ card, rules }: { card: LoadCard; rules: LoadRules }) {
+  const { t } = useTranslation();
   const cell = "border-2 border-ink px-2 py-1 align-top";
   const loads = card.groups.map((g) => g.load);
   const row = (label: string, values: React.ReactNode[], key = label) => (
@@ -391,7 +406,7 @@ function PrintedLoads({ card, rules }: { card: LoadCard; rules: LoadRules }) {
     if (step === "water") {
       rows.push(
         row(
-          "Water to",
+          t("fm.load.waterTo"),
           loads.map((l) => (l.fiberStartGal !== null ? `${fmt(l.fiberStartGal)} gal (${rules.fiberStartPercent} %)` : `${fmt(l.fillToGal)} gal`)),
         ),
       );
@@ -405,13 +420,13 @@ function PrintedLoads({ card, rules }: { card: LoadCard; rules: LoadRules }) {
           loads.map((l) =>
             step === "fiber" && l.fiberDoneGal !== null ? (
               <>
-                <b>{shortAmount(l.materials[k])}</b>,{" "}
+                <b>{shortAmount(l.materials[k], t)}</b>,{" "}
                 {l.fillToGal > l.fiberDoneGal
-                  ? `all in by ${fmt(l.fiberDoneGal)} gal; then water to ${fmt(l.fillToGal)} gal`
-                  : `all in by ${fmt(l.fillToGal)} gal, water stops`}
+                  ? t("fm.load.allInBy", { gal: fmt(l.fiberDoneGal), fill: fmt(l.fillToGal) })
+                  : t("fm.load.allInStops", { gal: fmt(l.fillToGal) })}
               </>
             ) : (
-              <b>{shortAmount(l.materials[k])}</b>
+              <b>{shortAmount(l.materials[k], t)}</b>
             ),
           ),
           `${step}-${k}`,
@@ -422,31 +437,35 @@ function PrintedLoads({ card, rules }: { card: LoadCard; rules: LoadRules }) {
   if (loads.every((l) => l.fiberStartGal === null))
     rows.push(
       row(
-        "Fill to",
+        t("fm.load.fillTo"),
         loads.map((l) => `${fmt(l.fillToGal)} gal`),
       ),
     );
   rows.push(
     row(
-      "Covers",
-      loads.map((l) => `${fmt(l.areaSqFt)} ft²${l.stripFt !== null ? ` · ${fmt(l.stripFt)} ft strip · ${fmt(l.stripPaces ?? 0)} paces` : ""}`),
+      t("fm.load.coversRow"),
+      loads.map((l) =>
+        l.stripFt !== null ? t("fm.load.stripCell", { sqft: fmt(l.areaSqFt), ft: fmt(l.stripFt), paces: fmt(l.stripPaces ?? 0) }) : `${fmt(l.areaSqFt)} ft²`,
+      ),
     ),
   );
   rows.push(
     row(
-      "Weight",
-      loads.map((l) => (l.overRatingLb !== null ? <b>{`${fmt(l.weightLb)} lb: OVER rating by ${fmt(l.overRatingLb)} lb`}</b> : `${fmt(l.weightLb)} lb`)),
+      t("fm.load.weightRow"),
+      loads.map((l) =>
+        l.overRatingLb !== null ? <b>{t("fm.load.overCell", { lb: fmt(l.weightLb), over: fmt(l.overRatingLb) })}</b> : `${fmt(l.weightLb)} lb`,
+      ),
     ),
   );
   return (
     <table className="mt-3 hidden w-full border-collapse text-left print:table" data-testid="printed-loads">
-      <caption className="caption-top pb-1 text-left font-bold">Load top to bottom, agitator running.</caption>
+      <caption className="caption-top pb-1 text-left font-bold">{t("fm.load.tableCaption")}</caption>
       <thead>
         <tr>
           <td className={cell} />
           {card.groups.map((g) => (
             <th key={g.numbers[0]} scope="col" className={`${cell} text-left`}>
-              {g.numbers.length === 1 ? "Load" : "Loads"} {loadNumbers(g.numbers)}
+              {t(g.numbers.length === 1 ? "fm.load.load" : "fm.load.loads", { n: loadNumbers(g.numbers) })}
             </th>
           ))}
         </tr>
@@ -470,45 +489,47 @@ function LoadGroup({
   rules: LoadRules;
   carrierRatingLb: number | null;
 }) {
+  const { t } = useTranslation();
+  const say = useSay();
   const steps = loadSteps(load, rules);
   const materialsLb = load.materials.reduce((s, m) => s + m.lb, 0);
   return (
-    <section className="mt-3 break-inside-avoid border-t-4 border-ink pt-2" aria-label={`Load ${loadNumbers(numbers)}`}>
+    <section
+      className="mt-3 break-inside-avoid border-t-4 border-ink pt-2"
+      aria-label={t(numbers.length === 1 ? "fm.load.load" : "fm.load.loads", { n: loadNumbers(numbers) })}
+    >
       <h2 className="text-xl font-bold">
-        {numbers.length === 1 ? "Load" : "Loads"} {loadNumbers(numbers)}
-        {numbers.length === 1 && numbers[0] === card.sheet.loads && card.sheet.loads > 1 ? " (last)" : ""}
+        {t(numbers.length === 1 ? "fm.load.load" : "fm.load.loads", { n: loadNumbers(numbers) })}
+        {numbers.length === 1 && numbers[0] === card.sheet.loads && card.sheet.loads > 1 ? t("fm.load.last") : ""}
       </h2>
       <ol className="mt-1 list-decimal space-y-1 pl-6 text-lg print:text-base">
         {steps.map((s) => (
           <li key={s.step}>
-            <span className="font-bold">{s.text}</span>
-            <span className="block text-sm print:hidden">{s.reason}</span>
+            <span className="font-bold">{say(s.text)}</span>
+            <span className="block text-sm print:hidden">{say(s.reason)}</span>
           </li>
         ))}
       </ol>
-      {load.raisedForFiber ? (
-        <p className="font-bold">
-          Water raised to the {rules.fiberStartPercent} % mark so the fiber goes in over covered paddles: this load is thinner than the rest. Spray it over the
-          same area; it goes on wetter.
-        </p>
-      ) : null}
+      {load.raisedForFiber ? <p className="font-bold">{t("fm.load.raised", { pct: rules.fiberStartPercent })}</p> : null}
       <p className="mt-1">
-        Covers {fmt(load.areaSqFt)} ft² ({fmt(load.acres, 3)} ac)
         {load.stripFt !== null ? (
-          <>
-            {" "}
-            = a strip <span className="font-bold">{fmt(load.stripFt)} ft</span> long, about <span className="font-bold">{fmt(load.stripPaces ?? 0)} paces</span>
-          </>
-        ) : null}
-        .
+          <Trans
+            i18nKey="fm.load.coversStrip"
+            values={{ sqft: fmt(load.areaSqFt), ac: fmt(load.acres, 3), ft: fmt(load.stripFt), paces: fmt(load.stripPaces ?? 0) }}
+            components={{ b: <span className="font-bold" /> }}
+          />
+        ) : (
+          t("fm.load.covers", { sqft: fmt(load.areaSqFt), ac: fmt(load.acres, 3) })
+        )}
       </p>
       <p className={load.overRatingLb !== null ? "font-bold text-stop" : undefined}>
-        Loaded weight about {fmt(load.weightLb)} lb (water {fmt(load.fillToGal * card.waterLbPerGal)} lb + materials {fmt(materialsLb)} lb)
-        {carrierRatingLb !== null
-          ? load.overRatingLb !== null
-            ? `: over the rig's ${fmt(carrierRatingLb)} lb rating by ${fmt(load.overRatingLb)} lb.`
-            : ` of the rig's ${fmt(carrierRatingLb)} lb rating.`
-          : ". No carrier rating recorded for this rig."}
+        {t(carrierRatingLb === null ? "fm.load.weight" : load.overRatingLb !== null ? "fm.load.weightOver" : "fm.load.weightOf", {
+          lb: fmt(load.weightLb),
+          water: fmt(load.fillToGal * card.waterLbPerGal),
+          materials: fmt(materialsLb),
+          rating: fmt(carrierRatingLb ?? 0),
+          over: fmt(load.overRatingLb ?? 0),
+        })}
       </p>
     </section>
   );

@@ -1,3 +1,5 @@
+import { useTranslation } from "react-i18next";
+import { useSay } from "~/components/ui/say";
 import { useState } from "react";
 import { appliedRate } from "~/lib/field-math/applied-rate";
 import { fmt } from "~/lib/field-math/units";
@@ -28,6 +30,8 @@ export function RateMath() {
   const [rows, setRows] = useState<Row[]>(STARTER);
   const setRow = (key: number, change: Partial<Row>) => setRows(rows.map((r) => (r.key === key ? { ...r, ...change } : r)));
 
+  const { t } = useTranslation();
+  const say = useSay();
   const { result: r, errors } = tryFieldMath(appliedRate, {
     areaSqFt: toNumber(length) * toNumber(width),
     materials: rows.map((row) => ({ name: row.name, lb: toNumber(row.bags) * toNumber(row.bagLb), specLbPerAcre: toNumber(row.spec) })),
@@ -36,18 +40,18 @@ export function RateMath() {
   return (
     <div className="space-y-3">
       <fieldset className="space-y-3 rounded-md border-2 border-rule p-3">
-        <legend className="px-1 font-bold">Area sprayed, measured</legend>
-        <NumberField id="rate-length" label="Length" value={length} onChange={setLength} unit="ft" />
-        <NumberField id="rate-width" label="Width" value={width} onChange={setWidth} unit="ft" />
-        {errors.areaSqFt ? <p className="font-bold text-stop">{errors.areaSqFt}: give the length and the width in feet.</p> : null}
+        <legend className="px-1 font-bold">{t("fm.rate.area")}</legend>
+        <NumberField id="rate-length" label={t("fm.rate.length")} value={length} onChange={setLength} unit="ft" />
+        <NumberField id="rate-width" label={t("fm.rate.width")} value={width} onChange={setWidth} unit="ft" />
+        {errors.areaSqFt ? <p className="font-bold text-stop">{t("fm.rate.areaBad", { error: say(errors.areaSqFt) })}</p> : null}
       </fieldset>
       <fieldset className="space-y-3 rounded-md border-2 border-rule p-3">
-        <legend className="px-1 font-bold">What went into the tanks</legend>
-        {errors.materials ? <p className="font-bold text-stop">{errors.materials}</p> : null}
+        <legend className="px-1 font-bold">{t("fm.rate.went")}</legend>
+        {errors.materials ? <p className="font-bold text-stop">{say(errors.materials)}</p> : null}
         {rows.map((row, i) => (
           <div key={row.key} className="grid grid-cols-1 gap-2 border-b border-rule pb-3 sm:grid-cols-3">
             <label className="font-bold sm:col-span-3">
-              Material {i + 1}
+              {t("fm.rate.material", { n: i + 1 })}
               <input
                 value={row.name}
                 onChange={(e) => setRow(row.key, { name: e.target.value })}
@@ -56,7 +60,7 @@ export function RateMath() {
             </label>
             <NumberField
               id={`rate-spec-${row.key}`}
-              label="Spec rate"
+              label={t("fm.rate.spec")}
               value={row.spec}
               onChange={(v) => setRow(row.key, { spec: v })}
               unit="lb/ac"
@@ -64,34 +68,29 @@ export function RateMath() {
             />
             <NumberField
               id={`rate-bags-${row.key}`}
-              label="Bags used"
+              label={t("fm.rate.bags")}
               value={row.bags}
               onChange={(v) => setRow(row.key, { bags: v })}
-              unit="bags"
+              unit={t("fm.rate.bagsUnit")}
               error={errors[`materials.${i}.lb`]}
             />
-            <NumberField id={`rate-bag-${row.key}`} label="Bag size" value={row.bagLb} onChange={(v) => setRow(row.key, { bagLb: v })} unit="lb" />
+            <NumberField id={`rate-bag-${row.key}`} label={t("fm.rate.bagSize")} value={row.bagLb} onChange={(v) => setRow(row.key, { bagLb: v })} unit="lb" />
           </div>
         ))}
       </fieldset>
       {r ? (
         <ResultBox tone={r.materials.every((m) => Math.abs(m.differencePercent) <= ON_SPEC_PERCENT) ? "good" : "warn"}>
-          <p className="text-lg font-bold">
-            {fmt(toNumber(length) * toNumber(width))} ft² = {fmt(r.acres, 3)} ac sprayed
-          </p>
+          <p className="text-lg font-bold">{t("fm.rate.sprayed", { sqft: fmt(toNumber(length) * toNumber(width)), ac: fmt(r.acres, 3) })}</p>
           <ul className="mt-2 space-y-2">
             {r.materials.map((m) => (
               <li key={m.name} data-testid="applied-rate">
-                <span className="font-bold">{m.name}</span>: {fmt(m.lbPerAcre)} lb/ac ({fmt(m.kgPerHa)} kg/ha) against {fmt(m.specLbPerAcre)} lb/ac —{" "}
+                <span className="font-bold">{m.name}</span>
+                {t("fm.rate.against", { rate: fmt(m.lbPerAcre), kg: fmt(m.kgPerHa), spec: fmt(m.specLbPerAcre) })}
                 <span className="font-bold">
                   {m.differencePercent >= 0 ? "+" : "−"}
                   {fmt(Math.abs(m.differencePercent), 1)} %
                 </span>
-                {Math.abs(m.differencePercent) > ON_SPEC_PERCENT
-                  ? m.differencePercent < 0
-                    ? " (light: loads covered more ground than planned)"
-                    : " (heavy: loads covered less ground)"
-                  : " (on spec)"}
+                {Math.abs(m.differencePercent) > ON_SPEC_PERCENT ? (m.differencePercent < 0 ? t("fm.rate.light") : t("fm.rate.heavy")) : t("fm.rate.onSpec")}
               </li>
             ))}
           </ul>

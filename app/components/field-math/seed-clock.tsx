@@ -1,4 +1,5 @@
 import { useEffect, useState } from "react";
+import { useTranslation } from "react-i18next";
 import { Link, useLocation } from "react-router";
 import { SEED_CLOCK_CHANGED as CHANGED, SEED_CLOCK_KEY as KEY, seedClock } from "~/lib/field-math/seed-clock";
 
@@ -51,6 +52,7 @@ function useSeedClock() {
 /** On the load card: start the clock when the seed goes in; while it runs, the time left and a stop that asks first. */
 export function SeedClock({ limitMinutes, label }: { limitMinutes: number; label: string }) {
   const { running, now, start, stop } = useSeedClock();
+  const { t } = useTranslation();
   const [confirming, setConfirming] = useState(false);
   // Arriving from the bar on another screen, the clock comes into view, not the top of the form.
   const { hash } = useLocation();
@@ -67,7 +69,7 @@ export function SeedClock({ limitMinutes, label }: { limitMinutes: number; label
         onClick={() => start(limitMinutes, label)}
         className="no-print min-h-16 w-full rounded-lg border-4 border-ink bg-caution px-3 text-xl font-bold text-ink"
       >
-        Seed is in: start the {limitMinutes}-minute clock
+        {t("fm.seed.start", { min: limitMinutes })}
       </button>
     );
   }
@@ -75,18 +77,14 @@ export function SeedClock({ limitMinutes, label }: { limitMinutes: number; label
   return (
     <section
       id="seed-clock"
-      aria-label="Seed clock"
+      aria-label={t("fm.seed.label")}
       className={`no-print rounded-lg border-4 p-3 ${clock.over ? "border-stop bg-paper text-stop" : "border-ink bg-caution text-ink"}`}
     >
-      <p className="text-lg font-bold">Seed clock · {running.label}</p>
+      <p className="text-lg font-bold">{t("fm.seed.title", { label: running.label })}</p>
       <p className="text-5xl font-bold tabular-nums" data-testid="seed-clock">
-        {clock.over ? `Over by ${clock.text}` : clock.text}
+        {clock.over ? t("fm.seed.overBy", { time: clock.text }) : clock.text}
       </p>
-      <p className="font-bold">
-        {clock.over
-          ? "Spray this load now. Next time, put the seed in closer to spraying."
-          : `Spray before it reaches 0:00 (${running.limitMinutes} minutes from seed in).`}
-      </p>
+      <p className="font-bold">{clock.over ? t("fm.seed.sprayNow") : t("fm.seed.sprayBefore", { min: running.limitMinutes })}</p>
       {confirming ? (
         <div className="mt-2 grid grid-cols-2 gap-2">
           <button
@@ -97,10 +95,10 @@ export function SeedClock({ limitMinutes, label }: { limitMinutes: number; label
             }}
             className="min-h-14 rounded-lg bg-go text-lg font-bold text-white"
           >
-            Yes, load sprayed
+            {t("fm.seed.yes")}
           </button>
           <button type="button" onClick={() => setConfirming(false)} className="min-h-14 rounded-lg border-2 border-ink bg-paper text-lg font-bold text-ink">
-            Keep it running
+            {t("fm.seed.keep")}
           </button>
         </div>
       ) : (
@@ -109,7 +107,7 @@ export function SeedClock({ limitMinutes, label }: { limitMinutes: number; label
           onClick={() => setConfirming(true)}
           className="mt-2 min-h-14 w-full rounded-lg border-2 border-ink bg-paper text-lg font-bold text-ink"
         >
-          Load sprayed: stop the clock
+          {t("fm.seed.stop")}
         </button>
       )}
     </section>
@@ -119,6 +117,7 @@ export function SeedClock({ limitMinutes, label }: { limitMinutes: number; label
 /** On every other screen while the clock runs (a guide opened mid-load included): the time left, one tap from the card. */
 export function SeedClockBar() {
   const { running, now } = useSeedClock();
+  const { t } = useTranslation();
   const onCard = useLocation().pathname === "/field-math/load";
   if (!running || onCard) return null;
   const clock = seedClock(running.startedAt, now, running.limitMinutes);
@@ -127,7 +126,7 @@ export function SeedClockBar() {
       className={`no-print border-b-4 px-3 py-1 text-center text-lg font-bold ${clock.over ? "border-stop bg-paper text-stop" : "border-ink bg-caution text-ink"}`}
     >
       <Link to="/field-math/load#seed-clock" className="inline-flex min-h-12 items-center text-inherit" data-testid="seed-clock-bar">
-        Seed clock · {running.label}: {clock.over ? `over by ${clock.text}` : `${clock.text} left`}
+        {t(clock.over ? "fm.seed.barOver" : "fm.seed.bar", { label: running.label, time: clock.text })}
       </Link>
     </p>
   );

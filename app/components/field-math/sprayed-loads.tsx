@@ -1,4 +1,6 @@
 import { useEffect, useState } from "react";
+import { useTranslation } from "react-i18next";
+import { useSay } from "~/components/ui/say";
 import type { CardLoad } from "~/lib/field-math/load-card";
 import { fmt } from "~/lib/field-math/units";
 import { startOfTodayIn } from "~/lib/format";
@@ -17,6 +19,8 @@ const acres = (sqFt: number) => `${fmt(sqFt / 43_560, 2)} ac`;
  */
 export function SprayedLoads({ job, rigCode, loads }: { job: JobSummary; rigCode: string | null; loads: CardLoad[] }) {
   const times = useTimes();
+  const { t } = useTranslation();
+  const say = useSay();
   const [marked, setMarked] = useState<KeptLoad[]>([]);
   const [asking, setAsking] = useState(false);
   const read = () => {
@@ -70,37 +74,37 @@ export function SprayedLoads({ job, rigCode, loads }: { job: JobSummary; rigCode
   return (
     <section aria-labelledby="sprayed-h" className="no-print mt-4 rounded-lg border-2 border-ink bg-paper p-4">
       <h2 id="sprayed-h" className="text-xl font-bold">
-        Loads sprayed on {job.name} today
+        {t("fm.sprayed.title", { job: job.name })}
       </h2>
       <button type="button" disabled={resting} onClick={() => void mark()} className="mt-3 min-h-16 w-full rounded-md bg-go px-4 text-lg font-bold text-white">
-        {allDone ? `Another load sprayed (${acres(next.areaSqFt)})` : `Load ${marked.length + 1} sprayed (${acres(next.areaSqFt)})`}
+        {allDone ? t("fm.sprayed.another", { area: acres(next.areaSqFt) }) : t("fm.sprayed.next", { n: marked.length + 1, area: acres(next.areaSqFt) })}
       </button>
       {marked.length ? (
         <ul className="mt-3 space-y-1">
           {marked.map((l) => (
             <li key={l.id}>
-              Load {l.number}: {acres(l.areaSqFt)} at {times.time(l.sprayedAt)} ·{" "}
-              {l.refused ? <span className="font-bold text-stop">{l.refused}</span> : l.sent ? "saved" : "kept on this phone, sent when there is signal"}
+              {t("fm.sprayed.line", { n: l.number, area: acres(l.areaSqFt), time: times.time(l.sprayedAt) })}
+              {l.refused ? <span className="font-bold text-stop">{say(l.refused)}</span> : l.sent ? t("fm.sprayed.saved") : t("fm.sprayed.kept")}
             </li>
           ))}
         </ul>
       ) : (
-        <p className="mt-2">None marked yet. Tap once each load is sprayed out: the job&apos;s progress counts them.</p>
+        <p className="mt-2">{t("fm.sprayed.none")}</p>
       )}
       {last && !last.refused ? (
         asking ? (
           <div className="mt-3 space-y-2 rounded-md border-2 border-stop p-3">
-            <p className="font-bold">Take back load {last.number}? It no longer counts on the job.</p>
+            <p className="font-bold">{t("fm.sprayed.ask", { n: last.number })}</p>
             <button type="button" onClick={() => void takeBack(last.id)} className="min-h-12 w-full rounded-md bg-stop px-4 font-bold text-white">
-              Yes, take back load {last.number}
+              {t("fm.sprayed.yes", { n: last.number })}
             </button>
             <button type="button" onClick={() => setAsking(false)} className="min-h-12 w-full rounded-md border-2 border-ink px-4 font-bold">
-              Keep it
+              {t("fm.sprayed.keep")}
             </button>
           </div>
         ) : (
           <button type="button" onClick={() => setAsking(true)} className="mt-3 min-h-12 w-full rounded-md border-2 border-ink px-4 font-bold">
-            Marked by mistake? Take back load {last.number}
+            {t("fm.sprayed.mistake", { n: last.number })}
           </button>
         )
       ) : null}

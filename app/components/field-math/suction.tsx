@@ -1,4 +1,6 @@
 import { useState } from "react";
+import { useTranslation } from "react-i18next";
+import { useSay } from "~/components/ui/say";
 import { suctionCheck } from "~/lib/field-math/suction";
 import { fmt, ftToM } from "~/lib/field-math/units";
 import { NumberField, ResultBox, SourceNote, toNumber, tryFieldMath } from "./kit";
@@ -32,81 +34,78 @@ export function SuctionMath({ rig }: { rig?: RigSpecs; compact?: boolean }) {
   const tone = r?.verdict === "enough" ? "good" : r?.verdict === "marginal" ? "warn" : "bad";
   const altFt = toNumber(altitude);
   const tF = toNumber(temp);
+  const { t } = useTranslation();
+  const say = useSay();
   return (
     <div className="space-y-3">
       <NumberField
         id="suction-altitude"
-        label="Elevation of this site"
+        label={t("fm.suction.elevation")}
         value={altitude}
         onChange={setAltitude}
         unit="ft"
         beside={
           site && altFt === site.elevationFt
-            ? `${fmt(ftToM(altFt))} m, from the job: ${site.name}.`
+            ? t("fm.suction.fromJob", { m: fmt(ftToM(altFt)), job: site.name })
             : Number.isFinite(altFt)
-              ? `${fmt(ftToM(altFt))} m`
+              ? t("fm.suction.meters", { m: fmt(ftToM(altFt)) })
               : rig
-                ? `The yard is at ${fmt(rig.yardElevationFt)} ft; this site may not be.`
+                ? t("fm.suction.yard", { ft: fmt(rig.yardElevationFt) })
                 : undefined
         }
         error={errorIf(altitude, errors.altitudeFt)}
       />
       <NumberField
         id="suction-temp"
-        label="Water temperature"
+        label={t("fm.suction.temp")}
         value={temp}
         onChange={setTemp}
         unit="°F"
-        beside={Number.isFinite(tF) ? `${fmt(((tF - 32) * 5) / 9, 1)} °C` : "Warm water boils off sooner in the suction line."}
+        beside={Number.isFinite(tF) ? t("fm.suction.celsius", { c: fmt(((tF - 32) * 5) / 9, 1) }) : t("fm.suction.warm")}
         error={errorIf(temp, errors.waterTempF)}
       />
-      <NumberField
-        id="suction-lift"
-        label="Lift: water surface below the pump inlet (negative if above)"
-        value={lift}
-        onChange={setLift}
-        unit="ft"
-        error={errorIf(lift, errors.liftFt)}
-      />
+      <NumberField id="suction-lift" label={t("fm.suction.lift")} value={lift} onChange={setLift} unit="ft" error={errorIf(lift, errors.liftFt)} />
       <NumberField
         id="suction-loss"
-        label="Loss in the suction hose and strainer"
+        label={t("fm.suction.loss")}
         value={loss}
         onChange={setLoss}
         unit="ft"
-        beside="About 2 ft for a short hose and a clean strainer (common practice)."
+        beside={t("fm.suction.lossHint")}
         error={errorIf(loss, errors.suctionLossFt)}
       />
       <NumberField
         id="suction-required"
-        label="How much suction the pump needs (from its curve)"
+        label={t("fm.suction.required")}
         value={required}
         onChange={setRequired}
         unit="ft"
-        beside={rig?.pumpNpshrFt != null ? `From ${rig.code}'s record.` : "Read it off the pump's curve at your flow, or ask the shop."}
+        beside={rig?.pumpNpshrFt != null ? t("fm.suction.fromRecord", { code: rig.code }) : t("fm.suction.readCurve")}
         error={errorIf(required, errors.npshRequiredFt)}
       />
-      {!typed ? <p className="font-bold">Fill in every figure for this site to see whether the pump will hold prime.</p> : null}
+      {!typed ? <p className="font-bold">{t("fm.suction.fillIn")}</p> : null}
       {r ? (
         <ResultBox tone={tone}>
           <p className="text-xl font-bold">
-            {r.verdict === "enough" ? "Enough suction head" : r.verdict === "marginal" ? "Marginal: little to spare" : "Will cavitate or lose prime"}
+            {r.verdict === "enough" ? t("fm.suction.enough") : r.verdict === "marginal" ? t("fm.suction.marginal") : t("fm.suction.cavitate")}
           </p>
           <p className="text-lg">
-            The pump gets {fmt(r.npshAvailableFt, 1)} ft ({fmt(ftToM(r.npshAvailableFt), 1)} m) of suction; it needs {fmt(r.npshRequiredFt, 1)} ft plus{" "}
-            {fmt(r.marginFt)} ft to spare.
+            {t("fm.suction.gets", {
+              ft: fmt(r.npshAvailableFt, 1),
+              m: fmt(ftToM(r.npshAvailableFt), 1),
+              need: fmt(r.npshRequiredFt, 1),
+              margin: fmt(r.marginFt),
+            })}
           </p>
-          <p>
-            Air pressure {fmt(r.atmosphereFt, 1)} ft − vapor {fmt(r.vapourFt, 2)} ft − lift {lift} ft − loss {loss} ft.
-          </p>
+          <p>{t("fm.suction.sum", { air: fmt(r.atmosphereFt, 1), vapor: fmt(r.vapourFt, 2), lift, loss })}</p>
           {r.advice.length ? (
             <ul className="mt-2 list-disc pl-6 text-lg">
               {r.advice.map((a) => (
-                <li key={a}>{a}</li>
+                <li key={a}>{say(a)}</li>
               ))}
             </ul>
           ) : null}
-          {r.liftNote ? <p className="mt-2 font-bold">{r.liftNote}</p> : null}
+          {r.liftNote ? <p className="mt-2 font-bold">{say(r.liftNote)}</p> : null}
           <SourceNote>
             Atmosphere: U.S. Standard Atmosphere 1976. Vapor pressure: {r.vapourSource}. The pump's need is its NPSH required (ANSI/HI 9.6.1). Heads: 2.31 ft of
             water per psi (NDSU AE1057). The 3 ft margin is common practice.

@@ -1,5 +1,7 @@
 import { useState } from "react";
+import { Trans, useTranslation } from "react-i18next";
 import { Link } from "react-router";
+import { useSay } from "~/components/ui/say";
 import { MAX_PASSES, tipChoice } from "~/lib/field-math/tip-choice";
 import { fmt } from "~/lib/field-math/units";
 import { NumberField, ResultBox, SourceNote, toNumber, tryFieldMath } from "./kit";
@@ -7,6 +9,8 @@ import type { RigSpecs } from "~/lib/rigs/specs";
 
 /** Which of the rig's tips covers the slope, in how many passes and from where, with the hose in use. */
 export function TipMath({ rig, compact = false }: { rig?: RigSpecs; compact?: boolean }) {
+  const { t } = useTranslation();
+  const say = useSay();
   const [distance, setDistance] = useState("60");
   const [width, setWidth] = useState("150");
   const [hose, setHose] = useState(String(rig?.hoseLengthFt ?? 200));
@@ -30,10 +34,10 @@ export function TipMath({ rig, compact = false }: { rig?: RigSpecs; compact?: bo
   if (!tips.length) {
     return (
       <ResultBox tone="warn">
-        <p className="font-bold">{rig ? `${rig.code} has no nozzle tips recorded.` : "Choose a rig to see its tips."}</p>
+        <p className="font-bold">{rig ? t("fm.tip.noTips", { code: rig.code }) : t("fm.tip.chooseRig")}</p>
         {rig ? (
           <p>
-            Whoever keeps the rig records can add each tip&apos;s rated reach and pattern width on <Link to={`/rigs/${rig.code}`}>the rig&apos;s page</Link>.
+            <Trans i18nKey="fm.tip.addTips" components={{ a: <Link to={`/rigs/${rig.code}`} /> }} />
           </p>
         ) : null}
       </ResultBox>
@@ -44,92 +48,85 @@ export function TipMath({ rig, compact = false }: { rig?: RigSpecs; compact?: bo
       <div className="no-print space-y-3">
         <NumberField
           id="tip-distance"
-          label="Distance to the far edge"
+          label={t("fm.tip.distance")}
           value={distance}
           onChange={setDistance}
           unit="ft"
-          beside="From where the sprayer stands."
+          beside={t("fm.tip.distanceHint")}
           error={errors.distanceFt}
         />
         <NumberField
           id="tip-width"
-          label="Length of the strip"
+          label={t("fm.tip.length")}
           value={width}
           onChange={setWidth}
           unit="ft"
-          beside="Along the edge you walk."
+          beside={t("fm.tip.lengthHint")}
           error={errors.widthFt}
         />
-        <NumberField id="tip-hose" label="Hose in use" value={hose} onChange={setHose} unit="ft" error={errors.hoseLengthFt} />
-        {compact ? null : <NumberField id="tip-diameter" label="Hose diameter" value={diameter} onChange={setDiameter} unit="in" error={errors.diameterIn} />}
+        <NumberField id="tip-hose" label={t("fm.tip.hose")} value={hose} onChange={setHose} unit="ft" error={errors.hoseLengthFt} />
+        {compact ? null : (
+          <NumberField id="tip-diameter" label={t("fm.tip.diameter")} value={diameter} onChange={setDiameter} unit="in" error={errors.diameterIn} />
+        )}
         <NumberField
           id="tip-pump"
-          label="Pump pressure"
+          label={t("fm.tip.pump")}
           value={pump}
           onChange={setPump}
           unit="psi"
-          beside={rig?.pumpRatedPsi != null ? "The pump's rated pressure, from the rig's record." : "Give the pump's rated pressure (from its plate or curve)."}
+          beside={rig?.pumpRatedPsi != null ? t("fm.tip.pumpRated") : t("fm.tip.pumpGive")}
           error={errors.pumpPsi}
         />
         <NumberField
           id="tip-flow"
-          label="Flow at that pressure, no hose"
+          label={t("fm.tip.flow")}
           value={flow}
           onChange={setFlow}
           unit="gpm"
-          beside={
-            rig?.pumpRatedGpm != null ? "The pump's rated flow; the hose cuts it, worked out below." : "Give the pump's rated flow (from its plate or curve)."
-          }
+          beside={rig?.pumpRatedGpm != null ? t("fm.tip.flowRated") : t("fm.tip.flowGive")}
           error={errors.flowGpm}
         />
-        <NumberField
-          id="tip-rise"
-          label="Rise from pump to nozzle"
-          value={rise}
-          onChange={setRise}
-          unit="ft"
-          beside="Uphill costs pressure; 0 on level ground."
-          error={errors.riseFt}
-        />
+        <NumberField id="tip-rise" label={t("fm.tip.rise")} value={rise} onChange={setRise} unit="ft" beside={t("fm.tip.riseHint")} error={errors.riseFt} />
       </div>
       {r ? (
         <ResultBox tone={r.best?.reaches ? "good" : "warn"}>
           {r.best ? (
             <>
               <p className="text-2xl font-bold" data-testid="tip-choice">
-                {r.best.name}: {r.best.passes === 1 ? "one pass" : `${r.best.passes} passes`}
+                {r.best.passes === 1 ? t("fm.tip.onePass", { name: r.best.name }) : t("fm.tip.passes", { name: r.best.name, count: r.best.passes })}
               </p>
-              <p>
-                Reaches about {fmt(r.best.reachFt)} ft with this hose (rated {fmt(r.best.ratedReachFt)} ft); about {r.best.sweeps} sweeps of its{" "}
-                {fmt(r.best.widthFt)} ft pattern along the strip.
-              </p>
+              <p>{t("fm.tip.reaches", { reach: fmt(r.best.reachFt), rated: fmt(r.best.ratedReachFt), sweeps: r.best.sweeps, width: fmt(r.best.widthFt) })}</p>
               <ol className="mt-1 list-decimal pl-6">
                 {r.best.from.map((f) => (
-                  <li key={f}>{f}</li>
+                  <li key={f}>{say(f)}</li>
                 ))}
               </ol>
             </>
           ) : r.tooLittlePressure ? (
             <p className="text-xl font-bold" data-testid="tip-choice">
-              Only about {fmt(r.nozzlePsi)} psi reaches the nozzle: too little for a stream worth counting on. Take off hose you do not need or move the rig
-              closer.
+              {t("fm.tip.tooLittle", { psi: fmt(r.nozzlePsi) })}
             </p>
           ) : (
             <p className="text-xl font-bold" data-testid="tip-choice">
-              No tip on this rig covers {fmt(toNumber(distance))} ft in {MAX_PASSES} passes or fewer. Move the rig closer or spray from the far side too.
+              {t("fm.tip.noneCovers", { ft: fmt(toNumber(distance)), max: MAX_PASSES })}
             </p>
           )}
           <p className={`mt-2 ${r.tooLittlePressure ? "hidden" : ""}`}>
-            With this hose the flow settles near {fmt(r.flowGpm)} gpm and {fmt(r.nozzlePsi)} psi at the nozzle: the hose costs {fmt(r.frictionPsi, 1)} psi
-            {r.risePsi ? ` and the rise ${fmt(r.risePsi, 1)} psi` : ""}, about {fmt(r.reachLossFt)} ft of reach off every tip.
+            {t(r.risePsi ? "fm.tip.settlesRise" : "fm.tip.settles", {
+              gpm: fmt(r.flowGpm),
+              psi: fmt(r.nozzlePsi),
+              friction: fmt(r.frictionPsi, 1),
+              rise: fmt(r.risePsi ?? 0, 1),
+              loss: fmt(r.reachLossFt),
+            })}
           </p>
           <table className="mt-2 w-full border-collapse text-left">
-            <caption className="sr-only">Every tip on this rig</caption>
+            <caption className="sr-only">{t("fm.tip.every")}</caption>
             <thead>
               <tr className="border-b-2 border-ink">
-                <th scope="col">Tip</th>
-                <th scope="col">Reach</th>
-                <th scope="col">Passes</th>
+                <th scope="col">{t("fm.tip.colTip")}</th>
+                <th scope="col">{t("fm.tip.colReach")}</th>
+                <th scope="col">{t("fm.tip.colPasses")}</th>
               </tr>
             </thead>
             <tbody>
@@ -137,14 +134,14 @@ export function TipMath({ rig, compact = false }: { rig?: RigSpecs; compact?: bo
                 <tr key={o.name} className="border-b border-rule">
                   <td className="font-bold">{o.name}</td>
                   <td>
-                    {r.tooLittlePressure ? "—" : `${fmt(o.reachFt)} ft`} <span className="text-sm">(rated {fmt(o.ratedReachFt)})</span>
+                    {r.tooLittlePressure ? "—" : `${fmt(o.reachFt)} ft`} <span className="text-sm">{t("fm.tip.rated", { ft: fmt(o.ratedReachFt) })}</span>
                   </td>
-                  <td>{o.workable ? o.passes : "won't reach"}</td>
+                  <td>{o.workable ? o.passes : t("fm.tip.wontReach")}</td>
                 </tr>
               ))}
             </tbody>
           </table>
-          <p className="mt-2 text-sm">{r.note}</p>
+          <p className="mt-2 text-sm">{say(r.note)}</p>
           <SourceNote>
             Each psi lost before the nozzle costs about ½ ft of reach: the slope of S = NP/2 + 26 ft (Fire Engineering, Aug 1960, citing Fire Service Hydraulics
             p. 171). Taken as given: rated reach is the maker&apos;s figure at the pump&apos;s pressure with no hose, each tip passes about the rated flow

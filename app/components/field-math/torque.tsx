@@ -1,4 +1,5 @@
 import { useState } from "react";
+import { useTranslation } from "react-i18next";
 import { boltTorque, convertTorque } from "~/lib/field-math/torque";
 import { fmt } from "~/lib/field-math/units";
 import { NumberField, ResultBox, SourceNote, toNumber, tryFieldMath } from "./kit";
@@ -6,6 +7,7 @@ import type { RigSpecs } from "~/lib/rigs/specs";
 
 /** ft·lb ↔ N·m, the rig's own torque figures, and an estimate for when no figure is given. */
 export function TorqueMath({ rig, compact = false }: { rig?: RigSpecs; compact?: boolean }) {
+  const { t } = useTranslation();
   const [value, setValue] = useState("25");
   const [unit, setUnit] = useState<"ft-lb" | "N-m">("ft-lb");
   const [bolt, setBolt] = useState({ diameterIn: "0.5", threadsPerInch: "13", grade: "5", condition: "dry" });
@@ -20,7 +22,7 @@ export function TorqueMath({ rig, compact = false }: { rig?: RigSpecs; compact?:
     <div className="space-y-3">
       {rig?.torqueSpecs.length ? (
         <table className="w-full text-left">
-          <caption className="text-left font-bold">{rig.code}: your company's figures</caption>
+          <caption className="text-left font-bold">{t("fm.torque.company", { code: rig.code })}</caption>
           <tbody>
             {rig.torqueSpecs.map((s) => (
               <tr key={s.part} className="border-b border-rule">
@@ -35,12 +37,12 @@ export function TorqueMath({ rig, compact = false }: { rig?: RigSpecs; compact?:
           </tbody>
         </table>
       ) : (
-        <p>No torque figures recorded for this rig. The maker's manual has them; an admin can add them to the rig.</p>
+        <p>{t("fm.torque.none")}</p>
       )}
       <div className="grid grid-cols-[1fr_auto] items-end gap-2">
-        <NumberField id="torque-value" label="Convert" value={value} onChange={setValue} unit="" error={converted.errors.value} />
+        <NumberField id="torque-value" label={t("fm.torque.convert")} value={value} onChange={setValue} unit="" error={converted.errors.value} />
         <select
-          aria-label="Unit"
+          aria-label={t("fm.torque.unit")}
           value={unit}
           onChange={(e) => setUnit(e.target.value as "ft-lb")}
           className="mb-[2px] min-h-14 rounded-md border-2 border-ink bg-paper px-2 text-lg"
@@ -59,11 +61,11 @@ export function TorqueMath({ rig, compact = false }: { rig?: RigSpecs; compact?:
       ) : null}
       {compact ? null : (
         <details className="rounded-md border-2 border-rule bg-paper p-3">
-          <summary className="min-h-12 cursor-pointer py-2 font-bold">No figure from the maker? Estimate for a steel bolt</summary>
+          <summary className="min-h-12 cursor-pointer py-2 font-bold">{t("fm.torque.estimate")}</summary>
           <div className="mt-2 grid grid-cols-2 gap-3">
             <NumberField
               id="bolt-d"
-              label="Diameter"
+              label={t("fm.torque.diameter")}
               value={bolt.diameterIn}
               onChange={(v) => setBolt({ ...bolt, diameterIn: v })}
               unit="in"
@@ -71,14 +73,14 @@ export function TorqueMath({ rig, compact = false }: { rig?: RigSpecs; compact?:
             />
             <NumberField
               id="bolt-n"
-              label="Threads per inch"
+              label={t("fm.torque.tpi")}
               value={bolt.threadsPerInch}
               onChange={(v) => setBolt({ ...bolt, threadsPerInch: v })}
               unit="TPI"
               error={estimate.errors.threadsPerInch}
             />
             <label className="font-bold">
-              SAE grade
+              {t("fm.torque.grade")}
               <select
                 value={bolt.grade}
                 onChange={(e) => setBolt({ ...bolt, grade: e.target.value })}
@@ -89,21 +91,19 @@ export function TorqueMath({ rig, compact = false }: { rig?: RigSpecs; compact?:
               </select>
             </label>
             <label className="font-bold">
-              Threads
+              {t("fm.torque.threads")}
               <select
                 value={bolt.condition}
                 onChange={(e) => setBolt({ ...bolt, condition: e.target.value })}
                 className="mt-1 block min-h-14 w-full rounded-md border-2 border-ink bg-paper px-2"
               >
-                <option value="dry">Dry</option>
-                <option value="lubricated">Lubricated</option>
+                <option value="dry">{t("fm.torque.dry")}</option>
+                <option value="lubricated">{t("fm.torque.lubricated")}</option>
               </select>
             </label>
           </div>
           {estimate.result ? (
-            <p className="mt-2 text-lg font-bold">
-              About {fmt(estimate.result.ftLb)} ft·lb ({fmt(estimate.result.nm)} N·m)
-            </p>
+            <p className="mt-2 text-lg font-bold">{t("fm.torque.about", { ftlb: fmt(estimate.result.ftLb), nm: fmt(estimate.result.nm) })}</p>
           ) : null}
           <SourceNote>
             T = K·D·P with P = 75 % of proof load (SAE J429), K 0.20 dry / 0.15 lubricated. Charts with other K differ: never mix charts. The maker's figure

@@ -1,4 +1,5 @@
 import { useEffect, useState } from "react";
+import { useTranslation } from "react-i18next";
 import { FiberCheckMath } from "./fiber-check";
 import { HoseMath } from "./hose";
 import { LoadCardMath } from "./load-card";
@@ -17,19 +18,21 @@ function LoadCardWidget({ rig, compact }: { rig: RigSpecs; compact?: boolean }) 
 }
 
 const WIDGETS = {
-  "hose-friction": { title: "Hose friction for this rig", Screen: HoseMath },
-  "suction-head": { title: "Suction check for this rig", Screen: SuctionMath },
-  "load-sheet": { title: "Load card for this rig", Screen: LoadCardWidget },
-  "fiber-check": { title: "What went into this load", Screen: FiberCheckMath },
-  torque: { title: "Torque figures for this rig", Screen: TorqueMath },
-  "tip-choice": { title: "Tips on this rig for the distance", Screen: TipMath },
+  "hose-friction": { Screen: HoseMath },
+  "suction-head": { Screen: SuctionMath },
+  "load-sheet": { Screen: LoadCardWidget },
+  "fiber-check": { Screen: FiberCheckMath },
+  torque: { Screen: TorqueMath },
+  "tip-choice": { Screen: TipMath },
 } as const;
 
 /** A field-math calculator inside a guide step, filled from the case's rig. */
 export function FieldMathWidget({ widget: name, rig }: { widget: string; rig: RigSpecs }) {
+  const { t } = useTranslation();
   const widget = WIDGETS[name as keyof typeof WIDGETS];
   if (!widget) return null;
-  const { Screen, title } = widget;
+  const { Screen } = widget;
+  const title = t(`fm.widgets.${name as keyof typeof WIDGETS}`);
   return (
     <section aria-label={title} className="rounded-lg border-2 border-ink bg-field p-3">
       <h2 className="mb-2 text-lg font-bold">{title}</h2>
