@@ -1,3 +1,7 @@
+import { useTranslation } from "react-i18next";
+import { useSay } from "~/components/ui/say";
+import { i18nFor } from "~/i18n";
+import { localizeGuide } from "~/lib/guides/translations";
 import { useEffect, useState } from "react";
 import { data, Form, Link, redirect, useNavigation } from "react-router";
 import { serverOrPhoneAction, serverOrPhoneRig } from "~/components/offline/server-or-phone";
@@ -9,7 +13,7 @@ import { guideKind, inDayOrder } from "~/lib/guides/kinds";
 import { readingProblem } from "~/lib/rigs/service";
 import { cardsOnPhone, lastHoursOnPhone, loadKit, startOnPhone, withWalksOnPhone } from "~/lib/walk/kept";
 import { startOfTodayIn } from "~/lib/format";
-import { cardStateLabel } from "~/lib/vocabulary";
+
 import { cardsOnRig, startOfToday, type CardDone } from "~/services/cards.server";
 import { openWalksOn, startCase } from "~/services/cases.server";
 import { requireUser } from "~/services/guards.server";
@@ -22,9 +26,16 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
   const user = await requireUser({ request, context });
   const rig = await findRig(user, params.code);
   const [cards, today, openWalks] = await Promise.all([rigCards(user), cardsOnRig(user, rig.id, { since: startOfToday(user) }), openWalksOn(user, rig.id)]);
+  const lang = user.language ?? "en";
   return {
     rig: { code: rig.code, name: rig.name, retired: rig.retired, hasHourMeter: rig.hasHourMeter, engineHours: rig.engineHours },
-    cards: inDayOrder(cards.map((c) => ({ slug: c.slug, title: c.title, summary: c.definition.summary }))),
+    // The title matches today's cards (stored as the guide names them); the label is in the reader's language.
+    cards: inDayOrder(
+      cards.map((c) => {
+        const shown = localizeGuide(c.definition, lang).guide;
+        return { slug: c.slug, title: c.title, label: lang === "en" ? c.title : shown.title, summary: shown.summary };
+      }),
+    ),
     today,
     openWalks: openWalks.map((w) => ({ ...w, onPhoneOnly: false })),
     fromPhone: false,
@@ -38,7 +49,9 @@ export async function clientLoader({ params, serverLoader }: Route.ClientLoaderA
   const code = params.code.toUpperCase();
   const page = await serverOrPhoneRig(serverLoader, code, (rig, kit) => ({
     rig: { code: rig.code, name: rig.name, retired: false, hasHourMeter: rig.hasHourMeter, engineHours: rig.engineHours },
-    cards: inDayOrder(kit.guides.filter((g) => guideKind(g.definition) === "card").map((g) => ({ slug: g.slug, title: g.title, summary: g.summary }))),
+    cards: inDayOrder(
+      kit.guides.filter((g) => guideKind(g.definition) === "card").map((g) => ({ slug: g.slug, title: g.title, label: g.title, summary: g.summary })),
+    ),
     today: [] as CardDone[],
     openWalks: [],
     fromPhone: true,
@@ -73,7 +86,7 @@ export async function action({ request, params, context }: Route.ActionArgs) {
 
 /** With no signal the phone starts the card itself, with the reading, and sends it later. */
 export function clientAction({ request, params, serverAction }: Route.ClientActionArgs) {
-  const noKit = { result: null, problem: "No signal, and this phone has not kept the cards yet. Open Tankside once where there is signal." };
+  const noKit = { result: null, problem: i18nFor(document.documentElement.lang === "es" ? "es" : "en").t("cards.noKit") };
   return serverOrPhoneAction(
     request,
     serverAction,
@@ -114,27 +127,32 @@ export default function RigCards({ loaderData, actionData }: Route.ComponentProp
   const navigation = useNavigation();
   const opening = navigation.state !== "idle" ? (navigation.formData?.get("cardSlug")?.toString() ?? "") : null;
   const hoursError = actionData?.result?.error?.engineHours?.[0];
+  const { t } = useTranslation();
+  const say = useSay();
+  const label = new Map(cards.map((c) => [c.title, c.label]));
+  const state = (outcome: CardDone["outcome"], gaps: number | null) =>
+    outcome === "fixed" && gaps ? t("cards.gaps", { count: gaps }) : t(`cardOutcomes.${outcome}`);
   const problem = actionData?.problem ?? actionData?.result?.error?.cardSlug?.[0] ?? null;
 
   return (
     <>
-      <h1 className="text-3xl font-bold">Rig cards · {rig.code}</h1>
-      <p className="mt-1 text-lg">{rig.name}. The routine parts of the day, one item at a time.</p>
+      <h1 className="text-3xl font-bold">{t("cards.title", { code: rig.code })}</h1>
+      <p className="mt-1 text-lg">{t("cards.lead", { name: rig.name })}</p>
       {problem ? (
         <p role="alert" className="mt-3 rounded-md border-2 border-stop bg-paper px-3 py-2 text-lg font-bold text-stop">
-          {problem}
+          {say(problem)}
         </p>
       ) : null}
       <OpenWalks walks={openWalks} />
       {rig.retired ? (
-        <p className="mt-3 font-bold text-stop">This rig is retired; cards cannot be started on it.</p>
+        <p className="mt-3 font-bold text-stop">{t("cards.retired")}</p>
       ) : (
         <Form method="post" className="mt-4 space-y-4">
           <input type="hidden" name="caseId" value={caseId} />
           {rig.hasHourMeter ? (
             <label className="block text-lg font-bold">
-              Hour meter now
-              <span className="block text-base font-normal">Last reading {rig.engineHours.toLocaleString("en-US")} h. Each card records it as it starts.</span>
+              {t("cards.hours")}
+              <span className="block text-base font-normal">{t("cards.hoursLead", { h: times.number(rig.engineHours, 1) })}</span>
               <input
                 name="engineHours"
                 inputMode="decimal"
@@ -146,12 +164,12 @@ export default function RigCards({ loaderData, actionData }: Route.ComponentProp
               />
               {hoursError ? (
                 <span id="hours-error" role="alert" className="mt-1 block font-bold text-stop">
-                  {hoursError}
+                  {say(hoursError)}
                 </span>
               ) : null}
             </label>
           ) : (
-            <p className="text-lg">This rig has no hour meter: cards go by the calendar.</p>
+            <p className="text-lg">{t("cards.noMeter")}</p>
           )}
           <ul className="grid gap-2 sm:grid-cols-2">
             {cards.map((c) => {
@@ -160,8 +178,11 @@ export default function RigCards({ loaderData, actionData }: Route.ComponentProp
               const open = underWay.get(c.title);
               const note = done ? (
                 <span className="text-base font-bold">
-                  Today: {cardStateLabel(done.outcome, done.gaps).toLowerCase()} (started {times.time(done.openedAt)}
-                  {done.by ? ` by ${done.by}` : ""})
+                  {t(done.by ? "cards.todayNoteBy" : "cards.todayNote", {
+                    state: state(done.outcome, done.gaps).toLowerCase(),
+                    time: times.time(done.openedAt),
+                    by: done.by,
+                  })}
                 </span>
               ) : null;
               return (
@@ -171,8 +192,8 @@ export default function RigCards({ loaderData, actionData }: Route.ComponentProp
                       to={`/cases/${open.id}/walk`}
                       className="flex min-h-16 w-full flex-col items-start justify-center rounded-lg border-4 border-go bg-paper px-4 py-2 text-left text-ink no-underline"
                     >
-                      <span className="text-xl font-bold">Carry on: {c.title}</span>
-                      <span className="text-base">Under way since {times.time(open.openedAt)}</span>
+                      <span className="text-xl font-bold">{t("cards.carryOn", { title: c.label })}</span>
+                      <span className="text-base">{t("cards.underWay", { time: times.time(open.openedAt) })}</span>
                       {note}
                     </Link>
                   ) : (
@@ -186,7 +207,7 @@ export default function RigCards({ loaderData, actionData }: Route.ComponentProp
                         mine ? "border-4 border-go bg-caution text-ink" : "border-ink bg-paper"
                       }`}
                     >
-                      <span className="text-xl font-bold">{mine ? `Opening ${c.title}…` : c.title}</span>
+                      <span className="text-xl font-bold">{mine ? t("cards.opening", { title: c.label }) : c.label}</span>
                       {note}
                       <span className="text-base">{c.summary}</span>
                     </button>
@@ -199,21 +220,21 @@ export default function RigCards({ loaderData, actionData }: Route.ComponentProp
       )}
       <section aria-labelledby="today-h" className="mt-6 rounded-lg border-2 border-ink bg-paper p-4">
         <h2 id="today-h" className="text-xl font-bold">
-          Cards on {rig.code} today
+          {t("cards.onRigToday", { code: rig.code })}
         </h2>
-        {fromPhone ? <p className="mt-2 text-lg">No signal: cards walked on this phone are listed; others saved today show when there is signal.</p> : null}
+        {fromPhone ? <p className="mt-2 text-lg">{t("cards.noSignal")}</p> : null}
         {today.length ? (
           <ul className="mt-2 space-y-1 text-lg">
             {today.map((c) => (
               <li key={c.id}>
-                <strong>{c.title}</strong>: {cardStateLabel(c.outcome, c.gaps)} · {times.time(c.openedAt)}
+                <strong>{label.get(c.title) ?? c.title}</strong>: {state(c.outcome, c.gaps)} · {times.time(c.openedAt)}
                 {c.by ? ` · ${c.by}` : ""}
-                {c.engineHours !== null ? ` · ${c.engineHours.toLocaleString("en-US")} h` : ""}
+                {c.engineHours !== null ? ` · ${times.number(c.engineHours, 1)} h` : ""}
               </li>
             ))}
           </ul>
         ) : fromPhone ? null : (
-          <p className="mt-2 text-lg">No card saved on {rig.code} today yet (cards kept on a phone without signal show once sent).</p>
+          <p className="mt-2 text-lg">{t("cards.none", { code: rig.code })}</p>
         )}
       </section>
     </>
