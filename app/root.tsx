@@ -21,8 +21,9 @@ export async function loader({ request, context }: Route.LoaderArgs): Promise<{ 
   return { lang: user?.language ?? languageFromHeader(request.headers.get("Accept-Language")) };
 }
 
-// The language changes only with a form (the account page reloads the whole page when it does).
-export const shouldRevalidate: ShouldRevalidateFunction = ({ formMethod, defaultShouldRevalidate }) => (formMethod ? defaultShouldRevalidate : false);
+// The language changes only with a whole-page load (signing in, the account page's language form), so
+// the root never asks the server again: with no signal, a fix started on the phone must not fail on it.
+export const shouldRevalidate: ShouldRevalidateFunction = () => false;
 
 export function Layout({ children }: { children: React.ReactNode }) {
   const lang = useRouteLoaderData<typeof loader>("root")?.lang ?? "en";

@@ -70,7 +70,8 @@ export default function Login({ loaderData, actionData }: Route.ComponentProps) 
     <main className="mx-auto max-w-md px-4 py-8">
       <h1 className="text-3xl font-bold">Tankside</h1>
       <p className="mt-1 text-lg">{t("login.lead")}</p>
-      <Form method="post" {...getFormProps(form)} className="mt-6 space-y-4 rounded-lg border-2 border-ink bg-paper p-5">
+      {/* A whole-page load: the next page is drawn in the person's own language, not the browser's. */}
+      <Form method="post" reloadDocument {...getFormProps(form)} className="mt-6 space-y-4 rounded-lg border-2 border-ink bg-paper p-5">
         <input type="hidden" name="redirectTo" value={loaderData.redirectTo} />
         {actionData?.error ? <ErrorList error={actionData.error} /> : null}
         <EmailField field={fields.email} label={t("login.email")} />

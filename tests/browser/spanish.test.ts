@@ -130,6 +130,40 @@ describe("a crew member who reads Spanish, at 360×640", () => {
     await p.close();
   });
 
+  it("the load card, its seed clock, the suction check and the rig cards speak Spanish too", async () => {
+    await User.update({ language: "es" }, { where: { email: "sam@bluemesa.example" } });
+    await harness.browser.context.clearCookies();
+    const p = await harness.browser.context.newPage();
+    await signIn(p, harness.app.url, "sam@bluemesa.example");
+    await p.goto(`${harness.app.url}/field-math/load?rig=BM-01`);
+    await p.getByRole("heading", { name: "Tarjeta de carga" }).waitFor();
+    await p.getByLabel("Área a cubrir").fill("1");
+    await p
+      .getByTestId("load-count")
+      .filter({ hasText: /cargas? del tanque/ })
+      .waitFor();
+    await p
+      .getByText(/^Agua hasta [\d,]+ gal \(la marca del 50 %\), con el agitador andando\.$/)
+      .first()
+      .waitFor();
+    await p
+      .getByText(/Arranca el reloj de la semilla: rocía antes de \d+ minutos\./)
+      .first()
+      .waitFor();
+    await p.getByRole("button", { name: /^La semilla ya está adentro: arrancar el reloj de \d+ minutos$/ }).waitFor();
+    // A bad figure is named in Spanish.
+    await p.getByLabel("Tamaño del tanque").fill("lots");
+    await p.getByText("Tamaño del tanque debe ser un número").waitFor();
+    await p.goto(`${harness.app.url}/field-math/suction?rig=BM-01`);
+    await p.getByLabel("Temperatura del agua").waitFor();
+    await p.getByText("Llena cada cifra de este sitio para ver si la bomba va a mantener el cebado.").waitFor();
+    await p.goto(`${harness.app.url}/rigs/BM-01/cards`);
+    await p.getByRole("heading", { name: "Tarjetas del equipo · BM-01" }).waitFor();
+    await p.getByRole("button", { name: /Revisión antes de arrancar/ }).waitFor();
+    expect(await p.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(360);
+    await p.close();
+  });
+
   it("a person switches language on their account and the whole screen follows", async () => {
     const p = await harness.browser.context.newPage();
     await harness.browser.context.clearCookies();

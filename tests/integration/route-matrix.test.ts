@@ -1,7 +1,7 @@
 import { RouterContextProvider } from "react-router";
 import { randomUUID } from "node:crypto";
 import { beforeAll, describe, expect, it } from "vitest";
-import { Case, Company, GuideVersion, Rig, User } from "../../db/index";
+import { Case, Company, GuideRecord, GuideVersion, Rig, User } from "../../db/index";
 import { createGuide } from "~/services/desk.server";
 import { resetDatabase } from "../helpers/db";
 import { caseRow } from "../helpers/cases";
@@ -48,6 +48,8 @@ const EXPECTED: Record<string, Row> = {
   "POST /api/cases/:id/photos": r(401, 400, 400, 400, 400, 400),
   "GET /cases/:id/photos/:photoId": r(302, 404, 404, 404, 404, 404),
   "GET /rigs/:code/label": r(302, 200, 200, 200, 200, 404),
+  // Everyone signed in may print the company's guides; another company's own guide is a 404.
+  "GET /guides/:slug/print": r(302, 200, 200, 200, 200, 404),
   "GET /cases/export": r(302, 403, 403, 200, 200),
   "GET /desk/:guideId/v/:number/export": r(302, 403, 200, 200, 200, 404),
   "POST /api/desk/:guideId/v/:number": r(401, 403, 415, 415, 415),
@@ -131,6 +133,7 @@ beforeAll(async () => {
     photoId: "1",
     loadId: "00000000-0000-4000-8000-000000000000",
     kind: "hose",
+    slug: "lost-prime",
     screen: "load",
     "*": "nothing",
   };
@@ -142,6 +145,7 @@ beforeAll(async () => {
     code: "BM-01",
     guideId: String(bmGuide.guideId),
     number: String(bmGuide.number),
+    slug: (await GuideRecord.findByPk(bmGuide.guideId))!.slug,
     jobId: await jobOf("BM-01"),
   };
 });

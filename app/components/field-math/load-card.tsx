@@ -494,10 +494,7 @@ function LoadGroup({
   const steps = loadSteps(load, rules);
   const materialsLb = load.materials.reduce((s, m) => s + m.lb, 0);
   return (
-    <section
-      className="mt-3 break-inside-avoid border-t-4 border-ink pt-2"
-      aria-label={t(numbers.length === 1 ? "fm.load.load" : "fm.load.loads", { n: loadNumbers(numbers) })}
-    >
+    <section className="mt-3 break-inside-avoid border-t-4 border-ink pt-2" aria-label={t("fm.load.load", { n: loadNumbers(numbers) })}>
       <h2 className="text-xl font-bold">
         {t(numbers.length === 1 ? "fm.load.load" : "fm.load.loads", { n: loadNumbers(numbers) })}
         {numbers.length === 1 && numbers[0] === card.sheet.loads && card.sheet.loads > 1 ? t("fm.load.last") : ""}
