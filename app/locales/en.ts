@@ -3,7 +3,7 @@ import { FIELD_MATH_SCREENS, type FieldMathScreenId } from "~/lib/field-math/scr
 import { CHECKLIST_LABELS } from "~/lib/guides/safety";
 import { NAV_ITEMS } from "~/lib/navigation";
 import { ROLE_LABELS } from "~/lib/people/roles";
-import { ANSWER_LABELS, CARD_OUTCOME_LABELS, OUTCOME_LABELS } from "~/lib/vocabulary";
+import { ANSWER_LABELS, CARD_OUTCOME_LABELS, OUTCOME_LABELS, STATUS_LABELS } from "~/lib/vocabulary";
 
 /**
  * Every word the crew's screens say, in English. `es.ts` has the same keys (the types require it,
@@ -219,6 +219,7 @@ const en = {
     gaps_one: "Complete with {{count}} item not done",
     gaps_other: "Complete with {{count}} items not done",
   },
+  statuses: STATUS_LABELS,
   print: {
     pageTitle: "{{title}} on paper",
     version: "Version {{n}}",
@@ -230,7 +231,7 @@ const en = {
     howTo: "Start at 1. Answer each box and go to the number after your answer.",
     cautionTitle: "Stop before any hands-on work.",
     caution:
-      "A black SHUT-DOWN STOP box comes before every hands-on step: tick every line in it first. Starting the engine or the pump ends the stop; stop again before hands go back in. Your company's procedure, the maker's manual and local codes come first. This page never says a step is safe.",
+      "A SHUT-DOWN STOP box (black band, yellow box) comes before every hands-on step: tick every line in it first. Starting the engine or the pump ends the stop; stop again before hands go back in. Your company's procedure, the maker's manual and local codes come first. This page never says a step is safe.",
     stop: "SHUT-DOWN STOP: tick each",
     check: "Check",
     task: "Do",
@@ -251,6 +252,8 @@ const en = {
     show: "Show",
     print: "Print",
     tooLong: "This guide is too long to fit one page even in small type: ask a trainer to split it.",
+    draft: "{{status}}: NOT THE GUIDE CREWS USE. For review only.",
+    inEnglish: "EN",
   },
   checklistShort: {
     "clutch-out": "Clutch out",

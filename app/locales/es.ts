@@ -234,6 +234,7 @@ const es: Translated<Strings> = {
     gaps_one: "Completa con {{count}} punto sin hacer",
     gaps_other: "Completa con {{count}} puntos sin hacer",
   },
+  statuses: { draft: "Borrador", in_review: "En revisión", published: "Publicada", retired: "Retirada" },
   print: {
     pageTitle: "{{title}} en papel",
     version: "Versión {{n}}",
@@ -245,7 +246,7 @@ const es: Translated<Strings> = {
     howTo: "Empieza en el 1. Contesta cada cuadro y ve al número que sigue a tu respuesta.",
     cautionTitle: "Para antes de meter las manos.",
     caution:
-      "Antes de cada paso con las manos hay un cuadro negro de ALTO DE SEGURIDAD: marca primero cada línea. Arrancar el motor o la bomba termina el alto; vuelve a parar antes de meter las manos otra vez. Primero van el procedimiento de tu empresa, el manual del fabricante y las normas locales. Esta hoja nunca dice que un paso es seguro.",
+      "Antes de cada paso con las manos hay un cuadro de ALTO DE SEGURIDAD (franja negra, cuadro amarillo): marca primero cada línea. Arrancar el motor o la bomba termina el alto; vuelve a parar antes de meter las manos otra vez. Primero van el procedimiento de tu empresa, el manual del fabricante y las normas locales. Esta hoja nunca dice que un paso es seguro.",
     stop: "ALTO DE SEGURIDAD: marca cada uno",
     check: "Revisa",
     task: "Haz",
@@ -266,6 +267,8 @@ const es: Translated<Strings> = {
     show: "Mostrar",
     print: "Imprimir",
     tooLong: "Esta guía es demasiado larga para una hoja aun con letra chica: pide a un instructor que la divida.",
+    draft: "{{status}}: NO ES LA GUÍA QUE USAN LAS CUADRILLAS. Solo para revisar.",
+    inEnglish: "EN INGLÉS",
   },
   checklistShort: {
     "clutch-out": "Embrague desenganchado",

@@ -108,8 +108,9 @@ export default function DeskGuide({ loaderData, actionData }: Route.ComponentPro
               <a href={`/desk/${guide.id}/v/${v.number}/export`} download>
                 Export JSON
               </a>
-              <a href={`/guides/${guide.slug}/print?v=${v.number}&lang=en`}>Print (English)</a>
-              <a href={`/guides/${guide.slug}/print?v=${v.number}&lang=es`}>Print (Spanish)</a>
+              <a href={`/guides/${guide.slug}/print?g=${guide.id}&v=${v.number}&lang=en`}>Print (English)</a>
+              <a href={`/guides/${guide.slug}/print?g=${guide.id}&v=${v.number}&lang=es`}>Print (Spanish)</a>
+              <Link to={`v/${v.number}/preview?lang=es`}>Preview in Spanish</Link>
               {versions[i + 1] ? <Link to={`diff?a=${versions[i + 1].number}&b=${v.number}`}>What changed from v{versions[i + 1].number}</Link> : null}
             </p>
             {v.status === "draft" && !guide.builtIn ? <SubmitVersionForm number={v.number} /> : null}

@@ -56,8 +56,8 @@ export default function EditVersion({ loaderData, actionData }: Route.ComponentP
         <a href={`/desk/${guide.id}/v/${version.number}/export`} download>
           Export JSON
         </a>
-        <a href={`/guides/${guide.slug}/print?v=${version.number}&lang=en`}>Print (English)</a>
-        <a href={`/guides/${guide.slug}/print?v=${version.number}&lang=es`}>Print (Spanish)</a>
+        <a href={`/guides/${guide.slug}/print?g=${guide.id}&v=${version.number}&lang=en`}>Print (English)</a>
+        <a href={`/guides/${guide.slug}/print?g=${guide.id}&v=${version.number}&lang=es`}>Print (Spanish)</a>
       </p>
       {version.reviewComment && version.status === "draft" ? (
         <p className="mb-3 rounded-md border-2 border-ink bg-caution p-3 font-bold">Reviewer: {version.reviewComment}</p>

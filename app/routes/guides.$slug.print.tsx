@@ -8,7 +8,7 @@ import { guideKind } from "~/lib/guides/kinds";
 import { printFlow } from "~/lib/guides/print-flow";
 import { localizeGuide } from "~/lib/guides/translations";
 import { LANGUAGE_NAMES, LANGUAGES, LOCALES } from "~/lib/i18n/languages";
-import { statusLabel, type StepAnswer } from "~/lib/vocabulary";
+import type { StepAnswer } from "~/lib/vocabulary";
 import { env } from "~/services/env.server";
 import { requireUser } from "~/services/guards.server";
 import { causeNames, printableGuide } from "~/services/guides.server";
@@ -22,6 +22,7 @@ const printQuery = z.object({
   lang: z.preprocess(blank, z.enum(LANGUAGES, { error: "lang must be en or es" }).optional()),
   rig: z.preprocess(blank, z.string().max(20, "rig must be a rig code").optional()),
   v: z.preprocess(blank, z.coerce.number({ error: "v must be a version number" }).int().positive("v must be a version number").optional()),
+  g: z.preprocess(blank, z.coerce.number({ error: "g must be a guide number" }).int().positive("g must be a guide number").optional()),
 });
 
 /**
@@ -36,12 +37,12 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
   if (!query.success) fail(400, query.error.issues.map((i) => i.message).join("; "));
   const lang = query.data.lang ?? user.language ?? "en";
   const [guide, rig, rigs] = await Promise.all([
-    printableGuide(user, params.slug, query.data.v),
+    printableGuide(user, params.slug, query.data.v, query.data.g),
     query.data.rig ? findRig(user, query.data.rig) : null,
     listRigs(user),
   ]);
   const { t } = i18nFor(lang);
-  const { guide: text } = localizeGuide(guide.definition, lang);
+  const { guide: text, inEnglish } = localizeGuide(guide.definition, lang);
   const card = guideKind(guide.definition) === "card";
   const url = rig
     ? `${env().APP_URL}/rigs/${encodeURIComponent(rig.code)}/fix?guide=${encodeURIComponent(guide.slug)}`
@@ -58,13 +59,16 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
       t("print.version", { n: guide.number }),
       guide.status === "published"
         ? t("print.published", { date: day(guide.dated) })
-        : t("print.unpublished", { status: statusLabel(guide.status), date: day(guide.dated) }),
+        : t("print.unpublished", { status: t(`statuses.${guide.status}`), date: day(guide.dated) }),
       t("print.printed", { date: day(new Date()) }),
       rig ? t("print.rig", { code: rig.code }) : t("print.anyRig"),
       LANGUAGE_NAMES[lang],
     ].join(" · "),
+    // Not what crews use: said across the top of the page, so it never reaches a truck unnoticed.
+    draft: guide.status === "published" ? null : t("print.draft", { status: t(`statuses.${guide.status}`) }),
     boxes: printFlow(text, causeNames(lang), rig ?? undefined, lang).map((b) => ({
       ...b,
+      inEnglish: inEnglish.includes(b.id),
       answers: b.answers.map((a) => ({ ...a, word: answerWord(a.answer) })),
       timing: [b.minutes ? t("print.minutes", { m: b.minutes < 1 ? "½" : b.minutes }) : "", b.handsOn ? t("print.handsOn") : ""].filter(Boolean).join(", "),
       checklist: b.checklist.map((item) => t(`checklistShort.${item}`)),
@@ -88,10 +92,11 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
       show: t("print.show"),
       print: t("print.print"),
       tooLong: t("print.tooLong"),
+      inEnglish: t("print.inEnglish"),
     },
     qr,
     url,
-    chosen: { rig: rig?.code ?? "", v: query.data.v ?? null },
+    chosen: { rig: rig?.code ?? "", v: query.data.v ?? null, g: query.data.g ?? null },
     rigs: rigs.map((r) => r.code),
   };
 }
@@ -149,6 +154,7 @@ export default function PrintGuide({ loaderData: d }: Route.ComponentProps) {
             </select>
           </label>
           {d.chosen.v ? <input type="hidden" name="v" value={d.chosen.v} /> : null}
+          {d.chosen.g ? <input type="hidden" name="g" value={d.chosen.g} /> : null}
           <div className="flex items-end gap-2">
             <button type="submit" className="min-h-12 flex-1 rounded-md border-2 border-ink bg-paper px-3 font-bold">
               {d.words.show}
@@ -184,6 +190,11 @@ export default function PrintGuide({ loaderData: d }: Route.ComponentProps) {
               <figcaption className="mt-[0.2em] leading-tight">{d.words.qr}</figcaption>
             </figure>
           </header>
+          {d.draft ? (
+            <p role="alert" className="mt-[0.4em] border-[0.3em] border-black px-[0.4em] text-center text-[1.6em] font-bold">
+              {d.draft}
+            </p>
+          ) : null}
           <p role="note" className="mt-[0.5em] border-[0.25em] border-black bg-caution px-[0.5em] py-[0.3em]">
             <strong>{d.words.cautionTitle}</strong> {d.words.caution}
           </p>
@@ -203,9 +214,9 @@ function FlowBox({ box, words }: { box: Data["boxes"][number]; words: Data["word
   const arrows = box.answers.length ? (
     <p className="mt-[0.15em] font-bold">
       {box.answers.map((a, i) => (
-        <span key={a.answer} className="whitespace-nowrap">
+        <span key={a.answer}>
           {i ? " · " : ""}
-          {a.word} → {a.to}
+          {a.word}&nbsp;→&nbsp;{a.to}
         </span>
       ))}
     </p>
@@ -217,7 +228,10 @@ function FlowBox({ box, words }: { box: Data["boxes"][number]; words: Data["word
           {box.n} ■ {words.stop}
         </p>
         <div className="bg-caution px-[0.3em] py-[0.2em]">
-          <p>{box.text}</p>
+          <p lang={box.inEnglish ? "en" : undefined}>
+            {box.inEnglish ? <InEnglish words={words} /> : null}
+            {box.text}
+          </p>
           <ul className="mt-[0.15em]">
             {box.checklist.map((line) => (
               <li key={line} className="font-bold">
@@ -236,7 +250,10 @@ function FlowBox({ box, words }: { box: Data["boxes"][number]; words: Data["word
           {n}
           {box.kind === "fixed" ? words.fixed : words.handoff}
         </p>
-        <p>{box.text}</p>
+        <p lang={box.inEnglish ? "en" : undefined}>
+          {box.inEnglish ? <InEnglish words={words} /> : null}
+          {box.text}
+        </p>
         {box.cause ? (
           <p className="font-bold">
             {box.kind === "fixed" ? words.cause : words.suspected} {box.cause}
@@ -249,11 +266,17 @@ function FlowBox({ box, words }: { box: Data["boxes"][number]; words: Data["word
       <p>
         {n}
         <span className="font-bold">{box.kind === "check" ? words.check : words.task}</span>
-        {box.timing ? <span> ({box.timing})</span> : null}: {box.text}
+        {box.timing ? <span> ({box.timing})</span> : null}: {box.inEnglish ? <InEnglish words={words} /> : null}
+        <span lang={box.inEnglish ? "en" : undefined}>{box.text}</span>
       </p>
       {arrows}
     </section>
   );
+}
+
+/** A step printed in English because its translation is missing or older than its English. */
+function InEnglish({ words }: { words: Data["words"] }) {
+  return <span className="mr-[0.3em] border-[0.1em] border-black px-[0.2em] text-[0.85em] font-bold">{words.inEnglish}</span>;
 }
 
 export const meta: Route.MetaFunction = ({ data }) => [{ title: `${data?.title ?? "Guide"} · Tankside` }];

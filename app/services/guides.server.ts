@@ -111,7 +111,7 @@ function buildIndex(guides: UsableGuide[], lang: Language) {
  * else the built-in); a trainer may ask for any version of the company's own or the built-in
  * (the desk's print). Another company's guide, or a version a crew member may not see, is a 404.
  */
-export async function printableGuide(user: SessionUser, slug: string, number?: number) {
+export async function printableGuide(user: SessionUser, slug: string, number?: number, guideId?: number) {
   const records = await GuideRecord.findAll({
     where: usableBy(user, { slug }),
     attributes: ["id", "companyId", "slug", "title", "publishedVersion", "basedOnGuideId"],
@@ -119,7 +119,9 @@ export async function printableGuide(user: SessionUser, slug: string, number?: n
   const own = records.find((r) => r.companyId === user.companyId);
   const builtIn = records.find((r) => r.companyId === null);
   const trainer = can(user, "edit-guides");
-  const record = number !== undefined && trainer ? (own ?? builtIn) : own?.publishedVersion ? own : builtIn;
+  // The desk names the guide it prints (the built-in and the company's copy share a slug).
+  const named = guideId !== undefined ? records.find((r) => r.id === guideId) : undefined;
+  const record = number !== undefined && trainer ? (named ?? own ?? builtIn) : own?.publishedVersion ? own : builtIn;
   const wanted = number !== undefined && trainer ? number : record?.publishedVersion;
   if (!record || !wanted) notFound("That guide");
   const version = await GuideVersion.findOne({

@@ -171,7 +171,7 @@ export function GuideEditor({
           <legend className="px-1 font-bold" lang="en">
             Spanish
           </legend>
-          <TranslationState id="es-head-state" state={esHead} onStillRight={() => setEsHead({})} />
+          <TranslationState id="es-head-state" state={esHead} onStillRight={() => setEsHead({})} head />
           <label className="block font-bold">
             <span lang="en">Title in Spanish</span>
             <input value={es.title ?? ""} onChange={(e) => setEsHead({ title: e.target.value })} className={field} />
@@ -205,12 +205,12 @@ export function GuideEditor({
                   className={`min-h-11 flex-1 truncate rounded-md border-2 px-2 text-left ${selected === id ? "border-link bg-paper font-bold" : "border-rule bg-paper"}`}
                 >
                   {draft.states[id].meta.kind === "safety" ? <span className="mr-1 rounded bg-ink px-1 text-sm font-bold text-white">STOP</span> : null}
-                  {id}
                   {stepState(draft.states[id].meta, es.steps?.[id]) !== "current" ? (
-                    <span className="ml-1 rounded border border-ink px-1 text-sm" title="Spanish missing or out of date">
+                    <span className="mr-1 rounded border border-ink px-1 text-sm" title="Spanish missing or out of date">
                       ES?
                     </span>
                   ) : null}
+                  {id}
                 </button>
                 <button
                   type="button"

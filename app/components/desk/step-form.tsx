@@ -312,7 +312,12 @@ function SpanishText({
       <p lang="en" className="font-bold">
         Spanish
       </p>
-      <TranslationState id="es-step-state" state={stepState(meta, translation)} onStillRight={() => set({})} />
+      <TranslationState
+        id="es-step-state"
+        state={stepState(meta, translation)}
+        onStillRight={() => set({})}
+        reason={translation?.prompt.trim() && meta.help?.trim() && !translation.help?.trim() ? "the English has help text and the Spanish has none" : undefined}
+      />
       <label className="block font-bold">
         <span lang="en">Prompt in Spanish</span>
         <textarea value={translation?.prompt ?? ""} onChange={(e) => set({ prompt: e.target.value })} rows={3} className={`${field} py-2`} />

@@ -2,7 +2,11 @@ import { translationReport, type GuideTranslation, type TranslationState } from 
 
 type Summary = { head: TranslationState; missing: number; stale: number; steps: number } | null;
 
-const HEAD: Record<TranslationState, string> = { current: "", missing: "title, summary or symptoms missing", stale: "title, summary or symptoms out of date" };
+const HEAD: Record<TranslationState, string> = {
+  current: "",
+  missing: "title, summary or symptoms missing (crews reading Spanish see the English title and cannot search in Spanish)",
+  stale: "title, summary or symptoms older than the English (crews still see the Spanish; check it)",
+};
 
 /** One line on what a version's Spanish lacks (the desk's versions list). */
 export function spanishLine(s: Summary): string {
@@ -13,7 +17,7 @@ export function spanishLine(s: Summary): string {
     s.missing ? `${s.missing} of ${s.steps} steps missing` : "",
     s.stale ? `${s.stale} out of date (English changed after the Spanish was written)` : "",
   ].filter(Boolean);
-  return `Spanish: ${parts.join("; ")}. Crews reading Spanish see those steps in English, marked.`;
+  return `Spanish: ${parts.join("; ")}.${s.missing || s.stale ? " Crews reading Spanish see those steps in English, marked." : ""}`;
 }
 
 interface Translatable {
@@ -57,14 +61,32 @@ export function TranslationPanel({ definition, onSelect }: { definition: Transla
 }
 
 /** Where a piece of Spanish stands, and a way to say it still matches English that changed. */
-export function TranslationState({ id, state, onStillRight }: { id: string; state: "current" | "stale" | "missing"; onStillRight: () => void }) {
+export function TranslationState({
+  id,
+  state,
+  onStillRight,
+  head = false,
+  reason,
+}: {
+  id: string;
+  state: "current" | "stale" | "missing";
+  onStillRight: () => void;
+  /** The title block: out of date, crews still read its Spanish (steps fall back to English). */
+  head?: boolean;
+  /** Why it counts as missing, when that is not plain (a help text the Spanish lacks). */
+  reason?: string;
+}) {
+  const text =
+    state === "current"
+      ? "Spanish up to date."
+      : state === "missing"
+        ? `Spanish missing${reason ? `: ${reason}` : ""}. Crews reading Spanish see the English.`
+        : head
+          ? "Out of date: the English changed after the Spanish was written. Crews still see this Spanish: check it."
+          : "Out of date: the English changed after the Spanish was written. Crews see the English until it is checked.";
   return (
     <p id={id} lang="en" className={`font-bold ${state === "current" ? "text-go" : "text-stop"}`}>
-      {state === "current"
-        ? "Spanish up to date."
-        : state === "missing"
-          ? "Spanish missing: crews reading Spanish see the English."
-          : "Out of date: the English changed after the Spanish was written. Crews see the English until it is checked."}{" "}
+      {text}{" "}
       {state === "stale" ? (
         <button type="button" onClick={onStillRight} className="ml-1 min-h-11 rounded-md border-2 border-ink bg-paper px-2 font-bold text-ink">
           The Spanish still says the same

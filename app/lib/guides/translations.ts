@@ -88,13 +88,16 @@ export function localizeGuide<G extends Guide>(guide: G, lang: Language): { guid
       return [id, { ...step, meta }];
     }),
   );
-  const head = headState(guide, t) === "current" ? { title: t!.title!, summary: t!.summary!, symptoms: t!.symptoms! } : {};
+  // The title block in Spanish even when the English changed since (the desk flags it): a title or a
+  // symptom phrase carries no safety wording, and a guide that falls back to an English title is one a
+  // Spanish reader cannot find. Steps, which do carry it, fall back.
+  const head = headState(guide, t) !== "missing" ? { title: t!.title!, summary: t!.summary!, symptoms: t!.symptoms! } : {};
   return { guide: { ...english, ...head, states } as G, inEnglish };
 }
 
-/** A guide's title in a language (the English when it has none up to date). */
+/** A guide's title in a language (the English when it has none). */
 export function localizedTitle(guide: Translatable, lang: Language): string {
   if (lang === "en") return guide.title;
   const t = guide.translations?.[lang];
-  return headState(guide, t) === "current" ? t!.title! : guide.title;
+  return headState(guide, t) !== "missing" ? t!.title! : guide.title;
 }

@@ -81,6 +81,14 @@ function validate(input: unknown, { causes, name, guideIds }: ValidateOptions): 
   if (!parsed.success) {
     for (const issue of parsed.error.issues) {
       const [top, stepId, ...rest] = issue.path.map(String);
+      if (top === "translations") {
+        // translations.es.steps.<id>.prompt → the Spanish prompt of that step, said as a trainer reads it.
+        const [, lang, part, id, field] = issue.path.map(String);
+        const language = LANGUAGE_WORDS[lang] ?? lang;
+        if (part === "steps" && id !== undefined) add(`${language} ${field ?? "text"}: ${issue.message}`, id);
+        else add(`${language} ${part ?? "text"}: ${issue.message}`);
+        continue;
+      }
       const inStep = top === "states" && stepId !== undefined;
       const field = (inStep ? rest : [top, stepId, ...rest]).filter((x) => x !== undefined).join(".");
       let message = issue.message;
@@ -190,6 +198,8 @@ function checkStructure(raw: Loose, causes: Cause[], add: (message: string, step
   for (const f of restartsWithoutReturnToService(guide)) warn(f.message, f.step);
 }
 
+const LANGUAGE_WORDS: Record<string, string> = { es: "Spanish" };
+
 /** Translated text names real steps and uses only rig words (the stop rules live on the English steps they translate). */
 function checkTranslations(raw: Loose, add: (message: string, step?: string) => void) {
   if (!isObject(raw.translations) || !isObject(raw.states)) return;
@@ -197,12 +207,18 @@ function checkTranslations(raw: Loose, add: (message: string, step?: string) => 
     if (!isObject(t) || !isObject(t.steps)) continue;
     for (const [id, tr] of Object.entries(t.steps)) {
       if (!(id in raw.states)) {
-        add(`the ${lang} text names step "${id}", which is not a step`);
+        add(`the ${LANGUAGE_WORDS[lang] ?? lang} text names step "${id}", which is not a step`);
         continue;
       }
       if (!isObject(tr)) continue;
       const text = `${typeof tr.prompt === "string" ? tr.prompt : ""} ${typeof tr.help === "string" ? tr.help : ""}`;
-      for (const name of unknownRigWords(text)) add(`the ${lang} text uses {{${name}}}, which is not a rig word`, id);
+      for (const name of unknownRigWords(text))
+        add(
+          `the ${LANGUAGE_WORDS[lang] ?? lang} text uses {{${name}}}, which is not a rig word: use ${Object.keys(RIG_WORDS)
+            .map((w) => `{{${w}}}`)
+            .join(" or ")}`,
+          id,
+        );
     }
   }
 }

@@ -49,10 +49,13 @@ describe("a step with no up-to-date Spanish", () => {
     expect(localizeGuide(copy, "es").inEnglish.sort()).toEqual([a, b].sort());
   });
 
-  it("keeps the English title when the head is out of date, and English readers get the guide as written", () => {
+  it("keeps the Spanish title while the English title block changed (flagged on the desk), the English when it has none, and English readers get the guide as written", () => {
     const copy = structuredClone(library.find((g) => g.id === "foaming")!);
     expect(localizedTitle(copy, "es")).toBe("Espuma en el tanque");
     copy.symptoms.push("white froth");
+    expect(translationReport(copy, "es").head).toBe("stale");
+    expect(localizedTitle(copy, "es")).toBe("Espuma en el tanque");
+    delete copy.translations!.es!.title;
     expect(localizedTitle(copy, "es")).toBe(copy.title);
     const english = localizeGuide(copy, "en");
     expect(english.inEnglish).toEqual([]);
