@@ -1,3 +1,5 @@
+import { useTranslation } from "react-i18next";
+import { useSay } from "~/components/ui/say";
 import { isRouteErrorResponse } from "react-router";
 import { isNoSignal } from "~/lib/walk/no-signal";
 
@@ -38,8 +40,12 @@ export function describeError(error: unknown): { title: string; detail: string }
 
 /** The one error screen: a page title, a heading, a plain sentence and ways back. */
 export function ErrorPanel({ error }: { error: unknown }) {
-  const { title, detail } = describeError(error);
-  const noSignal = title === NO_SIGNAL.title;
+  const described = describeError(error);
+  const noSignal = described.title === NO_SIGNAL.title;
+  const say = useSay();
+  const { t } = useTranslation();
+  const title = say(described.title);
+  const detail = say(described.detail);
   return (
     <div role="alert" className="rounded-lg border-2 border-ink bg-paper p-5">
       <title>{`${title} · Tankside`}</title>
@@ -48,14 +54,14 @@ export function ErrorPanel({ error }: { error: unknown }) {
       <p className="mt-4 flex flex-wrap gap-x-6 gap-y-2">
         {noSignal ? (
           <button type="button" onClick={() => window.location.reload()} className="min-h-12 rounded-md bg-go px-4 text-lg font-bold text-white">
-            Try again
+            {t("errors.tryAgain")}
           </button>
         ) : null}
         <a href="/" className="inline-flex min-h-12 items-center text-lg font-bold">
-          Back to the start
+          {t("errors.start")}
         </a>
         <button type="button" onClick={() => history.back()} className="min-h-12 text-lg font-bold text-link underline">
-          Go back a page
+          {t("errors.back")}
         </button>
       </p>
     </div>

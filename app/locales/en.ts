@@ -1,6 +1,8 @@
 import { LOAD_STEP_LABELS, MATERIAL_KIND_LABELS } from "~/lib/field-math/load-rules";
 import { FIELD_MATH_SCREENS, type FieldMathScreenId } from "~/lib/field-math/screens";
 import { CHECKLIST_LABELS } from "~/lib/guides/safety";
+import { COMPONENTS } from "~/lib/guides/kinds";
+import { SERVICE_STATUS_LABELS } from "~/lib/rigs/service";
 import { NAV_ITEMS } from "~/lib/navigation";
 import { ROLE_LABELS } from "~/lib/people/roles";
 import { ANSWER_LABELS, CARD_OUTCOME_LABELS, OUTCOME_LABELS, STATUS_LABELS } from "~/lib/vocabulary";
@@ -40,7 +42,8 @@ const en = {
     progress: "Progress",
     stepOf: "Step {{n}}",
     end: " · end",
-    toEnd: " · at least {{count}} more to an end",
+    toEnd_one: " · at least {{count}} more to an end",
+    toEnd_other: " · at least {{count}} more to an end",
     keptOnPhone: "This walk-through is kept on this phone: it opens again even with no signal.",
     back: "Back one step",
     stopQuestion: "Stop this walk-through without an answer?",
@@ -220,6 +223,9 @@ const en = {
     gaps_other: "Complete with {{count}} items not done",
   },
   statuses: STATUS_LABELS,
+  errors: { tryAgain: "Try again", start: "Back to the start", back: "Go back a page" },
+  components: Object.fromEntries(COMPONENTS.map((c) => [c, c])) as Record<(typeof COMPONENTS)[number], string>,
+  serviceStatus: SERVICE_STATUS_LABELS,
   print: {
     pageTitle: "{{title}} on paper",
     version: "Version {{n}}",

@@ -27,7 +27,7 @@ const es: Translated<Strings> = {
     stop: "Alto de seguridad",
     check: "Revisa",
     doThis: "Haz esto",
-    minutes: " · unos {{minutes}} min",
+    minutes: " · como {{minutes}} min",
     handsOn: " · con las manos",
     beforeYouGoOn: "Antes de seguir",
     more: "Más sobre esto",
@@ -43,10 +43,11 @@ const es: Translated<Strings> = {
     progress: "Avance",
     stepOf: "Paso {{n}}",
     end: " · final",
-    toEnd: " · faltan al menos {{count}} para terminar",
+    toEnd_one: " · falta al menos {{count}} paso para terminar",
+    toEnd_other: " · faltan al menos {{count}} pasos para terminar",
     keptOnPhone: "Este recorrido está guardado en este teléfono: se abre aunque no haya señal.",
     back: "Regresar un paso",
-    stopQuestion: "¿Parar este recorrido sin respuesta?",
+    stopQuestion: "¿Dejar este recorrido sin terminar?",
     stopSaved: "El recorrido ya no acepta respuestas y se guarda como dejado sin terminar.",
     stopSavedLater: "El recorrido ya no acepta respuestas y se guarda como dejado sin terminar cuando este teléfono tenga señal.",
     yesStop: "Sí, pararlo",
@@ -142,7 +143,7 @@ const es: Translated<Strings> = {
   },
   home: {
     title: "Hola {{name}}. ¿Qué equipo?",
-    lead: "Escoge el equipo que está fallando, o empieza su día con una tarjeta.",
+    lead: "Escoge el equipo que está fallando, o empieza el día con una tarjeta.",
     noRigs: "Tu empresa todavía no tiene equipos activos. Un administrador los puede agregar en Equipos.",
     lastRig: "(tu último equipo)",
     rigLine: "{{name}} · {{gal}} gal · {{mount}}",
@@ -234,6 +235,31 @@ const es: Translated<Strings> = {
     gaps_one: "Completa con {{count}} punto sin hacer",
     gaps_other: "Completa con {{count}} puntos sin hacer",
   },
+  errors: { tryAgain: "Intentar otra vez", start: "Regresar al inicio", back: "Regresar una página" },
+  components: {
+    pump: "bomba",
+    suction: "succión",
+    sump: "sumidero",
+    agitator: "agitador",
+    hose: "manguera",
+    nozzle: "boquilla",
+    valve: "válvula",
+    engine: "motor",
+    clutch: "embrague",
+    hydraulics: "hidráulica",
+    tank: "tanque",
+    lubrication: "lubricación",
+    material: "material",
+    operation: "manejo",
+  },
+  serviceStatus: {
+    overdue: "Atrasado",
+    due: "Toca ahora",
+    never: "Nunca registrado: hazlo y regístralo",
+    soon: "Toca pronto",
+    ok: "Al día",
+    "no-meter": "Sin horómetro",
+  },
   statuses: { draft: "Borrador", in_review: "En revisión", published: "Publicada", retired: "Retirada" },
   print: {
     pageTitle: "{{title}} en papel",
@@ -262,7 +288,7 @@ const es: Translated<Strings> = {
     qrRig: "Escanea para empezar esta guía en {{code}}",
     controls: "Qué imprimir",
     language: "Idioma",
-    rigLabel: "Equipo (llena las palabras del equipo y el código QR)",
+    rigLabel: "Equipo (para sus palabras de dirección y el código QR)",
     noRig: "Ningún equipo",
     show: "Mostrar",
     print: "Imprimir",
@@ -616,6 +642,32 @@ export const messages: Record<string, string> = {
   "Password changed. Any other phone or computer signed in as you has been signed out.":
     "Contraseña cambiada. Cualquier otro teléfono o computadora con tu sesión la cerró.",
   "Pick English or Spanish.": "Escoge inglés o español.",
+  // The error screen.
+  "No signal": "Sin señal",
+  "This page needs signal to open. What is kept on this phone (answers, photos, loads sprayed) is safe: it is sent when there is signal and Tankside is open. Try again when you have signal.":
+    "Esta página necesita señal para abrir. Lo que está guardado en este teléfono (respuestas, fotos, cargas rociadas) está seguro: se manda cuando haya señal y Tankside esté abierto. Intenta otra vez cuando tengas señal.",
+  "Something went wrong": "Algo salió mal",
+  "Try again. If it keeps happening, tell your supervisor.": "Intenta otra vez. Si sigue pasando, avísale a tu supervisor.",
+  "That did not go through": "Eso no pasó",
+  "Something in what was sent was not right. Go back and try again.": "Algo de lo que se mandó no estaba bien. Regresa e intenta otra vez.",
+  "Sign in first": "Primero entra con tu cuenta",
+  "Your sign-in has ended. Sign in again to carry on.": "Tu sesión terminó. Vuelve a entrar para seguir.",
+  "Not for your role": "No es para tu puesto",
+  "Your role does not open this page. Ask your company's admin if you need it.":
+    "Tu puesto no abre esta página. Pídesela al administrador de tu empresa si la necesitas.",
+  "Not found": "No se encontró",
+  "There is nothing here, or it belongs to another company.": "No hay nada aquí, o es de otra empresa.",
+  "Already changed": "Ya cambió",
+  "Someone (or another phone) changed this first. Go back to see it as it is now.":
+    "Alguien (u otro teléfono) lo cambió primero. Regresa para verlo como está ahora.",
+  "Too many tries": "Demasiados intentos",
+  "Wait a little, then try again.": "Espera un poco y vuelve a intentar.",
+  "Tankside is not answering": "Tankside no contesta",
+  "Its database is not reachable right now. Try again in a minute.": "Su base de datos no responde ahorita. Intenta otra vez en un minuto.",
+  "This walk-through is not kept on this phone, and there is no signal to fetch it.":
+    "Este recorrido no está guardado en este teléfono, y no hay señal para traerlo.",
+  "That guide is not kept on this phone. With signal, open the app once to refresh it.":
+    "Esa guía no está guardada en este teléfono. Con señal, abre la app una vez para actualizarla.",
   // The field math's fixed sentences (lib/field-math), as the company's default rules and notes say them.
   "Water in with the agitator running: the paddles must be covered before anything else goes in.":
     "El agua primero, con el agitador andando: las paletas tienen que estar cubiertas antes de echar lo demás.",
@@ -690,7 +742,7 @@ export const patterns: [string, string][] = [
   [" must be a number$", " debe ser un número"],
   [" must be more than ([\\d.,]+)$", " debe ser más de $1"],
   [" must be at least ([\\d.,]+)$", " debe ser al menos $1"],
-  [" over ([\\d.,]+) is not plausible$", " de más de $1 no es creíble"],
+  [" over ([\\d.,]+) is not plausible$", " de más de $1 parece un error: revisa la cifra"],
   ["^more water than the ([\\d.,]+) gal tank holds$", "más agua de la que lleva el tanque de $1 gal"],
   // Tip choice.
   [
@@ -713,6 +765,16 @@ export const patterns: [string, string][] = [
     "^no tips are recorded for this rig: add each tip's rated reach and pattern width on the rig's page$",
     "este equipo no tiene boquillas registradas: agrega el alcance y el ancho de cada boquilla en la página del equipo",
   ],
+  // Service due (lib/rigs/service dueText).
+  ["\\bover by ([\\d,.]+) engine hours?", "pasado por $1 horas de motor"],
+  ["\\b([\\d,.]+) engine hours? left", "faltan $1 horas de motor"],
+  ["\\bover by 1 day\\b", "pasado por 1 día"],
+  ["\\b1 day left", "falta 1 día"],
+  ["\\bover by ([\\d,.]+) days", "pasado por $1 días"],
+  ["\\b([\\d,.]+) days left", "faltan $1 días"],
+  ["^due today$", "toca hoy"],
+  ["^never recorded$", "nunca registrado"],
+  ["^counts engine hours: this rig has no hour meter$", "cuenta horas de motor: este equipo no tiene horómetro"],
   // Suction.
   [
     "Shorten the lift by at least (\\d+) ft \\(move the rig closer to the water or lower\\)\\.",

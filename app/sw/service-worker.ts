@@ -69,7 +69,9 @@ function noSignalPage(): Response {
 <title>No signal · Tankside</title><style>body{font:1.25rem/1.5 system-ui,sans-serif;margin:0;padding:1rem;background:#fffdf5;color:#111}
 a{display:inline-block;margin-top:1rem;padding:1rem 1.25rem;border:3px solid #111;border-radius:.5rem;color:#111;font-weight:700;text-decoration:none}</style></head>
 <body><h1>No signal</h1><p>This page is not kept on this phone, and there is no signal to fetch it.</p>
-<p>Fixes, rigs and field math kept on this phone still open from the home screen.</p><a href="/">Go to the home screen</a></body></html>`;
+<p>Fixes, rigs and field math kept on this phone still open from the home screen.</p><a href="/">Go to the home screen</a>
+<div lang="es"><h1>Sin señal</h1><p>Esta página no está guardada en este teléfono, y no hay señal para traerla.</p>
+<p>Los arreglos, los equipos y los cálculos guardados en este teléfono se abren desde la pantalla de inicio.</p><a href="/">Ir a la pantalla de inicio</a></div></body></html>`;
   return new Response(html, { status: 503, headers: { "Content-Type": "text/html; charset=utf-8" } });
 }
 

@@ -75,7 +75,7 @@ export function EndCard({
       {fixed && causeName ? (
         <p className="mt-2 text-lg">
           <strong>{t("end.cause")}</strong> {causeName}
-          {meta.component ? ` (${meta.component})` : ""}
+          {meta.component ? ` (${t(`components.${meta.component}`)})` : ""}
         </p>
       ) : null}
       {meta.help ? <GuideText text={meta.help} className="mt-3 text-lg" /> : null}
