@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { loadLibrary } from "~/lib/guides/files.server";
 import { createGuideSearch } from "~/lib/guides/search";
-import { causes, root } from "../../helpers/guides";
+import { causes, root, topThreeRate } from "../../helpers/guides";
 
 const library = loadLibrary(root);
 const causeName = new Map(causes.map((c) => [c.code, c.name]));
@@ -91,17 +91,7 @@ describe("the new fault families are found by their crew phrases", () => {
 
 describe("symptom search", () => {
   it(`puts the right guide in the top 3 for at least 90 % of ${PHRASES.length} crew phrases`, () => {
-    const misses: string[] = [];
-    for (const [phrase, slug] of PHRASES) {
-      const top = search(phrase)
-        .slice(0, 3)
-        .map((h) => h.slug);
-      if (!top.includes(slug)) misses.push(`${phrase} → ${top.join(", ") || "nothing"} (wanted ${slug})`);
-    }
-    const rate = (PHRASES.length - misses.length) / PHRASES.length;
-    console.info(
-      `search top-3 hit rate: ${(rate * 100).toFixed(1)} % (${PHRASES.length - misses.length}/${PHRASES.length})${misses.length ? `; misses: ${misses.join("; ")}` : ""}`,
-    );
+    const rate = topThreeRate("search", search, PHRASES);
     expect(PHRASES.length).toBeGreaterThanOrEqual(40);
     expect(rate).toBeGreaterThanOrEqual(0.9);
   });
