@@ -91,8 +91,11 @@ describe("guide desk in the browser", () => {
       .first()
       .waitFor();
     await p.getByRole("link", { name: "Edit" }).first().click();
+    await p.waitForURL(/\/desk\/\d+\/v\/\d+$/);
     await p.getByRole("link", { name: "Preview in Spanish" }).click();
-    await p.getByTestId("in-english").waitFor();
+    await p.waitForURL(/\/preview\?lang=es$/);
+    await p.getByText("Preview in English").waitFor();
+    await p.getByTestId("in-english").waitFor({ timeout: 20_000 });
     await p.locator("#step-prompt", { hasText: "Look from the top hatch" }).waitFor();
     const saved = await GuideVersion.findOne({ where: { status: "draft" }, order: [["id", "DESC"]] });
     expect(saved!.definition.translations?.es?.steps?.[first]?.prompt).toMatch(/Mira desde la escotilla de arriba\.$/);

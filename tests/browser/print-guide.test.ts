@@ -59,7 +59,7 @@ describe("every shipped guide and card on one printed page", () => {
     await sheet.getByText("La bomba pierde el cebado", { exact: true }).waitFor();
     const first = sheet.locator("section").first();
     await first.getByText("¿El agua del tanque está bien arriba de la salida del sumidero?", { exact: false }).waitFor();
-    await first.getByText(/Sí → 2 · No → \d+/).waitFor();
+    await first.getByText(/Sí\s→\s2 · No\s→\s\d+/).waitFor();
     const stop = sheet.locator('section[data-kind="safety"]').first();
     await stop.getByText("ALTO DE SEGURIDAD: marca cada uno", { exact: false }).waitFor();
     await stop.getByText("☐ Motor apagado, llave en tu bolsillo").waitFor();
