@@ -1,6 +1,6 @@
 import { createInstance, type i18n, type Resource } from "i18next";
 import { initReactI18next } from "react-i18next";
-import { LOCALES, type Language } from "~/lib/i18n/languages";
+import { isLanguage, LOCALES, type Language } from "~/lib/i18n/languages";
 
 /**
  * One i18next instance per language, made once and never switched: a page is drawn in one language
@@ -54,3 +54,6 @@ export function i18nFor(lang: Language): i18n {
   if (!instance) throw new Error("No language registered: entry.server or entry.client registers them before drawing.");
   return instance;
 }
+
+/** On the phone: the instance of the language the page was drawn in (a client action speaking with no signal). */
+export const pageI18n = () => i18nFor(isLanguage(document.documentElement.lang) ? document.documentElement.lang : "en");

@@ -10,9 +10,8 @@ import { localizeGuide } from "~/lib/guides/translations";
 import { LANGUAGE_NAMES, LANGUAGES, LOCALES } from "~/lib/i18n/languages";
 import type { StepAnswer } from "~/lib/vocabulary";
 import { env } from "~/services/env.server";
-import { requireUser } from "~/services/guards.server";
+import { fail, requireUser } from "~/services/guards.server";
 import { causeNames, printableGuide } from "~/services/guides.server";
-import { fail } from "~/services/guards.server";
 import { findRig, listRigs } from "~/services/rigs.server";
 import type { Route } from "./+types/guides.$slug.print";
 

@@ -1,6 +1,6 @@
 import { useTranslation } from "react-i18next";
 import { useSay } from "~/components/ui/say";
-import { i18nFor } from "~/i18n";
+import { pageI18n } from "~/i18n";
 import { localizeGuide } from "~/lib/guides/translations";
 import { useEffect, useState } from "react";
 import { data, Form, Link, redirect, useNavigation } from "react-router";
@@ -86,7 +86,7 @@ export async function action({ request, params, context }: Route.ActionArgs) {
 
 /** With no signal the phone starts the card itself, with the reading, and sends it later. */
 export function clientAction({ request, params, serverAction }: Route.ClientActionArgs) {
-  const noKit = { result: null, problem: i18nFor(document.documentElement.lang === "es" ? "es" : "en").t("cards.noKit") };
+  const noKit = { result: null, problem: pageI18n().t("cards.noKit") };
   return serverOrPhoneAction(
     request,
     serverAction,

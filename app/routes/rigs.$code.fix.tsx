@@ -10,7 +10,7 @@ import { guideKind } from "~/lib/guides/kinds";
 import type { loader as shellLoader } from "./shell";
 import { openWalksOn, startCase } from "~/services/cases.server";
 import { fail, requireUser } from "~/services/guards.server";
-import { i18nFor } from "~/i18n";
+import { i18nFor, pageI18n } from "~/i18n";
 import { faultGuides } from "~/services/guides.server";
 import { localizeGuide } from "~/lib/guides/translations";
 import { findRig } from "~/services/rigs.server";
@@ -74,7 +74,7 @@ export async function action({ request, params, context }: Route.ActionArgs) {
 
 /** With no signal the phone starts the fix itself: it names the case and the time, and sends the start later. */
 export function clientAction({ request, params, serverAction }: Route.ClientActionArgs) {
-  const noKit = { problem: i18nFor(document.documentElement.lang === "es" ? "es" : "en").t("fix.noKit") };
+  const noKit = { problem: pageI18n().t("fix.noKit") };
   return serverOrPhoneAction(
     request,
     serverAction,
